@@ -1,0 +1,164 @@
+#!/usr/bin/env bash
+# A private MariaDB for Chillwright: its own data folder, socket and loopback port.
+# Usage: scripts/db.sh up|down|status|url
+# Settings (env): DB_DIR, DB_PORT, DB_NAME, DB_USER, DB_PASSWORD, DB_START_TIMEOUT_S.
+set -euo pipefail
+
+REPO="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
+DB_DIR="${DB_DIR:-$REPO/.data/mariadb}"
+DB_PORT="${DB_PORT:-3307}"
+DB_NAME="${DB_NAME:-chillwright}"
+DB_USER="${DB_USER:-chillwright}"
+DB_PASSWORD="${DB_PASSWORD:-chillwright-dev}"
+DB_START_TIMEOUT_S="${DB_START_TIMEOUT_S:-60}"
+export PATH="$PATH:/usr/sbin:/sbin"
+
+SOCK="$DB_DIR/sock"
+PID_FILE="$DB_DIR/pid"
+LOG="$DB_DIR/mariadbd.log"
+
+say() { echo "db.sh: $*" >&2; }
+die() { say "error: $*"; exit 1; }
+
+# Identifiers and strings go into SQL; refuse anything that would need quoting.
+[[ "$DB_NAME" =~ ^[A-Za-z0-9_]+$ ]] || die "DB_NAME may hold only letters, digits and _"
+[[ "$DB_USER" =~ ^[A-Za-z0-9_]+$ ]] || die "DB_USER may hold only letters, digits and _"
+[[ "$DB_PASSWORD" != *"'"* && "$DB_PASSWORD" != *"\\"* ]] || die "DB_PASSWORD may not contain ' or \\"
+[[ "$DB_PORT" =~ ^[0-9]+$ ]] || die "DB_PORT must be a number"
+(( ${#SOCK} < 100 )) || die "socket path too long for a unix socket (${#SOCK} chars): $SOCK; use a shorter DB_DIR"
+
+root_sql() { mariadb --no-defaults --socket="$SOCK" -uroot --batch --skip-column-names "$@"; }
+
+pid_alive() {
+  [[ -f "$PID_FILE" ]] || return 1
+  local pid
+  pid="$(cat "$PID_FILE" 2>/dev/null || true)"
+  [[ -n "$pid" ]] && kill -0 "$pid" 2>/dev/null
+}
+
+answers() { mariadb-admin --no-defaults --socket="$SOCK" -uroot --connect-timeout=2 ping >/dev/null 2>&1; }
+
+is_up() { pid_alive && answers; }
+
+ensure_server_installed() {
+  command -v mariadbd >/dev/null 2>&1 && return 0
+  [[ "$(id -u)" == 0 ]] || die "mariadbd is not installed; run as root (or apt-get install mariadb-server) first"
+  say "installing mariadb-server with apt-get"
+  apt-get update
+  DEBIAN_FRONTEND=noninteractive apt-get install -y mariadb-server
+  # Debian starts its own service on install; ours is separate, so the system one may stay or go.
+  command -v mariadbd >/dev/null 2>&1 || die "mariadb-server installed but mariadbd not found"
+}
+
+initialise_data_dir() {
+  mkdir -p "$DB_DIR"
+  chmod 700 "$DB_DIR"
+  [[ -d "$DB_DIR/data/mysql" ]] && return 0
+  say "initialising $DB_DIR/data"
+  mariadb-install-db --no-defaults --datadir="$DB_DIR/data" --auth-root-authentication-method=normal \
+    --skip-test-db >"$DB_DIR/install.log" 2>&1 || { tail -n 30 "$DB_DIR/install.log" >&2; die "mariadb-install-db failed"; }
+}
+
+start_server() {
+  rm -f "$PID_FILE" "$SOCK"
+  # setsid + nohup: the server outlives this script and holds none of the caller's pipes.
+  # skip-name-resolve: root@localhost then matches only the socket, never a TCP client.
+  setsid nohup mariadbd --no-defaults --datadir="$DB_DIR/data" --socket="$SOCK" --port="$DB_PORT" \
+    --bind-address=127.0.0.1 --user=root --pid-file="$PID_FILE" --skip-name-resolve \
+    --character-set-server=utf8mb4 --collation-server=utf8mb4_unicode_ci \
+    >>"$LOG" 2>&1 </dev/null &
+  local child=$! waited=0
+  until answers; do
+    if ! kill -0 "$child" 2>/dev/null && ! pid_alive; then
+      tail -n 30 "$LOG" >&2
+      die "mariadbd exited during start (is port $DB_PORT taken?)"
+    fi
+    if (( waited >= DB_START_TIMEOUT_S * 4 )); then
+      tail -n 30 "$LOG" >&2
+      die "mariadbd did not answer within ${DB_START_TIMEOUT_S}s"
+    fi
+    sleep 0.25
+    waited=$((waited + 1))
+  done
+}
+
+# mariadb-install-db leaves password-less root accounts for TCP hosts; keep root on the socket only.
+drop_root_over_tcp() {
+  local host
+  while IFS= read -r host; do
+    [[ -n "$host" ]] && root_sql -e "DROP USER IF EXISTS 'root'@'$host';"
+  done < <(root_sql -e "SELECT host FROM mysql.user WHERE user = 'root' AND host <> 'localhost';")
+}
+
+create_database_and_user() {
+  drop_root_over_tcp
+  root_sql <<SQL
+CREATE DATABASE IF NOT EXISTS \`$DB_NAME\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;
+CREATE USER IF NOT EXISTS '$DB_USER'@'127.0.0.1' IDENTIFIED BY '$DB_PASSWORD';
+CREATE USER IF NOT EXISTS '$DB_USER'@'localhost' IDENTIFIED BY '$DB_PASSWORD';
+ALTER USER '$DB_USER'@'127.0.0.1' IDENTIFIED BY '$DB_PASSWORD';
+ALTER USER '$DB_USER'@'localhost' IDENTIFIED BY '$DB_PASSWORD';
+GRANT ALL PRIVILEGES ON \`$DB_NAME\`.* TO '$DB_USER'@'127.0.0.1';
+GRANT ALL PRIVILEGES ON \`$DB_NAME\`.* TO '$DB_USER'@'localhost';
+FLUSH PRIVILEGES;
+SQL
+}
+
+cmd_up() {
+  ensure_server_installed
+  initialise_data_dir
+  if is_up; then
+    say "already up (pid $(cat "$PID_FILE"), port $DB_PORT)"
+  else
+    pid_alive && die "pid $(cat "$PID_FILE") is alive but does not answer on $SOCK; see $LOG"
+    start_server
+    say "up (pid $(cat "$PID_FILE"), port $DB_PORT, dir $DB_DIR)"
+  fi
+  create_database_and_user
+}
+
+cmd_down() {
+  if ! pid_alive; then
+    rm -f "$PID_FILE"
+    say "not running"
+    return 0
+  fi
+  local pid waited=0
+  pid="$(cat "$PID_FILE")"
+  mariadb-admin --no-defaults --socket="$SOCK" -uroot shutdown >/dev/null 2>&1 || kill -TERM "$pid" 2>/dev/null || true
+  while kill -0 "$pid" 2>/dev/null; do
+    (( waited >= 240 )) && { say "still running after 60s; sending SIGKILL"; kill -KILL "$pid" 2>/dev/null || true; break; }
+    sleep 0.25
+    waited=$((waited + 1))
+  done
+  rm -f "$PID_FILE"
+  say "down"
+}
+
+cmd_status() {
+  if is_up; then
+    echo "up pid=$(cat "$PID_FILE") port=$DB_PORT dir=$DB_DIR"
+  else
+    echo "down dir=$DB_DIR"
+    return 3
+  fi
+}
+
+urlencode() {
+  local s="$1" out="" c i
+  for ((i = 0; i < ${#s}; i++)); do
+    c="${s:i:1}"
+    case "$c" in [A-Za-z0-9._~-]) out+="$c" ;; *) out+="$(printf '%%%02X' "'$c")" ;; esac
+  done
+  printf '%s' "$out"
+}
+
+cmd_url() { echo "mariadb://$(urlencode "$DB_USER"):$(urlencode "$DB_PASSWORD")@127.0.0.1:$DB_PORT/$DB_NAME"; }
+
+case "${1:-}" in
+  up) cmd_up ;;
+  down) cmd_down ;;
+  status) cmd_status ;;
+  url) cmd_url ;;
+  *) echo "usage: $0 up|down|status|url" >&2; exit 2 ;;
+esac
