@@ -1,0 +1,36 @@
+import { defineConfig, devices } from "@playwright/test";
+
+const PORT = 3100;
+
+export default defineConfig({
+  testDir: "tests/e2e",
+  outputDir: "test-results",
+  fullyParallel: false,
+  workers: 2,
+  retries: process.env.CI ? 1 : 0,
+  timeout: 60_000,
+  expect: { timeout: 10_000 },
+  reporter: process.env.CI ? [["list"]] : [["list"], ["html", { open: "never" }]],
+  use: {
+    baseURL: `http://127.0.0.1:${PORT}`,
+    trace: "retain-on-failure",
+    launchOptions: {
+      executablePath: "/usr/bin/chromium",
+      args: ["--no-sandbox", "--disable-gpu", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
+    },
+  },
+  projects: [
+    {
+      name: "phone",
+      use: { ...devices["Pixel 7"] },
+    },
+  ],
+  webServer: {
+    command: "bash scripts/e2e-server.sh",
+    url: `http://127.0.0.1:${PORT}/api/health`,
+    timeout: 180_000,
+    reuseExistingServer: false,
+    stdout: "pipe",
+    stderr: "pipe",
+  },
+});
