@@ -1,3 +1,14 @@
 export { REFRIGERANT_IDS, type RefrigerantId, type RefrigerantInfo, isRefrigerantId, refrigerantInfo } from "./catalog";
 export { SaturationRangeError, type SaturationLimit, type SaturationQuantity } from "./range-error";
 export { saturationPressure, saturationTemperature } from "./saturation";
+export {
+  chargeDeviation,
+  condensingApproachK,
+  expectedBands,
+  type PressureBand,
+  STATIC_SOAK_SPREAD_K,
+  type StaticCheck,
+  staticCheck,
+  subcoolingK,
+  superheatK,
+} from "./derived";
