@@ -4,6 +4,7 @@ const nextConfig = {
   serverExternalPackages: ["sequelize", "mariadb", "mysql2", "@node-rs/argon2", "umzug"],
   poweredByHeader: false,
   reactStrictMode: true,
+  experimental: { authInterrupts: true },
 };
 
 export default nextConfig;

@@ -10,6 +10,8 @@ const envSchema = z.object({
   APP_ORIGIN: z.string().url().default("http://127.0.0.1:3000"),
   SIGN_IN_MAX_FAILURES: z.coerce.number().int().positive().default(5),
   SIGN_IN_WINDOW_MINUTES: z.coerce.number().int().positive().default(15),
+  // Only behind a reverse proxy that sets X-Forwarded-For may the client address be trusted.
+  TRUST_PROXY: z.enum(["0", "1"]).default("0"),
 });
 
 export type Env = z.infer<typeof envSchema>;

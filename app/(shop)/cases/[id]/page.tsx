@@ -1,0 +1,61 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+import { requireUser } from "@/lib/auth/guard";
+import { getCase } from "@/lib/server/cases";
+import { isAppError } from "@/lib/errors";
+import { StatusBadge } from "@/components/cases/status-badge";
+
+export const metadata: Metadata = { title: "Case" };
+
+export default async function CasePage({ params }: { params: Promise<{ id: string }> }) {
+  const user = await requireUser("cases:read");
+  const caseId = Number((await params).id);
+  if (!Number.isInteger(caseId) || caseId <= 0) notFound();
+  const detail = await getCase({ shopId: user.shopId, caseId }).catch((error) => {
+    if (isAppError(error) && error.status === 404) notFound();
+    throw error;
+  });
+  return (
+    <article className="space-y-4">
+      <header className="flex flex-wrap items-center justify-between gap-2">
+        <h1 className="text-2xl font-bold">
+          Case {detail.id}: {detail.vehicle ?? "vehicle not recorded"}
+        </h1>
+        <StatusBadge status={detail.status} />
+      </header>
+      <section className="card">
+        <h2 className="text-lg font-bold">Complaint, in the owner&apos;s words</h2>
+        <p className="mt-1">&ldquo;{detail.complaint}&rdquo;</p>
+        <dl className="mt-3 grid grid-cols-[auto_1fr] gap-x-4 gap-y-1">
+          <dt className="font-bold">Customer</dt>
+          <dd>{detail.customer ?? "—"}</dd>
+          <dt className="font-bold">Technician</dt>
+          <dd>{detail.technician}</dd>
+          <dt className="font-bold">Refrigerant</dt>
+          <dd>{detail.refrigerant ?? "—"}</dd>
+          <dt className="font-bold">Expansion device</dt>
+          <dd>{detail.expansionDevice === "txv" ? "TXV with receiver-drier" : detail.expansionDevice === "orifice_tube" ? "Orifice tube with accumulator" : "—"}</dd>
+        </dl>
+      </section>
+      {detail.conclusionNotes && (
+        <section className="card">
+          <h2 className="text-lg font-bold">Technician&apos;s conclusion</h2>
+          <p className="mt-1">{detail.conclusionNotes}</p>
+        </section>
+      )}
+      {detail.signOffs.length > 0 && (
+        <section className="card">
+          <h2 className="text-lg font-bold">Sign-off</h2>
+          <ul className="mt-2 space-y-2">
+            {detail.signOffs.map((s, i) => (
+              <li key={i}>
+                <span className="font-bold">{s.verdict === "signed_off" ? "Signed off" : "Sent back"}</span> by {s.reviewer}
+                {s.comment ? `: “${s.comment}”` : ""}
+              </li>
+            ))}
+          </ul>
+        </section>
+      )}
+    </article>
+  );
+}

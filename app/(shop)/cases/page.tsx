@@ -1,0 +1,19 @@
+import type { Metadata } from "next";
+import { requireUser } from "@/lib/auth/guard";
+import { listCases } from "@/lib/server/cases";
+import { CaseList } from "@/components/cases/case-list";
+
+export const metadata: Metadata = { title: "Cases" };
+
+export default async function CasesPage() {
+  const user = await requireUser("cases:read");
+  const cases = await listCases({ shopId: user.shopId });
+  return (
+    <>
+      <div className="mb-4 flex flex-wrap items-center justify-between gap-3">
+        <h1 className="text-2xl font-bold">Cases</h1>
+      </div>
+      <CaseList cases={cases} empty="No cases yet." />
+    </>
+  );
+}

@@ -1,0 +1,40 @@
+import Link from "next/link";
+import { requireUser } from "@/lib/auth/guard";
+import { navigationFor } from "@/lib/auth/navigation";
+import { ROLE_LABELS } from "@/lib/auth/roles";
+import { getShop } from "@/lib/server/shops";
+import { BrandMark } from "@/components/shell/brand-mark";
+import { NavLinks } from "@/components/shell/nav-links";
+import { SignOutButton } from "@/components/auth/sign-out-button";
+
+export default async function ShopLayout({ children }: { children: React.ReactNode }) {
+  const user = await requireUser();
+  const shop = await getShop({ shopId: user.shopId });
+  const items = navigationFor(user.role).map(({ href, label }) => ({ href, label }));
+  return (
+    <div className="min-h-dvh">
+      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:bg-paper focus:p-2">
+        Skip to content
+      </a>
+      <header className="bg-glacier-900 text-white">
+        <div className="mx-auto flex max-w-5xl flex-wrap items-center gap-x-4 gap-y-2 px-3 py-2">
+          <Link href="/cases" className="flex min-h-touch items-center gap-2 font-bold">
+            <BrandMark className="h-8 w-8 text-glacier-500" />
+            <span className="text-lg">Chillwright</span>
+          </Link>
+          <span className="text-sm text-glacier-100">{shop.name}</span>
+          <div className="ml-auto flex items-center gap-2">
+            <span className="text-sm" data-testid="signed-in-as">
+              {user.name} · {ROLE_LABELS[user.role]}
+            </span>
+            <SignOutButton />
+          </div>
+        </div>
+        <NavLinks items={items} />
+      </header>
+      <main id="main" className="mx-auto max-w-5xl px-3 py-4">
+        {children}
+      </main>
+    </div>
+  );
+}

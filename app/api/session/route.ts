@@ -1,0 +1,25 @@
+import { getLucia } from "@/lib/auth/lucia";
+import { env } from "@/lib/env";
+import { handler } from "@/lib/server/handler";
+import { signInWithPassword } from "@/lib/server/sign-in";
+import { signInSchema } from "./schema";
+
+/** Sign in: creates a Lucia session and sets its cookie. */
+export const POST = handler({ public: true, body: signInSchema }, async ({ req, body, responseHeaders }) => {
+  // Without a trusted proxy the client address is unknown; the per-e-mail limit still applies.
+  const ip = env().TRUST_PROXY === "1" ? (req.headers.get("x-forwarded-for")?.split(",")[0]?.trim() ?? null) : null;
+  const { userId } = await signInWithPassword({ email: body.email, password: body.password, ip });
+  const lucia = getLucia();
+  const session = await lucia.createSession(userId, {});
+  responseHeaders.append("Set-Cookie", lucia.createSessionCookie(session.id).serialize());
+  return { ok: true };
+});
+
+/** Sign out: ends the session and clears the cookie. */
+export const DELETE = handler({ public: true }, async ({ req, responseHeaders }) => {
+  const lucia = getLucia();
+  const sessionId = req.cookies.get(lucia.sessionCookieName)?.value;
+  if (sessionId) await lucia.invalidateSession(sessionId);
+  responseHeaders.append("Set-Cookie", lucia.createBlankSessionCookie().serialize());
+  return { ok: true };
+});

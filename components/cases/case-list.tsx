@@ -1,0 +1,26 @@
+import Link from "next/link";
+import type { CaseListItem } from "@/lib/server/cases";
+import { StatusBadge } from "./status-badge";
+
+export function CaseList({ cases, empty }: { cases: CaseListItem[]; empty: string }) {
+  if (cases.length === 0) return <p className="card text-ink-soft">{empty}</p>;
+  return (
+    <ul className="space-y-3">
+      {cases.map((c) => (
+        <li key={c.id}>
+          <Link href={`/cases/${c.id}`} className="card block hover:border-glacier-500">
+            <div className="flex flex-wrap items-center justify-between gap-2">
+              <span className="font-bold">{c.vehicle ?? "Vehicle not recorded"}</span>
+              <StatusBadge status={c.status} />
+            </div>
+            <p className="mt-1 line-clamp-2 text-ink-soft">&ldquo;{c.complaint}&rdquo;</p>
+            <p className="mt-1 text-sm text-ink-muted">
+              Case {c.id} · {c.customer ?? "no customer"} · {c.technician} ·{" "}
+              <time dateTime={c.updatedAt}>{new Date(c.updatedAt).toISOString().slice(0, 10)}</time>
+            </p>
+          </Link>
+        </li>
+      ))}
+    </ul>
+  );
+}

@@ -1,0 +1,39 @@
+import type { FieldErrors } from "@/lib/errors";
+
+export class ApiError extends Error {
+  constructor(
+    message: string,
+    readonly status: number,
+    readonly code: string,
+    readonly fieldErrors?: FieldErrors,
+  ) {
+    super(message);
+    this.name = "ApiError";
+  }
+}
+
+/** JSON in, JSON out; a non-2xx answer becomes an ApiError carrying the server's safe message. */
+export async function apiFetch<T = unknown>(
+  url: string,
+  init: { method?: string; body?: unknown; signal?: AbortSignal } = {},
+): Promise<T> {
+  const response = await fetch(url, {
+    method: init.method ?? "GET",
+    headers: init.body === undefined ? undefined : { "content-type": "application/json" },
+    body: init.body === undefined ? undefined : JSON.stringify(init.body),
+    signal: init.signal,
+    credentials: "same-origin",
+  });
+  const data = (await response.json().catch(() => null)) as
+    | (T & { error?: { code: string; message: string; fieldErrors?: FieldErrors } })
+    | null;
+  if (!response.ok) {
+    throw new ApiError(
+      data?.error?.message ?? `The server answered ${response.status}.`,
+      response.status,
+      data?.error?.code ?? "unknown",
+      data?.error?.fieldErrors,
+    );
+  }
+  return data as T;
+}

@@ -1,0 +1,114 @@
+import "server-only";
+import { getModels, type CaseStatus } from "@/models";
+import { AppError } from "@/lib/errors";
+
+export interface CaseListItem {
+  id: number;
+  status: CaseStatus;
+  complaint: string;
+  vehicle: string | null;
+  customer: string | null;
+  technician: string;
+  updatedAt: string;
+}
+
+export interface CaseDetail extends CaseListItem {
+  technicianId: string;
+  refrigerant: string | null;
+  expansionDevice: string | null;
+  interviewStep: string | null;
+  answers: unknown;
+  findings: unknown;
+  engineVersion: string | null;
+  conclusionCause: string | null;
+  conclusionNotes: string | null;
+  confirmedRepair: string | null;
+  version: number;
+  signOffs: { verdict: string; comment: string | null; reviewer: string; createdAt: string }[];
+}
+
+type VehicleRow = { year: number; make: string; model: string; engine: string | null; refrigerant: string; expansionDevice: string } | null;
+
+function describeVehicle(v: VehicleRow): string | null {
+  return v ? `${v.year} ${v.make} ${v.model}${v.engine ? ` ${v.engine}` : ""}` : null;
+}
+
+function includes() {
+  const { Vehicle, Customer, User } = getModels();
+  return [
+    { model: Vehicle, attributes: ["year", "make", "model", "engine", "refrigerant", "expansionDevice"] },
+    { model: Customer, attributes: ["name"] },
+    { model: User, as: "technician", attributes: ["name"] },
+  ];
+}
+
+export async function listCases({ shopId, status, limit = 50 }: { shopId: number; status?: CaseStatus; limit?: number }): Promise<CaseListItem[]> {
+  const { Case } = getModels();
+  const rows = await Case.findAll({
+    where: { shopId, ...(status ? { status } : {}) },
+    include: includes(),
+    order: [["updatedAt", "DESC"]],
+    limit,
+  });
+  return rows.map((row) => {
+    const c = row.get({ plain: true }) as unknown as Record<string, unknown> & {
+      Vehicle: VehicleRow;
+      Customer: { name: string } | null;
+      technician: { name: string };
+    };
+    return {
+      id: c.id as number,
+      status: c.status as CaseStatus,
+      complaint: c.complaint as string,
+      vehicle: describeVehicle(c.Vehicle),
+      customer: c.Customer?.name ?? null,
+      technician: c.technician.name,
+      updatedAt: (c.updatedAt as Date).toISOString(),
+    };
+  });
+}
+
+export async function getCase({ shopId, caseId }: { shopId: number; caseId: number }): Promise<CaseDetail> {
+  const { Case, SignOff, User } = getModels();
+  const row = await Case.findOne({
+    where: { id: caseId, shopId },
+    include: [
+      ...includes(),
+      { model: SignOff, as: "signOffs", include: [{ model: User, as: "reviewer", attributes: ["name"] }] },
+    ],
+    order: [[{ model: SignOff, as: "signOffs" }, "createdAt", "ASC"]],
+  });
+  if (!row) throw new AppError("not_found:case", "No such case in this shop.");
+  const c = row.get({ plain: true }) as unknown as Record<string, unknown> & {
+    Vehicle: VehicleRow;
+    Customer: { name: string } | null;
+    technician: { name: string };
+    signOffs: { verdict: string; comment: string | null; createdAt: Date; reviewer: { name: string } }[];
+  };
+  return {
+    id: c.id as number,
+    status: c.status as CaseStatus,
+    complaint: c.complaint as string,
+    vehicle: describeVehicle(c.Vehicle),
+    customer: c.Customer?.name ?? null,
+    technician: c.technician.name,
+    technicianId: c.technicianId as string,
+    updatedAt: (c.updatedAt as Date).toISOString(),
+    refrigerant: c.Vehicle?.refrigerant ?? null,
+    expansionDevice: c.Vehicle?.expansionDevice ?? null,
+    interviewStep: (c.interviewStep as string | null) ?? null,
+    answers: c.answers ?? {},
+    findings: c.findings ?? null,
+    engineVersion: (c.engineVersion as string | null) ?? null,
+    conclusionCause: (c.conclusionCause as string | null) ?? null,
+    conclusionNotes: (c.conclusionNotes as string | null) ?? null,
+    confirmedRepair: (c.confirmedRepair as string | null) ?? null,
+    version: c.version as number,
+    signOffs: c.signOffs.map((s) => ({
+      verdict: s.verdict,
+      comment: s.comment,
+      reviewer: s.reviewer.name,
+      createdAt: new Date(s.createdAt).toISOString(),
+    })),
+  };
+}

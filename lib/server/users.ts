@@ -1,0 +1,84 @@
+import "server-only";
+import { generateIdFromEntropySize } from "lucia";
+import { getModels } from "@/models";
+import { hashPassword } from "@/lib/auth/password";
+import { AppError } from "@/lib/errors";
+import type { Role } from "@/lib/auth/roles";
+
+export interface ShopUser {
+  id: string;
+  email: string;
+  name: string;
+  role: Role;
+  active: boolean;
+}
+
+const PUBLIC_ATTRIBUTES = ["id", "email", "name", "role", "active"] as const;
+
+function toShopUser(row: { id: string; email: string; name: string; role: Role; active: boolean | number }): ShopUser {
+  return { id: row.id, email: row.email, name: row.name, role: row.role, active: Boolean(row.active) };
+}
+
+export async function listUsers({ shopId }: { shopId: number }): Promise<ShopUser[]> {
+  const { User } = getModels();
+  const rows = await User.findAll({ where: { shopId }, attributes: [...PUBLIC_ATTRIBUTES], order: [["name", "ASC"]], raw: true });
+  return rows.map(toShopUser);
+}
+
+export async function createUser({
+  shopId,
+  email,
+  name,
+  role,
+  password,
+}: {
+  shopId: number;
+  email: string;
+  name: string;
+  role: Role;
+  password: string;
+}): Promise<ShopUser> {
+  const { User } = getModels();
+  const normalisedEmail = email.trim().toLowerCase();
+  const existing = await User.findOne({ where: { email: normalisedEmail }, attributes: ["id"], raw: true });
+  if (existing) {
+    throw new AppError("conflict:user", "An account with that e-mail already exists.", {
+      fieldErrors: { email: ["An account with that e-mail already exists."] },
+    });
+  }
+  const user = await User.create({
+    id: generateIdFromEntropySize(10),
+    shopId,
+    email: normalisedEmail,
+    name: name.trim(),
+    role,
+    passwordHash: await hashPassword(password),
+    active: true,
+  });
+  return toShopUser(user.get({ plain: true }));
+}
+
+export async function updateUser({
+  shopId,
+  userId,
+  actorId,
+  role,
+  active,
+}: {
+  shopId: number;
+  userId: string;
+  actorId: string;
+  role?: Role;
+  active?: boolean;
+}): Promise<ShopUser> {
+  const { User } = getModels();
+  const user = await User.findOne({ where: { id: userId, shopId } });
+  if (!user) throw new AppError("not_found:user", "No such user in this shop.");
+  if (userId === actorId && ((role && role !== "owner") || active === false)) {
+    throw new AppError("conflict:user", "You cannot remove your own owner role or deactivate yourself.");
+  }
+  if (role) user.set("role", role);
+  if (active !== undefined) user.set("active", active);
+  await user.save();
+  return toShopUser(user.get({ plain: true }));
+}

@@ -1,0 +1,113 @@
+import { expect, test, type APIRequestContext } from "@playwright/test";
+import { apiClient, signedInClient } from "./pages/api-client";
+import { DEMO_USERS, type DemoRole } from "./pages/sign-in-page";
+
+// The role × route table: for each API route, each role, no session and another shop's owner.
+type Who = DemoRole | "anonymous" | "otherShopOwner";
+const WHO: Who[] = ["anonymous", "owner", "senior", "technician", "apprentice", "otherShopOwner"];
+
+const clients = new Map<Who, APIRequestContext>();
+let harbourlineCaseId = 0;
+let ridgebackUserId = "";
+let harbourlineTechId = "";
+
+test.beforeAll(async () => {
+  clients.set("anonymous", await apiClient());
+  for (const role of Object.keys(DEMO_USERS) as DemoRole[]) clients.set(role, await signedInClient(DEMO_USERS[role].email));
+  clients.set("otherShopOwner", await signedInClient("owner@ridgeback.test"));
+  const cases = await (await clients.get("owner")!.get("/api/cases")).json();
+  harbourlineCaseId = cases.cases[0].id;
+  const ridgebackUsers = await (await clients.get("otherShopOwner")!.get("/api/users")).json();
+  ridgebackUserId = ridgebackUsers.users[0].id;
+  const harbourlineUsers = await (await clients.get("owner")!.get("/api/users")).json();
+  harbourlineTechId = harbourlineUsers.users.find((u: { email: string }) => u.email === DEMO_USERS.technician.email).id;
+});
+
+test.afterAll(async () => {
+  for (const client of clients.values()) await client.dispose();
+});
+
+type Expectation = Record<Who, number>;
+const table: { name: string; call: (c: APIRequestContext) => Promise<{ status(): number }>; expect: Expectation }[] = [
+  {
+    name: "GET /api/health",
+    call: (c) => c.get("/api/health"),
+    expect: { anonymous: 200, owner: 200, senior: 200, technician: 200, apprentice: 200, otherShopOwner: 200 },
+  },
+  {
+    name: "GET /api/me",
+    call: (c) => c.get("/api/me"),
+    expect: { anonymous: 401, owner: 200, senior: 200, technician: 200, apprentice: 200, otherShopOwner: 200 },
+  },
+  {
+    name: "GET /api/users",
+    call: (c) => c.get("/api/users"),
+    expect: { anonymous: 401, owner: 200, senior: 403, technician: 403, apprentice: 403, otherShopOwner: 200 },
+  },
+  {
+    name: "POST /api/users (malformed)",
+    call: (c) => c.post("/api/users", { data: { email: "nope", role: "boss" } }),
+    expect: { anonymous: 401, owner: 400, senior: 403, technician: 403, apprentice: 403, otherShopOwner: 400 },
+  },
+  {
+    name: "PATCH /api/users/:id (a Harbourline technician)",
+    call: (c) => c.patch(`/api/users/${harbourlineTechId}`, { data: { role: "technician" } }),
+    expect: { anonymous: 401, owner: 200, senior: 403, technician: 403, apprentice: 403, otherShopOwner: 404 },
+  },
+  {
+    name: "PATCH /api/users/:id (a Ridgeback user)",
+    call: (c) => c.patch(`/api/users/${ridgebackUserId}`, { data: { active: true } }),
+    expect: { anonymous: 401, owner: 404, senior: 403, technician: 403, apprentice: 403, otherShopOwner: 200 },
+  },
+  {
+    name: "GET /api/cases",
+    call: (c) => c.get("/api/cases"),
+    expect: { anonymous: 401, owner: 200, senior: 200, technician: 200, apprentice: 200, otherShopOwner: 200 },
+  },
+  {
+    name: "GET /api/cases/:id (a Harbourline case)",
+    call: (c) => c.get(`/api/cases/${harbourlineCaseId}`),
+    expect: { anonymous: 401, owner: 200, senior: 200, technician: 200, apprentice: 200, otherShopOwner: 404 },
+  },
+  {
+    name: "GET /api/cases/:id (not a number)",
+    call: (c) => c.get("/api/cases/abc"),
+    expect: { anonymous: 401, owner: 400, senior: 400, technician: 400, apprentice: 400, otherShopOwner: 400 },
+  },
+];
+
+for (const row of table) {
+  test(`role × route: ${row.name}`, async () => {
+    const got: Partial<Expectation> = {};
+    for (const who of WHO) got[who] = (await row.call(clients.get(who)!)).status();
+    expect(got).toEqual(row.expect);
+  });
+}
+
+test("a state-changing request from another origin is refused", async ({ playwright }) => {
+  const foreign = await playwright.request.newContext({
+    baseURL: "http://127.0.0.1:3100",
+    extraHTTPHeaders: { origin: "https://evil.example" },
+  });
+  const response = await foreign.post("/api/session", { data: { email: DEMO_USERS.owner.email, password: "x" } });
+  expect(response.status()).toBe(403);
+  await foreign.dispose();
+});
+
+test("sign-in: malformed body 400, wrong content type 415, wrong password 401, a burst 429", async () => {
+  const client = await apiClient();
+  expect((await client.post("/api/session", { data: { email: 42 } })).status()).toBe(400);
+  const text = await client.post("/api/session", { data: "email=x", headers: { "content-type": "text/plain" } });
+  expect(text.status()).toBe(415);
+  const broken = await client.post("/api/session", { data: "{not json", headers: { "content-type": "application/json" } });
+  expect(broken.status()).toBe(400);
+  const email = "burst-target@harbourline.test";
+  const statuses: number[] = [];
+  for (let i = 0; i < 7; i++) statuses.push((await client.post("/api/session", { data: { email, password: `wrong-${i}` } })).status());
+  expect(statuses.slice(0, 5)).toEqual([401, 401, 401, 401, 401]);
+  expect(statuses.slice(5)).toEqual([429, 429]);
+  const limited = await client.post("/api/session", { data: { email, password: "wrong" } });
+  expect((await limited.json()).error.message).toMatch(/Too many failed sign-ins/);
+  expect(limited.headers()["retry-after"]).toBe("900");
+  await client.dispose();
+});
