@@ -1,0 +1,86 @@
+import type { ExpansionDevice, VehicleRefrigerant } from "@/models";
+
+// Real makes and models with invented VINs left empty. Label charges and oils here are
+// illustrative demo values, not a reference: the shop's spec table and the under-hood label decide.
+
+export type DemoVehicle = {
+  key: string;
+  customerKey: string;
+  year: number;
+  make: string;
+  model: string;
+  engine: string | null;
+  refrigerant: VehicleRefrigerant;
+  expansionDevice: ExpansionDevice;
+  electricCompressor: boolean;
+  labelChargeG: number | null;
+  oilType: string | null;
+};
+
+export const demoVehicles: DemoVehicle[] = [
+  {
+    key: "focus",
+    customerKey: "halvorsen",
+    year: 2014,
+    make: "Ford",
+    model: "Focus",
+    engine: "2.0 L I4",
+    refrigerant: "R-134a",
+    expansionDevice: "orifice_tube",
+    electricCompressor: false,
+    labelChargeG: 570,
+    oilType: "PAG 46",
+  },
+  {
+    key: "crv",
+    customerKey: "mbeki",
+    year: 2019,
+    make: "Honda",
+    model: "CR-V",
+    engine: "1.5 L turbo I4",
+    refrigerant: "R-1234yf",
+    expansionDevice: "txv",
+    electricCompressor: false,
+    labelChargeG: 450,
+    oilType: "PAG (R-1234yf rated)",
+  },
+  {
+    key: "silverado",
+    customerKey: "tidewater",
+    year: 2016,
+    make: "Chevrolet",
+    model: "Silverado 1500 (front and rear A/C)",
+    engine: "5.3 L V8",
+    refrigerant: "R-134a",
+    expansionDevice: "orifice_tube",
+    electricCompressor: false,
+    labelChargeG: 1130,
+    oilType: "PAG 150",
+  },
+  {
+    key: "rav4",
+    customerKey: "castellanos",
+    year: 2021,
+    make: "Toyota",
+    model: "RAV4 Hybrid",
+    engine: "2.5 L I4 hybrid",
+    refrigerant: "R-1234yf",
+    expansionDevice: "txv",
+    electricCompressor: true,
+    labelChargeG: 480,
+    oilType: "POE, electric-compressor grade",
+  },
+  {
+    key: "ranger",
+    customerKey: "brandvold",
+    year: 2010,
+    make: "Ford",
+    model: "Ranger",
+    engine: "4.0 L V6",
+    refrigerant: "R-134a",
+    expansionDevice: "orifice_tube",
+    electricCompressor: false,
+    labelChargeG: 630,
+    oilType: "PAG 46",
+  },
+];

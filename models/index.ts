@@ -1,0 +1,114 @@
+import type { Sequelize } from "sequelize";
+import { getSequelize } from "@/lib/db/sequelize";
+import { AuditEvent } from "./audit-event";
+import { Case } from "./case";
+import { Customer } from "./customer";
+import { ReadingSet } from "./reading-set";
+import { Session } from "./session";
+import { Shop } from "./shop";
+import { SignInAttempt } from "./sign-in-attempt";
+import { SignOff } from "./sign-off";
+import { User } from "./user";
+import { Vehicle } from "./vehicle";
+
+export { AuditEvent, Case, Customer, ReadingSet, Session, Shop, SignInAttempt, SignOff, User, Vehicle };
+export type { CaseStatus, JsonObject, JsonValue } from "./case";
+export type { UserRole } from "./user";
+export type { ShopUnits } from "./shop";
+export type { ReadingSetKind } from "./reading-set";
+export type { SignOffVerdict } from "./sign-off";
+export type { ExpansionDevice, VehicleRefrigerant } from "./vehicle";
+
+function initModels(sequelize: Sequelize) {
+  for (const model of [
+    Shop,
+    User,
+    Session,
+    SignInAttempt,
+    Customer,
+    Vehicle,
+    Case,
+    ReadingSet,
+    SignOff,
+    AuditEvent,
+  ]) {
+    model.initModel(sequelize);
+  }
+
+  const shopScoped = { foreignKey: { name: "shopId", allowNull: false } } as const;
+  Shop.hasMany(User, shopScoped);
+  User.belongsTo(Shop, shopScoped);
+  Shop.hasMany(Customer, shopScoped);
+  Customer.belongsTo(Shop, shopScoped);
+  Shop.hasMany(Vehicle, shopScoped);
+  Vehicle.belongsTo(Shop, shopScoped);
+  Shop.hasMany(Case, shopScoped);
+  Case.belongsTo(Shop, shopScoped);
+  Shop.hasMany(ReadingSet, shopScoped);
+  ReadingSet.belongsTo(Shop, shopScoped);
+  Shop.hasMany(SignOff, shopScoped);
+  SignOff.belongsTo(Shop, shopScoped);
+  Shop.hasMany(AuditEvent, shopScoped);
+  AuditEvent.belongsTo(Shop, shopScoped);
+
+  User.hasMany(Session, { foreignKey: { name: "userId", allowNull: false }, onDelete: "CASCADE" });
+  Session.belongsTo(User, { foreignKey: { name: "userId", allowNull: false } });
+
+  Customer.hasMany(Vehicle, { foreignKey: { name: "customerId", allowNull: false } });
+  Vehicle.belongsTo(Customer, { foreignKey: { name: "customerId", allowNull: false } });
+
+  Customer.hasMany(Case, { foreignKey: "customerId" });
+  Case.belongsTo(Customer, { foreignKey: "customerId" });
+  Vehicle.hasMany(Case, { foreignKey: "vehicleId" });
+  Case.belongsTo(Vehicle, { foreignKey: "vehicleId" });
+  User.hasMany(Case, { foreignKey: { name: "technicianId", allowNull: false }, as: "cases" });
+  Case.belongsTo(User, { foreignKey: { name: "technicianId", allowNull: false }, as: "technician" });
+
+  Case.hasMany(ReadingSet, {
+    foreignKey: { name: "caseId", allowNull: false },
+    as: "readingSets",
+    onDelete: "CASCADE",
+  });
+  ReadingSet.belongsTo(Case, { foreignKey: { name: "caseId", allowNull: false } });
+  Case.hasMany(SignOff, {
+    foreignKey: { name: "caseId", allowNull: false },
+    as: "signOffs",
+    onDelete: "CASCADE",
+  });
+  SignOff.belongsTo(Case, { foreignKey: { name: "caseId", allowNull: false } });
+  User.hasMany(SignOff, { foreignKey: { name: "reviewerId", allowNull: false }, as: "reviews" });
+  SignOff.belongsTo(User, { foreignKey: { name: "reviewerId", allowNull: false }, as: "reviewer" });
+
+  User.hasMany(AuditEvent, { foreignKey: "actorId", as: "auditEvents" });
+  AuditEvent.belongsTo(User, { foreignKey: "actorId", as: "actor" });
+
+  return {
+    sequelize,
+    Shop,
+    User,
+    Session,
+    SignInAttempt,
+    Customer,
+    Vehicle,
+    Case,
+    ReadingSet,
+    SignOff,
+    AuditEvent,
+  };
+}
+
+export type Models = ReturnType<typeof initModels>;
+
+const globalCache = globalThis as typeof globalThis & { chillwrightModels?: Models };
+let moduleCache: Models | undefined;
+
+/** The models bound to the process-wide Sequelize, initialised with their associations once. */
+export function getModels(): Models {
+  // Outside production the cache lives on globalThis so hot reloads do not re-initialise the models.
+  if (process.env.NODE_ENV === "production") {
+    moduleCache ??= initModels(getSequelize());
+    return moduleCache;
+  }
+  globalCache.chillwrightModels ??= initModels(getSequelize());
+  return globalCache.chillwrightModels;
+}

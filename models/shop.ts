@@ -1,0 +1,36 @@
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from "sequelize";
+
+export const shopUnits = ["metric", "imperial"] as const;
+export type ShopUnits = (typeof shopUnits)[number];
+
+export class Shop extends Model<InferAttributes<Shop>, InferCreationAttributes<Shop>> {
+  declare id: CreationOptional<number>;
+  declare name: string;
+  declare units: CreationOptional<ShopUnits>;
+  declare altitudeM: CreationOptional<number>;
+  declare timeZone: CreationOptional<string>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize) {
+    Shop.init(
+      {
+        id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
+        name: { type: DataTypes.STRING(120), allowNull: false },
+        units: { type: DataTypes.ENUM(...shopUnits), allowNull: false, defaultValue: "metric" },
+        altitudeM: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+        timeZone: { type: DataTypes.STRING(64), allowNull: false, defaultValue: "UTC" },
+        createdAt: DataTypes.DATE(3),
+        updatedAt: DataTypes.DATE(3),
+      },
+      { sequelize, tableName: "shop", modelName: "Shop", underscored: true },
+    );
+  }
+}

@@ -1,0 +1,56 @@
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from "sequelize";
+import type { Shop } from "./shop";
+
+export const userRoles = ["owner", "senior", "technician", "apprentice"] as const;
+export type UserRole = (typeof userRoles)[number];
+
+export class User extends Model<InferAttributes<User>, InferCreationAttributes<User>> {
+  declare id: string;
+  declare shopId: ForeignKey<Shop["id"]>;
+  declare email: string;
+  declare name: string;
+  declare passwordHash: string;
+  declare role: UserRole;
+  declare active: CreationOptional<boolean>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize) {
+    User.init(
+      {
+        id: { type: DataTypes.STRING(40), primaryKey: true },
+        email: {
+          type: DataTypes.STRING(255),
+          allowNull: false,
+          // Stored lower-cased; the table has a check that refuses anything else.
+          set(value: string) {
+            this.setDataValue("email", value.trim().toLowerCase());
+          },
+        },
+        name: { type: DataTypes.STRING(120), allowNull: false },
+        passwordHash: { type: DataTypes.STRING(255), allowNull: false },
+        role: { type: DataTypes.ENUM(...userRoles), allowNull: false },
+        active: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
+        createdAt: DataTypes.DATE(3),
+        updatedAt: DataTypes.DATE(3),
+      },
+      {
+        sequelize,
+        tableName: "user",
+        modelName: "User",
+        underscored: true,
+        // Password hashes leave the data layer only when asked for by name.
+        defaultScope: { attributes: { exclude: ["passwordHash"] } },
+        scopes: { withPasswordHash: { attributes: { include: ["passwordHash"] } } },
+      },
+    );
+  }
+}

@@ -1,0 +1,55 @@
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from "sequelize";
+import type { Customer } from "./customer";
+import type { Shop } from "./shop";
+
+export const vehicleRefrigerants = ["R-134a", "R-1234yf", "R-744", "R-12"] as const;
+export type VehicleRefrigerant = (typeof vehicleRefrigerants)[number];
+export const expansionDevices = ["orifice_tube", "txv"] as const;
+export type ExpansionDevice = (typeof expansionDevices)[number];
+
+export class Vehicle extends Model<InferAttributes<Vehicle>, InferCreationAttributes<Vehicle>> {
+  declare id: CreationOptional<number>;
+  declare shopId: ForeignKey<Shop["id"]>;
+  declare customerId: ForeignKey<Customer["id"]>;
+  declare year: number;
+  declare make: string;
+  declare model: string;
+  declare engine: CreationOptional<string | null>;
+  declare vin: CreationOptional<string | null>;
+  declare refrigerant: VehicleRefrigerant;
+  declare expansionDevice: ExpansionDevice;
+  declare electricCompressor: CreationOptional<boolean>;
+  declare labelChargeG: CreationOptional<number | null>;
+  declare oilType: CreationOptional<string | null>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize) {
+    Vehicle.init(
+      {
+        id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
+        year: { type: DataTypes.SMALLINT, allowNull: false },
+        make: { type: DataTypes.STRING(60), allowNull: false },
+        model: { type: DataTypes.STRING(80), allowNull: false },
+        engine: { type: DataTypes.STRING(80), allowNull: true },
+        vin: { type: DataTypes.STRING(17), allowNull: true },
+        refrigerant: { type: DataTypes.ENUM(...vehicleRefrigerants), allowNull: false },
+        expansionDevice: { type: DataTypes.ENUM(...expansionDevices), allowNull: false },
+        electricCompressor: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+        labelChargeG: { type: DataTypes.INTEGER, allowNull: true },
+        oilType: { type: DataTypes.STRING(60), allowNull: true },
+        createdAt: DataTypes.DATE(3),
+        updatedAt: DataTypes.DATE(3),
+      },
+      { sequelize, tableName: "vehicle", modelName: "Vehicle", underscored: true },
+    );
+  }
+}
