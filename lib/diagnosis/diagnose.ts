@@ -1,0 +1,69 @@
+import { CAUSE_IDS, type CauseId } from "./causes";
+import { type Caution, collectCautions } from "./cautions";
+import { ENGINE_VERSION } from "./engine-version";
+import { extractEvidence } from "./evidence";
+import type { ComputedValues } from "./evidence-types";
+import { chooseNextCheck, type NextCheck } from "./next-check";
+import type { ObservationId } from "./observations";
+import type { DiagnosisInput } from "./schema";
+import { type EvidenceItem, logistic, readingCoverage, scoreCauses } from "./scoring";
+
+export interface Suspect {
+  cause: CauseId;
+  /** 0–1: logistic of the summed log-odds. Higher ranks first. */
+  score: number;
+  /** 0–1: how much of this cause's key-reading evidence was measured (lower when readings are missing). */
+  confidence: number;
+  evidenceFor: string[];
+  evidenceAgainst: string[];
+  logOdds: number;
+  /** Every item that moved this suspect's score, with its weight, for review. */
+  evidence: EvidenceItem[];
+}
+
+export interface Findings {
+  engineVersion: string;
+  suspects: Suspect[];
+  nextCheck: NextCheck;
+  cautions: Caution[];
+  computed: ComputedValues;
+  /** Facts that moved no score but matter to the reader. */
+  notes: string[];
+}
+
+const CAUSE_ORDER = new Map<CauseId, number>(CAUSE_IDS.map((cause, i) => [cause, i]));
+const round = (value: number, decimals: number) => Math.round(value * 10 ** decimals) / 10 ** decimals;
+
+/** Rank the likely causes of a cooling complaint. Expects input already accepted by diagnosisInputSchema. */
+export function diagnose(input: DiagnosisInput): Findings {
+  const extraction = extractEvidence(input);
+  const present = new Set<ObservationId>(extraction.observations.map((o) => o.id));
+  const mixed = present.has("purity:fail") || present.has("symptom:identifier_flags_hydrocarbon");
+  const systemEmpty = present.has("static:empty") || present.has("charge:empty");
+
+  const suspects = scoreCauses(extraction.observations)
+    .map((s): Suspect => {
+      const sorted = [...s.items].sort((a, b) => Math.abs(b.weight) - Math.abs(a.weight));
+      return {
+        cause: s.cause,
+        score: logistic(s.logOdds),
+        confidence: round(readingCoverage(s.cause, extraction.observedGroups) * extraction.confidenceFactor, 3),
+        evidenceFor: sorted.filter((i) => i.weight > 0).map((i) => i.text),
+        evidenceAgainst: sorted.filter((i) => i.weight < 0).map((i) => i.text),
+        logOdds: s.logOdds,
+        evidence: sorted,
+      };
+    })
+    .sort((a, b) => b.logOdds - a.logOdds || (CAUSE_ORDER.get(a.cause) ?? 0) - (CAUSE_ORDER.get(b.cause) ?? 0));
+
+  const leaders = suspects.slice(0, 2).map((s) => s.cause);
+  const ctx = { input, extraction, symptoms: new Set(input.symptoms ?? []), mixed };
+  return {
+    engineVersion: ENGINE_VERSION,
+    suspects,
+    nextCheck: chooseNextCheck(ctx, leaders, systemEmpty),
+    cautions: collectCautions({ input, observations: present, leaders, mixed, systemEmpty }),
+    computed: extraction.computed,
+    notes: extraction.notes,
+  };
+}

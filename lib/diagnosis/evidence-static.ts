@@ -1,0 +1,60 @@
+import { saturationPressure, SaturationRangeError, staticCheck } from "@/lib/refrigerants";
+import type { Extraction } from "./evidence-types";
+import { degC, kpa, kpaGauge } from "./format";
+import type { DiagnosisInput } from "./schema";
+
+// A static reading under about 70 kPa gauge (10 psig), or under half the saturation pressure at
+// ambient, means next to no refrigerant is left (common practice).
+const EMPTY_BELOW_KPA_GAUGE = 70;
+const EMPTY_BELOW_FRACTION_OF_SATURATION = 0.5;
+// Static excess grading, kPa over saturation at ambient. About 1 K of thermometer error is ~20 kPa
+// for R-134a near 25 °C (saturation table slope) plus gauge error: 35 kPa is within tolerance
+// (from memory; the SAE J2211 container tolerance table itself was not available).
+const STATIC_EXCESS_KPA = { slight: 35, high: 70, veryHigh: 140 } as const;
+
+function saturationAtAmbientOrNull(input: DiagnosisInput): number | null {
+  try {
+    return saturationPressure(input.refrigerant, input.ambientC);
+  } catch (error) {
+    if (error instanceof SaturationRangeError) return null;
+    throw error;
+  }
+}
+
+/** Engine-off static pressure against saturation at ambient: empty, no liquid, or how much excess. */
+export function addStaticEvidence(input: DiagnosisInput, barometricKpa: number, out: Extraction): void {
+  if (input.staticKpaGauge === undefined) return;
+  const staticKpaAbs = input.staticKpaGauge + barometricKpa;
+  out.computed.staticKpaAbs = staticKpaAbs;
+  const saturationKpaAbs = saturationAtAmbientOrNull(input);
+  const emptyBelowKpaAbs = Math.min(EMPTY_BELOW_KPA_GAUGE + barometricKpa, saturationKpaAbs === null ? Infinity : saturationKpaAbs * EMPTY_BELOW_FRACTION_OF_SATURATION);
+  if (staticKpaAbs < emptyBelowKpaAbs) {
+    out.observedGroups.add("static");
+    out.observations.push({ id: "static:empty", text: `Static pressure ${kpaGauge(input.staticKpaGauge)} at ${degC(input.ambientC)}: the system is empty or nearly so.` });
+    return;
+  }
+  const check = staticCheck({ refrigerant: input.refrigerant, staticKpaAbs, ambientC: input.ambientC });
+  if (check.kind === "out_of_range") {
+    out.notes.push(check.message);
+    return;
+  }
+  out.computed.staticSaturationKpaAbs = check.saturationKpaAbs;
+  out.computed.staticExcessKpa = check.excessKpa;
+  out.observedGroups.add("static");
+  const saturationGauge = kpaGauge(check.saturationKpaAbs - barometricKpa);
+  if (check.kind === "no_liquid") {
+    out.observations.push({
+      id: "static:no_liquid",
+      text: `Static pressure ${kpaGauge(input.staticKpaGauge)} is ${kpa(-check.excessKpa)} below saturation (${saturationGauge}) at ${degC(input.ambientC)}: no liquid left, so the air check is not valid.`,
+    });
+    return;
+  }
+  const excess = check.excessKpa;
+  const lead = `Static pressure ${kpaGauge(input.staticKpaGauge)}`;
+  if (excess <= STATIC_EXCESS_KPA.slight) {
+    out.observations.push({ id: "static:normal", text: `${lead} matches saturation at ${degC(input.ambientC)} (${saturationGauge}) within ${kpa(STATIC_EXCESS_KPA.slight)}: no sign of air.` });
+  } else {
+    const id = excess <= STATIC_EXCESS_KPA.high ? "static:slightly_high" : excess <= STATIC_EXCESS_KPA.veryHigh ? "static:high" : "static:very_high";
+    out.observations.push({ id, text: `${lead} is ${kpa(excess)} above saturation at ${degC(input.ambientC)} (${saturationGauge}).` });
+  }
+}

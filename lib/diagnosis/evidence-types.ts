@@ -1,0 +1,46 @@
+import type { ObservationId, ReadingGroup } from "./observations";
+
+export interface Observation {
+  id: ObservationId;
+  /** One short sentence with the numbers, in °C and kPa. */
+  text: string;
+}
+
+export interface SaturationBand {
+  minSaturationC: number;
+  maxSaturationC: number;
+  minKpaGauge?: number;
+  maxKpaGauge?: number;
+}
+
+/** Values derived from the physics core that the engine used; absent when a reading was missing. */
+export interface ComputedValues {
+  barometricKpa: number;
+  highKpaAbs?: number;
+  lowKpaAbs?: number;
+  staticKpaAbs?: number;
+  condensingC?: number;
+  evaporatingC?: number;
+  condensingApproachK?: number;
+  liftK?: number;
+  subcoolingK?: number;
+  superheatK?: number;
+  staticSaturationKpaAbs?: number;
+  staticExcessKpa?: number;
+  expectedHigh?: SaturationBand;
+  expectedLow?: SaturationBand;
+  chargeDeltaG?: number;
+  chargeDeltaPct?: number;
+  highSideTranscritical?: boolean;
+}
+
+export interface Extraction {
+  observations: Observation[];
+  /** Facts that moved no score but matter to the reader (a skipped check, a transcritical high side). */
+  notes: string[];
+  computed: ComputedValues;
+  /** Reading groups that were measured and usable. */
+  observedGroups: Set<ReadingGroup>;
+  /** Multiplier in (0, 1] on every suspect's confidence, e.g. when the tables do not cover the case. */
+  confidenceFactor: number;
+}

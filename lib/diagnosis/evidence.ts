@@ -1,0 +1,100 @@
+import { chargeDeviation } from "@/lib/refrigerants";
+import { standardBarometricKpa } from "@/lib/units/barometric";
+import { addRunningEvidence } from "./evidence-running";
+import { addStaticEvidence } from "./evidence-static";
+import type { Extraction } from "./evidence-types";
+import { degC, grams, pct } from "./format";
+import type { DiagnosisInput } from "./schema";
+import { SYMPTOM_LABELS } from "./symptoms";
+
+// SAE J2099 / J2912: below 98 % the refrigerant is not "pure" and must not be recycled.
+export const PURITY_PASS_PCT = 98;
+// Identifier air (NCG) grading, weight % (from memory).
+const AIR_PCT = { some: 1, high: 3 } as const;
+// Charge deviation grading, % of label (common practice; recovery can leave some behind, SAE J2762).
+const CHARGE_PCT = { empty: -85, veryLow: -35, low: -12, high: 8, veryHigh: 18 } as const;
+// Centre-vent grading, °C (NOLN article 1420: 3–8 °C expected); allowed to rise 0.3 K per K above 32 °C ambient (from memory).
+const VENT_C = { freezing: 2, cold: 8, warm: 15, hotAmbientC: 32, riseKPerK: 0.3 } as const;
+
+/** Turn readings into graded observations, each with a sentence carrying its numbers. */
+export function extractEvidence(input: DiagnosisInput): Extraction {
+  const barometricKpa = standardBarometricKpa(input.altitudeM ?? 0);
+  const out: Extraction = { observations: [], notes: [], computed: { barometricKpa }, observedGroups: new Set(), confidenceFactor: 1 };
+  const symptoms = new Set(input.symptoms ?? []);
+
+  out.observations.push(
+    input.expansionDevice === "txv"
+      ? { id: "device:txv", text: "Expansion-valve (TXV) system with receiver-drier." }
+      : { id: "device:orifice_tube", text: "Orifice-tube system with accumulator: no valve that could stick open." },
+  );
+
+  const mixed = addIdentifierEvidence(input, out) || symptoms.has("identifier_flags_hydrocarbon");
+  if (mixed) {
+    out.notes.push("Pressure–temperature checks were skipped: the saturation tables hold only for pure refrigerant.");
+    out.confidenceFactor *= 0.6;
+  } else {
+    addStaticEvidence(input, barometricKpa, out);
+    addRunningEvidence(input, barometricKpa, out);
+  }
+  if (input.refrigerant === "R-744") {
+    out.notes.push("R-744 (CO2) systems are covered only as far as the saturation tables go; follow the vehicle maker's figures.");
+    out.confidenceFactor *= 0.7;
+  }
+  addChargeEvidence(input, out);
+  addVentEvidence(input, out);
+  for (const symptom of symptoms) out.observations.push({ id: `symptom:${symptom}`, text: `Reported: ${SYMPTOM_LABELS[symptom].charAt(0).toLowerCase()}${SYMPTOM_LABELS[symptom].slice(1)}.` });
+  return out;
+}
+
+/** Returns true when the refrigerant failed identification. */
+function addIdentifierEvidence(input: DiagnosisInput, out: Extraction): boolean {
+  let failed = false;
+  if (input.identifierPurityPct !== undefined) {
+    out.observedGroups.add("purity");
+    failed = input.identifierPurityPct < PURITY_PASS_PCT;
+    out.observations.push(
+      failed
+        ? { id: "purity:fail", text: `Identifier purity ${pct(input.identifierPurityPct)} is below the ${PURITY_PASS_PCT} % pass mark.` }
+        : { id: "purity:pass", text: `Identifier purity ${pct(input.identifierPurityPct)} passes (${PURITY_PASS_PCT} % or better).` },
+    );
+  }
+  if (input.identifierAirPct !== undefined) {
+    out.observedGroups.add("air");
+    const air = input.identifierAirPct;
+    if (air < AIR_PCT.some) out.observations.push({ id: "air:none", text: `Identifier shows ${pct(air)} air: no meaningful non-condensable gas.` });
+    else if (air < AIR_PCT.high) out.observations.push({ id: "air:some", text: `Identifier shows ${pct(air)} air.` });
+    else out.observations.push({ id: "air:high", text: `Identifier shows ${pct(air)} air, well above trace level.` });
+  }
+  return failed;
+}
+
+function addChargeEvidence(input: DiagnosisInput, out: Extraction): void {
+  if (input.labelChargeG === undefined || input.recoveredChargeG === undefined) return;
+  const { deltaG, deltaPct } = chargeDeviation({ labelChargeG: input.labelChargeG, recoveredChargeG: input.recoveredChargeG });
+  out.computed.chargeDeltaG = deltaG;
+  out.computed.chargeDeltaPct = deltaPct;
+  out.observedGroups.add("charge");
+  const lead = `Recovered ${grams(input.recoveredChargeG)} against a label charge of ${grams(input.labelChargeG)}`;
+  const short = `${lead}: ${grams(-deltaG)} (${pct(Math.round(-deltaPct))}) short`;
+  if (deltaPct < CHARGE_PCT.empty) out.observations.push({ id: "charge:empty", text: `${short}, the system is practically empty.` });
+  else if (deltaPct < CHARGE_PCT.veryLow) out.observations.push({ id: "charge:very_low", text: `${short}.` });
+  else if (deltaPct < CHARGE_PCT.low) out.observations.push({ id: "charge:low", text: `${short} (recovery can leave some behind, so this is the least that is missing).` });
+  else if (deltaPct <= CHARGE_PCT.high) out.observations.push({ id: "charge:ok", text: `${lead}: within tolerance (${pct(Math.round(deltaPct))}).` });
+  else {
+    const over = `${lead}: ${grams(deltaG)} (${pct(Math.round(deltaPct))}) over`;
+    out.observations.push(deltaPct <= CHARGE_PCT.veryHigh ? { id: "charge:high", text: `${over}.` } : { id: "charge:very_high", text: `${over}, a clear overcharge.` });
+  }
+}
+
+function addVentEvidence(input: DiagnosisInput, out: Extraction): void {
+  if (input.ventC === undefined) return;
+  out.observedGroups.add("vent");
+  const riseK = Math.max(0, input.ambientC - VENT_C.hotAmbientC) * VENT_C.riseKPerK;
+  const coldMaxC = VENT_C.cold + riseK;
+  const warmMinC = VENT_C.warm + riseK;
+  const lead = `Centre vent ${degC(input.ventC)} at ${degC(input.ambientC)} ambient`;
+  if (input.ventC < VENT_C.freezing) out.observations.push({ id: "vent:freezing", text: `${lead}: cold enough to freeze the evaporator.` });
+  else if (input.ventC <= coldMaxC) out.observations.push({ id: "vent:cold", text: `${lead}: cooling well (${degC(coldMaxC)} or colder expected).` });
+  else if (input.ventC < warmMinC) out.observations.push({ id: "vent:cool", text: `${lead}: cooling, but weaker than expected (${degC(coldMaxC)} or colder).` });
+  else out.observations.push({ id: "vent:warm", text: `${lead}: poor cooling (${degC(coldMaxC)} or colder expected).` });
+}

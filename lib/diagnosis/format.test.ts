@@ -1,0 +1,17 @@
+import { describe, expect, it } from "vitest";
+import { degC, grams, kelvin, kpaGauge, pct } from "./format";
+
+describe("evidence number formatting", () => {
+  it("groups thousands and rounds pressures to whole kPa", () => {
+    expect(kpaGauge(1849.6)).toBe("1,850 kPa gauge");
+  });
+  it("writes negative values with a minus sign, not a hyphen", () => {
+    expect(degC(-3.25)).toBe("−3.3 °C");
+    expect(kelvin(-0.04)).toBe("0.0 K");
+  });
+  it("keeps whole percentages whole and grams whole", () => {
+    expect(pct(25)).toBe("25 %");
+    expect(pct(97.5)).toBe("97.5 %");
+    expect(grams(1124.6)).toBe("1,125 g");
+  });
+});
