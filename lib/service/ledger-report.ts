@@ -1,0 +1,91 @@
+import Papa from "papaparse";
+import type { RefrigerantId } from "@/lib/refrigerants";
+import type { CylinderMovement, MovementType } from "./ledger";
+
+export interface MonthlyReportRow {
+  /** calendar month in the shop's time zone, "YYYY-MM" */
+  month: string;
+  technicianId: string;
+  refrigerant: RefrigerantId;
+  recoveredG: number;
+  recycledG: number;
+  chargedG: number;
+  sentOutG: number;
+  adjustmentG: number;
+}
+
+const COLUMN: Readonly<Record<MovementType, keyof MonthlyReportRow>> = {
+  recovered_into: "recoveredG",
+  recycled: "recycledG",
+  charged_from: "chargedG",
+  sent_out: "sentOutG",
+  adjustment: "adjustmentG",
+};
+
+const monthFormatters = new Map<string, Intl.DateTimeFormat>();
+
+/** "YYYY-MM" of an instant as the calendar on the shop's wall shows it. */
+export function monthInTimeZone(atIso: string, timeZone: string): string {
+  let f = monthFormatters.get(timeZone);
+  if (!f) {
+    f = new Intl.DateTimeFormat("en-US", { timeZone, year: "numeric", month: "2-digit" });
+    monthFormatters.set(timeZone, f);
+  }
+  const instant = new Date(atIso);
+  if (Number.isNaN(instant.getTime())) throw new RangeError(`"${atIso}" is not a date and time`);
+  const parts = f.formatToParts(instant);
+  const year = parts.find((p) => p.type === "year")?.value;
+  const month = parts.find((p) => p.type === "month")?.value;
+  return `${year}-${month}`;
+}
+
+/**
+ * Refrigerant recovered, recycled, charged and sent out per month × technician × refrigerant.
+ * A correction counts against the month, technician and refrigerant of the movement it
+ * cancels, so a past month's figures show what really happened once corrected.
+ */
+export function monthlyReport(movements: readonly CylinderMovement[], opts: { timeZone: string }): MonthlyReportRow[] {
+  const byId = new Map(movements.map((m) => [m.id, m]));
+  const rows = new Map<string, MonthlyReportRow>();
+  for (const m of movements) {
+    const original = m.reverses ? (byId.get(m.reverses) ?? m) : m;
+    const month = monthInTimeZone(original.at, opts.timeZone);
+    const key = `${month}\u0000${original.technicianId}\u0000${original.refrigerant}`;
+    let row = rows.get(key);
+    if (!row) {
+      row = { month, technicianId: original.technicianId, refrigerant: original.refrigerant, recoveredG: 0, recycledG: 0, chargedG: 0, sentOutG: 0, adjustmentG: 0 };
+      rows.set(key, row);
+    }
+    const column = COLUMN[original.type] as "recoveredG";
+    row[column] += m.reverses ? -original.massG : m.massG;
+  }
+  return [...rows.values()].sort(
+    (a, b) => a.month.localeCompare(b.month) || a.technicianId.localeCompare(b.technicianId) || a.refrigerant.localeCompare(b.refrigerant),
+  );
+}
+
+export const MONTHLY_REPORT_CSV_COLUMNS = [
+  "month",
+  "technician",
+  "refrigerant",
+  "recovered_g",
+  "recycled_g",
+  "charged_g",
+  "sent_out_g",
+  "adjustment_g",
+] as const;
+
+/** CSV for the shop's records; names starting with = + - @ are defused so a spreadsheet will not run them. */
+export function toCsv(rows: readonly MonthlyReportRow[], opts: { technicianNames?: Readonly<Record<string, string>> } = {}): string {
+  const data = rows.map((r) => [
+    r.month,
+    opts.technicianNames?.[r.technicianId] ?? r.technicianId,
+    r.refrigerant,
+    r.recoveredG,
+    r.recycledG,
+    r.chargedG,
+    r.sentOutG,
+    r.adjustmentG,
+  ]);
+  return Papa.unparse({ fields: [...MONTHLY_REPORT_CSV_COLUMNS], data }, { escapeFormulae: true, newline: "\r\n" });
+}
