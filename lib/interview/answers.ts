@@ -1,0 +1,192 @@
+import { z } from "zod";
+import {
+  behaviourSymptomIds,
+  expansionDeviceChoices,
+  leakMethodChoices,
+  leakPlaceChoices,
+  oilTypeChoices,
+  refrigerantChoices,
+} from "./choices";
+import { crossCheck } from "./cross-checks";
+
+/*
+ * One zod schema per question group, in internal units: gauge readings in kPa gauge,
+ * temperatures in °C, masses in g, oil in mL. Screens convert the technician's own units
+ * before validating. Messages are written for a technician at the vehicle.
+ */
+
+// A gauge cannot read below a perfect vacuum: one standard atmosphere, 101.325 kPa (ISO 2533 standard atmosphere).
+export const FULL_VACUUM_KPA_GAUGE = -101.325;
+// Above any mobile A/C pressure, R-744 high sides included (those run to about 13 MPa; from memory).
+// Tighter limits per refrigerant are checked once the refrigerant is known (cross-checks.ts).
+export const MAX_READING_KPA_GAUGE = 16000;
+
+function gaugeKpa(label: string) {
+  return z
+    .number({ error: `${label}: enter a number` })
+    .min(FULL_VACUUM_KPA_GAUGE, {
+      error: `${label}: a gauge cannot read below a full vacuum (about −101 kPa) — check the gauge zero`,
+    })
+    .max(MAX_READING_KPA_GAUGE, {
+      error: `${label}: that is above any vehicle A/C pressure — check the unit`,
+    });
+}
+
+function tempC(label: string, minC: number, maxC: number) {
+  return z
+    .number({ error: `${label}: enter a number` })
+    .min(minC, { error: `${label}: below ${minC} °C is not a reading we can use — check the unit` })
+    .max(maxC, { error: `${label}: above ${maxC} °C is not a reading we can use — check the unit` });
+}
+
+export const complaintAnswersSchema = z.object({
+  ownerWords: z
+    .string({ error: "Write down the complaint" })
+    .trim()
+    .min(1, { error: "Write down the complaint in the owner's words" })
+    .max(2000, { error: "Keep the complaint under 2000 characters" }),
+});
+
+export const systemAnswersSchema = z.object({
+  refrigerant: z.enum(refrigerantChoices, { error: "Choose the refrigerant on the label" }),
+  expansionDevice: z.enum(expansionDeviceChoices, { error: "Choose orifice tube or TXV" }),
+  electricCompressor: z.boolean({ error: "Say whether the compressor is electric (high-voltage)" }),
+  labelChargeG: z
+    .number({ error: "Label charge: enter a number" })
+    .min(50, { error: "Label charge: under 50 g is not a vehicle charge — check the unit" })
+    .max(5000, { error: "Label charge: over 5 kg is not a light-vehicle charge — check the unit" })
+    .optional(),
+  oilType: z.enum(oilTypeChoices, { error: "Choose the oil type or leave it blank" }).optional(),
+});
+
+export const conditionsAnswersSchema = z.object({
+  ambientC: tempC("Ambient temperature", -30, 55),
+  relativeHumidityPct: z
+    .number({ error: "Humidity: enter a number" })
+    .min(0, { error: "Humidity runs from 0 to 100 %" })
+    .max(100, { error: "Humidity runs from 0 to 100 %" })
+    .optional(),
+  altitudeM: z
+    .number({ error: "Altitude: enter a number" })
+    .min(-450, { error: "Altitude: below −450 m is not a place a vehicle can be — check the unit" })
+    .max(5000, { error: "Altitude: above 5000 m is higher than we handle — check the unit" })
+    .optional(),
+  engineRpm: z
+    .number({ error: "Engine speed: enter a number" })
+    .int({ error: "Engine speed: whole revolutions per minute" })
+    .min(0, { error: "Engine speed cannot be negative" })
+    .max(8000, { error: "Engine speed: above 8000 rpm is not a test speed" })
+    .optional(),
+});
+
+export const staticAnswersSchema = z.object({
+  staticKpaGauge: gaugeKpa("Static pressure").optional(),
+});
+
+// Two service gauges on equalised pressures can disagree by a few psi; 50 kPa leaves room for that (common practice).
+export const GAUGE_DISAGREEMENT_KPA = 50;
+
+export const runningAnswersSchema = z
+  .object({
+    highKpaGauge: gaugeKpa("High side").optional(),
+    lowKpaGauge: gaugeKpa("Low side").optional(),
+    liquidLineC: tempC("Liquid line", -40, 110).optional(),
+    suctionLineC: tempC("Suction line", -40, 80).optional(),
+    ventC: tempC("Vent", -30, 60).optional(),
+  })
+  .superRefine((r, ctx) => {
+    const { highKpaGauge, lowKpaGauge } = r;
+    if (
+      highKpaGauge !== undefined &&
+      lowKpaGauge !== undefined &&
+      lowKpaGauge > highKpaGauge + GAUGE_DISAGREEMENT_KPA
+    ) {
+      ctx.addIssue({
+        code: "custom",
+        path: ["lowKpaGauge"],
+        message: "The low side reads above the high side — check the hose connections",
+      });
+    }
+  });
+
+export const behaviourAnswersSchema = z.object({
+  symptoms: z
+    .array(z.enum(behaviourSymptomIds, { error: "That is not one of the listed behaviours" }))
+    .refine((list) => new Set(list).size === list.length, { error: "Each behaviour can be ticked once" }),
+});
+
+const percent = (label: string) =>
+  z
+    .number({ error: `${label}: enter a number` })
+    .min(0, { error: `${label} runs from 0 to 100 %` })
+    .max(100, { error: `${label} runs from 0 to 100 %` });
+
+export const identificationAnswersSchema = z.object({
+  purityPct: percent("Purity").optional(),
+  airPct: percent("Air").optional(),
+  hydrocarbonFlagged: z.boolean({ error: "Say whether the identifier flagged hydrocarbon" }).optional(),
+});
+
+export const chargeAuditAnswersSchema = z
+  .object({
+    recovered: z.boolean({ error: "Say whether the charge was recovered" }),
+    recoveredChargeG: z
+      .number({ error: "Recovered mass: enter a number" })
+      .min(0, { error: "Recovered mass cannot be negative" })
+      .max(6000, { error: "Recovered mass: over 6 kg is not one vehicle's charge — check the unit" })
+      .optional(),
+    oilRemovedMl: z
+      .number({ error: "Oil removed: enter a number" })
+      .min(0, { error: "Oil removed cannot be negative" })
+      .max(1000, { error: "Oil removed: over 1 litre is not one vehicle's oil — check the unit" })
+      .optional(),
+  })
+  .superRefine((a, ctx) => {
+    if (!a.recovered && a.recoveredChargeG !== undefined) {
+      ctx.addIssue({
+        code: "custom",
+        path: ["recoveredChargeG"],
+        message: "A recovered mass is entered but the charge is marked not recovered — change one of them",
+      });
+    }
+  });
+
+export const leakFindingAnswersSchema = z.object({
+  method: z.enum(leakMethodChoices, { error: "Choose how you looked for the leak" }),
+  whereFound: z.enum(leakPlaceChoices, { error: "Choose where the leak is, or 'not found yet'" }).optional(),
+  notes: z.string().trim().max(2000, { error: "Keep the notes under 2000 characters" }).optional(),
+});
+
+export const answerSchemas = {
+  complaint: complaintAnswersSchema,
+  system: systemAnswersSchema,
+  conditions: conditionsAnswersSchema,
+  static: staticAnswersSchema,
+  running: runningAnswersSchema,
+  behaviour: behaviourAnswersSchema,
+  identification: identificationAnswersSchema,
+  chargeAudit: chargeAuditAnswersSchema,
+  leakFinding: leakFindingAnswersSchema,
+} as const;
+
+export const interviewAnswersSchema = z
+  .object({
+    complaint: complaintAnswersSchema.optional(),
+    system: systemAnswersSchema.optional(),
+    conditions: conditionsAnswersSchema.optional(),
+    static: staticAnswersSchema.optional(),
+    running: runningAnswersSchema.optional(),
+    behaviour: behaviourAnswersSchema.optional(),
+    identification: identificationAnswersSchema.optional(),
+    chargeAudit: chargeAuditAnswersSchema.optional(),
+    leakFinding: leakFindingAnswersSchema.optional(),
+  })
+  .superRefine((answers, ctx) => {
+    for (const [group, issues] of Object.entries(crossCheck(answers))) {
+      for (const issue of issues)
+        ctx.addIssue({ code: "custom", path: [group, issue.field], message: issue.message });
+    }
+  });
+
+export type InterviewAnswers = z.infer<typeof interviewAnswersSchema>;
+export type AnswersFor<G extends keyof typeof answerSchemas> = z.infer<(typeof answerSchemas)[G]>;

@@ -1,0 +1,52 @@
+import type { InterviewAnswers } from "./answers";
+import type { GroupId } from "./steps";
+import type { AnswerIssue } from "./validate";
+
+/*
+ * Above these an HFC system is past its high-side relief valve (SAE J639 systems relieve at about
+ * 3.1–3.8 MPa, from memory); R-744 high sides run to about 13 MPa (from memory).
+ */
+export const MAX_KPA_GAUGE_BY_REFRIGERANT = { "R-134a": 4500, "R-1234yf": 4500, "R-744": 16000 } as const;
+
+// More than three times the label charge points at the scale or the label, not at the vehicle (common practice).
+export const MAX_RECOVERED_TIMES_LABEL = 3;
+
+const gaugeFields = [
+  { group: "static", field: "staticKpaGauge", label: "Static pressure" },
+  { group: "running", field: "highKpaGauge", label: "High side" },
+  { group: "running", field: "lowKpaGauge", label: "Low side" },
+] as const;
+
+/** Checks that need more than one question group; issues are filed under the group that should change. */
+export function crossCheck(answers: InterviewAnswers): Partial<Record<GroupId, AnswerIssue[]>> {
+  const found: Partial<Record<GroupId, AnswerIssue[]>> = {};
+  const add = (group: GroupId, issue: AnswerIssue) => {
+    (found[group] ??= []).push(issue);
+  };
+  const refrigerant = answers.system?.refrigerant;
+  if (refrigerant !== undefined) {
+    const maxKpa = MAX_KPA_GAUGE_BY_REFRIGERANT[refrigerant];
+    for (const { group, field, label } of gaugeFields) {
+      const value = (answers[group] as Record<string, number | undefined> | undefined)?.[field];
+      if (value !== undefined && value > maxKpa) {
+        add(group, {
+          field,
+          message: `${label}: ${Math.round(value)} kPa is more than an ${refrigerant} system can hold — check the unit (psi, bar or kPa)`,
+        });
+      }
+    }
+  }
+  const labelChargeG = answers.system?.labelChargeG;
+  const recoveredChargeG = answers.chargeAudit?.recovered ? answers.chargeAudit.recoveredChargeG : undefined;
+  if (
+    labelChargeG !== undefined &&
+    recoveredChargeG !== undefined &&
+    recoveredChargeG > labelChargeG * MAX_RECOVERED_TIMES_LABEL
+  ) {
+    add("chargeAudit", {
+      field: "recoveredChargeG",
+      message: "The recovered mass is more than three times the label charge — check the scale and the label",
+    });
+  }
+  return found;
+}

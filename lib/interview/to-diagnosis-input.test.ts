@@ -1,0 +1,132 @@
+import fc from "fast-check";
+import { describe, expect, it } from "vitest";
+import { diagnosisInputSchema } from "@/lib/diagnosis";
+import { interviewAnswersSchema, type InterviewAnswers } from "./answers";
+import { behaviourSymptomIds, leakPlaceChoices } from "./choices";
+import { emptySystemAnswers, exampleAnswers } from "./example-answers";
+import { toDiagnosisInput } from "./to-diagnosis-input";
+
+describe("toDiagnosisInput", () => {
+  it("is null until refrigerant, expansion device and ambient are known", () => {
+    expect(toDiagnosisInput({})).toBeNull();
+    expect(toDiagnosisInput({ system: exampleAnswers.system })).toBeNull();
+    expect(toDiagnosisInput({ conditions: exampleAnswers.conditions })).toBeNull();
+    expect(
+      toDiagnosisInput({ system: exampleAnswers.system, conditions: exampleAnswers.conditions }),
+    ).not.toBeNull();
+  });
+
+  it("carries every reading across in internal units", () => {
+    expect(toDiagnosisInput(exampleAnswers)).toEqual({
+      refrigerant: "R-134a",
+      expansionDevice: "orifice_tube",
+      electricCompressor: false,
+      ambientC: 32,
+      relativeHumidityPct: 55,
+      staticKpaGauge: 715,
+      highKpaGauge: 1550,
+      lowKpaGauge: 210,
+      liquidLineC: 48,
+      suctionLineC: 7,
+      ventC: 9,
+      labelChargeG: 570,
+      recoveredChargeG: 530,
+      identifierPurityPct: 99.6,
+      identifierAirPct: 0.4,
+      symptoms: ["cooling_fades_then_returns"],
+    });
+  });
+
+  it("takes the altitude from the conditions, else from the shop", () => {
+    const { system, conditions } = exampleAnswers;
+    expect(toDiagnosisInput({ system, conditions }, { altitudeM: 1600 })?.altitudeM).toBe(1600);
+    expect(
+      toDiagnosisInput({ system, conditions: { ...conditions, altitudeM: 20 } }, { altitudeM: 1600 })
+        ?.altitudeM,
+    ).toBe(20);
+    expect(toDiagnosisInput({ system, conditions })).not.toHaveProperty("altitudeM");
+  });
+
+  it("leaves skipped readings out rather than filling them in", () => {
+    const input = toDiagnosisInput({ system: exampleAnswers.system, conditions: exampleAnswers.conditions });
+    expect(Object.keys(input ?? {}).sort()).toEqual([
+      "ambientC",
+      "electricCompressor",
+      "expansionDevice",
+      "labelChargeG",
+      "refrigerant",
+      "relativeHumidityPct",
+    ]);
+  });
+
+  it("ignores a recovered mass when the charge was not recovered", () => {
+    const answers: InterviewAnswers = { ...exampleAnswers, chargeAudit: { recovered: false } };
+    expect(toDiagnosisInput(answers)).not.toHaveProperty("recoveredChargeG");
+  });
+
+  it("reports the leak search and the identifier's hydrocarbon flag as symptoms", () => {
+    expect(toDiagnosisInput(emptySystemAnswers)?.symptoms).toEqual(["leak_found"]);
+    const notFound: InterviewAnswers = {
+      ...emptySystemAnswers,
+      leakFinding: { method: "electronic_detector", whereFound: "not_found_yet" },
+    };
+    expect(toDiagnosisInput(notFound)?.symptoms).toEqual(["no_leak_found"]);
+    const flagged: InterviewAnswers = {
+      ...exampleAnswers,
+      identification: { purityPct: 95, hydrocarbonFlagged: true },
+    };
+    expect(toDiagnosisInput(flagged)?.symptoms).toEqual([
+      "cooling_fades_then_returns",
+      "identifier_flags_hydrocarbon",
+    ]);
+  });
+
+  it("gives the findings engine an input it accepts for any valid set of answers (property)", () => {
+    const opt = <T>(arb: fc.Arbitrary<T>) => fc.option(arb, { nil: undefined });
+    const num = (min: number, max: number) => fc.double({ min, max, noNaN: true });
+    const answers = fc.record({
+      system: fc.record({
+        refrigerant: fc.constantFrom("R-134a", "R-1234yf", "R-744"),
+        expansionDevice: fc.constantFrom("orifice_tube", "txv"),
+        electricCompressor: fc.boolean(),
+        labelChargeG: opt(num(50, 5000)),
+      }),
+      conditions: fc.record({
+        ambientC: num(-30, 55),
+        relativeHumidityPct: opt(num(0, 100)),
+        altitudeM: opt(num(-450, 5000)),
+      }),
+      static: fc.record({ staticKpaGauge: opt(num(-101.325, 16000)) }),
+      running: fc.record({
+        highKpaGauge: opt(num(-101.325, 16000)),
+        lowKpaGauge: opt(num(-101.325, 16000)),
+        liquidLineC: opt(num(-40, 110)),
+        suctionLineC: opt(num(-40, 80)),
+        ventC: opt(num(-30, 60)),
+      }),
+      behaviour: fc.record({ symptoms: fc.uniqueArray(fc.constantFrom(...behaviourSymptomIds)) }),
+      identification: fc.record({
+        purityPct: opt(num(0, 100)),
+        airPct: opt(num(0, 100)),
+        hydrocarbonFlagged: opt(fc.boolean()),
+      }),
+      chargeAudit: fc.record({ recovered: fc.boolean(), recoveredChargeG: opt(num(0, 6000)) }),
+      leakFinding: fc.record({
+        method: fc.constant("uv_dye" as const),
+        whereFound: opt(fc.constantFrom(...leakPlaceChoices)),
+      }),
+    });
+    let checked = 0;
+    fc.assert(
+      fc.property(answers, (candidate) => {
+        const parsed = interviewAnswersSchema.safeParse(candidate);
+        if (!parsed.success) return; // only answers the interview itself would accept
+        checked += 1;
+        const input = toDiagnosisInput(parsed.data);
+        expect(diagnosisInputSchema.safeParse(input).success).toBe(true);
+      }),
+      { numRuns: 400 },
+    );
+    expect(checked).toBeGreaterThan(100);
+  });
+});

@@ -1,0 +1,51 @@
+import type { z } from "zod";
+import { answerSchemas, type InterviewAnswers } from "./answers";
+import { crossCheck } from "./cross-checks";
+import { groupIds, type GroupId } from "./steps";
+
+/** One plain message tied to a field of a question group ("" for the group as a whole). */
+export interface AnswerIssue {
+  field: string;
+  message: string;
+}
+
+export type GroupCheck =
+  { ok: true; value: NonNullable<InterviewAnswers[GroupId]> } | { ok: false; issues: AnswerIssue[] };
+
+function toIssues(error: z.ZodError): AnswerIssue[] {
+  return error.issues.map((issue) => ({ field: issue.path.map(String).join("."), message: issue.message }));
+}
+
+/** Validates one group, and checks it against the other answers where a check needs both. */
+export function validateGroup(group: GroupId, values: unknown, others: InterviewAnswers = {}): GroupCheck {
+  const result = answerSchemas[group].safeParse(values);
+  if (!result.success) return { ok: false, issues: toIssues(result.error) };
+  const issues = crossCheck({ ...others, [group]: result.data })[group] ?? [];
+  return issues.length === 0
+    ? { ok: true, value: result.data as NonNullable<InterviewAnswers[GroupId]> }
+    : { ok: false, issues };
+}
+
+export interface SortedAnswers {
+  answers: InterviewAnswers;
+  drafts: Partial<Record<GroupId, unknown>>;
+  errors: Partial<Record<GroupId, AnswerIssue[]>>;
+}
+
+/** Splits saved answers group by group: valid groups are answers, the rest are kept as drafts with their issues. */
+export function sortSavedAnswers(saved: unknown): SortedAnswers {
+  const sorted: SortedAnswers = { answers: {}, drafts: {}, errors: {} };
+  if (typeof saved !== "object" || saved === null) return sorted;
+  const record = saved as Record<string, unknown>;
+  for (const group of groupIds) {
+    if (record[group] === undefined) continue;
+    const check = validateGroup(group, record[group], sorted.answers);
+    if (check.ok) {
+      (sorted.answers as Record<GroupId, unknown>)[group] = check.value;
+    } else {
+      sorted.drafts[group] = record[group];
+      sorted.errors[group] = check.issues;
+    }
+  }
+  return sorted;
+}
