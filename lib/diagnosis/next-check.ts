@@ -62,6 +62,9 @@ export function expectedShift(outcomes: readonly (readonly ObservationId[])[], a
 export function chooseNextCheck(ctx: CheckContext, leaders: readonly CauseId[], systemEmpty: boolean): NextCheck {
   const [first, second] = leaders;
   if (first === undefined) throw new Error("chooseNextCheck needs at least one suspect");
+  if (ctx.mixed) {
+    return { check: "confirm", instruction: CONFIRMING_STEP.contaminated_refrigerant, reason: "The refrigerant failed identification: deal with it before any further test.", separates: ["contaminated_refrigerant"], expectedShiftLogOdds: 0 };
+  }
   const leak = CHECKS.find((c) => c.id === "leak_test");
   if (systemEmpty && leak && leak.available(ctx)) {
     return { check: "leak_test", instruction: leak.instruction, reason: "The system is empty: the leak must be found and repaired before any running test.", separates: [first], expectedShiftLogOdds: 0 };

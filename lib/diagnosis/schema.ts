@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { standardBarometricKpa } from "@/lib/units/barometric";
 import { SYMPTOM_IDS } from "./symptoms";
 
 // Standard atmosphere at sea level (ICAO/ISO 2533): a gauge can read no lower than this below zero.
@@ -44,8 +45,12 @@ export const diagnosisInputSchema = z
   })
   .superRefine((input, ctx) => {
     const maxKpa = MAX_GAUGE_KPA[input.refrigerant];
+    const deepestGaugeKpa = -standardBarometricKpa(input.altitudeM ?? 0);
     for (const key of ["staticKpaGauge", "highKpaGauge", "lowKpaGauge"] as const) {
       const value = input[key];
+      if (value !== undefined && value < deepestGaugeKpa) {
+        ctx.addIssue({ code: "custom", path: [key], message: `${value} kPa gauge is deeper than the local atmosphere allows (${deepestGaugeKpa.toFixed(1)} kPa gauge at ${input.altitudeM ?? 0} m)` });
+      }
       if (value !== undefined && value > maxKpa) {
         ctx.addIssue({ code: "custom", path: [key], message: `${value} kPa gauge is above what a ${input.refrigerant} system can hold (${maxKpa} kPa gauge)` });
       }

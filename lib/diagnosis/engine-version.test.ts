@@ -1,0 +1,35 @@
+import { describe, expect, it } from "vitest";
+import { canonicalJson, ENGINE_SEMVER, ENGINE_VERSION, fnv1a32, scoringTableHash } from "./engine-version";
+import { CAUSE_PRIORS, LIKELIHOOD_TABLE, RANKING_GATES } from "./likelihood-table";
+
+const current = { priors: CAUSE_PRIORS, rows: LIKELIHOOD_TABLE, gates: RANKING_GATES };
+
+describe("ENGINE_VERSION", () => {
+  it("is the semver plus the hash of the scoring table", () => {
+    expect(ENGINE_VERSION).toBe(`${ENGINE_SEMVER}+${scoringTableHash(current)}`);
+    expect(ENGINE_VERSION).toMatch(/^\d+\.\d+\.\d+\+[0-9a-f]{8}$/);
+  });
+
+  it("matches the published FNV-1a 32-bit test vectors (Fowler/Noll/Vo reference: '' → 811c9dc5, 'a' → e40c292c, 'foobar' → bf9cf968)", () => {
+    expect(fnv1a32("")).toBe("811c9dc5");
+    expect(fnv1a32("a")).toBe("e40c292c");
+    expect(fnv1a32("foobar")).toBe("bf9cf968");
+  });
+
+  it("changes when any single weight in the table changes", () => {
+    const base = scoringTableHash(current);
+    LIKELIHOOD_TABLE.forEach((row, index) => {
+      const [cause, weight] = Object.entries(row.weights)[0] ?? [];
+      if (cause === undefined || weight === undefined) return;
+      const rows = LIKELIHOOD_TABLE.map((r, i) => (i === index ? { ...r, weights: { ...r.weights, [cause]: weight + 0.1 } } : r));
+      expect(scoringTableHash({ ...current, rows }), row.observation).not.toBe(base);
+    });
+  });
+
+  it("changes when a prior or a gate changes, but not when keys are merely reordered", () => {
+    const base = scoringTableHash(current);
+    expect(scoringTableHash({ ...current, priors: { ...CAUSE_PRIORS, oil_loss: { ...CAUSE_PRIORS.oil_loss, logOdds: -3.1 } } })).not.toBe(base);
+    expect(scoringTableHash({ ...current, gates: RANKING_GATES.slice(1) })).not.toBe(base);
+    expect(canonicalJson({ b: 1, a: [2, { d: 3, c: 4 }] })).toBe(canonicalJson({ a: [2, { c: 4, d: 3 }], b: 1 }));
+  });
+});

@@ -1,0 +1,107 @@
+import { describe, expect, it } from "vitest";
+import { extractEvidence } from "./evidence";
+import type { DiagnosisInput } from "./schema";
+
+// Saturation values: R-134a from the Tillner-Roth & Baehr (1994) equation of state, J. Phys. Chem. Ref. Data 23, 657;
+// R-1234yf from Richter, McLinden & Lemmon (2011), J. Chem. Eng. Data 56, 3254. Gauge = absolute − 101.325 kPa.
+const R134A_SAT_KPA_ABS = { 0: 292.803, 25: 665.381, 50: 1317.905, 60: 1681.784 } as const;
+const R1234YF_SAT_KPA_ABS = { 30: 783.511 } as const;
+const SEA_LEVEL_KPA = 101.325;
+const gauge = (kpaAbs: number) => kpaAbs - SEA_LEVEL_KPA;
+
+const ids = (input: DiagnosisInput) => extractEvidence(input).observations.map((o) => o.id);
+const r134aOrifice = { refrigerant: "R-134a", expansionDevice: "orifice_tube", ambientC: 25 } as const;
+
+describe("static pressure against saturation at ambient", () => {
+  it("grades a reading at R-134a saturation for 25 °C as normal (Tillner-Roth & Baehr 1994: 665.4 kPa abs)", () => {
+    const extraction = extractEvidence({ ...r134aOrifice, staticKpaGauge: gauge(R134A_SAT_KPA_ABS[25]) + 6 });
+    expect(extraction.computed.staticExcessKpa).toBeCloseTo(6, 0);
+    expect(extraction.observations.map((o) => o.id)).toContain("static:normal");
+  });
+
+  it("grades the excess in steps and says how far above saturation, in kPa and °C", () => {
+    expect(ids({ ...r134aOrifice, staticKpaGauge: gauge(R134A_SAT_KPA_ABS[25]) + 50 })).toContain("static:slightly_high");
+    expect(ids({ ...r134aOrifice, staticKpaGauge: gauge(R134A_SAT_KPA_ABS[25]) + 100 })).toContain("static:high");
+    const extraction = extractEvidence({ ...r134aOrifice, staticKpaGauge: gauge(R134A_SAT_KPA_ABS[25]) + 160 });
+    const observation = extraction.observations.find((o) => o.id === "static:very_high");
+    expect(observation?.text).toMatch(/^Static pressure 724 kPa gauge is 160 kPa above saturation at 25\.0 °C \(564 kPa gauge\)\.$/);
+  });
+
+  it("uses R-1234yf's own curve (Richter, McLinden & Lemmon 2011: 783.5 kPa abs at 30 °C)", () => {
+    const extraction = extractEvidence({ refrigerant: "R-1234yf", expansionDevice: "txv", ambientC: 30, staticKpaGauge: gauge(R1234YF_SAT_KPA_ABS[30]) + 80 });
+    expect(extraction.computed.staticExcessKpa).toBeCloseTo(80, 0);
+    expect(extraction.observations.map((o) => o.id)).toContain("static:high");
+  });
+
+  it("calls a near-zero static reading empty and a reading far below saturation 'no liquid' (common practice)", () => {
+    expect(ids({ ...r134aOrifice, staticKpaGauge: 30 })).toContain("static:empty");
+    expect(ids({ ...r134aOrifice, staticKpaGauge: 250 })).toContain("static:no_liquid");
+  });
+});
+
+describe("running pressures, subcooling and superheat", () => {
+  it("reads the condensing temperature from the high side (Tillner-Roth & Baehr 1994: 50 °C at 1317.9 kPa abs)", () => {
+    const extraction = extractEvidence({ ...r134aOrifice, ambientC: 30, highKpaGauge: gauge(R134A_SAT_KPA_ABS[50]) });
+    expect(extraction.computed.condensingC).toBeCloseTo(50, 1);
+    expect(extraction.computed.condensingApproachK).toBeCloseTo(20, 1);
+    expect(extraction.observations.map((o) => o.id)).toContain("high_side:normal");
+  });
+
+  it("works out subcooling from the 60 °C saturation point (1681.8 kPa abs, Tillner-Roth & Baehr 1994)", () => {
+    const extraction = extractEvidence({ ...r134aOrifice, ambientC: 35, highKpaGauge: gauge(R134A_SAT_KPA_ABS[60]), liquidLineC: 50 });
+    expect(extraction.computed.subcoolingK).toBeCloseTo(10, 1);
+    expect(extraction.observations.find((o) => o.id.startsWith("subcooling:"))?.text).toMatch(/^Subcooling 10\.0 K \(liquid line 50\.0 °C against 60\.0 °C condensing\)/);
+  });
+
+  it("judges the same 6 K superheat normal on a TXV system and high on an orifice-tube system (from memory: orifice evaporators run near 0 K)", () => {
+    const reading = { ambientC: 25, lowKpaGauge: gauge(R134A_SAT_KPA_ABS[0]), suctionLineC: 6 };
+    const txv = extractEvidence({ ...r134aOrifice, ...reading, expansionDevice: "txv" });
+    expect(txv.computed.superheatK).toBeCloseTo(6, 1);
+    expect(txv.observations.map((o) => o.id)).toContain("superheat:normal");
+    expect(ids({ ...r134aOrifice, ...reading })).toContain("superheat:high");
+  });
+
+  it("calls a low side at or below 0 kPa gauge a vacuum and skips superheat there", () => {
+    const extraction = extractEvidence({ ...r134aOrifice, lowKpaGauge: -20, suctionLineC: 10 });
+    expect(extraction.observations.map((o) => o.id)).toContain("low_side:vacuum");
+    expect(extraction.computed.superheatK).toBeUndefined();
+  });
+
+  it("uses the barometric pressure for the altitude (ASHRAE Fundamentals ch. 1 eq. 3: 84.56 kPa at 1,500 m)", () => {
+    const extraction = extractEvidence({ ...r134aOrifice, altitudeM: 1500, highKpaGauge: 1000 });
+    expect(extraction.computed.barometricKpa).toBeCloseTo(84.56, 1);
+    expect(extraction.computed.highKpaAbs).toBeCloseTo(1084.56, 1);
+  });
+
+  it("says an R-744 high side above the critical pressure is transcritical and lowers confidence instead of failing", () => {
+    const extraction = extractEvidence({ refrigerant: "R-744", expansionDevice: "txv", ambientC: 35, highKpaGauge: 9500, lowKpaGauge: 3400, liquidLineC: 40 });
+    expect(extraction.computed.highSideTranscritical).toBe(true);
+    expect(extraction.computed.subcoolingK).toBeUndefined();
+    expect(extraction.notes.join(" ")).toMatch(/transcritical/);
+    expect(extraction.confidenceFactor).toBeLessThan(1);
+  });
+});
+
+describe("identifier, charge and vent", () => {
+  it("fails purity below 98 % and passes at 98 % (SAE J2099 / J2912 pass mark), skipping pressure–temperature checks on a fail", () => {
+    expect(ids({ ...r134aOrifice, identifierPurityPct: 98 })).toContain("purity:pass");
+    const failed = extractEvidence({ ...r134aOrifice, identifierPurityPct: 97.9, staticKpaGauge: 800, highKpaGauge: 1500 });
+    expect(failed.observations.map((o) => o.id)).toContain("purity:fail");
+    expect(failed.observations.some((o) => o.id.startsWith("static:") || o.id.startsWith("high_side:"))).toBe(false);
+    expect(failed.notes.join(" ")).toMatch(/pure refrigerant/);
+  });
+
+  it("states the charge deviation in grams and percent (25 % over for 850 g against 680 g)", () => {
+    const extraction = extractEvidence({ ...r134aOrifice, labelChargeG: 680, recoveredChargeG: 850 });
+    expect(extraction.computed.chargeDeltaPct).toBeCloseTo(25, 6);
+    expect(extraction.observations.find((o) => o.id === "charge:very_high")?.text).toBe(
+      "Recovered 850 g against a label charge of 680 g: 170 g (25 %) over, a clear overcharge.",
+    );
+  });
+
+  it("grades the centre vent against 3–8 °C (NOLN article 1420), allowing more at very hot ambient (from memory)", () => {
+    expect(ids({ ...r134aOrifice, ventC: 6 })).toContain("vent:cold");
+    expect(ids({ ...r134aOrifice, ventC: 18 })).toContain("vent:warm");
+    expect(ids({ ...r134aOrifice, ambientC: 42, ventC: 10 })).toContain("vent:cold");
+  });
+});
