@@ -1,5 +1,6 @@
 import { Sequelize } from "sequelize";
 import { databaseConfig } from "@/lib/env";
+import { mariadbDriver } from "./mariadb-driver";
 
 // No "server-only" here: tsx scripts and vitest import this module too.
 
@@ -11,6 +12,7 @@ const cache = globalThis as typeof globalThis & { chillwrightSequelize?: Sequeli
 export function createSequelize(settings: DatabaseSettings = databaseConfig()): Sequelize {
   return new Sequelize(settings.database, settings.user, settings.password, {
     dialect: "mariadb",
+    dialectModule: mariadbDriver,
     host: settings.host,
     port: settings.port,
     logging: false,
