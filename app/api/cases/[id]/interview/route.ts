@@ -1,0 +1,14 @@
+import { handler } from "@/lib/server/handler";
+import { saveInterview } from "@/lib/server/interview";
+import { getShop } from "@/lib/server/shops";
+import { caseParamsSchema } from "../../schema";
+import { interviewSaveSchema } from "../../interview-schema";
+
+/** Autosave: the whole interview record, guarded by the version the client last saw. */
+export const PUT = handler(
+  { permission: "cases:write", params: caseParamsSchema, body: interviewSaveSchema },
+  async ({ user, params, body }) => {
+    const shop = await getShop({ shopId: user.shopId });
+    return saveInterview({ user, caseId: params.id, input: body, shopAltitudeM: shop.altitudeM });
+  },
+);

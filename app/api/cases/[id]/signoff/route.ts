@@ -1,0 +1,11 @@
+import { handler } from "@/lib/server/handler";
+import { recordSignOff } from "@/lib/server/sign-off";
+import { caseParamsSchema } from "../../schema";
+import { signOffSchema } from "../../interview-schema";
+
+export const POST = handler(
+  { permission: "signoff:review", params: caseParamsSchema, body: signOffSchema },
+  async ({ user, params, body }) => {
+    return recordSignOff({ user, caseId: params.id, verdict: body.verdict, comment: body.comment });
+  },
+);

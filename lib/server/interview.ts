@@ -1,0 +1,94 @@
+import "server-only";
+import type { User } from "lucia";
+import { getModels, type JsonObject, type JsonValue } from "@/models";
+import { AppError } from "@/lib/errors";
+import { sortSavedAnswers } from "@/lib/interview/validate";
+import { toDiagnosisInput } from "@/lib/interview/to-diagnosis-input";
+import { diagnose, ENGINE_VERSION } from "@/lib/diagnosis";
+import type { CaseSubmitInput, InterviewSaveInput } from "@/app/api/cases/interview-schema";
+import { recordAudit } from "./audit";
+
+const EDITABLE = new Set(["draft", "sent_back"]);
+
+/** Loads a case of the user's shop that this user may change, or throws 404/403/409. */
+async function editableCase({ user, caseId }: { user: User; caseId: number }) {
+  const { Case } = getModels();
+  const row = await Case.findOne({ where: { id: caseId, shopId: user.shopId }, raw: true });
+  if (!row) throw new AppError("not_found:case", "No such case in this shop.");
+  const reviewer = user.role === "owner" || user.role === "senior";
+  if (row.technicianId !== user.id && !reviewer) {
+    throw new AppError("forbidden:case", "Only the case's technician or a senior can change this case.");
+  }
+  if (!EDITABLE.has(row.status)) {
+    throw new AppError("conflict:case", "This case has been submitted; a senior must send it back before it can change.");
+  }
+  return row;
+}
+
+/** Atomic compare-and-set on `version`: two tabs or devices never silently overwrite each other. */
+async function updateIfVersion({ caseId, shopId, baseVersion, values }: { caseId: number; shopId: number; baseVersion: number; values: Record<string, unknown> }) {
+  const { Case } = getModels();
+  const [count] = await Case.update(
+    { ...values, version: baseVersion + 1 },
+    { where: { id: caseId, shopId, version: baseVersion }, fields: [...Object.keys(values), "version"] as never },
+  );
+  if (count === 0) {
+    const current = await Case.findOne({ where: { id: caseId, shopId }, attributes: ["version", "updatedAt"], raw: true });
+    throw new AppError(
+      "conflict:case",
+      `This case was changed on another screen${current ? ` at ${current.updatedAt.toISOString().slice(11, 16)} UTC` : ""}. Reload to see those answers; what you typed here is kept on this device.`,
+    );
+  }
+  return baseVersion + 1;
+}
+
+export async function saveInterview({ user, caseId, input, shopAltitudeM }: { user: User; caseId: number; input: InterviewSaveInput; shopAltitudeM: number }) {
+  await editableCase({ user, caseId });
+  // Nothing typed is lost: a group that fails validation is stored as a draft, not refused.
+  const sorted = sortSavedAnswers(input.answers);
+  const drafts = { ...input.drafts, ...sorted.drafts };
+  const diagnosisInput = toDiagnosisInput(sorted.answers, { altitudeM: shopAltitudeM });
+  const computed = diagnosisInput ? (diagnose(diagnosisInput).computed as unknown as JsonObject) : null;
+  const version = await updateIfVersion({
+    caseId,
+    shopId: user.shopId,
+    baseVersion: input.baseVersion,
+    values: {
+      interviewStep: input.step,
+      answers: { answers: sorted.answers, drafts, skipped: input.skipped, visited: input.visited } as unknown as JsonObject,
+      symptomTags: sorted.answers.behaviour?.symptoms ?? [],
+      computed,
+    },
+  });
+  return { version, draftGroups: Object.keys(sorted.drafts) };
+}
+
+export async function submitCase({ user, caseId, input, shopAltitudeM }: { user: User; caseId: number; input: CaseSubmitInput; shopAltitudeM: number }) {
+  const row = await editableCase({ user, caseId });
+  if (input.engineVersion !== ENGINE_VERSION) {
+    throw new AppError("conflict:engine", "The findings were worked out by an older version of Chillwright. Reload the page and submit again.");
+  }
+  const record = row.answers as { answers?: unknown };
+  const { answers } = sortSavedAnswers(record.answers);
+  const diagnosisInput = toDiagnosisInput(answers, { altitudeM: shopAltitudeM });
+  if (!diagnosisInput) throw new AppError("bad_request:case", "Answer the system and conditions steps before submitting.");
+  const findings = diagnose(diagnosisInput);
+  const technician = await getModels().User.findOne({ where: { id: row.technicianId, shopId: user.shopId }, attributes: ["role"], raw: true });
+  const status = technician?.role === "apprentice" ? "awaiting_signoff" : "signed_off";
+  const version = await updateIfVersion({
+    caseId,
+    shopId: user.shopId,
+    baseVersion: input.baseVersion,
+    values: {
+      status,
+      findings: { input: diagnosisInput, ...findings } as unknown as JsonValue,
+      engineVersion: findings.engineVersion,
+      computed: findings.computed as unknown as JsonObject,
+      conclusionCause: input.conclusionCause,
+      conclusionNotes: input.conclusionNotes,
+      submittedAt: new Date(),
+    },
+  });
+  await recordAudit({ shopId: user.shopId, actorId: user.id, entity: "case", entityId: caseId, action: "submit", detail: { status, conclusionCause: input.conclusionCause, engineVersion: findings.engineVersion } });
+  return { version, status };
+}
