@@ -10,10 +10,13 @@ interface AirState {
 }
 
 function checked(a: AirState): { tempC: number; relHum: number; pressurePa: number } {
-  if (!Number.isFinite(a.dryBulbC) || a.dryBulbC < -100 || a.dryBulbC > 200) throw new RangeError("Air temperature must be between −100 and 200 °C.");
-  if (!(a.relativeHumidityPct > 0 && a.relativeHumidityPct <= 100)) throw new RangeError("Relative humidity must be above 0 % and at most 100 %.");
+  if (!Number.isFinite(a.dryBulbC) || a.dryBulbC < -100 || a.dryBulbC > 200)
+    throw new RangeError("Air temperature must be between −100 and 200 °C.");
+  if (!(a.relativeHumidityPct > 0 && a.relativeHumidityPct <= 100))
+    throw new RangeError("Relative humidity must be above 0 % and at most 100 %.");
   const pressureKpa = a.pressureKpa ?? STANDARD_ATMOSPHERE_KPA;
-  if (!(pressureKpa > 0) || !Number.isFinite(pressureKpa)) throw new RangeError("Barometric pressure must be a positive number.");
+  if (!(pressureKpa > 0) || !Number.isFinite(pressureKpa))
+    throw new RangeError("Barometric pressure must be a positive number.");
   return { tempC: a.dryBulbC, relHum: a.relativeHumidityPct / 100, pressurePa: pressureKpa * 1000 };
 }
 

@@ -3,17 +3,29 @@ import { SaturationRangeError } from "./range-error";
 import { saturationPressure, saturationTemperature } from "./saturation";
 
 /** Condenser subcooling, K: Tsat(high side) − liquid-line temperature. Throws SaturationRangeError outside the table. */
-export function subcoolingK(a: { refrigerant: RefrigerantId; highKpaAbs: number; liquidLineC: number }): number {
+export function subcoolingK(a: {
+  refrigerant: RefrigerantId;
+  highKpaAbs: number;
+  liquidLineC: number;
+}): number {
   return saturationTemperature(a.refrigerant, a.highKpaAbs) - a.liquidLineC;
 }
 
 /** Evaporator superheat, K: suction-line temperature − Tsat(low side). */
-export function superheatK(a: { refrigerant: RefrigerantId; lowKpaAbs: number; suctionLineC: number }): number {
+export function superheatK(a: {
+  refrigerant: RefrigerantId;
+  lowKpaAbs: number;
+  suctionLineC: number;
+}): number {
   return a.suctionLineC - saturationTemperature(a.refrigerant, a.lowKpaAbs);
 }
 
 /** Condensing approach, K: Tsat(high side) − ambient. */
-export function condensingApproachK(a: { refrigerant: RefrigerantId; highKpaAbs: number; ambientC: number }): number {
+export function condensingApproachK(a: {
+  refrigerant: RefrigerantId;
+  highKpaAbs: number;
+  ambientC: number;
+}): number {
   return saturationTemperature(a.refrigerant, a.highKpaAbs) - a.ambientC;
 }
 
@@ -30,7 +42,11 @@ export type StaticCheck =
 export const STATIC_SOAK_SPREAD_K = 5;
 
 /** Engine-off static pressure against saturation at ambient: an excess suggests non-condensables. */
-export function staticCheck(a: { refrigerant: RefrigerantId; staticKpaAbs: number; ambientC: number }): StaticCheck {
+export function staticCheck(a: {
+  refrigerant: RefrigerantId;
+  staticKpaAbs: number;
+  ambientC: number;
+}): StaticCheck {
   let saturationKpaAbs: number;
   try {
     saturationKpaAbs = saturationPressure(a.refrigerant, a.ambientC);
@@ -62,10 +78,14 @@ function saturationPressureOrLowest(refrigerant: RefrigerantId, tempC: number): 
 }
 
 /** Recovered minus label charge; negative means refrigerant is missing. Throws RangeError unless the label charge is above zero. */
-export function chargeDeviation(a: { labelChargeG: number; recoveredChargeG: number }): { deltaG: number; deltaPct: number } {
-  if (!(a.labelChargeG > 0) || !Number.isFinite(a.labelChargeG)) throw new RangeError("The label charge must be a positive mass.");
+export function chargeDeviation(a: { labelChargeG: number; recoveredChargeG: number }): {
+  deltaG: number;
+  deltaPct: number;
+} {
+  if (!(a.labelChargeG > 0) || !Number.isFinite(a.labelChargeG))
+    throw new RangeError("The label charge must be a positive mass.");
   const deltaG = a.recoveredChargeG - a.labelChargeG;
   return { deltaG, deltaPct: (deltaG / a.labelChargeG) * 100 };
 }
 
-export { expectedBands, type PressureBand } from "./expected-bands";
+export { EXPECTED_BANDS_MIN_AMBIENT_C, expectedBands, type PressureBand } from "./expected-bands";

@@ -24,6 +24,12 @@ export const CONDENSING_ABOVE_AMBIENT_K = { min: 14, max: 30 } as const;
  */
 export const EVAPORATING_C = { min: -4, max: 8 } as const;
 
+/**
+ * Below this ambient a running-pressure check says little: the evaporator load is small, the two bands
+ * would meet, and many systems lock the compressor out near freezing (common practice).
+ */
+export const EXPECTED_BANDS_MIN_AMBIENT_C = 10;
+
 /** Humid air loads the evaporator with condensing moisture, raising both sides; dry air lowers them (common practice). */
 export const HUMIDITY_SHIFT_MAX_K = 2;
 const NEUTRAL_RELATIVE_HUMIDITY_PCT = 50;
@@ -36,18 +42,22 @@ export function humidityShiftK(relativeHumidityPct: number | undefined): number 
 
 /**
  * Expected running pressures for this ambient, built from the saturation tables.
- * null when the tables cannot say, e.g. R-744 at an ambient where its high side runs transcritical.
+ * null when the tables cannot say: ambient under EXPECTED_BANDS_MIN_AMBIENT_C, or R-744 at an ambient where its high side runs transcritical.
  */
 export function expectedBands(a: {
   refrigerant: RefrigerantId;
   ambientC: number;
   relativeHumidityPct?: number;
 }): { high: PressureBand; low: PressureBand } | null {
-  if (!Number.isFinite(a.ambientC)) return null;
+  if (!Number.isFinite(a.ambientC) || a.ambientC < EXPECTED_BANDS_MIN_AMBIENT_C) return null;
   const shiftK = humidityShiftK(a.relativeHumidityPct);
   try {
     return {
-      high: band(a.refrigerant, a.ambientC + CONDENSING_ABOVE_AMBIENT_K.min + shiftK, a.ambientC + CONDENSING_ABOVE_AMBIENT_K.max + shiftK),
+      high: band(
+        a.refrigerant,
+        a.ambientC + CONDENSING_ABOVE_AMBIENT_K.min + shiftK,
+        a.ambientC + CONDENSING_ABOVE_AMBIENT_K.max + shiftK,
+      ),
       low: band(a.refrigerant, EVAPORATING_C.min + shiftK, EVAPORATING_C.max + shiftK),
     };
   } catch (error) {

@@ -1,9 +1,16 @@
-export { REFRIGERANT_IDS, type RefrigerantId, type RefrigerantInfo, isRefrigerantId, refrigerantInfo } from "./catalog";
+export {
+  REFRIGERANT_IDS,
+  type RefrigerantId,
+  type RefrigerantInfo,
+  isRefrigerantId,
+  refrigerantInfo,
+} from "./catalog";
 export { SaturationRangeError, type SaturationLimit, type SaturationQuantity } from "./range-error";
 export { saturationPressure, saturationTemperature } from "./saturation";
 export {
   chargeDeviation,
   condensingApproachK,
+  EXPECTED_BANDS_MIN_AMBIENT_C,
   expectedBands,
   type PressureBand,
   STATIC_SOAK_SPREAD_K,

@@ -30,13 +30,21 @@ export function monotoneSlopes(xs: ArrayLike<number>, ys: ArrayLike<number>): Fl
     if (alpha < 0) slopes[i] = 0;
     if (beta < 0) slopes[i + 1] = 0;
     const radius = alpha * alpha + beta * beta;
-    if (radius > 9) {
+    if (!Number.isFinite(radius)) {
+      // Secant so small that the ratios overflow: fall back to the α, β ≤ 3 square, also monotone.
+      slopes[i] = clampToThreeSecants(slopes[i]!, d);
+      slopes[i + 1] = clampToThreeSecants(slopes[i + 1]!, d);
+    } else if (radius > 9) {
       const tau = 3 / Math.sqrt(radius);
       slopes[i] = tau * alpha * d;
       slopes[i + 1] = tau * beta * d;
     }
   }
   return slopes;
+}
+
+function clampToThreeSecants(slope: number, secant: number): number {
+  return Math.abs(slope) > 3 * Math.abs(secant) ? 3 * secant : slope;
 }
 
 function endSlope(hNear: number, hFar: number, secantNear: number, secantFar: number): number {
@@ -46,9 +54,19 @@ function endSlope(hNear: number, hFar: number, secantNear: number, secantFar: nu
 }
 
 /** Cubic Hermite value on [x0, x1]; h = x1 − x0 may be negative. */
-export function hermite(x: number, x0: number, h: number, y0: number, y1: number, m0: number, m1: number): number {
+export function hermite(
+  x: number,
+  x0: number,
+  h: number,
+  y0: number,
+  y1: number,
+  m0: number,
+  m1: number,
+): number {
   const s = (x - x0) / h;
   const s2 = s * s;
   const s3 = s2 * s;
-  return (2 * s3 - 3 * s2 + 1) * y0 + (s3 - 2 * s2 + s) * h * m0 + (-2 * s3 + 3 * s2) * y1 + (s3 - s2) * h * m1;
+  return (
+    (2 * s3 - 3 * s2 + 1) * y0 + (s3 - 2 * s2 + s) * h * m0 + (-2 * s3 + 3 * s2) * y1 + (s3 - s2) * h * m1
+  );
 }

@@ -11,7 +11,13 @@ export class SaturationRangeError extends RangeError {
   /** The table's limit in the quantity's internal unit: °C or kPa absolute. */
   readonly limitValue: number;
 
-  constructor(a: { refrigerant: RefrigerantId; quantity: SaturationQuantity; limit: SaturationLimit; limitValue: number; minTempC: number }) {
+  constructor(a: {
+    refrigerant: RefrigerantId;
+    quantity: SaturationQuantity;
+    limit: SaturationLimit;
+    limitValue: number;
+    minTempC: number;
+  }) {
     super(describe(a));
     this.name = "SaturationRangeError";
     this.refrigerant = a.refrigerant;
@@ -21,7 +27,13 @@ export class SaturationRangeError extends RangeError {
   }
 }
 
-function describe(a: { refrigerant: RefrigerantId; quantity: SaturationQuantity; limit: SaturationLimit; limitValue: number; minTempC: number }): string {
+function describe(a: {
+  refrigerant: RefrigerantId;
+  quantity: SaturationQuantity;
+  limit: SaturationLimit;
+  limitValue: number;
+  minTempC: number;
+}): string {
   const { refrigerant, quantity, limit, limitValue, minTempC } = a;
   if (quantity === "temperature") {
     const shown = formatNumber(limitValue, 2);

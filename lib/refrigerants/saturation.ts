@@ -38,10 +38,9 @@ function buildLookup(id: RefrigerantId, table: SaturationTableData): Lookup {
   };
 }
 
-const LOOKUPS = Object.fromEntries(REFRIGERANT_IDS.map((id) => [id, buildLookup(id, SATURATION_TABLES[id])])) as Record<
-  RefrigerantId,
-  Lookup
->;
+const LOOKUPS = Object.fromEntries(
+  REFRIGERANT_IDS.map((id) => [id, buildLookup(id, SATURATION_TABLES[id])]),
+) as Record<RefrigerantId, Lookup>;
 
 function lookupFor(refrigerant: RefrigerantId): Lookup {
   const lookup = LOOKUPS[refrigerant];
@@ -60,7 +59,15 @@ export function saturationPressure(refrigerant: RefrigerantId, tempC: number): n
   else if (i > t.lastInterval) i = t.lastInterval;
   const x = 1 / (tempC + KELVIN_OFFSET);
   const x0 = t.inverseTempK[i]!;
-  const lnP = hermite(x, x0, t.inverseTempK[i + 1]! - x0, t.lnPressure[i]!, t.lnPressure[i + 1]!, t.forwardSlopes[i]!, t.forwardSlopes[i + 1]!);
+  const lnP = hermite(
+    x,
+    x0,
+    t.inverseTempK[i + 1]! - x0,
+    t.lnPressure[i]!,
+    t.lnPressure[i + 1]!,
+    t.forwardSlopes[i]!,
+    t.forwardSlopes[i + 1]!,
+  );
   return Math.exp(lnP);
 }
 
@@ -81,11 +88,24 @@ export function saturationTemperature(refrigerant: RefrigerantId, pressureKpaAbs
     else high = mid;
   }
   const y0 = ys[low]!;
-  const x = hermite(lnP, y0, ys[low + 1]! - y0, t.inverseTempK[low]!, t.inverseTempK[low + 1]!, t.inverseSlopes[low]!, t.inverseSlopes[low + 1]!);
+  const x = hermite(
+    lnP,
+    y0,
+    ys[low + 1]! - y0,
+    t.inverseTempK[low]!,
+    t.inverseTempK[low + 1]!,
+    t.inverseSlopes[low]!,
+    t.inverseSlopes[low + 1]!,
+  );
   const tempC = 1 / x - KELVIN_OFFSET;
   return tempC > t.maxTempC ? t.maxTempC : tempC < t.minTempC ? t.minTempC : tempC;
 }
 
-function rangeError(t: Lookup, quantity: "temperature" | "pressure", limit: "below" | "above", limitValue: number) {
+function rangeError(
+  t: Lookup,
+  quantity: "temperature" | "pressure",
+  limit: "below" | "above",
+  limitValue: number,
+) {
   return new SaturationRangeError({ refrigerant: t.id, quantity, limit, limitValue, minTempC: t.minTempC });
 }

@@ -20,7 +20,8 @@ export function standardBarometricKpa(altitudeM: number): number {
 
 export function barometricKpa(at?: BarometricSource): number {
   if (at?.barometricKpa !== undefined) {
-    if (!(at.barometricKpa > 0) || !Number.isFinite(at.barometricKpa)) throw new RangeError("Barometric pressure must be a positive number.");
+    if (!(at.barometricKpa > 0) || !Number.isFinite(at.barometricKpa))
+      throw new RangeError("Barometric pressure must be a positive number.");
     return at.barometricKpa;
   }
   return standardBarometricKpa(at?.altitudeM ?? 0);

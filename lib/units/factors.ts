@@ -37,13 +37,14 @@ export const MILLILITRES_PER_UNIT: Readonly<Record<VolumeUnit, number>> = {
 const MATHJS_TEMPERATURE: Record<TemperatureUnit, string> = { C: "degC", F: "degF", K: "K" };
 
 /** °C = scale · value + offset */
-export const TEMPERATURE_TO_C: Readonly<Record<TemperatureUnit, { scale: number; offset: number }>> = Object.fromEntries(
-  (Object.keys(MATHJS_TEMPERATURE) as TemperatureUnit[]).map((u) => {
-    const offset = math.unit(0, MATHJS_TEMPERATURE[u]).toNumber("degC");
-    const scale = math.unit(1, MATHJS_TEMPERATURE[u]).toNumber("degC") - offset;
-    return [u, { scale, offset }];
-  }),
-) as Record<TemperatureUnit, { scale: number; offset: number }>;
+export const TEMPERATURE_TO_C: Readonly<Record<TemperatureUnit, { scale: number; offset: number }>> =
+  Object.fromEntries(
+    (Object.keys(MATHJS_TEMPERATURE) as TemperatureUnit[]).map((u) => {
+      const offset = math.unit(0, MATHJS_TEMPERATURE[u]).toNumber("degC");
+      const scale = math.unit(1, MATHJS_TEMPERATURE[u]).toNumber("degC") - offset;
+      return [u, { scale, offset }];
+    }),
+  ) as Record<TemperatureUnit, { scale: number; offset: number }>;
 
 /** Kelvin per unit of temperature difference (no offset). */
 export const KELVIN_PER_DIFFERENCE_UNIT: Readonly<Record<"K" | "F", number>> = {

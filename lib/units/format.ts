@@ -1,5 +1,11 @@
 import type { MassUnit, PressureUnit, TemperatureUnit, VolumeUnit } from "./factors";
-import { massFromG, pressureFromKpa, temperatureDifferenceFromK, temperatureFromC, volumeFromMl } from "./convert";
+import {
+  massFromG,
+  pressureFromKpa,
+  temperatureDifferenceFromK,
+  temperatureFromC,
+  volumeFromMl,
+} from "./convert";
 
 function fixed(value: number, decimals: number): string {
   const text = value.toFixed(decimals);
@@ -37,7 +43,12 @@ function pressureDecimals(value: number, unit: PressureUnit): number {
  */
 export function formatPressure(kpa: number, unit: PressureUnit, opts?: { gauge?: boolean }): string {
   const value = pressureFromKpa(kpa, unit);
-  const label = opts?.gauge === undefined ? PRESSURE_LABEL[unit].plain : opts.gauge ? PRESSURE_LABEL[unit].gauge : PRESSURE_LABEL[unit].absolute;
+  const label =
+    opts?.gauge === undefined
+      ? PRESSURE_LABEL[unit].plain
+      : opts.gauge
+        ? PRESSURE_LABEL[unit].gauge
+        : PRESSURE_LABEL[unit].absolute;
   return `${fixed(value, pressureDecimals(value, unit))} ${label}`;
 }
 
@@ -55,7 +66,10 @@ export function formatMass(g: number, unit: MassUnit): string {
   return `${fixed(massFromG(g, unit), MASS_DECIMALS[unit])} ${unit}`;
 }
 
-const VOLUME_LABEL: Record<VolumeUnit, { decimals: number; label: string }> = { mL: { decimals: 0, label: "mL" }, floz: { decimals: 1, label: "fl oz" } };
+const VOLUME_LABEL: Record<VolumeUnit, { decimals: number; label: string }> = {
+  mL: { decimals: 0, label: "mL" },
+  floz: { decimals: 1, label: "fl oz" },
+};
 export function formatVolume(ml: number, unit: VolumeUnit): string {
   return `${fixed(volumeFromMl(ml, unit), VOLUME_LABEL[unit].decimals)} ${VOLUME_LABEL[unit].label}`;
 }

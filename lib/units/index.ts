@@ -21,4 +21,10 @@ export {
   vacuumInHgToKpaAbs,
 } from "./barometric";
 export { type ParsedQuantity, parseQuantity, type QuantityKind } from "./parse";
-export { formatMass, formatPressure, formatTemperature, formatTemperatureDifference, formatVolume } from "./format";
+export {
+  formatMass,
+  formatPressure,
+  formatTemperature,
+  formatTemperatureDifference,
+  formatVolume,
+} from "./format";

@@ -1,7 +1,8 @@
 import { GRAMS_PER_UNIT, KPA_PER_UNIT, MILLILITRES_PER_UNIT } from "./factors";
 
 export type QuantityKind = "pressure" | "temperature" | "mass" | "volume";
-export type ParsedQuantity = { value: number; unit: string; reference?: "gauge" | "absolute" } | { error: string };
+export type ParsedQuantity =
+  { value: number; unit: string; reference?: "gauge" | "absolute" } | { error: string };
 
 interface Alias {
   kind: QuantityKind;
@@ -23,7 +24,7 @@ alias("pressure", "MPa", ["mpa"]);
 alias("pressure", "psi", ["psi", "lb/in2", "lbf/in2"]);
 alias("pressure", "psi", ["psig"], "gauge");
 alias("pressure", "psi", ["psia"], "absolute");
-alias("pressure", "inHg", ["inhg", "in hg", "\"hg", "in. hg"]);
+alias("pressure", "inHg", ["inhg", "in hg", '"hg', "in. hg"]);
 alias("temperature", "C", ["c", "°c", "degc", "º c", "°", "º"]);
 alias("temperature", "F", ["f", "°f", "degf", "ºf"]);
 alias("temperature", "K", ["k", "kelvin"]);
@@ -51,8 +52,14 @@ const PART = /([+-]?\d+(?:\.\d+)?|[+-]?\.\d+)\s*([^\d\s+-][^\d+-]*?)?\s*(?=[+-]?
 
 /** Reads what a technician types: "32 psi", "2,1 bar", "75F", "−5 °C", "1 lb 4 oz". A bare number takes defaultUnit. */
 export function parseQuantity(text: string, kind: QuantityKind, defaultUnit: string): ParsedQuantity {
-  const cleaned = text.trim().replace(/[\u2212\u2013]/g, "-").replace(/(\d),(\d)/g, "$1.$2").replace(/\s+/g, " ");
-  const failure = { error: `Could not read “${text.trim()}” as a ${kind}. Try for example ${EXAMPLES[kind]}.` };
+  const cleaned = text
+    .trim()
+    .replace(/[\u2212\u2013]/g, "-")
+    .replace(/(\d),(\d)/g, "$1.$2")
+    .replace(/\s+/g, " ");
+  const failure = {
+    error: `Could not read “${text.trim()}” as a ${kind}. Try for example ${EXAMPLES[kind]}.`,
+  };
   if (cleaned === "") return { error: `Enter a ${kind}, for example ${EXAMPLES[kind]}.` };
   const parts: { value: number; alias: Alias }[] = [];
   PART.lastIndex = 0;
@@ -62,13 +69,16 @@ export function parseQuantity(text: string, kind: QuantityKind, defaultUnit: str
     const spelled = (match[2] ?? "").trim().toLowerCase();
     const found = spelled === "" ? ALIASES[defaultUnit.toLowerCase()] : ALIASES[spelled];
     if (!found) return failure;
-    if (found.kind !== kind) return { error: `“${match[2]?.trim() || defaultUnit}” is a ${found.kind} unit, not a ${kind} unit.` };
+    if (found.kind !== kind)
+      return { error: `“${match[2]?.trim() || defaultUnit}” is a ${found.kind} unit, not a ${kind} unit.` };
     parts.push({ value: Number(match[1]), alias: found });
   }
   if (parts.length === 0 || consumed !== cleaned.length) return failure;
   const last = parts[parts.length - 1]!;
   if (parts.length === 1) {
-    return last.alias.reference ? { value: last.value, unit: last.alias.unit, reference: last.alias.reference } : { value: last.value, unit: last.alias.unit };
+    return last.alias.reference
+      ? { value: last.value, unit: last.alias.unit, reference: last.alias.reference }
+      : { value: last.value, unit: last.alias.unit };
   }
   // Compound entries ("1 lb 4 oz") are summed in the last, smallest unit.
   const factors = FACTORS[kind];
