@@ -92,9 +92,9 @@ export const LIKELIHOOD_TABLE: readonly LikelihoodRow[] = [
   { observation: "static:empty", source: "Static near 0 kPa gauge: no refrigerant, find the leak before running (common practice); EU F-gas rule: no refill before repair (Directive 2006/40/EC Art. 7)", weights: { undercharge: 3.0, oil_loss: 0.8, non_condensables: -2.0, overcharge: -3.0, metering_restriction: -1.5, high_side_restriction: -1.5, metering_stuck_open: -1.5, condenser_airflow: -1.5, weak_compressor: -1.5, evaporator_icing: -1.5, no_refrigerant_fault: -3.0 } },
   { observation: "static:no_liquid", source: STATIC_NCG + "; below saturation means no liquid left (common practice)", weights: { undercharge: 2.0, oil_loss: 0.3, non_condensables: -1.5, overcharge: -2.5, metering_restriction: -0.8, high_side_restriction: -0.8, metering_stuck_open: -0.8, condenser_airflow: -0.5, evaporator_icing: -0.8, no_refrigerant_fault: -2.0 } },
   { observation: "static:normal", source: STATIC_NCG, weights: { non_condensables: -1.5, contaminated_refrigerant: -0.8, undercharge: -0.3, no_refrigerant_fault: 0.3 } },
-  { observation: "static:slightly_high", source: STATIC_NCG, weights: { non_condensables: 0.8, contaminated_refrigerant: 0.4, no_refrigerant_fault: -0.3 } },
-  { observation: "static:high", source: STATIC_NCG, weights: { non_condensables: 1.8, contaminated_refrigerant: 0.8, no_refrigerant_fault: -1.0 } },
-  { observation: "static:very_high", source: STATIC_NCG, weights: { non_condensables: 2.4, contaminated_refrigerant: 1.2, no_refrigerant_fault: -1.5 } },
+  { observation: "static:slightly_high", source: STATIC_NCG, weights: { non_condensables: 0.9, contaminated_refrigerant: 0.4, undercharge: -0.3, no_refrigerant_fault: -0.3 } },
+  { observation: "static:high", source: STATIC_NCG, weights: { non_condensables: 2.0, contaminated_refrigerant: 0.8, undercharge: -0.3, no_refrigerant_fault: -1.0 } },
+  { observation: "static:very_high", source: STATIC_NCG, weights: { non_condensables: 2.6, contaminated_refrigerant: 1.2, undercharge: -0.3, no_refrigerant_fault: -1.5 } },
 
   // Recovered mass against the label charge
   { observation: "charge:empty", source: CHARGE, weights: { undercharge: 3.0, oil_loss: 0.8, overcharge: -3.0, non_condensables: -1.0, weak_compressor: -2.0, evaporator_icing: -1.5, condenser_airflow: -1.5, high_side_restriction: -1.0, metering_restriction: -1.0, metering_stuck_open: -1.0, no_refrigerant_fault: -3.0 } },

@@ -1,0 +1,113 @@
+import fc from "fast-check";
+import { describe, expect, it } from "vitest";
+import { CAUSE_IDS } from "./causes";
+import { diagnose } from "./diagnose";
+import { ENGINE_VERSION } from "./engine-version";
+import { type DiagnosisInput, diagnosisInputSchema } from "./schema";
+import { SYMPTOM_IDS } from "./symptoms";
+
+const optional = <T>(arb: fc.Arbitrary<T>) => fc.option(arb, { nil: undefined, freq: 3 });
+const real = (min: number, max: number) => fc.double({ min, max, noNaN: true, noDefaultInfinity: true });
+
+const candidateInput = fc.constantFrom("R-134a" as const, "R-1234yf" as const, "R-744" as const).chain((refrigerant) => {
+  const maxKpa = refrigerant === "R-744" ? 16000 : 4500;
+  const pressure = fc.oneof(real(-101.3, 3000), real(-101.3, maxKpa));
+  return fc.record({
+    refrigerant: fc.constant(refrigerant),
+    expansionDevice: fc.constantFrom("orifice_tube" as const, "txv" as const),
+    ambientC: real(-30, 60),
+    relativeHumidityPct: optional(real(0, 100)),
+    altitudeM: optional(real(-500, 5000)),
+    staticKpaGauge: optional(pressure),
+    highKpaGauge: optional(pressure),
+    lowKpaGauge: optional(pressure),
+    liquidLineC: optional(real(-40, 110)),
+    suctionLineC: optional(real(-50, 80)),
+    ventC: optional(real(-30, 60)),
+    labelChargeG: optional(real(1, 5000)),
+    recoveredChargeG: optional(real(0, 6000)),
+    identifierPurityPct: optional(real(0, 100)),
+    identifierAirPct: optional(real(0, 100)),
+    electricCompressor: optional(fc.boolean()),
+    symptoms: optional(fc.subarray([...SYMPTOM_IDS])),
+  });
+});
+
+/** Inputs the schema accepts: the engine's contract covers exactly these. */
+const validInput: fc.Arbitrary<DiagnosisInput> = candidateInput.filter((c) => diagnosisInputSchema.safeParse(c).success);
+
+describe("diagnose on any input the schema accepts (fast-check)", () => {
+  it("returns every cause once, with scores and confidences in [0, 1], sorted, never NaN, and cautions ending in deference", () => {
+    fc.assert(
+      fc.property(validInput, (input) => {
+        const findings = diagnose(input);
+        expect(findings.engineVersion).toBe(ENGINE_VERSION);
+        expect(findings.suspects.map((s) => s.cause).sort()).toEqual([...CAUSE_IDS].sort());
+        findings.suspects.forEach((s, i) => {
+          expect(s.score >= 0 && s.score <= 1).toBe(true);
+          expect(s.confidence >= 0 && s.confidence <= 1).toBe(true);
+          if (i > 0) expect(s.score).toBeLessThanOrEqual(findings.suspects[i - 1]?.score ?? 1);
+        });
+        expect(findings.cautions.length).toBeGreaterThanOrEqual(1);
+        expect(findings.cautions.at(-1)?.id).toBe("defer_to_procedure");
+        expect(findings.nextCheck.instruction.length).toBeGreaterThan(10);
+        expect(JSON.stringify(findings)).not.toMatch(/NaN|null|Infinity/);
+      }),
+      { numRuns: 400 },
+    );
+  });
+
+  it("is deterministic: the same readings give the same findings", () => {
+    fc.assert(
+      fc.property(validInput, (input) => {
+        expect(diagnose(structuredClone(input))).toEqual(diagnose(input));
+      }),
+      { numRuns: 200 },
+    );
+  });
+
+  it("never lowers non-condensables when the static-pressure excess rises (Dalton's law of partial pressures)", () => {
+    const pair = fc.tuple(validInput, real(-101.3, 4500), real(-101.3, 4500));
+    fc.assert(
+      fc.property(pair, ([input, a, b]) => {
+        const [lowKpa, highKpa] = a <= b ? [a, b] : [b, a];
+        const lower = { ...input, staticKpaGauge: lowKpa };
+        const higher = { ...input, staticKpaGauge: highKpa };
+        fc.pre(diagnosisInputSchema.safeParse(lower).success && diagnosisInputSchema.safeParse(higher).success);
+        const air = (i: DiagnosisInput) => diagnose(i).suspects.find((s) => s.cause === "non_condensables")?.score ?? Number.NaN;
+        expect(air(higher)).toBeGreaterThanOrEqual(air(lower));
+      }),
+      { numRuns: 400 },
+    );
+  });
+
+  it("puts contaminated refrigerant first whenever the identifier reads below 98 % (SAE J2099 / J2912)", () => {
+    fc.assert(
+      fc.property(validInput, real(0, 97.99), (input, purity) => {
+        const findings = diagnose({ ...input, identifierPurityPct: purity });
+        expect(findings.suspects[0]?.cause).toBe("contaminated_refrigerant");
+        expect(findings.cautions.map((c) => c.id)).toContain("contaminated_do_not_recover");
+      }),
+      { numRuns: 200 },
+    );
+  });
+
+  it("puts undercharge first and asks for a leak test when a pure system's static pressure is near zero at shop temperatures (common practice; SAE J2788 equipment range 10–50 °C)", () => {
+    const emptyInput = fc.tuple(validInput, real(10, 50)).map(([input, ambientC]): DiagnosisInput => ({
+      ...input,
+      ambientC,
+      staticKpaGauge: 10,
+      identifierPurityPct: undefined,
+      symptoms: (input.symptoms ?? []).filter((s) => s !== "identifier_flags_hydrocarbon" && s !== "leak_found" && s !== "no_leak_found"),
+    }));
+    fc.assert(
+      fc.property(emptyInput, (input) => {
+        fc.pre(diagnosisInputSchema.safeParse(input).success);
+        const findings = diagnose(input);
+        expect(findings.suspects[0]?.cause).toBe("undercharge");
+        expect(findings.nextCheck.check).toBe("leak_test");
+      }),
+      { numRuns: 200 },
+    );
+  });
+});
