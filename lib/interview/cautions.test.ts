@@ -3,7 +3,8 @@ import type { InterviewAnswers } from "./answers";
 import { cautionsFor } from "./cautions";
 import { contaminatedAnswers, emptySystemAnswers, exampleAnswers } from "./example-answers";
 
-const ids = (answers: InterviewAnswers, options?: Parameters<typeof cautionsFor>[1]) => cautionsFor(answers, options).map((c) => c.id);
+const ids = (answers: InterviewAnswers, options?: Parameters<typeof cautionsFor>[1]) =>
+  cautionsFor(answers, options).map((c) => c.id);
 const withSystem = (system: Partial<NonNullable<InterviewAnswers["system"]>>): InterviewAnswers => ({
   ...exampleAnswers,
   system: { ...exampleAnswers.system, ...system },
@@ -17,7 +18,10 @@ describe("cautionsFor", () => {
   });
 
   it("gives every caution a level, plain text and the basis it rests on", () => {
-    for (const caution of cautionsFor({ ...contaminatedAnswers, system: { ...contaminatedAnswers.system, electricCompressor: true } })) {
+    for (const caution of cautionsFor({
+      ...contaminatedAnswers,
+      system: { ...contaminatedAnswers.system, electricCompressor: true },
+    })) {
       expect(caution.text.length).toBeGreaterThan(20);
       expect(caution.basis.length).toBeGreaterThan(5);
       expect(["danger", "warning", "notice"]).toContain(caution.level);
@@ -37,7 +41,9 @@ describe("cautionsFor", () => {
   });
 
   it("adds high-voltage and dielectric-oil cautions for an electric compressor only", () => {
-    expect(ids(withSystem({ electricCompressor: true }))).toEqual(expect.arrayContaining(["high_voltage_compressor", "dielectric_oil"]));
+    expect(ids(withSystem({ electricCompressor: true }))).toEqual(
+      expect.arrayContaining(["high_voltage_compressor", "dielectric_oil"]),
+    );
     const belt = ids(withSystem({ electricCompressor: false }));
     expect(belt).not.toContain("high_voltage_compressor");
     expect(belt).not.toContain("dielectric_oil");
@@ -49,7 +55,9 @@ describe("cautionsFor", () => {
   });
 
   it("warns against running an empty system and against pressurising with air", () => {
-    expect(ids(emptySystemAnswers)).toEqual(expect.arrayContaining(["empty_system", "repair_before_refill", "leak_test_gas"]));
+    expect(ids(emptySystemAnswers)).toEqual(
+      expect.arrayContaining(["empty_system", "repair_before_refill", "leak_test_gas"]),
+    );
     expect(ids(exampleAnswers)).not.toContain("empty_system");
   });
 
@@ -65,15 +73,24 @@ describe("cautionsFor", () => {
   });
 
   it("treats a hydrocarbon flag as flammable and contaminated", () => {
-    const flagged: InterviewAnswers = { ...exampleAnswers, identification: { purityPct: 99, hydrocarbonFlagged: true } };
-    expect(ids(flagged)).toEqual(expect.arrayContaining(["hydrocarbon_flammable", "contaminated_do_not_recover"]));
+    const flagged: InterviewAnswers = {
+      ...exampleAnswers,
+      identification: { purityPct: 99, hydrocarbonFlagged: true },
+    };
+    expect(ids(flagged)).toEqual(
+      expect.arrayContaining(["hydrocarbon_flammable", "contaminated_do_not_recover"]),
+    );
   });
 
   it("asks for identification before recovery when the charge is being recovered unidentified", () => {
     const unidentified: InterviewAnswers = { ...exampleAnswers, identification: {} };
     expect(ids(unidentified)).toContain("identify_before_recovery");
-    expect(ids({ ...unidentified, chargeAudit: { recovered: false } })).not.toContain("identify_before_recovery");
-    expect(ids({ ...unidentified, chargeAudit: undefined }, { step: "chargeAudit" })).toContain("identify_before_recovery");
+    expect(ids({ ...unidentified, chargeAudit: { recovered: false } })).not.toContain(
+      "identify_before_recovery",
+    );
+    expect(ids({ ...unidentified, chargeAudit: undefined }, { step: "chargeAudit" })).toContain(
+      "identify_before_recovery",
+    );
     expect(ids(exampleAnswers, { step: "chargeAudit" })).not.toContain("identify_before_recovery");
   });
 });

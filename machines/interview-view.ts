@@ -1,0 +1,66 @@
+import type { SnapshotFrom } from "xstate";
+import type { DiagnosisInput } from "@/lib/diagnosis";
+import type { InterviewAnswers } from "@/lib/interview/answers";
+import { cautionsFor, type Caution } from "@/lib/interview/cautions";
+import { progressFor, type ProgressEntry } from "@/lib/interview/progress";
+import { answersOnRoute } from "@/lib/interview/route";
+import { groupForStep, isOptionalGroup, type GroupId, type StepId } from "@/lib/interview/steps";
+import { toDiagnosisInput } from "@/lib/interview/to-diagnosis-input";
+import type { AnswerIssue } from "@/lib/interview/validate";
+import type { InterviewContext } from "./interview-context";
+import type { interviewMachine } from "./interview";
+
+export type InterviewSnapshot = SnapshotFrom<typeof interviewMachine>;
+
+/** Everything a screen needs to draw the interview at this moment. */
+export interface InterviewView {
+  step: StepId;
+  /** The answer group this step asks; null on findings. */
+  group: GroupId | null;
+  progress: ProgressEntry[];
+  cautions: Caution[];
+  canGoNext: boolean;
+  canGoBack: boolean;
+  canSkip: boolean;
+  errors: Partial<Record<GroupId, AnswerIssue[]>>;
+  drafts: Partial<Record<GroupId, unknown>>;
+  skipped: GroupId[];
+  /** The engine's input from the answers on the current route; null until refrigerant, device and ambient are known. */
+  diagnosisInput: DiagnosisInput | null;
+  canComputeFindings: boolean;
+}
+
+export function viewOf(snapshot: InterviewSnapshot): InterviewView {
+  const context = snapshot.context;
+  const step = context.step;
+  const group = groupForStep[step];
+  const diagnosisInput = toDiagnosisInput(answersOnRoute(context.answers, context.shop), context.shop);
+  return {
+    step,
+    group,
+    progress: progressFor(context, step, context.visited),
+    cautions: cautionsFor(context.answers, { shop: context.shop, step }),
+    canGoNext: snapshot.can({ type: "NEXT" }),
+    canGoBack: snapshot.can({ type: "BACK" }),
+    canSkip: group !== null && isOptionalGroup(group),
+    errors: context.errors,
+    drafts: context.drafts,
+    skipped: context.skipped,
+    diagnosisInput,
+    canComputeFindings: diagnosisInput !== null,
+  };
+}
+
+/** What autosave stores with the case; passing it back as `input` resumes the interview where it was left. */
+export interface SavedInterview {
+  answers: InterviewAnswers;
+  drafts: Partial<Record<GroupId, unknown>>;
+  skipped: GroupId[];
+  visited: StepId[];
+  step: StepId;
+}
+
+export function savedInterviewOf(context: InterviewContext): SavedInterview {
+  const { answers, drafts, skipped, visited, step } = context;
+  return { answers, drafts, skipped, visited, step };
+}
