@@ -10,8 +10,16 @@ import { SignInAttempt } from "./sign-in-attempt";
 import { SignOff } from "./sign-off";
 import { User } from "./user";
 import { Vehicle } from "./vehicle";
+import { Cylinder } from "./cylinder";
+import { PartOilAllowance } from "./part-oil-allowance";
+import { RefrigerantMovement } from "./refrigerant-movement";
+import { ServiceRecord } from "./service-record";
+import { SpecEntry } from "./spec-entry";
 
 export { AuditEvent, Case, Customer, ReadingSet, Session, Shop, SignInAttempt, SignOff, User, Vehicle };
+export { Cylinder, PartOilAllowance, RefrigerantMovement, ServiceRecord, SpecEntry };
+export type { CylinderKind } from "./cylinder";
+export type { PartReplacedJson } from "./service-record";
 export type { CaseStatus, JsonObject, JsonValue } from "./case";
 export type { UserRole } from "./user";
 export type { ShopUnits } from "./shop";
@@ -31,6 +39,11 @@ function initModels(sequelize: Sequelize) {
     ReadingSet,
     SignOff,
     AuditEvent,
+    SpecEntry,
+    PartOilAllowance,
+    Cylinder,
+    ServiceRecord,
+    RefrigerantMovement,
   ]) {
     model.initModel(sequelize);
   }
@@ -82,6 +95,22 @@ function initModels(sequelize: Sequelize) {
   User.hasMany(AuditEvent, { foreignKey: "actorId", as: "auditEvents" });
   AuditEvent.belongsTo(User, { foreignKey: "actorId", as: "actor" });
 
+  Shop.hasMany(SpecEntry, shopScoped);
+  SpecEntry.belongsTo(Shop, shopScoped);
+  Shop.hasMany(PartOilAllowance, shopScoped);
+  PartOilAllowance.belongsTo(Shop, shopScoped);
+  Shop.hasMany(Cylinder, shopScoped);
+  Cylinder.belongsTo(Shop, shopScoped);
+  Shop.hasMany(ServiceRecord, shopScoped);
+  ServiceRecord.belongsTo(Shop, shopScoped);
+  Shop.hasMany(RefrigerantMovement, shopScoped);
+  RefrigerantMovement.belongsTo(Shop, shopScoped);
+  Case.hasOne(ServiceRecord, { foreignKey: { name: "caseId", allowNull: false }, as: "serviceRecord" });
+  ServiceRecord.belongsTo(Case, { foreignKey: { name: "caseId", allowNull: false } });
+  ServiceRecord.belongsTo(User, { foreignKey: { name: "technicianId", allowNull: false }, as: "technician" });
+  RefrigerantMovement.belongsTo(Cylinder, { foreignKey: { name: "cylinderId", allowNull: false } });
+  RefrigerantMovement.belongsTo(User, { foreignKey: { name: "technicianId", allowNull: false }, as: "technician" });
+
   return {
     sequelize,
     Shop,
@@ -94,6 +123,11 @@ function initModels(sequelize: Sequelize) {
     ReadingSet,
     SignOff,
     AuditEvent,
+    SpecEntry,
+    PartOilAllowance,
+    Cylinder,
+    ServiceRecord,
+    RefrigerantMovement,
   };
 }
 

@@ -1,0 +1,50 @@
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from "sequelize";
+import type { Shop } from "./shop";
+import { vehicleRefrigerants, type VehicleRefrigerant } from "./vehicle";
+
+/** One row of a shop's spec table: what a vehicle variant carries (grams, millilitres). */
+export class SpecEntry extends Model<InferAttributes<SpecEntry>, InferCreationAttributes<SpecEntry>> {
+  declare id: CreationOptional<number>;
+  declare shopId: ForeignKey<Shop["id"]>;
+  declare yearFrom: number;
+  declare yearTo: number;
+  declare make: string;
+  declare model: string;
+  declare variant: CreationOptional<string>;
+  declare rearAc: boolean;
+  declare refrigerant: VehicleRefrigerant;
+  declare labelChargeG: number;
+  declare oilType: string;
+  declare totalOilMl: CreationOptional<number | null>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize) {
+    SpecEntry.init(
+      {
+        id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
+        yearFrom: { type: DataTypes.SMALLINT, allowNull: false },
+        yearTo: { type: DataTypes.SMALLINT, allowNull: false },
+        make: { type: DataTypes.STRING(60), allowNull: false },
+        model: { type: DataTypes.STRING(80), allowNull: false },
+        variant: { type: DataTypes.STRING(120), allowNull: false, defaultValue: "" },
+        rearAc: { type: DataTypes.BOOLEAN, allowNull: false },
+        refrigerant: { type: DataTypes.ENUM(...vehicleRefrigerants), allowNull: false },
+        labelChargeG: { type: DataTypes.INTEGER, allowNull: false },
+        oilType: { type: DataTypes.STRING(60), allowNull: false },
+        totalOilMl: { type: DataTypes.INTEGER, allowNull: true },
+        createdAt: DataTypes.DATE(3),
+        updatedAt: DataTypes.DATE(3),
+      },
+      { sequelize, tableName: "spec_entry", modelName: "SpecEntry", underscored: true },
+    );
+  }
+}
