@@ -47,9 +47,10 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
         tableName: "user",
         modelName: "User",
         underscored: true,
-        // Password hashes leave the data layer only when asked for by name.
+        // Password hashes leave the data layer only when asked for by name. A named scope replaces
+        // the default one, so the empty scope means "every column".
         defaultScope: { attributes: { exclude: ["passwordHash"] } },
-        scopes: { withPasswordHash: { attributes: { include: ["passwordHash"] } } },
+        scopes: { withPasswordHash: {} },
       },
     );
   }

@@ -1,0 +1,150 @@
+import { afterAll, describe, expect, it } from "vitest";
+import { verifyPassword } from "@/lib/auth/password";
+import { closeSequelize } from "@/lib/db/sequelize";
+import { demoCases } from "@/lib/demo/cases";
+import { demoCustomers, demoPassword, demoShops } from "@/lib/demo/people";
+import { demoVehicles } from "@/lib/demo/vehicles";
+import { seedDemo } from "@/lib/demo/seed-demo";
+import { getModels } from "@/models";
+import { runTsx } from "./helpers";
+
+afterAll(() => closeSequelize());
+
+const tables = [
+  "shop",
+  "user",
+  "customer",
+  "vehicle",
+  "service_case",
+  "reading_set",
+  "sign_off",
+  "audit_event",
+];
+
+async function rowCounts(): Promise<Record<string, number>> {
+  const counts: Record<string, number> = {};
+  for (const table of tables) {
+    const [rows] = await getModels().sequelize.query(`SELECT COUNT(*) AS n FROM \`${table}\``);
+    counts[table] = Number((rows as { n: number | bigint }[])[0]?.n);
+  }
+  return counts;
+}
+
+async function demoShop(name: string) {
+  const shop = await getModels().Shop.findOne({ where: { name } });
+  if (!shop) throw new Error(`demo shop ${name} missing`);
+  return shop;
+}
+
+describe("demo seed", () => {
+  it("creates each demo shop once, with every demo user, customer, vehicle and case", async () => {
+    const models = getModels();
+    for (const demo of demoShops) {
+      const shops = await models.Shop.findAll({ where: { name: demo.name } });
+      expect(shops).toHaveLength(1);
+      const shopId = shops[0]?.id;
+      const users = await models.User.findAll({ where: { shopId }, order: [["email", "ASC"]] });
+      expect(users.map((u) => [u.email, u.role, u.active])).toEqual(
+        demo.users
+          .map((u) => [u.email, u.role, true])
+          .sort((x, y) => String(x[0]).localeCompare(String(y[0]))),
+      );
+      const customerKeys = demoCustomers.filter((c) => c.shopKey === demo.key).map((c) => c.key);
+      expect(await models.Customer.count({ where: { shopId } })).toBe(customerKeys.length);
+      expect(await models.Vehicle.count({ where: { shopId } })).toBe(
+        demoVehicles.filter((v) => customerKeys.includes(v.customerKey)).length,
+      );
+      expect(await models.Case.count({ where: { shopId } })).toBe(
+        demoCases.filter((c) => c.shopKey === demo.key).length,
+      );
+    }
+  });
+
+  it("gives the main demo shop one user per role, and the second shop its altitude", async () => {
+    const models = getModels();
+    const harbourline = await demoShop("Harbourline Auto Climate");
+    const roles = (await models.User.findAll({ where: { shopId: harbourline.id } }))
+      .map((u) => u.role)
+      .sort();
+    expect(roles).toEqual(["apprentice", "owner", "senior", "technician"]);
+    const ridgeback = await demoShop("Ridgeback Cooling Works");
+    expect(ridgeback.altitudeM).toBe(1500);
+  });
+
+  it("lets every demo account sign in with the demo password and no other", async () => {
+    const emails = demoShops.flatMap((s) => s.users.map((u) => u.email));
+    const users = await getModels()
+      .User.scope("withPasswordHash")
+      .findAll({ where: { email: emails } });
+    expect(users).toHaveLength(emails.length);
+    for (const user of users) {
+      expect(await verifyPassword(user.passwordHash, demoPassword), user.email).toBe(true);
+      expect(await verifyPassword(user.passwordHash, `${demoPassword}x`), user.email).toBe(false);
+    }
+  });
+
+  it("never hands out password hashes from the default scope", async () => {
+    const user = await getModels().User.findOne({ where: { email: "owner@harbourline.test" } });
+    expect(user?.get({ plain: true })).not.toHaveProperty("passwordHash");
+  });
+
+  it("includes an apprentice case waiting for sign-off, with readings", async () => {
+    const models = getModels();
+    const harbourline = await demoShop("Harbourline Auto Climate");
+    const waiting = await models.Case.findAll({
+      where: { shopId: harbourline.id, status: "awaiting_signoff" },
+      include: [
+        { model: models.User, as: "technician" },
+        { model: models.ReadingSet, as: "readingSets" },
+      ],
+    });
+    expect(waiting.length).toBeGreaterThanOrEqual(1);
+    const first = waiting[0]!;
+    expect((first.get("technician") as { role: string }).role).toBe("apprentice");
+    expect((first.get("readingSets") as unknown[]).length).toBeGreaterThan(0);
+    expect(first.submittedAt).toBeInstanceOf(Date);
+  });
+
+  it("keeps each case's history in order: created, readings, submitted, verdicts", async () => {
+    const models = getModels();
+    const cases = await models.Case.findAll({
+      include: [
+        { model: models.SignOff, as: "signOffs" },
+        { model: models.ReadingSet, as: "readingSets" },
+      ],
+    });
+    const seeded = cases.filter(
+      (c) => c.engineVersion === "demo-seed" || c.interviewStep === "running_readings",
+    );
+    expect(seeded.length).toBeGreaterThanOrEqual(demoCases.length);
+    for (const c of seeded) {
+      const readings = c.get("readingSets") as { takenAt: Date }[];
+      const verdicts = c.get("signOffs") as { createdAt: Date }[];
+      for (const r of readings) expect(r.takenAt.getTime()).toBeGreaterThanOrEqual(c.createdAt.getTime());
+      if (c.submittedAt)
+        for (const v of verdicts) expect(v.createdAt.getTime()).toBeGreaterThan(c.submittedAt.getTime());
+      expect(c.updatedAt.getTime()).toBeGreaterThanOrEqual(c.createdAt.getTime());
+      expect(c.createdAt.getTime()).toBeLessThan(Date.now());
+    }
+  });
+
+  it("uses only invented contact details: .test e-mail domains and 555-01xx phone numbers", () => {
+    for (const shop of demoShops) for (const u of shop.users) expect(u.email).toMatch(/@[a-z-]+\.test$/);
+    for (const c of demoCustomers) {
+      expect(c.phone).toMatch(/ 555 01\d\d$/);
+      if (c.email) expect(c.email).toMatch(/\.test$/);
+    }
+  });
+
+  it("changes nothing when run again, in process or through scripts/seed.ts", async () => {
+    const before = await rowCounts();
+    const again = await seedDemo({ models: getModels(), passwordHash: "unused-because-nothing-is-created" });
+    expect(again).toEqual({ created: [], skipped: demoShops.map((s) => s.name) });
+    expect(await rowCounts()).toEqual(before);
+
+    const cli = await runTsx("scripts/seed.ts", []);
+    expect(cli.code, cli.stderr).toBe(0);
+    for (const shop of demoShops) expect(cli.stdout).toContain(`present  ${shop.name}`);
+    expect(await rowCounts()).toEqual(before);
+  });
+});
