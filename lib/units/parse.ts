@@ -61,7 +61,7 @@ export function parseQuantity(text: string, kind: QuantityKind, defaultUnit: str
     error: `Could not read “${text.trim()}” as a ${kind}. Try for example ${EXAMPLES[kind]}.`,
   };
   if (cleaned === "") return { error: `Enter a ${kind}, for example ${EXAMPLES[kind]}.` };
-  const parts: { value: number; alias: Alias }[] = [];
+  const parts: { value: number; alias: Alias; spelled: boolean }[] = [];
   PART.lastIndex = 0;
   let consumed = 0;
   for (let match = PART.exec(cleaned); match !== null && match[0] !== ""; match = PART.exec(cleaned)) {
@@ -71,7 +71,7 @@ export function parseQuantity(text: string, kind: QuantityKind, defaultUnit: str
     if (!found) return failure;
     if (found.kind !== kind)
       return { error: `“${match[2]?.trim() || defaultUnit}” is a ${found.kind} unit, not a ${kind} unit.` };
-    parts.push({ value: Number(match[1]), alias: found });
+    parts.push({ value: Number(match[1]), alias: found, spelled: spelled !== "" });
   }
   if (parts.length === 0 || consumed !== cleaned.length) return failure;
   const last = parts[parts.length - 1]!;
@@ -80,9 +80,12 @@ export function parseQuantity(text: string, kind: QuantityKind, defaultUnit: str
       ? { value: last.value, unit: last.alias.unit, reference: last.alias.reference }
       : { value: last.value, unit: last.alias.unit };
   }
-  // Compound entries ("1 lb 4 oz") are summed in the last, smallest unit.
+  // Compound masses ("1 lb 4 oz", "2 kg 300 g") are summed in the last unit, which must be the smaller.
   const factors = FACTORS[kind];
-  if (!factors || parts.some((p) => p.value < 0)) return failure;
+  if (kind !== "mass" || !factors || parts.some((p) => p.value < 0 || !p.spelled)) return failure;
+  for (let i = 1; i < parts.length; i++) {
+    if (!(factors[parts[i - 1]!.alias.unit]! > factors[parts[i]!.alias.unit]!)) return failure;
+  }
   const lastFactor = factors[last.alias.unit]!;
   const total = parts.reduce((sum, p) => sum + (p.value * factors[p.alias.unit]!) / lastFactor, 0);
   return { value: total, unit: last.alias.unit };

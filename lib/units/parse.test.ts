@@ -1,0 +1,149 @@
+import fc from "fast-check";
+import { describe, expect, it } from "vitest";
+import {
+  formatMass,
+  formatPressure,
+  formatTemperature,
+  formatVolume,
+  massToG,
+  parseQuantity,
+  pressureToKpa,
+  temperatureToC,
+  volumeToMl,
+} from "./index";
+
+describe("parseQuantity reads what a technician types", () => {
+  it.each([
+    ["32 psi", "pressure", { value: 32, unit: "psi" }],
+    ["32psig", "pressure", { value: 32, unit: "psi", reference: "gauge" }],
+    ["14.7 psia", "pressure", { value: 14.7, unit: "psi", reference: "absolute" }],
+    ["2.1 bar", "pressure", { value: 2.1, unit: "bar" }],
+    ["2,1 bar", "pressure", { value: 2.1, unit: "bar" }],
+    ["1.45 MPa", "pressure", { value: 1.45, unit: "MPa" }],
+    ["220 kPa", "pressure", { value: 220, unit: "kPa" }],
+    ["28 inHg", "pressure", { value: 28, unit: "inHg" }],
+    ["29.5 in Hg", "pressure", { value: 29.5, unit: "inHg" }],
+    ["75F", "temperature", { value: 75, unit: "F" }],
+    ["75 °F", "temperature", { value: 75, unit: "F" }],
+    ["−5 °C", "temperature", { value: -5, unit: "C" }],
+    ["-12.5C", "temperature", { value: -12.5, unit: "C" }],
+    ["300 K", "temperature", { value: 300, unit: "K" }],
+    ["650 g", "mass", { value: 650, unit: "g" }],
+    ["1.4 kg", "mass", { value: 1.4, unit: "kg" }],
+    ["1 lb 4 oz", "mass", { value: 20, unit: "oz" }],
+    ["1lb4oz", "mass", { value: 20, unit: "oz" }],
+    ["2 lbs", "mass", { value: 2, unit: "lb" }],
+    ["120 mL", "volume", { value: 120, unit: "mL" }],
+    ["4 fl oz", "volume", { value: 4, unit: "floz" }],
+    ["4.5 floz", "volume", { value: 4.5, unit: "floz" }],
+  ] as const)("%s", (text, kind, expected) => {
+    expect(parseQuantity(text, kind, "kPa")).toEqual(expected);
+  });
+
+  it("a bare number takes the default unit", () => {
+    expect(parseQuantity("180", "pressure", "psi")).toEqual({ value: 180, unit: "psi" });
+    expect(parseQuantity(" 24 ", "temperature", "C")).toEqual({ value: 24, unit: "C" });
+  });
+
+  it("sums a compound mass in its smaller unit, consistent with the separate conversions (NIST SP 811 factors)", () => {
+    const parsed = parseQuantity("2 kg 300 g", "mass", "g");
+    expect(parsed).toEqual({ value: 2300, unit: "g" });
+    const pounds = parseQuantity("1 lb 8 oz", "mass", "g");
+    if (!("value" in pounds)) throw new Error(pounds.error);
+    expect(massToG(pounds.value, "oz")).toBeCloseTo(massToG(1.5, "lb"), 9);
+  });
+
+  it.each([
+    ["", "pressure", /Enter a pressure/],
+    ["abc", "pressure", /Could not read “abc” as a pressure/],
+    ["32 furlongs", "pressure", /Could not read/],
+    ["75 F", "pressure", /is a temperature unit, not a pressure unit/],
+    ["32 psi 4", "pressure", /Could not read/],
+    ["30 psi 2 bar", "pressure", /Could not read/],
+    ["4 oz 1 lb", "mass", /Could not read/],
+    ["1 lb 4", "mass", /Could not read/],
+    ["1 lb -4 oz", "mass", /Could not read/],
+  ] as const)("refuses %j with a helpful message", (text, kind, message) => {
+    const parsed = parseQuantity(text, kind, kind === "mass" ? "g" : "psi");
+    expect(parsed).toHaveProperty("error");
+    if ("error" in parsed) expect(parsed.error).toMatch(message);
+  });
+
+  it("never throws on any text", () => {
+    fc.assert(
+      fc.property(
+        fc.string(),
+        fc.constantFrom("pressure", "temperature", "mass", "volume" as const),
+        (text, kind) => {
+          const parsed = parseQuantity(text, kind, "psi");
+          if ("value" in parsed) expect(Number.isFinite(parsed.value)).toBe(true);
+        },
+      ),
+      { numRuns: 3000 },
+    );
+  });
+});
+
+describe("format then parse gives the value back to the shown precision", () => {
+  it("pressure", () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0, max: 5000, noNaN: true }),
+        fc.constantFrom("kPa", "bar", "MPa", "psi" as const),
+        (kpa, unit) => {
+          const parsed = parseQuantity(formatPressure(kpa, unit), "pressure", "kPa");
+          if (!("value" in parsed)) throw new Error(parsed.error);
+          expect(parsed.unit).toBe(unit);
+          expect(Math.abs(pressureToKpa(parsed.value, unit) - kpa)).toBeLessThanOrEqual(
+            pressureToKpa(0.5, unit) + 1e-9,
+          );
+        },
+      ),
+    );
+  });
+
+  it("temperature", () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: -60, max: 150, noNaN: true }),
+        fc.constantFrom("C", "F", "K" as const),
+        (c, unit) => {
+          const parsed = parseQuantity(formatTemperature(c, unit), "temperature", "C");
+          if (!("value" in parsed)) throw new Error(parsed.error);
+          expect(
+            Math.abs(temperatureToC(parsed.value, parsed.unit as "C" | "F" | "K") - c),
+          ).toBeLessThanOrEqual(0.05 + 1e-9);
+        },
+      ),
+    );
+  });
+
+  it("mass and volume", () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0, max: 5000, noNaN: true }),
+        fc.constantFrom("g", "kg", "oz", "lb" as const),
+        (g, unit) => {
+          const parsed = parseQuantity(formatMass(g, unit), "mass", "g");
+          if (!("value" in parsed)) throw new Error(parsed.error);
+          expect(Math.abs(massToG(parsed.value, unit) - g)).toBeLessThanOrEqual(
+            massToG(unit === "g" ? 0.5 : unit === "oz" ? 0.05 : 0.005, unit) + 1e-9,
+          );
+        },
+      ),
+    );
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0, max: 1000, noNaN: true }),
+        fc.constantFrom("mL", "floz" as const),
+        (ml, unit) => {
+          const parsed = parseQuantity(formatVolume(ml, unit), "volume", "mL");
+          if (!("value" in parsed)) throw new Error(parsed.error);
+          expect(Math.abs(volumeToMl(parsed.value, unit) - ml)).toBeLessThanOrEqual(
+            volumeToMl(unit === "mL" ? 0.5 : 0.05, unit) + 1e-9,
+          );
+        },
+      ),
+    );
+  });
+});
