@@ -1,0 +1,27 @@
+import "server-only";
+import { getModels } from "@/models";
+import { DEFAULT_PART_OIL_ALLOWANCES_ML, REPLACED_PART_IDS, type ReplacedPartId } from "@/lib/service/oil";
+
+export type AllowancesMl = Record<ReplacedPartId, number | null>;
+
+/** The shop's figures where it set them, the defaults from lib/service elsewhere. */
+export async function getPartOilAllowances({ shopId }: { shopId: number }): Promise<AllowancesMl> {
+  const rows = await getModels().PartOilAllowance.findAll({ where: { shopId }, raw: true });
+  const out: AllowancesMl = { ...DEFAULT_PART_OIL_ALLOWANCES_ML };
+  for (const r of rows) out[r.part] = r.allowanceMl;
+  return out;
+}
+
+export async function setPartOilAllowances({ shopId, allowancesMl }: { shopId: number; allowancesMl: Partial<AllowancesMl> }): Promise<AllowancesMl> {
+  const { PartOilAllowance, sequelize } = getModels();
+  await sequelize.transaction(async (transaction) => {
+    for (const part of REPLACED_PART_IDS) {
+      const value = allowancesMl[part];
+      if (value === undefined) continue;
+      const allowanceMl = value === null ? null : Math.round(value);
+      const [row, created] = await PartOilAllowance.findOrCreate({ where: { shopId, part }, defaults: { shopId, part, allowanceMl }, transaction });
+      if (!created) await row.update({ allowanceMl }, { transaction });
+    }
+  });
+  return getPartOilAllowances({ shopId });
+}

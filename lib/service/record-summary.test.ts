@@ -1,0 +1,82 @@
+import { describe, expect, it } from "vitest";
+import { summariseServiceRecord } from "./record-summary";
+
+// 1 inHg = 3.386389 kPa (NIST SP 811, App. B).
+const KPA_PER_INHG = 3.386389;
+
+describe("summariseServiceRecord", () => {
+  it("reports a recovered mass a quarter over the label as an overcharge of that size (SAE J2788/J2843 95 % recovery; ±15 g accuracy)", () => {
+    const s = summariseServiceRecord({ refrigerant: "R-134a", labelChargeG: 800, recoveredG: 1000 });
+    expect(s.recovered?.verdict).toBe("over");
+    expect(s.recovered?.deltaG).toBe(1000 - 800);
+    expect(s.recovered?.deltaPct).toBeCloseTo(((1000 - 800) / 800) * 100, 6);
+    expect(s.recovered?.sentence).toMatch(/overcharge/);
+  });
+
+  it("asks to add back the oil the recovery machine drained (US Army TM 5-3810-307-24-1-2 ch. 9)", () => {
+    const drainedMl = 45;
+    const s = summariseServiceRecord({ refrigerant: "R-134a", oilDrainedMl: drainedMl });
+    expect(s.addBack?.totalMl).toBe(drainedMl);
+    expect(s.addBack?.complete).toBe(true);
+  });
+
+  it("adds the shop's own allowance for a replaced part (common practice; shop-edited figure)", () => {
+    const s = summariseServiceRecord(
+      { refrigerant: "R-134a", oilDrainedMl: 20, partsReplaced: [{ part: "receiver_drier" }] },
+      { allowancesMl: { receiver_drier: 25 } },
+    );
+    expect(s.addBack?.totalMl).toBe(20 + 25);
+  });
+
+  it("uses the pulled-oil estimate when oil left with liquid (common practice: about 4 % oil in circulating refrigerant)", () => {
+    const recoveredG = 1500;
+    const s = summariseServiceRecord({ refrigerant: "R-134a", recoveredG, oilPulled: true, oilDrainedMl: 20 });
+    const expectedMl = (recoveredG * 0.04) / 0.99; // PAG about 0.99 g/mL, from memory
+    expect(s.pulledOil?.oilMl).toBeCloseTo(expectedMl, 6);
+    expect(s.pulledOil?.sumpComparison).toBe("about_a_sump"); // 60–90 mL sump, common practice
+    expect(s.addBack?.totalMl).toBeCloseTo(expectedMl, 6);
+    expect(summariseServiceRecord({ refrigerant: "R-134a", recoveredG, oilPulled: false, oilDrainedMl: 20 }).pulledOil).toBeNull();
+  });
+
+  it("flags a charge 20 g off target as outside and 10 g off as inside the ½ oz SAE J2843 accuracy", () => {
+    const off20 = summariseServiceRecord({ refrigerant: "R-1234yf", targetG: 650, chargedG: 670 });
+    const off10 = summariseServiceRecord({ refrigerant: "R-1234yf", targetG: 650, chargedG: 640 });
+    expect(off20.charge?.within).toBe(false);
+    expect(off10.charge?.within).toBe(true);
+    expect(off20.charge?.source).toMatch(/J2843/);
+  });
+
+  it("takes the label as the target when none is typed, and the R-134a accuracy is marked from memory (SAE J2788)", () => {
+    const s = summariseServiceRecord({ refrigerant: "R-134a", labelChargeG: 700, chargedG: 705 });
+    expect(s.target?.targetG).toBe(700);
+    expect(s.charge?.within).toBe(true);
+    expect(s.charge?.source).toMatch(/from memory/);
+  });
+
+  it("fails a vacuum hold that loses more than 2 inHg in 5 minutes and passes one that loses 1 (US Army TM 5-2420-230-24-1 field practice)", () => {
+    const startKpaAbs = 2.5;
+    const fail = summariseServiceRecord({ refrigerant: "R-134a", holdStartKpaAbs: startKpaAbs, holdEndKpaAbs: startKpaAbs + 2.5 * KPA_PER_INHG, holdMinutes: 5 });
+    const pass = summariseServiceRecord({ refrigerant: "R-134a", holdStartKpaAbs: startKpaAbs, holdEndKpaAbs: startKpaAbs + 1 * KPA_PER_INHG, holdMinutes: 5 });
+    expect(fail.hold?.verdict).toBe("fail");
+    expect(pass.hold?.verdict).toBe("pass");
+  });
+
+  it("compares the oil added with what the record asks for", () => {
+    const s = summariseServiceRecord({ refrigerant: "R-134a", oilDrainedMl: 40, oilAddedMl: 70 });
+    expect(s.oilAddedDeltaMl).toBe(30);
+    expect(s.oilAddedSentence).toMatch(/too much/);
+  });
+
+  it("turns an impossible value into a problem line instead of throwing", () => {
+    const s = summariseServiceRecord({ refrigerant: "R-134a", oilDrainedMl: -5, holdStartKpaAbs: 3, holdEndKpaAbs: 4, holdMinutes: 0 });
+    expect(s.addBack).toBeNull();
+    expect(s.hold).toBeNull();
+    expect(s.problems.length).toBe(2);
+  });
+
+  it("leaves every result empty on an empty record", () => {
+    const s = summariseServiceRecord({ refrigerant: "R-1234yf" });
+    expect([s.recovered, s.addBack, s.charge, s.hold, s.evacuation, s.target]).toEqual([null, null, null, null, null, null]);
+    expect(s.problems).toEqual([]);
+  });
+});

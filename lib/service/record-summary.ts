@@ -1,0 +1,121 @@
+import type { RefrigerantId } from "@/lib/refrigerants";
+import { type ChargeCheck, type RecoveredAgainstLabel, type TargetCharge, chargeWithinTolerance, recoveredAgainstLabel, targetCharge } from "./charge";
+import { formatMillilitres } from "./format";
+import { type OilAddBack, type OilPulledEstimate, type PartOilAllowancesMl, type ReplacedPart, estimateOilPulledMl, oilToAddBack } from "./oil";
+import { type CompressorDrive, type OilWarning, oilSuitsCompressor } from "./oil-type";
+import { type EvacuationCheck, type HoldLimit, type VacuumHoldResult, evaluateEvacuation, vacuumHoldTest } from "./vacuum";
+
+/** What a service record holds so far; every field may still be empty while the work goes on. */
+export interface ServiceRecordValues {
+  refrigerant: RefrigerantId;
+  labelChargeG?: number | null;
+  specChargeG?: number | null;
+  specOilType?: string | null;
+  specTotalOilMl?: number | null;
+  recoveredG?: number | null;
+  oilDrainedMl?: number | null;
+  oilPulled?: boolean;
+  partsReplaced?: readonly ReplacedPart[];
+  deepestKpaAbs?: number | null;
+  holdStartKpaAbs?: number | null;
+  holdEndKpaAbs?: number | null;
+  holdMinutes?: number | null;
+  oilAddedType?: string | null;
+  oilAddedMl?: number | null;
+  targetG?: number | null;
+  chargedG?: number | null;
+}
+
+export interface ServiceRecordContext {
+  altitudeM?: number;
+  allowancesMl?: PartOilAllowancesMl;
+  holdLimit?: HoldLimit;
+  compressorDrive?: CompressorDrive;
+}
+
+export interface ServiceRecordSummary {
+  recovered: RecoveredAgainstLabel | null;
+  pulledOil: OilPulledEstimate | null;
+  addBack: OilAddBack | null;
+  /** oil added against what the record asks for, mL (positive: more than asked) */
+  oilAddedDeltaMl: number | null;
+  oilAddedSentence: string | null;
+  oilWarnings: OilWarning[];
+  target: TargetCharge | null;
+  charge: ChargeCheck | null;
+  evacuation: EvacuationCheck | null;
+  hold: VacuumHoldResult | null;
+  /** values the computations refused (out of range), worded for the technician */
+  problems: string[];
+}
+
+const has = (v: number | null | undefined): v is number => v !== null && v !== undefined && Number.isFinite(v);
+
+/**
+ * Everything the service record works out from what has been typed so far. Never throws:
+ * a value a computation refuses becomes a problem line, so the screen keeps working while
+ * the technician is halfway through a number.
+ */
+export function summariseServiceRecord(v: ServiceRecordValues, ctx: ServiceRecordContext = {}): ServiceRecordSummary {
+  const problems: string[] = [];
+  const attempt = <T>(fn: () => T): T | null => {
+    try {
+      return fn();
+    } catch (error) {
+      problems.push(error instanceof Error ? error.message : String(error));
+      return null;
+    }
+  };
+
+  const recovered =
+    has(v.labelChargeG) && v.labelChargeG > 0 && has(v.recoveredG)
+      ? attempt(() => recoveredAgainstLabel({ labelChargeG: v.labelChargeG!, recoveredChargeG: v.recoveredG!, refrigerant: v.refrigerant }))
+      : null;
+
+  const pulledOil = v.oilPulled && has(v.recoveredG) ? attempt(() => estimateOilPulledMl({ liquidRecoveredG: v.recoveredG! })) : null;
+
+  const addBack = has(v.oilDrainedMl)
+    ? attempt(() =>
+        oilToAddBack({
+          drainedDuringRecoveryMl: v.oilDrainedMl!,
+          replacedParts: v.partsReplaced,
+          allowancesMl: ctx.allowancesMl,
+          estimatedPulledMl: pulledOil?.oilMl,
+          totalSystemOilMl: v.specTotalOilMl ?? undefined,
+        }),
+      )
+    : null;
+
+  let oilAddedDeltaMl: number | null = null;
+  let oilAddedSentence: string | null = null;
+  if (addBack && has(v.oilAddedMl)) {
+    oilAddedDeltaMl = v.oilAddedMl - addBack.totalMl;
+    // Within 5 mL is as close as a graduated oil injector reads (common practice).
+    oilAddedSentence =
+      Math.abs(oilAddedDeltaMl) <= 5
+        ? `Added ${formatMillilitres(v.oilAddedMl)}: matches the ${formatMillilitres(addBack.totalMl)} the record asks for.`
+        : `Added ${formatMillilitres(v.oilAddedMl)} against ${formatMillilitres(addBack.totalMl)} asked for: ${formatMillilitres(oilAddedDeltaMl)} ${oilAddedDeltaMl > 0 ? "too much" : "short"}.`;
+  }
+
+  const oilWarnings = v.oilAddedType?.trim()
+    ? oilSuitsCompressor({
+        compressorDrive: ctx.compressorDrive ?? "belt",
+        oilAdded: v.oilAddedType,
+        specOilType: v.specOilType ?? undefined,
+        refrigerant: v.refrigerant,
+      }).warnings
+    : [];
+
+  const target = attempt(() => targetCharge({ labelChargeG: v.labelChargeG, specChargeG: v.specChargeG, refrigerant: v.refrigerant }));
+  const targetG = has(v.targetG) && v.targetG > 0 ? v.targetG : (target?.targetG ?? null);
+  const charge =
+    has(targetG) && has(v.chargedG) ? attempt(() => chargeWithinTolerance({ targetG, chargedG: v.chargedG!, refrigerant: v.refrigerant })) : null;
+
+  const evacuation = has(v.deepestKpaAbs) ? attempt(() => evaluateEvacuation({ deepestKpaAbs: v.deepestKpaAbs!, altitudeM: ctx.altitudeM })) : null;
+  const hold =
+    has(v.holdStartKpaAbs) && has(v.holdEndKpaAbs) && has(v.holdMinutes)
+      ? attempt(() => vacuumHoldTest({ startKpaAbs: v.holdStartKpaAbs!, endKpaAbs: v.holdEndKpaAbs!, minutes: v.holdMinutes!, limit: ctx.holdLimit }))
+      : null;
+
+  return { recovered, pulledOil, addBack, oilAddedDeltaMl, oilAddedSentence, oilWarnings, target, charge, evacuation, hold, problems };
+}
