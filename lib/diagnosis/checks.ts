@@ -34,9 +34,31 @@ export interface CheckDefinition {
   outcomes: (ctx: CheckContext) => ObservationId[][];
 }
 
-const grades = (group: ReadingGroup): ObservationId[][] => READING_GRADES[group].map((grade) => [`${group}:${grade}` as ObservationId]);
-const either = (a: SymptomId, b: SymptomId): ObservationId[][] => [[`symptom:${a}`], [`symptom:${b}`]];
+const GRADE_OUTCOMES = new Map<ReadingGroup, ObservationId[][]>();
+const grades = (group: ReadingGroup): ObservationId[][] => {
+  let outcomes = GRADE_OUTCOMES.get(group);
+  if (!outcomes) {
+    outcomes = READING_GRADES[group].map((grade) => [`${group}:${grade}` as ObservationId]);
+    GRADE_OUTCOMES.set(group, outcomes);
+  }
+  return outcomes;
+};
+const BOTH_SIDES: ObservationId[][] = grades("high_side").flatMap((h) => grades("low_side").map((l) => [...h, ...l]));
+const EITHER = new Map<string, ObservationId[][]>();
+const either = (a: SymptomId, b: SymptomId): ObservationId[][] => {
+  const key = `${a}|${b}`;
+  let outcomes = EITHER.get(key);
+  if (!outcomes) {
+    outcomes = [[`symptom:${a}`], [`symptom:${b}`]];
+    EITHER.set(key, outcomes);
+  }
+  return outcomes;
+};
 const neither = (ctx: CheckContext, ...ids: SymptomId[]) => ids.every((id) => !ctx.symptoms.has(id));
+
+const IDENTIFIER_OUTCOMES: ObservationId[][] = [["purity:fail"], ["purity:pass", "air:none"], ["purity:pass", "air:some"], ["purity:pass", "air:high"]];
+// An orifice-tube evaporator floods into the accumulator, so "near zero" is not a separate result there.
+const ORIFICE_SUPERHEAT_OUTCOMES: ObservationId[][] = [["superheat:normal"], ["superheat:high"], ["superheat:very_high"]];
 
 /** Ordered cheapest and least intrusive first: on a tie the earlier check wins. */
 export const CHECKS: readonly CheckDefinition[] = [
@@ -50,7 +72,7 @@ export const CHECKS: readonly CheckDefinition[] = [
     id: "identify_refrigerant",
     instruction: "Connect a refrigerant identifier (SAE J2912 type) to the low-side port and record purity and air percentages before connecting any recovery machine.",
     available: (ctx) => ctx.input.identifierPurityPct === undefined,
-    outcomes: () => [["purity:fail"], ["purity:pass", "air:none"], ["purity:pass", "air:some"], ["purity:pass", "air:high"]],
+    outcomes: () => IDENTIFIER_OUTCOMES,
   },
   {
     id: "condenser_fan",
@@ -68,11 +90,7 @@ export const CHECKS: readonly CheckDefinition[] = [
     id: "running_pressures",
     instruction: "Connect the gauges and run at the usual test conditions (engine warm, about 1,500 rpm, A/C max, blower high) for 5–10 minutes, then read the high and low side.",
     available: (ctx) => !ctx.mixed && (ctx.input.highKpaGauge === undefined || ctx.input.lowKpaGauge === undefined),
-    outcomes: (ctx) => {
-      const high = ctx.input.highKpaGauge === undefined ? grades("high_side") : [[]];
-      const low = ctx.input.lowKpaGauge === undefined ? grades("low_side") : [[]];
-      return high.flatMap((h) => low.map((l) => [...h, ...l]));
-    },
+    outcomes: (ctx) => (ctx.input.highKpaGauge === undefined ? (ctx.input.lowKpaGauge === undefined ? BOTH_SIDES : grades("high_side")) : grades("low_side")),
   },
   {
     id: "liquid_line_temperature",
@@ -84,7 +102,7 @@ export const CHECKS: readonly CheckDefinition[] = [
     id: "suction_line_temperature",
     instruction: "Clamp a contact thermometer on the suction line at the evaporator outlet and read it together with the low side, to work out the superheat.",
     available: (ctx) => !ctx.mixed && ctx.input.suctionLineC === undefined,
-    outcomes: (ctx) => (ctx.input.expansionDevice === "txv" ? grades("superheat") : [["superheat:normal"], ["superheat:high"], ["superheat:very_high"]]),
+    outcomes: (ctx) => (ctx.input.expansionDevice === "txv" ? grades("superheat") : ORIFICE_SUPERHEAT_OUTCOMES),
   },
   {
     id: "condenser_water_spray",

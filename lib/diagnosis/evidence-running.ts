@@ -1,4 +1,6 @@
-import { expectedBands, refrigerantInfo, saturationTemperature, SaturationRangeError } from "@/lib/refrigerants";
+import { expectedBands, refrigerantInfo } from "@/lib/refrigerants";
+import { CONDENSING_ABOVE_AMBIENT_K, HUMIDITY_SHIFT_MAX_K } from "@/lib/refrigerants/expected-bands";
+import { saturationTemperatureOrNull as saturationOrNull, tempInTable } from "./saturation-guard";
 import type { Extraction, SaturationBand } from "./evidence-types";
 import { degC, kelvin, kpaGauge, plain } from "./format";
 import type { DiagnosisInput } from "./schema";
@@ -14,17 +16,12 @@ const LIFT_CLOSE_MARGIN_K = 5;
 const FALLBACK_CONDENSING_OVER_AMBIENT_K = { min: 14, max: 30 } as const;
 const FALLBACK_EVAPORATING_C = { min: -4, max: 8 } as const;
 
-function saturationOrNull(refrigerant: DiagnosisInput["refrigerant"], pressureKpaAbs: number): number | null {
-  try {
-    return saturationTemperature(refrigerant, pressureKpaAbs);
-  } catch (error) {
-    if (error instanceof SaturationRangeError) return null;
-    throw error;
-  }
-}
-
 function bandsFor(input: DiagnosisInput, barometricKpa: number): { high: SaturationBand; low: SaturationBand; fromTables: boolean } {
-  const bands = expectedBands({ refrigerant: input.refrigerant, ambientC: input.ambientC, relativeHumidityPct: input.relativeHumidityPct });
+  // Skip the call when the band would leave the table (R-744 above ~0 °C ambient): it would only return null.
+  const hottestC = input.ambientC + CONDENSING_ABOVE_AMBIENT_K.max + HUMIDITY_SHIFT_MAX_K;
+  const bands = tempInTable(input.refrigerant, hottestC)
+    ? expectedBands({ refrigerant: input.refrigerant, ambientC: input.ambientC, relativeHumidityPct: input.relativeHumidityPct })
+    : null;
   if (bands) {
     const gauge = (b: typeof bands.high): SaturationBand => ({
       minSaturationC: b.minSaturationC,

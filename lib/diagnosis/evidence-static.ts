@@ -1,5 +1,6 @@
-import { saturationPressure, SaturationRangeError, staticCheck } from "@/lib/refrigerants";
+import { staticCheck } from "@/lib/refrigerants";
 import type { Extraction } from "./evidence-types";
+import { saturationPressureOrNull } from "./saturation-guard";
 import { degC, kpa, kpaGauge } from "./format";
 import type { DiagnosisInput } from "./schema";
 
@@ -12,25 +13,20 @@ const EMPTY_BELOW_FRACTION_OF_SATURATION = 0.5;
 // (from memory; the SAE J2211 container tolerance table itself was not available).
 const STATIC_EXCESS_KPA = { slight: 35, high: 70, veryHigh: 140 } as const;
 
-function saturationAtAmbientOrNull(input: DiagnosisInput): number | null {
-  try {
-    return saturationPressure(input.refrigerant, input.ambientC);
-  } catch (error) {
-    if (error instanceof SaturationRangeError) return null;
-    throw error;
-  }
-}
-
 /** Engine-off static pressure against saturation at ambient: empty, no liquid, or how much excess. */
 export function addStaticEvidence(input: DiagnosisInput, barometricKpa: number, out: Extraction): void {
   if (input.staticKpaGauge === undefined) return;
   const staticKpaAbs = input.staticKpaGauge + barometricKpa;
   out.computed.staticKpaAbs = staticKpaAbs;
-  const saturationKpaAbs = saturationAtAmbientOrNull(input);
+  const saturationKpaAbs = saturationPressureOrNull(input.refrigerant, input.ambientC);
   const emptyBelowKpaAbs = Math.min(EMPTY_BELOW_KPA_GAUGE + barometricKpa, saturationKpaAbs === null ? Infinity : saturationKpaAbs * EMPTY_BELOW_FRACTION_OF_SATURATION);
   if (staticKpaAbs < emptyBelowKpaAbs) {
     out.observedGroups.add("static");
     out.observations.push({ id: "static:empty", text: `Static pressure ${kpaGauge(input.staticKpaGauge)} at ${degC(input.ambientC)}: the system is empty or nearly so.` });
+    return;
+  }
+  if (saturationKpaAbs === null) {
+    out.notes.push(`Static pressure check not possible: ${degC(input.ambientC)} is outside the ${input.refrigerant} saturation table${input.refrigerant === "R-744" ? " (CO2 has no liquid above about 31 °C)" : ""}.`);
     return;
   }
   const check = staticCheck({ refrigerant: input.refrigerant, staticKpaAbs, ambientC: input.ambientC });

@@ -15,3 +15,13 @@ describe("evidence number formatting", () => {
     expect(grams(1124.6)).toBe("1,125 g");
   });
 });
+
+describe("evidence number formatting edge cases", () => {
+  it("agrees with Number.prototype.toFixed on ordinary values and pads fractions", () => {
+    for (const value of [0, 0.05, 1.04, 12.5, 999.96, 1000, 123456.7, 1234567]) {
+      expect(degC(value).replace(/,/g, "")).toBe(`${value.toFixed(1)} °C`);
+    }
+    expect(grams(1000000)).toBe("1,000,000 g");
+    expect(grams(1001)).toBe("1,001 g");
+  });
+});

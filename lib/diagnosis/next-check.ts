@@ -1,7 +1,7 @@
 import { CAUSE_SHORT_NAMES, type CauseId } from "./causes";
 import { CHECKS, type CheckContext, type CheckId } from "./checks";
 import type { ObservationId } from "./observations";
-import { weightOf } from "./scoring";
+import { causeIndex, outcomeVector } from "./scoring";
 
 export interface NextCheck {
   check: CheckId | "confirm";
@@ -34,27 +34,27 @@ export const CONFIRMING_STEP: Record<CauseId, string> = {
   no_refrigerant_fault: "Check the cabin side: blend-door and recirculation operation, blower speed, cabin filter and heater-valve shut-off.",
 };
 
-function outcomeWeight(outcome: readonly ObservationId[], cause: CauseId): number {
-  let sum = 0;
-  for (const id of outcome) sum += weightOf(id, cause);
-  return sum;
-}
 
 /**
  * Expected |change| in (log-odds A − log-odds B) over a check's outcomes. An outcome's chance under a
  * cause is taken ∝ exp(its weight) (a likelihood ratio against an even background), averaged over A and B.
  */
 export function expectedShift(outcomes: readonly (readonly ObservationId[])[], a: CauseId, b: CauseId): number {
-  const weightsA = outcomes.map((o) => outcomeWeight(o, a));
-  const weightsB = outcomes.map((o) => outcomeWeight(o, b));
-  const normA = weightsA.reduce((s, w) => s + Math.exp(w), 0);
-  const normB = weightsB.reduce((s, w) => s + Math.exp(w), 0);
+  const ia = causeIndex(a);
+  const ib = causeIndex(b);
+  let normA = 0;
+  let normB = 0;
+  for (const outcome of outcomes) {
+    const vector = outcomeVector(outcome);
+    normA += Math.exp(vector[ia] ?? 0);
+    normB += Math.exp(vector[ib] ?? 0);
+  }
   let expected = 0;
-  for (let i = 0; i < outcomes.length; i++) {
-    const wa = weightsA[i] ?? 0;
-    const wb = weightsB[i] ?? 0;
-    const chance = 0.5 * (Math.exp(wa) / normA) + 0.5 * (Math.exp(wb) / normB);
-    expected += chance * Math.abs(wa - wb);
+  for (const outcome of outcomes) {
+    const vector = outcomeVector(outcome);
+    const wa = vector[ia] ?? 0;
+    const wb = vector[ib] ?? 0;
+    expected += (0.5 * (Math.exp(wa) / normA) + 0.5 * (Math.exp(wb) / normB)) * Math.abs(wa - wb);
   }
   return expected;
 }

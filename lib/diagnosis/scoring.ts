@@ -16,14 +16,38 @@ export interface CauseScore {
   items: EvidenceItem[];
 }
 
-const ROWS_BY_OBSERVATION: ReadonlyMap<ObservationId, LikelihoodRow> = new Map(LIKELIHOOD_TABLE.map((row) => [row.observation, row]));
+const CAUSE_INDEX = new Map<CauseId, number>(CAUSE_IDS.map((cause, i) => [cause, i]));
+/** The table as dense weight vectors in CAUSE_IDS order, for the hot loop. */
+const WEIGHT_VECTORS: ReadonlyMap<ObservationId, Float64Array> = new Map(
+  LIKELIHOOD_TABLE.map((row: LikelihoodRow) => [row.observation, Float64Array.from(CAUSE_IDS, (cause) => row.weights[cause] ?? 0)]),
+);
 
 export function weightOf(observation: ObservationId, cause: CauseId): number {
-  return ROWS_BY_OBSERVATION.get(observation)?.weights[cause] ?? 0;
+  return WEIGHT_VECTORS.get(observation)?.[CAUSE_INDEX.get(cause) ?? -1] ?? 0;
+}
+
+export function causeIndex(cause: CauseId): number {
+  return CAUSE_INDEX.get(cause) ?? -1;
+}
+
+const OUTCOME_VECTORS = new WeakMap<readonly ObservationId[], Float64Array>();
+
+/** Summed weights of a set of observations, per cause in CAUSE_IDS order; memoised per array. */
+export function outcomeVector(outcome: readonly ObservationId[]): Float64Array {
+  let vector = OUTCOME_VECTORS.get(outcome);
+  if (!vector) {
+    vector = new Float64Array(CAUSE_IDS.length);
+    for (const id of outcome) {
+      const weights = WEIGHT_VECTORS.get(id);
+      if (weights) for (let i = 0; i < vector.length; i++) vector[i] = (vector[i] ?? 0) + (weights[i] ?? 0);
+    }
+    OUTCOME_VECTORS.set(outcome, vector);
+  }
+  return vector;
 }
 
 /** Per cause, the largest |weight| each key reading group can give: what a missing reading costs. */
-const KEY_POTENTIAL: Record<CauseId, Map<ReadingGroup, number>> = Object.fromEntries(
+const KEY_POTENTIAL: Record<CauseId, [ReadingGroup, number][]> = Object.fromEntries(
   CAUSE_IDS.map((cause) => {
     const potential = new Map<ReadingGroup, number>();
     for (const row of LIKELIHOOD_TABLE) {
@@ -31,9 +55,9 @@ const KEY_POTENTIAL: Record<CauseId, Map<ReadingGroup, number>> = Object.fromEnt
       if (!KEY_READING_GROUPS.includes(group)) continue;
       potential.set(group, Math.max(potential.get(group) ?? 0, Math.abs(row.weights[cause] ?? 0)));
     }
-    return [cause, potential];
+    return [cause, [...potential.entries()]];
   }),
-) as Record<CauseId, Map<ReadingGroup, number>>;
+) as Record<CauseId, [ReadingGroup, number][]>;
 
 /** Share of this cause's possible key-reading evidence that was actually measured, 0–1. */
 export function readingCoverage(cause: CauseId, observedGroups: ReadonlySet<ReadingGroup>): number {
@@ -52,11 +76,12 @@ export const logistic = (logOdds: number) => 1 / (1 + Math.exp(-logOdds));
 export function scoreCauses(observations: readonly Observation[], gates: readonly RankingGate[] = RANKING_GATES): CauseScore[] {
   const scores = CAUSE_IDS.map((cause): CauseScore => ({ cause, logOdds: CAUSE_PRIORS[cause].logOdds, items: [] }));
   for (const observation of observations) {
-    const row = ROWS_BY_OBSERVATION.get(observation.id);
-    if (!row) continue;
-    for (const score of scores) {
-      const weight = row.weights[score.cause];
-      if (weight === undefined || weight === 0) continue;
+    const weights = WEIGHT_VECTORS.get(observation.id);
+    if (!weights) continue;
+    for (let i = 0; i < scores.length; i++) {
+      const weight = weights[i] ?? 0;
+      const score = scores[i];
+      if (weight === 0 || !score) continue;
       score.logOdds += weight;
       score.items.push({ observation: observation.id, text: observation.text, weight });
     }
