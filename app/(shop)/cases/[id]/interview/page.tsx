@@ -1,0 +1,39 @@
+import type { Metadata } from "next";
+import { notFound, redirect } from "next/navigation";
+import { requireUser } from "@/lib/auth/guard";
+import { getCase } from "@/lib/server/cases";
+import { getShop } from "@/lib/server/shops";
+import { isAppError } from "@/lib/errors";
+import { InterviewBoot } from "@/components/interview/interview-boot";
+import type { SavedInterview } from "@/machines/interview-view";
+
+export const metadata: Metadata = { title: "Interview" };
+
+export default async function InterviewPage({ params }: { params: Promise<{ id: string }> }) {
+  const user = await requireUser("cases:write");
+  const caseId = Number((await params).id);
+  if (!Number.isInteger(caseId) || caseId <= 0) notFound();
+  const [detail, shop] = await Promise.all([
+    getCase({ shopId: user.shopId, caseId }).catch((error) => {
+      if (isAppError(error) && error.status === 404) notFound();
+      throw error;
+    }),
+    getShop({ shopId: user.shopId }),
+  ]);
+  const editable = detail.status === "draft" || detail.status === "sent_back";
+  const mayEdit = detail.technicianId === user.id || user.role === "owner" || user.role === "senior";
+  if (!editable || !mayEdit) redirect(`/cases/${caseId}`);
+
+  const saved = (detail.answers ?? {}) as Partial<SavedInterview>;
+  const record: Partial<SavedInterview> = { ...saved, step: (detail.interviewStep ?? saved.step) as SavedInterview["step"] };
+  return (
+    <InterviewBoot
+      caseId={caseId}
+      version={detail.version}
+      serverRecord={record}
+      shop={{ altitudeM: shop.altitudeM, units: shop.units }}
+      isApprentice={user.role === "apprentice"}
+      heading={`Case ${caseId} · ${detail.vehicle ?? "vehicle"}`}
+    />
+  );
+}

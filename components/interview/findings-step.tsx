@@ -1,0 +1,148 @@
+"use client";
+
+import { useMemo, useState } from "react";
+import { useRouter } from "next/navigation";
+import { CAUSE_IDS, CAUSE_LABELS, diagnose, type CauseId, type DiagnosisInput } from "@/lib/diagnosis";
+import type { Caution as InterviewCaution } from "@/lib/interview/cautions";
+import { apiFetch, ApiError } from "@/lib/queries/api-fetch";
+import { CautionsList, type CautionItem } from "./cautions-list";
+import { SuspectCard } from "./suspect-card";
+import type { SaveStatus } from "./use-autosave";
+
+interface Props {
+  caseId: number;
+  input: DiagnosisInput | null;
+  interviewCautions: InterviewCaution[];
+  isApprentice: boolean;
+  saveStatus: SaveStatus;
+  currentVersion: () => number;
+  onBack: () => void;
+}
+
+export function FindingsStep({ caseId, input, interviewCautions, isApprentice, saveStatus, currentVersion, onBack }: Props) {
+  const router = useRouter();
+  const findings = useMemo(() => (input ? diagnose(input) : null), [input]);
+  const [cause, setCause] = useState<CauseId | "">("");
+  const [notes, setNotes] = useState("");
+  const [error, setError] = useState<string | null>(null);
+  const [pending, setPending] = useState(false);
+
+  if (!findings) {
+    return (
+      <div className="space-y-3">
+        <p>The findings need the refrigerant, the expansion device and the air temperature. Go back and fill those in.</p>
+        <button type="button" className="btn-quiet" onClick={onBack}>
+          Back
+        </button>
+      </div>
+    );
+  }
+
+  const chosen = cause || findings.suspects[0]?.cause || "";
+  const cautions: CautionItem[] = [...interviewCautions];
+  for (const c of findings.cautions) if (!cautions.some((x) => x.id === c.id)) cautions.push({ id: c.id, text: c.text, level: "notice" });
+
+  async function submit(event: React.FormEvent) {
+    event.preventDefault();
+    setError(null);
+    if (saveStatus.kind !== "saved") return setError("Some answers are still waiting to be saved. Submit once they are.");
+    if (!findings) return;
+    setPending(true);
+    try {
+      await apiFetch(`/api/cases/${caseId}/submit`, {
+        method: "POST",
+        body: { baseVersion: currentVersion(), engineVersion: findings.engineVersion, conclusionCause: chosen, conclusionNotes: notes },
+      });
+      router.push(`/cases/${caseId}`);
+      router.refresh();
+    } catch (e) {
+      setError(e instanceof ApiError ? (Object.values(e.fieldErrors ?? {})[0]?.[0] ?? e.message) : "No answer from the server; nothing is lost. Try again.");
+      setPending(false);
+    }
+  }
+
+  return (
+    <div className="space-y-5">
+      <section aria-labelledby="suspects-heading">
+        <h2 id="suspects-heading" className="text-xl font-bold">
+          Likely causes
+        </h2>
+        <ol className="mt-2 space-y-3">
+          {findings.suspects.slice(0, 4).map((s, i) => (
+            <li key={s.cause}>
+              <SuspectCard suspect={s} rank={i + 1} />
+            </li>
+          ))}
+        </ol>
+        {findings.suspects.length > 4 && (
+          <details className="mt-3">
+            <summary className="min-h-touch cursor-pointer font-bold">The other {findings.suspects.length - 4} causes considered</summary>
+            <ol className="mt-2 space-y-3" start={5}>
+              {findings.suspects.slice(4).map((s, i) => (
+                <li key={s.cause}>
+                  <SuspectCard suspect={s} rank={i + 5} />
+                </li>
+              ))}
+            </ol>
+          </details>
+        )}
+      </section>
+
+      <section aria-labelledby="next-check-heading" className="rounded-card border-2 border-glacier-600 bg-glacier-50 p-4">
+        <h2 id="next-check-heading" className="text-xl font-bold text-glacier-900">
+          Next check
+        </h2>
+        <p className="mt-1 text-lg font-bold" data-testid="next-check">
+          {findings.nextCheck.instruction}
+        </p>
+        <p className="mt-1 text-ink-soft">{findings.nextCheck.reason}</p>
+      </section>
+
+      {findings.notes.length > 0 && (
+        <ul className="list-disc space-y-1 pl-5 text-ink-soft">
+          {findings.notes.map((n) => (
+            <li key={n}>{n}</li>
+          ))}
+        </ul>
+      )}
+
+      <CautionsList cautions={cautions} />
+
+      <form onSubmit={submit} noValidate className="space-y-3 rounded-card border-2 border-ink-muted p-4">
+        <h2 className="text-xl font-bold">Your conclusion</h2>
+        <div>
+          <label htmlFor="conclusion-cause" className="field-label">
+            The cause you conclude
+          </label>
+          <select id="conclusion-cause" className="field-input" value={chosen} onChange={(e) => setCause(e.target.value as CauseId)}>
+            {CAUSE_IDS.map((id) => (
+              <option key={id} value={id}>
+                {CAUSE_LABELS[id]}
+              </option>
+            ))}
+          </select>
+        </div>
+        <div>
+          <label htmlFor="conclusion-notes" className="field-label">
+            Why, in a sentence or two
+          </label>
+          <textarea id="conclusion-notes" rows={3} className="field-input py-2" value={notes} onChange={(e) => setNotes(e.target.value)} />
+        </div>
+        {error && (
+          <p role="alert" className="field-error">
+            {error}
+          </p>
+        )}
+        <div className="flex gap-2">
+          <button type="button" className="btn-quiet" onClick={onBack}>
+            Back
+          </button>
+          <button type="submit" className="btn-primary ml-auto flex-1" disabled={pending}>
+            {isApprentice ? "Send to a senior for sign-off" : "Submit the diagnosis"}
+          </button>
+        </div>
+        <p className="text-sm text-ink-soft">Findings engine {findings.engineVersion}</p>
+      </form>
+    </div>
+  );
+}

@@ -1,0 +1,146 @@
+"use client";
+
+import { useCallback, useEffect, useMemo, useRef } from "react";
+import { useMachine } from "@xstate/react";
+import { interviewMachine } from "@/machines/interview";
+import { savedInterviewOf, viewOf, type SavedInterview } from "@/machines/interview-view";
+import type { GroupId } from "@/lib/interview/steps";
+import { CautionsList } from "./cautions-list";
+import { FindingsStep } from "./findings-step";
+import { STEP_COPY } from "./labels";
+import { ProgressStrip } from "./progress-strip";
+import { SaveBanner } from "./save-banner";
+import { StepForm, type StepFormHandle } from "./step-form";
+import { useAutosave } from "./use-autosave";
+import { useUnitPreferences } from "./unit-preferences";
+import type { PhysicsContext } from "./live-physics";
+
+export interface InterviewProps {
+  caseId: number;
+  version: number;
+  record: Partial<SavedInterview>;
+  /** Changes made on this device that the server has not confirmed; they are sent at once. */
+  pendingFromDevice: number;
+  shop: { altitudeM: number; units: "metric" | "imperial" };
+  isApprentice: boolean;
+  heading: string;
+}
+
+export function Interview({ caseId, version, record, pendingFromDevice, shop, isApprentice, heading }: InterviewProps) {
+  const [snapshot, send, actor] = useMachine(interviewMachine, { input: { ...record, shop: { altitudeM: shop.altitudeM } } });
+  const view = viewOf(snapshot);
+  const { answers, drafts, step } = snapshot.context;
+  const { units, setUnit } = useUnitPreferences(shop.units);
+  const autosave = useAutosave({ caseId, initialVersion: version });
+  const formRef = useRef<StepFormHandle>(null);
+  const headingRef = useRef<HTMLHeadingElement>(null);
+
+  useEffect(() => {
+    const initial = savedInterviewOf(actor.getSnapshot().context);
+    if (pendingFromDevice > 0) autosave.queue(initial, { pendingFromEarlier: pendingFromDevice - 1 });
+    else autosave.markSaved(initial);
+    const subscription = actor.subscribe((s) => autosave.queue(savedInterviewOf(s.context)));
+    return () => subscription.unsubscribe();
+    // The actor and the autosave hook live as long as this screen.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [actor]);
+
+  // Put the technician straight into the first field of each new step.
+  const firstRender = useRef(true);
+  useEffect(() => {
+    if (firstRender.current) {
+      firstRender.current = false;
+      return;
+    }
+    const input = document.querySelector<HTMLElement>("#interview-step input[type=text], #interview-step textarea");
+    (input ?? headingRef.current)?.focus();
+  }, [step]);
+
+  const physics: PhysicsContext = useMemo(
+    () => ({
+      refrigerant: answers.system?.refrigerant,
+      expansionDevice: answers.system?.expansionDevice,
+      labelChargeG: answers.system?.labelChargeG,
+      ambientC: answers.conditions?.ambientC,
+      relativeHumidityPct: answers.conditions?.relativeHumidityPct,
+      altitudeM: answers.conditions?.altitudeM ?? shop.altitudeM,
+    }),
+    [answers.system, answers.conditions, shop.altitudeM],
+  );
+
+  const onValues = useCallback((values: Record<string, unknown>) => view.group && send({ type: "ANSWER", group: view.group, values }), [send, view.group]);
+
+  async function next() {
+    if (formRef.current && !(await formRef.current.check())) return;
+    send({ type: "NEXT" });
+  }
+
+  const group: GroupId | null = view.group;
+  const copy = STEP_COPY[step];
+  return (
+    <div className="space-y-4">
+      <div>
+        <p className="text-sm font-bold text-ink-soft">{heading}</p>
+        <ProgressStrip entries={view.progress} onOpen={(target) => send({ type: "GOTO", step: target })} />
+      </div>
+      <SaveBanner status={autosave.status} onReload={() => window.location.reload()} />
+      <section id="interview-step" aria-labelledby="step-heading" className="card space-y-4">
+        <header>
+          <h1 id="step-heading" ref={headingRef} tabIndex={-1} className="text-2xl font-bold outline-none">
+            {copy.title}
+          </h1>
+          <p className="text-ink-soft">{copy.lead}</p>
+        </header>
+        {step !== "findings" && <CautionsList cautions={view.cautions.filter((c) => c.id !== "defer_to_procedure" || step === "complaint")} />}
+        {group && (
+          <form
+            noValidate
+            onSubmit={(e) => {
+              e.preventDefault();
+              void next();
+            }}
+          >
+            <StepForm
+              key={step}
+              ref={formRef}
+              group={group}
+              saved={answers[group] ?? drafts[group]}
+              answers={answers}
+              issues={view.errors[group]}
+              units={units}
+              setUnit={(kind, unit) => setUnit(kind, unit as never)}
+              physics={physics}
+              onValues={onValues}
+            />
+            <div className="sticky bottom-0 -mx-4 mt-6 flex gap-2 border-t border-paper-line bg-paper px-4 py-3">
+              {view.canGoBack && (
+                <button type="button" className="btn-quiet" onClick={() => send({ type: "BACK" })}>
+                  Back
+                </button>
+              )}
+              {view.canSkip && (
+                <button type="button" className="btn-quiet" onClick={() => send({ type: "SKIP" })}>
+                  Skip
+                </button>
+              )}
+              <button type="submit" className="btn-primary ml-auto min-h-glove flex-1 text-lg">
+                Next
+              </button>
+            </div>
+          </form>
+        )}
+        {step === "findings" && (
+          <FindingsStep
+            caseId={caseId}
+            input={view.diagnosisInput}
+            interviewCautions={view.cautions}
+            isApprentice={isApprentice}
+            saveStatus={autosave.status}
+            currentVersion={autosave.currentVersion}
+            onBack={() => send({ type: "BACK" })}
+          />
+        )}
+      </section>
+    </div>
+  );
+}

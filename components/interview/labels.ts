@@ -1,0 +1,69 @@
+import { SYMPTOM_LABELS } from "@/lib/diagnosis";
+import { behaviourSymptomIds, leakMethodChoices, leakPlaceChoices, oilTypeChoices } from "@/lib/interview/choices";
+import type { StepId } from "@/lib/interview/steps";
+import type { ChoiceOption, StepCopy } from "./field-defs";
+
+export const STEP_COPY: Record<StepId, StepCopy> = {
+  complaint: { title: "Complaint", lead: "What the owner says, in their words." },
+  system: { title: "Vehicle system", lead: "From the under-hood label and what you can see." },
+  conditions: { title: "Conditions", lead: "Where and how the readings are taken." },
+  static: { title: "Engine-off pressure", lead: "Engine off for a while, pressures equalised, system at the air temperature." },
+  running: { title: "Running readings", lead: "A/C at maximum, recirculation, blower high, doors open, after 5–10 minutes at a steady engine speed." },
+  behaviour: { title: "What you see and hear", lead: "Tick everything you noticed. Leave it empty if nothing stood out." },
+  leakFinding: { title: "Leak search", lead: "The system has lost its charge: find the leak before anything is run or charged." },
+  identification: { title: "Refrigerant identifier", lead: "Run the identifier before anything goes into the recovery machine." },
+  chargeAudit: { title: "Charge by weight", lead: "If you recovered the charge, what came out and how much oil with it." },
+  recoveryHeld: { title: "Recovery on hold", lead: "This refrigerant must not go into the shop's recovery machine." },
+  findings: { title: "Findings", lead: "The likely causes, ranked, with the evidence for and against each." },
+};
+
+export const SHORT_STEP: Record<StepId, string> = {
+  complaint: "Complaint",
+  system: "System",
+  conditions: "Conditions",
+  static: "Engine off",
+  running: "Running",
+  behaviour: "Behaviour",
+  leakFinding: "Leak",
+  identification: "Identifier",
+  chargeAudit: "Charge",
+  recoveryHeld: "On hold",
+  findings: "Findings",
+};
+
+const OIL_LABELS: Record<(typeof oilTypeChoices)[number], string> = {
+  pag: "PAG",
+  poe: "POE (dielectric)",
+  pao: "PAO",
+  mineral: "Mineral",
+  other: "Other",
+};
+const METHOD_LABELS: Record<(typeof leakMethodChoices)[number], string> = {
+  electronic_detector: "Electronic detector",
+  uv_dye: "UV dye",
+  tracer_gas: "Tracer gas",
+  bubble_solution: "Bubble solution",
+  nitrogen_pressure_hold: "Nitrogen pressure hold",
+  visual_oil_trace: "Oil trace by eye",
+};
+const PLACE_LABELS: Record<(typeof leakPlaceChoices)[number], string> = {
+  compressor_shaft_seal: "Compressor shaft seal",
+  compressor_body: "Compressor body",
+  condenser: "Condenser",
+  evaporator: "Evaporator",
+  hose: "Hose",
+  line_joint: "Line joint or O-ring",
+  service_port: "Service port",
+  accumulator_or_receiver_drier: "Accumulator or receiver-drier",
+  expansion_device: "Orifice tube or TXV",
+  pressure_switch_or_sensor: "Pressure switch or sensor",
+  not_found_yet: "Not found yet",
+};
+
+const options = <T extends string>(values: readonly T[], labels: Record<T, string>): ChoiceOption[] =>
+  values.map((value) => ({ value, label: labels[value] }));
+
+export const OIL_OPTIONS = options(oilTypeChoices, OIL_LABELS);
+export const METHOD_OPTIONS = options(leakMethodChoices, METHOD_LABELS);
+export const PLACE_OPTIONS = options(leakPlaceChoices, PLACE_LABELS);
+export const SYMPTOM_OPTIONS: ChoiceOption[] = behaviourSymptomIds.map((id) => ({ value: id, label: SYMPTOM_LABELS[id] }));

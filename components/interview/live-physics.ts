@@ -1,0 +1,126 @@
+import { saturationTemperature, type RefrigerantId } from "@/lib/refrigerants";
+import { chargeDeviation, staticCheck, subcoolingK, superheatK } from "@/lib/refrigerants/derived";
+import { expectedBands } from "@/lib/refrigerants/expected-bands";
+import { absoluteToGaugeKpa, gaugeToAbsoluteKpa } from "@/lib/units";
+
+export type BandStatus = "inside" | "below" | "above" | "unknown";
+export interface ReadoutLine {
+  text: string;
+  status?: BandStatus;
+  /** Replaces the plain "in range / above range" word when the reading needs its own. */
+  verdict?: string;
+}
+
+export interface PhysicsContext {
+  refrigerant?: RefrigerantId;
+  expansionDevice?: "orifice_tube" | "txv";
+  ambientC?: number;
+  relativeHumidityPct?: number;
+  altitudeM?: number;
+  labelChargeG?: number;
+}
+
+const fmt = (value: number, decimals = 1) => (Math.round(value * 10 ** decimals) / 10 ** decimals).toFixed(decimals);
+const num = (v: unknown): v is number => typeof v === "number" && Number.isFinite(v);
+
+function safely(fn: () => ReadoutLine[]): ReadoutLine[] {
+  try {
+    return fn();
+  } catch (error) {
+    return error instanceof RangeError ? [{ text: error.message, status: "unknown" }] : [];
+  }
+}
+
+function band(value: number, min: number, max: number): BandStatus {
+  return value < min ? "below" : value > max ? "above" : "inside";
+}
+
+/** The physics shown beside each reading as it is typed. Pure: recomputed on every keystroke. */
+export function liveReadouts(group: string, values: Record<string, unknown>, ctx: PhysicsContext): Record<string, ReadoutLine[]> {
+  const { refrigerant, ambientC } = ctx;
+  const at = { altitudeM: ctx.altitudeM };
+  const out: Record<string, ReadoutLine[]> = {};
+  if (!refrigerant) return out;
+
+  if (group === "static" && num(values.staticKpaGauge) && num(ambientC)) {
+    const staticKpaGauge = values.staticKpaGauge;
+    out.staticKpaGauge = safely(() => {
+      const check = staticCheck({ refrigerant, staticKpaAbs: gaugeToAbsoluteKpa(staticKpaGauge, at), ambientC });
+      if (check.kind === "out_of_range") return [{ text: check.message, status: "unknown" }];
+      const satGauge = absoluteToGaugeKpa(check.saturationKpaAbs, at);
+      const lines: ReadoutLine[] = [{ text: `Saturation at ${fmt(ambientC)} °C ambient: ${fmt(satGauge, 0)} kPa gauge` }];
+      if (check.kind === "no_liquid") lines.push({ text: check.message, status: "below", verdict: "" });
+      // 35 kPa: the tolerance the findings engine grades against (thermometer and gauge error; from memory).
+      else lines.push({ text: `Static pressure is ${fmt(Math.abs(check.excessKpa), 0)} kPa ${check.excessKpa >= 0 ? "above" : "below"} saturation`, status: check.excessKpa > 35 ? "above" : "inside", verdict: check.excessKpa > 35 ? "air or another gas is likely present" : "no sign of air" });
+      return lines;
+    });
+  }
+
+  if (group === "running") {
+    const bands = num(ambientC) ? expectedBandsOrNull(refrigerant, ambientC, ctx.relativeHumidityPct) : null;
+    if (num(values.highKpaGauge)) {
+      const high = values.highKpaGauge;
+      out.highKpaGauge = safely(() => {
+        const condensingC = saturationTemperature(refrigerant, gaugeToAbsoluteKpa(high, at));
+        const lines: ReadoutLine[] = [{ text: `Condensing at ${fmt(condensingC)} °C${num(ambientC) ? `, ${fmt(condensingC - ambientC)} K above the air` : ""}` }];
+        if (bands) {
+          const min = absoluteToGaugeKpa(bands.high.minKpaAbs, at);
+          const max = absoluteToGaugeKpa(bands.high.maxKpaAbs, at);
+          lines.push({ text: `Expected ${fmt(min, 0)}–${fmt(max, 0)} kPa gauge for this air temperature`, status: band(high, min, max) });
+        }
+        return lines;
+      });
+    }
+    if (num(values.lowKpaGauge)) {
+      const low = values.lowKpaGauge;
+      out.lowKpaGauge = safely(() => {
+        const evaporatingC = saturationTemperature(refrigerant, gaugeToAbsoluteKpa(low, at));
+        const lines: ReadoutLine[] = [{ text: `Evaporating at ${fmt(evaporatingC)} °C` }];
+        if (bands) {
+          const min = absoluteToGaugeKpa(bands.low.minKpaAbs, at);
+          const max = absoluteToGaugeKpa(bands.low.maxKpaAbs, at);
+          lines.push({ text: `Expected ${fmt(min, 0)}–${fmt(max, 0)} kPa gauge`, status: band(low, min, max) });
+        }
+        return lines;
+      });
+    }
+    if (num(values.highKpaGauge) && num(values.liquidLineC)) {
+      const highKpaAbs = gaugeToAbsoluteKpa(values.highKpaGauge, at);
+      const liquidLineC = values.liquidLineC;
+      out.liquidLineC = safely(() => {
+        const sc = subcoolingK({ refrigerant, highKpaAbs, liquidLineC });
+        // TXV systems typically hold 3–8 K (5–15 °F) of subcooling: common practice.
+        const typical = ctx.expansionDevice === "txv" ? { text: " (typical for a TXV system 3–8 K)", status: band(sc, 3, 8) } : { text: "", status: undefined };
+        return [{ text: `Subcooling ${fmt(sc)} K${typical.text}`, status: typical.status }];
+      });
+    }
+    if (num(values.lowKpaGauge) && num(values.suctionLineC)) {
+      const lowKpaAbs = gaugeToAbsoluteKpa(values.lowKpaGauge, at);
+      const suctionLineC = values.suctionLineC;
+      out.suctionLineC = safely(() => {
+        const sh = superheatK({ refrigerant, lowKpaAbs, suctionLineC });
+        const typical = ctx.expansionDevice === "txv" ? { text: " (typical for a TXV system 3–8 K)", status: band(sh, 3, 8) } : { text: " (an orifice-tube evaporator runs near 0 K)", status: undefined };
+        return [{ text: `Superheat ${fmt(sh)} K${typical.text}`, status: typical.status }];
+      });
+    }
+    if (num(values.ventC) && num(ambientC)) {
+      out.ventC = [{ text: `${fmt(ambientC - values.ventC)} K below the air temperature` }];
+    }
+  }
+
+  if (group === "chargeAudit" && num(values.recoveredChargeG) && num(ctx.labelChargeG)) {
+    const { deltaG, deltaPct } = chargeDeviation({ labelChargeG: ctx.labelChargeG, recoveredChargeG: values.recoveredChargeG });
+    // Recovery machines must remove at least 95 % (SAE J2788), so up to 5 % short is not evidence of a leak.
+    const status: BandStatus = deltaPct > 5 ? "above" : deltaPct < -5 ? "below" : "inside";
+    out.recoveredChargeG = [{ text: `${deltaG >= 0 ? "+" : "−"}${fmt(Math.abs(deltaG), 0)} g (${deltaPct >= 0 ? "+" : "−"}${fmt(Math.abs(deltaPct))} %) against the ${fmt(ctx.labelChargeG, 0)} g label`, status }];
+  }
+  return out;
+}
+
+function expectedBandsOrNull(refrigerant: RefrigerantId, ambientC: number, relativeHumidityPct?: number) {
+  try {
+    return expectedBands({ refrigerant, ambientC, relativeHumidityPct });
+  } catch {
+    return null;
+  }
+}

@@ -1,0 +1,76 @@
+"use client";
+
+import { forwardRef, useImperativeHandle, useMemo } from "react";
+import type { InterviewAnswers } from "@/lib/interview/answers";
+import type { GroupId } from "@/lib/interview/steps";
+import type { AnswerIssue } from "@/lib/interview/validate";
+import { GroupForm } from "./group-form";
+import { GROUP_FIELDS } from "./group-fields";
+import { liveReadouts, type PhysicsContext, type ReadoutLine } from "./live-physics";
+import { answerValuesOf } from "./form-values";
+import { otherSystem } from "./quantities";
+import { useGroupForm } from "./use-group-form";
+import type { QuantityKind, UnitPreferences } from "./unit-preferences";
+import type { FormValues } from "./field-defs";
+
+export interface StepFormHandle {
+  /** Validates the group; returns false and focuses the first problem when something needs fixing. */
+  check: () => Promise<boolean>;
+}
+
+interface Props {
+  group: GroupId;
+  saved: unknown;
+  answers: InterviewAnswers;
+  issues?: AnswerIssue[];
+  units: UnitPreferences;
+  setUnit: (kind: QuantityKind, unit: string) => void;
+  physics: PhysicsContext;
+  onValues: (values: Record<string, unknown>) => void;
+}
+
+const STATUS_TEXT = { inside: "in range", below: "below range", above: "above range", unknown: "" } as const;
+
+function Readout({ lines, conversion }: { lines: ReadoutLine[]; conversion?: string }) {
+  return (
+    <div className="space-y-0.5 font-mono text-base">
+      {conversion && <p className="text-ink-soft">= {conversion}</p>}
+      {lines.map((line, i) => (
+        <p key={i} className={line.status === "above" || line.status === "below" ? "font-bold text-ember-700" : line.status === "inside" ? "text-sound-700" : "text-ink"}>
+          {line.text}
+          {line.verdict !== undefined ? (line.verdict ? ` — ${line.verdict}` : "") : line.status && STATUS_TEXT[line.status] ? ` — ${STATUS_TEXT[line.status]}` : ""}
+        </p>
+      ))}
+    </div>
+  );
+}
+
+export const StepForm = forwardRef<StepFormHandle, Props>(function StepForm({ group, saved, answers, issues, units, setUnit, physics, onValues }, ref) {
+  const fields = GROUP_FIELDS[group];
+  const form = useGroupForm({ group, fields, saved, otherAnswers: answers, units, onValues });
+  const values = form.watch() as FormValues;
+
+  useImperativeHandle(ref, () => ({
+    check: async () => {
+      const ok = await form.trigger();
+      if (!ok) {
+        const first = fields.find((f) => form.formState.errors[f.name]);
+        if (first) form.setFocus(first.name);
+      }
+      return ok;
+    },
+  }));
+
+  const internal = useMemo(() => answerValuesOf(fields, values, units), [fields, values, units]);
+  const physicsLines = useMemo(() => liveReadouts(group, internal, physics), [group, internal, physics]);
+  const readouts: Record<string, React.ReactNode> = {};
+  for (const def of fields) {
+    const value = internal[def.name];
+    const kind = def.kind as QuantityKind;
+    const conversion = (kind === "pressure" || kind === "temperature" || kind === "mass" || kind === "volume") && typeof value === "number" ? otherSystem(kind, value) : undefined;
+    const lines = physicsLines[def.name] ?? [];
+    if (conversion || lines.length) readouts[def.name] = <Readout conversion={conversion} lines={lines} />;
+  }
+
+  return <GroupForm form={form} fields={fields} units={units} setUnit={setUnit} readouts={readouts} serverIssues={issues} />;
+});

@@ -1,0 +1,46 @@
+import { CAUSE_LABELS, type Suspect } from "@/lib/diagnosis";
+
+function confidenceWord(confidence: number): string {
+  return confidence >= 0.75 ? "well measured" : confidence >= 0.4 ? "partly measured" : "little measured yet";
+}
+
+/** One suspect: how strongly the readings point to it, and why — in both directions. */
+export function SuspectCard({ suspect, rank }: { suspect: Suspect; rank: number }) {
+  const pct = Math.round(suspect.score * 100);
+  return (
+    <article className="rounded-card border border-paper-line bg-paper p-3" aria-label={`${rank}. ${CAUSE_LABELS[suspect.cause]}`}>
+      <div className="flex items-baseline justify-between gap-2">
+        <h3 className="font-bold">
+          {rank}. {CAUSE_LABELS[suspect.cause]}
+        </h3>
+        <span className="font-mono text-lg font-bold">{pct} %</span>
+      </div>
+      <div className="mt-1 h-2 rounded-full bg-paper-sunk" aria-hidden>
+        <div className="h-2 rounded-full bg-glacier-600" style={{ width: `${pct}%` }} />
+      </div>
+      <p className="mt-1 text-sm text-ink-soft">
+        Confidence {Math.round(suspect.confidence * 100)} % — {confidenceWord(suspect.confidence)}
+      </p>
+      {suspect.evidenceFor.length > 0 && (
+        <>
+          <h4 className="mt-2 text-sm font-bold uppercase tracking-wide text-ink-soft">For</h4>
+          <ul className="list-disc pl-5">
+            {suspect.evidenceFor.map((e) => (
+              <li key={e}>{e}</li>
+            ))}
+          </ul>
+        </>
+      )}
+      {suspect.evidenceAgainst.length > 0 && (
+        <>
+          <h4 className="mt-2 text-sm font-bold uppercase tracking-wide text-ink-soft">Against</h4>
+          <ul className="list-disc pl-5">
+            {suspect.evidenceAgainst.map((e) => (
+              <li key={e}>{e}</li>
+            ))}
+          </ul>
+        </>
+      )}
+    </article>
+  );
+}
