@@ -62,5 +62,5 @@ export {
 } from "./ledger";
 export { type PlannedMovement, postingsForRecordChange, postingsForServiceRecord } from "./ledger-corrections";
 export { MONTHLY_REPORT_CSV_COLUMNS, type MonthlyReportRow, monthInTimeZone, monthlyReport, toCsv } from "./ledger-report";
-export { type ServiceContext, type ServiceRecordInput, serviceContextSchema, serviceRecordSchema } from "./record-schema";
-export { IDENTIFIER_PURITY_PASS_PCT, OIL_MATCH_TOLERANCE, type ServiceRecordSummary, summariseServiceRecord } from "./record";
+export { IDENTIFIER_PURITY_PASS_PCT, type IdentifierCheck, identifierCheck } from "./identifier";
+export { type ServiceRecordContext, type ServiceRecordSummary, type ServiceRecordValues, summariseServiceRecord } from "./record-summary";
