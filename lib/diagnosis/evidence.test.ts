@@ -105,3 +105,10 @@ describe("identifier, charge and vent", () => {
     expect(ids({ ...r134aOrifice, ambientC: 42, ventC: 10 })).toContain("vent:cold");
   });
 });
+
+describe("symptom sentences", () => {
+  it("reports interview answers and check results in readable sentences", () => {
+    const texts = extractEvidence({ ...r134aOrifice, symptoms: ["recent_service_elsewhere", "worse_at_idle", "leak_found"] }).observations.map((o) => o.text);
+    expect(texts).toEqual(expect.arrayContaining(["Reported: A/C was serviced elsewhere recently.", "Reported: cooling worse at idle than at road speed.", "Checked: leak found."]));
+  });
+});

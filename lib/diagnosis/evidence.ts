@@ -5,7 +5,7 @@ import { addStaticEvidence } from "./evidence-static";
 import type { Extraction } from "./evidence-types";
 import { degC, grams, pct } from "./format";
 import type { DiagnosisInput } from "./schema";
-import { SYMPTOM_LABELS } from "./symptoms";
+import { SYMPTOM_LABELS, type SymptomId } from "./symptoms";
 
 // SAE J2099 / J2912: below 98 % the refrigerant is not "pure" and must not be recycled.
 export const PURITY_PASS_PCT = 98;
@@ -24,8 +24,8 @@ export function extractEvidence(input: DiagnosisInput): Extraction {
 
   out.observations.push(
     input.expansionDevice === "txv"
-      ? { id: "device:txv", text: "Expansion-valve (TXV) system with receiver-drier." }
-      : { id: "device:orifice_tube", text: "Orifice-tube system with accumulator: no valve that could stick open." },
+      ? { id: "device:txv", text: "Expansion-valve (TXV) system with receiver-drier: the valve, not a cycling switch, keeps the evaporator from flooding." }
+      : { id: "device:orifice_tube", text: "Orifice-tube system with accumulator: a fixed orifice cannot stick open, and the cycling switch alone guards against icing." },
   );
 
   const mixed = addIdentifierEvidence(input, out) || symptoms.has("identifier_flags_hydrocarbon");
@@ -42,8 +42,16 @@ export function extractEvidence(input: DiagnosisInput): Extraction {
   }
   addChargeEvidence(input, out);
   addVentEvidence(input, out);
-  for (const symptom of symptoms) out.observations.push({ id: `symptom:${symptom}`, text: `Reported: ${SYMPTOM_LABELS[symptom].charAt(0).toLowerCase()}${SYMPTOM_LABELS[symptom].slice(1)}.` });
+  for (const symptom of symptoms) out.observations.push({ id: `symptom:${symptom}`, text: symptomSentence(symptom) });
   return out;
+}
+
+function symptomSentence(symptom: SymptomId): string {
+  const label = SYMPTOM_LABELS[symptom];
+  if (label.startsWith("Checked: ")) return `${label}.`;
+  // Lower-case the first word unless it is an abbreviation ("A/C").
+  const first = /^[A-Z][a-z]/.test(label) ? label.charAt(0).toLowerCase() : label.charAt(0);
+  return `Reported: ${first}${label.slice(1)}.`;
 }
 
 /** Returns true when the refrigerant failed identification. */
