@@ -33,6 +33,10 @@ export function monthInTimeZone(atIso: string, timeZone: string): string {
   }
   const instant = new Date(atIso);
   if (Number.isNaN(instant.getTime())) throw new RangeError(`"${atIso}" is not a date and time`);
+  // UTC offsets stay within −12 h … +14 h, so from the 2nd to the 27th (UTC) the local
+  // month is the UTC month; only instants near a month's end need the time-zone rules.
+  const utcDay = instant.getUTCDate();
+  if (utcDay >= 2 && utcDay <= 27) return `${instant.getUTCFullYear()}-${String(instant.getUTCMonth() + 1).padStart(2, "0")}`;
   const parts = f.formatToParts(instant);
   const year = parts.find((p) => p.type === "year")?.value;
   const month = parts.find((p) => p.type === "month")?.value;

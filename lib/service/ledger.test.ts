@@ -112,6 +112,18 @@ describe("monthlyReport", () => {
     expect(monthInTimeZone("2026-11-30T23:30:00Z", "Europe/Berlin")).toBe("2026-12");
   });
 
+  it("property: the mid-month shortcut agrees with the IANA rules in far-off zones", () => {
+    const zones = ["Pacific/Kiritimati", "Etc/GMT+12", "Asia/Kathmandu", "America/St_Johns", "Australia/Lord_Howe", "America/Chicago"];
+    fc.assert(
+      fc.property(fc.integer({ min: Date.UTC(2000, 0, 1), max: Date.UTC(2040, 0, 1) }), fc.constantFrom(...zones), (ms, timeZone) => {
+        const parts = new Intl.DateTimeFormat("en-CA", { timeZone, year: "numeric", month: "2-digit" }).formatToParts(new Date(ms));
+        const expected = `${parts.find((p) => p.type === "year")?.value}-${parts.find((p) => p.type === "month")?.value}`;
+        expect(monthInTimeZone(new Date(ms).toISOString(), timeZone)).toBe(expected);
+      }),
+      { numRuns: 2000 },
+    );
+  });
+
   it("totals recovered, recycled and charged per month × technician × refrigerant", () => {
     const moves = [
       mv({ type: "recovered_into", massG: 700, at: "2026-10-05T14:00:00Z" }),

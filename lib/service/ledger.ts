@@ -128,7 +128,9 @@ export function applyMovements(cylinder: Cylinder, movements: readonly CylinderM
   const byId = new Map(movements.map((m) => [m.id, m]));
   const own = movements
     .filter((m) => m.cylinderId === cylinder.id)
-    .sort((a, b) => Date.parse(a.at) - Date.parse(b.at) || a.id.localeCompare(b.id));
+    .map((m) => ({ m, atMs: Date.parse(m.at) }))
+    .sort((a, b) => a.atMs - b.atMs || (a.m.id < b.m.id ? -1 : a.m.id > b.m.id ? 1 : 0))
+    .map(({ m }) => m);
   let netG = cylinder.initialNetG;
   let wentBelowEmpty = false;
   for (const m of own) {
