@@ -17,7 +17,7 @@ function without<T extends object>(record: T, key: PropertyKey): T {
 /** Stores valid values as the group's answer; invalid ones become the draft and the last valid answer stays. */
 export function applyAnswer(context: InterviewContext, group: unknown, values: unknown): Changes {
   if (!isGroupId(group)) return {};
-  const check = validateGroup(group, values, without(context.answers, group));
+  const check = validateGroup(group, values, without(context.answers, group), context.shop);
   if (!check.ok) {
     return {
       drafts: { ...context.drafts, [group]: values },
@@ -31,8 +31,8 @@ export function applyAnswer(context: InterviewContext, group: unknown, values: u
     errors: without(context.errors, group),
     skipped: context.skipped.filter((g) => g !== group),
   };
-  // A changed refrigerant or label charge can make another group's stored answer impossible: keep it as a draft to fix.
-  for (const [other, issues] of Object.entries(crossCheck(answers)) as [
+  // A changed refrigerant, label charge or altitude can make another group's stored answer impossible: keep it as a draft to fix.
+  for (const [other, issues] of Object.entries(crossCheck(answers, context.shop)) as [
     GroupId,
     NonNullable<Changes["errors"]>[GroupId],
   ][]) {

@@ -32,16 +32,17 @@ export interface InterviewInput {
 }
 
 export function createInterviewContext(input: InterviewInput = {}): InterviewContext {
-  const { answers, drafts, errors } = sortSavedAnswers(input.answers);
+  const shop = input.shop ?? {};
+  const { answers, drafts, errors } = sortSavedAnswers(input.answers, shop);
   const skipped = (input.skipped ?? []).filter(isGroupId).filter((group) => answers[group] === undefined);
   for (const [group, values] of Object.entries(input.drafts ?? {})) {
     if (!isGroupId(group) || drafts[group] !== undefined) continue;
     drafts[group] = values;
     if (skipped.includes(group)) continue;
-    const check = validateGroup(group, values, answers);
+    const check = validateGroup(group, values, answers, shop);
     if (!check.ok) errors[group] = check.issues;
   }
-  const record = { answers, skipped, errors, shop: input.shop ?? {} };
+  const record = { answers, skipped, errors, shop };
   const available = availableSteps(record);
   const resumeStep =
     isStepId(input.step) && available.includes(input.step) ? input.step : furthestStep(record);

@@ -1,4 +1,4 @@
-import { createActor, type Actor } from "xstate";
+import { createActor, type Actor, type InspectionEvent } from "xstate";
 import type { InterviewAnswers } from "@/lib/interview/answers";
 import type { GroupId } from "@/lib/interview/steps";
 import { interviewMachine } from "./interview";
@@ -9,8 +9,19 @@ import { viewOf } from "./interview-view";
 
 export type InterviewActor = Actor<typeof interviewMachine>;
 
-export function startInterview(input?: InterviewInput): InterviewActor {
-  return createActor(interviewMachine, { input }).start();
+export function startInterview(
+  input?: InterviewInput,
+  inspect?: (event: InspectionEvent) => void,
+): InterviewActor {
+  return createActor(interviewMachine, { input, inspect }).start();
+}
+
+/** True for the machine's fall-back move, taken when an answer pushes the step on screen off the route. */
+export function isFallBack(event: InspectionEvent): boolean {
+  return (
+    event.type === "@xstate.microstep" &&
+    event._transitions.some((t) => t.source.key === "interview" && t.eventType === "")
+  );
 }
 
 export function stepOf(actor: InterviewActor): string {

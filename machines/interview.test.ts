@@ -3,7 +3,7 @@ import type { InterviewAnswers } from "@/lib/interview/answers";
 import { contaminatedAnswers, emptySystemAnswers, exampleAnswers } from "@/lib/interview/example-answers";
 import { routeFor } from "@/lib/interview/route";
 import { viewOf } from "./interview-view";
-import { answer, startInterview, stepOf, walk } from "./interview-test-kit";
+import { answer, isFallBack, startInterview, stepOf, walk } from "./interview-test-kit";
 
 const cautionIds = (actor: ReturnType<typeof startInterview>) =>
   viewOf(actor.getSnapshot()).cautions.map((c) => c.id);
@@ -280,9 +280,13 @@ describe("changing an earlier answer re-routes", () => {
   });
 
   it("falls back to the furthest open step when an answer takes the step on screen off the route", () => {
-    const actor = startInterview({ answers: exampleAnswers, step: "behaviour" });
+    let fallBacks = 0;
+    const actor = startInterview({ answers: exampleAnswers, step: "behaviour" }, (event) => {
+      if (isFallBack(event)) fallBacks += 1;
+    });
     answer(actor, "static", { staticKpaGauge: 0 });
     expect(stepOf(actor)).toBe("leakFinding");
+    expect(fallBacks).toBe(1);
   });
 
   it("stays put when an answer elsewhere leaves the step on screen on the route", () => {

@@ -11,6 +11,8 @@ import {
   behaviourAnswersSchema,
   leakFindingAnswersSchema,
 } from "./answers";
+import type { InterviewAnswers } from "./answers";
+import { crossCheck } from "./cross-checks";
 import { exampleAnswers } from "./example-answers";
 import { validateGroup, sortSavedAnswers } from "./validate";
 
@@ -123,6 +125,28 @@ describe("checks across groups", () => {
     expect(
       validateGroup("chargeAudit", { recovered: true, recoveredChargeG: 1700 }, exampleAnswers),
     ).toMatchObject({ ok: true });
+  });
+
+  it("refuse a gauge below the local full vacuum: about −83.5 kPa gauge at 1600 m (ISO 2533 standard atmosphere)", () => {
+    const high: InterviewAnswers = {
+      ...exampleAnswers,
+      conditions: { ambientC: 20, altitudeM: 1600 },
+      running: { lowKpaGauge: -90 },
+    };
+    const result = interviewAnswersSchema.safeParse(high);
+    expect(result.error?.issues[0]?.path).toEqual(["running", "lowKpaGauge"]);
+    expect(result.error?.issues[0]?.message).toMatch(/full vacuum \(-83\.[0-9] kPa at 1600 m\)/);
+    expect(interviewAnswersSchema.safeParse({ ...high, running: { lowKpaGauge: -83 } }).success).toBe(true);
+    expect(interviewAnswersSchema.safeParse({ ...high, conditions: { ambientC: 20 } }).success).toBe(true);
+  });
+
+  it("use the shop's altitude for that floor when the conditions give none", () => {
+    const answers: InterviewAnswers = { conditions: { ambientC: 20 }, static: { staticKpaGauge: -90 } };
+    expect(crossCheck(answers)).toEqual({});
+    expect(crossCheck(answers, { altitudeM: 1600 }).static?.[0]?.field).toBe("staticKpaGauge");
+    expect(validateGroup("static", answers.static, answers, { altitudeM: 1600 })).toMatchObject({
+      ok: false,
+    });
   });
 
   it("accept an interview with no groups at all", () => {

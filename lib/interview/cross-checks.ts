@@ -1,4 +1,6 @@
+import { standardBarometricKpa } from "@/lib/units";
 import type { InterviewAnswers } from "./answers";
+import { altitudeFor, type ShopSettings } from "./branches";
 import type { GroupId } from "./steps";
 import type { AnswerIssue } from "./validate";
 
@@ -17,12 +19,38 @@ const gaugeFields = [
   { group: "running", field: "lowKpaGauge", label: "Low side" },
 ] as const;
 
-/** Checks that need more than one question group; issues are filed under the group that should change. */
-export function crossCheck(answers: InterviewAnswers): Partial<Record<GroupId, AnswerIssue[]>> {
+/** A gauge reads against the local atmosphere, so a full vacuum reads minus the barometric pressure there (ISO 2533 standard atmosphere). */
+function deepestGaugeKpa(altitudeM: number | undefined): number | undefined {
+  if (altitudeM === undefined) return undefined;
+  try {
+    return -standardBarometricKpa(altitudeM);
+  } catch {
+    return undefined;
+  }
+}
+
+/** Checks that need more than one question group (or the shop's altitude); issues are filed under the group that should change. */
+export function crossCheck(
+  answers: InterviewAnswers,
+  shop?: ShopSettings,
+): Partial<Record<GroupId, AnswerIssue[]>> {
   const found: Partial<Record<GroupId, AnswerIssue[]>> = {};
   const add = (group: GroupId, issue: AnswerIssue) => {
     (found[group] ??= []).push(issue);
   };
+  const altitudeM = altitudeFor(answers, shop);
+  const floorKpa = deepestGaugeKpa(altitudeM);
+  if (floorKpa !== undefined) {
+    for (const { group, field, label } of gaugeFields) {
+      const value = (answers[group] as Record<string, number | undefined> | undefined)?.[field];
+      if (value !== undefined && value < floorKpa) {
+        add(group, {
+          field,
+          message: `${label}: a gauge cannot read below a full vacuum (${floorKpa.toFixed(1)} kPa at ${Math.round(altitudeM ?? 0)} m) — check the gauge zero`,
+        });
+      }
+    }
+  }
   const refrigerant = answers.system?.refrigerant;
   if (refrigerant !== undefined) {
     const maxKpa = MAX_KPA_GAUGE_BY_REFRIGERANT[refrigerant];

@@ -63,3 +63,18 @@ export function isGroupId(value: unknown): value is GroupId {
 export function isOptionalGroup(group: GroupId): boolean {
   return optionalGroups.includes(group);
 }
+
+/** Short names for the progress strip, in our own words. */
+export const stepLabels: Record<StepId, string> = {
+  complaint: "Complaint",
+  system: "System",
+  conditions: "Conditions",
+  static: "Static pressure",
+  running: "Running readings",
+  behaviour: "Behaviour",
+  leakFinding: "Leak search",
+  identification: "Refrigerant identity",
+  chargeAudit: "Charge audit",
+  recoveryHeld: "Recovery on hold",
+  findings: "Findings",
+};

@@ -3,6 +3,7 @@ import { describe, expect, it } from "vitest";
 import { diagnosisInputSchema } from "@/lib/diagnosis";
 import { interviewAnswersSchema, type InterviewAnswers } from "./answers";
 import { behaviourSymptomIds, leakPlaceChoices } from "./choices";
+import { crossCheck } from "./cross-checks";
 import { emptySystemAnswers, exampleAnswers } from "./example-answers";
 import { toDiagnosisInput } from "./to-diagnosis-input";
 
@@ -116,14 +117,17 @@ describe("toDiagnosisInput", () => {
         whereFound: opt(fc.constantFrom(...leakPlaceChoices)),
       }),
     });
+    const shop = fc.record({ altitudeM: opt(num(-450, 5000)) });
     let checked = 0;
     fc.assert(
-      fc.property(answers, (candidate) => {
+      fc.property(answers, shop, (candidate, shopSettings) => {
         const parsed = interviewAnswersSchema.safeParse(candidate);
-        if (!parsed.success) return; // only answers the interview itself would accept
+        // Only answers the interview itself would accept, with the shop's altitude as the machine checks them.
+        if (!parsed.success || Object.keys(crossCheck(parsed.data, shopSettings)).length > 0) return;
         checked += 1;
-        const input = toDiagnosisInput(parsed.data);
-        expect(diagnosisInputSchema.safeParse(input).success).toBe(true);
+        const input = toDiagnosisInput(parsed.data, shopSettings);
+        const result = diagnosisInputSchema.safeParse(input);
+        expect(result.error?.issues ?? []).toEqual([]);
       }),
       { numRuns: 400 },
     );

@@ -1,5 +1,6 @@
 import type { z } from "zod";
 import { answerSchemas, type InterviewAnswers } from "./answers";
+import type { ShopSettings } from "./branches";
 import { crossCheck } from "./cross-checks";
 import { groupIds, type GroupId } from "./steps";
 
@@ -17,10 +18,15 @@ function toIssues(error: z.ZodError): AnswerIssue[] {
 }
 
 /** Validates one group, and checks it against the other answers where a check needs both. */
-export function validateGroup(group: GroupId, values: unknown, others: InterviewAnswers = {}): GroupCheck {
+export function validateGroup(
+  group: GroupId,
+  values: unknown,
+  others: InterviewAnswers = {},
+  shop?: ShopSettings,
+): GroupCheck {
   const result = answerSchemas[group].safeParse(values);
   if (!result.success) return { ok: false, issues: toIssues(result.error) };
-  const issues = crossCheck({ ...others, [group]: result.data })[group] ?? [];
+  const issues = crossCheck({ ...others, [group]: result.data }, shop)[group] ?? [];
   return issues.length === 0
     ? { ok: true, value: result.data as NonNullable<InterviewAnswers[GroupId]> }
     : { ok: false, issues };
@@ -33,13 +39,13 @@ export interface SortedAnswers {
 }
 
 /** Splits saved answers group by group: valid groups are answers, the rest are kept as drafts with their issues. */
-export function sortSavedAnswers(saved: unknown): SortedAnswers {
+export function sortSavedAnswers(saved: unknown, shop?: ShopSettings): SortedAnswers {
   const sorted: SortedAnswers = { answers: {}, drafts: {}, errors: {} };
   if (typeof saved !== "object" || saved === null) return sorted;
   const record = saved as Record<string, unknown>;
   for (const group of groupIds) {
     if (record[group] === undefined) continue;
-    const check = validateGroup(group, record[group], sorted.answers);
+    const check = validateGroup(group, record[group], sorted.answers, shop);
     if (check.ok) {
       (sorted.answers as Record<GroupId, unknown>)[group] = check.value;
     } else {
