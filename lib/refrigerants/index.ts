@@ -19,3 +19,4 @@ export {
   subcoolingK,
   superheatK,
 } from "./derived";
+export { type Caution, refrigerantCautions } from "./cautions";
