@@ -85,6 +85,13 @@ describe("parseSpecCsv: good rows", () => {
     expect(parseSpecCsv(csv).rows.map((r) => r.line)).toEqual([2, 5]);
   });
 
+  it("counts lines in files that end lines with a lone carriage return", () => {
+    const csv = `${HEADER}\r2016,2019,Ford,Explorer,,no,R-134a,765,PAG 46,210\r2016,2019,Ford,Explorer,,yes,R-134a,1130,PAG 46,270`;
+    const r = parseSpecCsv(csv);
+    expect(r.rows.map((x) => x.line)).toEqual([2, 3]);
+    expect(r.rows.every((x) => x.problems.length === 0)).toBe(true);
+  });
+
   it("lists columns it does not use", () => {
     expect(parseSpecCsv(`${HEADER},notes\n2016,2019,Ford,Explorer,,no,R-134a,765,PAG 46,210,ok`).ignoredColumns).toEqual(["notes"]);
   });

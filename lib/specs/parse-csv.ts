@@ -50,7 +50,11 @@ function readRecords(text: string, delimiter: string): { cells: string[]; line: 
       const end = result.meta.cursor;
       const cells = result.data;
       if (cells.some((c) => c.trim() !== "")) records.push({ cells, line });
-      for (let i = start; i < end; i++) if (text.charCodeAt(i) === 10) line++;
+      for (let i = start; i < end; i++) {
+        const c = text.charCodeAt(i);
+        // \n, \r\n and a lone \r (old spreadsheet exports) each end one line
+        if (c === 10 || (c === 13 && text.charCodeAt(i + 1) !== 10)) line++;
+      }
       start = end;
     },
   });
