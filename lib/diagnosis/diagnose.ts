@@ -32,6 +32,8 @@ export interface Findings {
 }
 
 const CAUSE_ORDER = new Map<CauseId, number>(CAUSE_IDS.map((cause, i) => [cause, i]));
+const byStrength = (a: EvidenceItem, b: EvidenceItem) => Math.abs(b.weight) - Math.abs(a.weight);
+const byRank = (a: Suspect, b: Suspect) => b.logOdds - a.logOdds || (CAUSE_ORDER.get(a.cause) ?? 0) - (CAUSE_ORDER.get(b.cause) ?? 0);
 const round = (value: number, decimals: number) => Math.round(value * 10 ** decimals) / 10 ** decimals;
 
 /** Rank the likely causes of a cooling complaint. Expects input already accepted by diagnosisInputSchema. */
@@ -43,18 +45,21 @@ export function diagnose(input: DiagnosisInput): Findings {
 
   const suspects = scoreCauses(extraction.observations)
     .map((s): Suspect => {
-      const sorted = [...s.items].sort((a, b) => Math.abs(b.weight) - Math.abs(a.weight));
+      const evidence = s.items.sort(byStrength);
+      const evidenceFor: string[] = [];
+      const evidenceAgainst: string[] = [];
+      for (const item of evidence) (item.weight > 0 ? evidenceFor : evidenceAgainst).push(item.text);
       return {
         cause: s.cause,
         score: logistic(s.logOdds),
         confidence: round(readingCoverage(s.cause, extraction.observedGroups) * extraction.confidenceFactor, 3),
-        evidenceFor: sorted.filter((i) => i.weight > 0).map((i) => i.text),
-        evidenceAgainst: sorted.filter((i) => i.weight < 0).map((i) => i.text),
+        evidenceFor,
+        evidenceAgainst,
         logOdds: s.logOdds,
-        evidence: sorted,
+        evidence,
       };
     })
-    .sort((a, b) => b.logOdds - a.logOdds || (CAUSE_ORDER.get(a.cause) ?? 0) - (CAUSE_ORDER.get(b.cause) ?? 0));
+    .sort(byRank);
 
   const leaders = suspects.slice(0, 2).map((s) => s.cause);
   const ctx = { input, extraction, symptoms: new Set(input.symptoms ?? []), mixed };

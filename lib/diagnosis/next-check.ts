@@ -45,16 +45,15 @@ export function expectedShift(outcomes: readonly (readonly ObservationId[])[], a
   let normA = 0;
   let normB = 0;
   for (const outcome of outcomes) {
-    const vector = outcomeVector(outcome);
-    normA += Math.exp(vector[ia] ?? 0);
-    normB += Math.exp(vector[ib] ?? 0);
+    const { expWeights } = outcomeVector(outcome);
+    normA += expWeights[ia] ?? 0;
+    normB += expWeights[ib] ?? 0;
   }
   let expected = 0;
   for (const outcome of outcomes) {
-    const vector = outcomeVector(outcome);
-    const wa = vector[ia] ?? 0;
-    const wb = vector[ib] ?? 0;
-    expected += (0.5 * (Math.exp(wa) / normA) + 0.5 * (Math.exp(wb) / normB)) * Math.abs(wa - wb);
+    const { weights, expWeights } = outcomeVector(outcome);
+    const chance = 0.5 * ((expWeights[ia] ?? 0) / normA) + 0.5 * ((expWeights[ib] ?? 0) / normB);
+    expected += chance * Math.abs((weights[ia] ?? 0) - (weights[ib] ?? 0));
   }
   return expected;
 }

@@ -30,17 +30,24 @@ export function causeIndex(cause: CauseId): number {
   return CAUSE_INDEX.get(cause) ?? -1;
 }
 
-const OUTCOME_VECTORS = new WeakMap<readonly ObservationId[], Float64Array>();
+export interface OutcomeVector {
+  /** Summed weights per cause, CAUSE_IDS order. */
+  weights: Float64Array;
+  /** exp(weights), kept to spare the next-check loop the exponentials. */
+  expWeights: Float64Array;
+}
+const OUTCOME_VECTORS = new WeakMap<readonly ObservationId[], OutcomeVector>();
 
-/** Summed weights of a set of observations, per cause in CAUSE_IDS order; memoised per array. */
-export function outcomeVector(outcome: readonly ObservationId[]): Float64Array {
+/** The weights a set of observations would add, per cause; memoised per (shared, constant) outcome array. */
+export function outcomeVector(outcome: readonly ObservationId[]): OutcomeVector {
   let vector = OUTCOME_VECTORS.get(outcome);
   if (!vector) {
-    vector = new Float64Array(CAUSE_IDS.length);
+    const weights = new Float64Array(CAUSE_IDS.length);
     for (const id of outcome) {
-      const weights = WEIGHT_VECTORS.get(id);
-      if (weights) for (let i = 0; i < vector.length; i++) vector[i] = (vector[i] ?? 0) + (weights[i] ?? 0);
+      const row = WEIGHT_VECTORS.get(id);
+      if (row) for (let i = 0; i < weights.length; i++) weights[i] = (weights[i] ?? 0) + (row[i] ?? 0);
     }
+    vector = { weights, expWeights: weights.map(Math.exp) };
     OUTCOME_VECTORS.set(outcome, vector);
   }
   return vector;
@@ -55,7 +62,7 @@ const KEY_POTENTIAL: Record<CauseId, [ReadingGroup, number][]> = Object.fromEntr
       if (!KEY_READING_GROUPS.includes(group)) continue;
       potential.set(group, Math.max(potential.get(group) ?? 0, Math.abs(row.weights[cause] ?? 0)));
     }
-    return [cause, [...potential.entries()]];
+    return [cause, [...potential.entries()].filter(([, value]) => value > 0)];
   }),
 ) as Record<CauseId, [ReadingGroup, number][]>;
 
