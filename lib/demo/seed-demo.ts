@@ -1,6 +1,8 @@
 import { randomBytes } from "node:crypto";
 import type { Transaction } from "sequelize";
-import type { Models } from "@/models";
+import { diagnose, diagnosisInputSchema } from "@/lib/diagnosis";
+import { interviewAnswersSchema, stepIds, toDiagnosisInput } from "@/lib/interview";
+import type { JsonObject, JsonValue, Models } from "@/models";
 import { demoCases, type DemoCase } from "./cases";
 import { demoCustomers, demoShops, type DemoShop } from "./people";
 import { demoVehicles } from "./vehicles";
@@ -87,12 +89,21 @@ async function seedShop(
     vehicles.set(key, { id: vehicle.id, customerId });
   }
   for (const demoCase of demoCases.filter((c) => c.shopKey === demo.key)) {
-    await seedCase(models, { shopId: shop.id, demoCase, userIds, vehicles, now, transaction });
+    await seedCase(models, {
+      shopId: shop.id,
+      altitudeM: demo.altitudeM,
+      demoCase,
+      userIds,
+      vehicles,
+      now,
+      transaction,
+    });
   }
 }
 
 type SeedCaseInput = {
   shopId: number;
+  altitudeM: number;
   demoCase: DemoCase;
   userIds: Map<string, string>;
   vehicles: Map<string, { id: number; customerId: number }>;
@@ -100,9 +111,29 @@ type SeedCaseInput = {
   transaction: Transaction;
 };
 
+/**
+ * The case columns the interview writes: its record of answers, and for a case that reached findings
+ * the findings engine's output on those answers (what the technician was shown), with its input.
+ */
+export function interviewColumns(d: DemoCase, altitudeM: number) {
+  const answers = interviewAnswersSchema.parse(d.answers);
+  const visited = stepIds.filter((step) => step in answers || step === d.interviewStep);
+  const record = { answers, drafts: {}, skipped: d.skipped ?? [], visited };
+  const toJson = (value: unknown) => JSON.parse(JSON.stringify(value)) as JsonObject;
+  if (!d.diagnosed) return { answers: toJson(record), computed: null, findings: null, engineVersion: null };
+  const input = diagnosisInputSchema.parse(toDiagnosisInput(answers, { altitudeM }));
+  const findings = diagnose(input);
+  return {
+    answers: toJson(record),
+    computed: toJson(findings.computed),
+    findings: toJson({ input, ...findings }) as JsonValue,
+    engineVersion: findings.engineVersion,
+  };
+}
+
 async function seedCase(
   models: Models,
-  { shopId, demoCase: d, userIds, vehicles, now, transaction }: SeedCaseInput,
+  { shopId, altitudeM, demoCase: d, userIds, vehicles, now, transaction }: SeedCaseInput,
 ) {
   const startMs = caseStartMs(now, d.daysAgo);
   const at = (minutesIn: number) => new Date(startMs + minutesIn * minuteMs);
@@ -122,11 +153,9 @@ async function seedCase(
       technicianId,
       status: d.status,
       complaint: d.complaint,
-      symptomTags: d.symptomTags,
+      symptomTags: d.answers.behaviour?.symptoms ?? [],
       interviewStep: d.interviewStep,
-      answers: d.answers,
-      findings: d.findings,
-      engineVersion: d.findings ? "demo-seed" : null,
+      ...interviewColumns(d, altitudeM),
       conclusionCause: d.conclusionCause,
       conclusionNotes: d.conclusionNotes,
       confirmedRepair: d.confirmedRepair,
@@ -148,14 +177,14 @@ async function seedCase(
       { transaction },
     );
 
-  await audit(technicianId, "created", 0);
+  await audit(technicianId, "create", 0);
   for (const { minutesIn, ...r } of d.readingSets) {
     await models.ReadingSet.create(
       { ...r, shopId, caseId, takenAt: at(minutesIn), createdAt: at(minutesIn), updatedAt: at(minutesIn) },
       { transaction, silent: true },
     );
   }
-  if (d.submittedMinutesIn !== null) await audit(technicianId, "submitted", d.submittedMinutesIn);
+  if (d.submittedMinutesIn !== null) await audit(technicianId, "submit", d.submittedMinutesIn);
   for (const s of d.signOffs) {
     const reviewerId = required(userIds.get(s.reviewerKey), `user ${s.reviewerKey}`);
     await models.SignOff.create(
@@ -164,7 +193,7 @@ async function seedCase(
     );
     await audit(reviewerId, s.verdict, s.minutesIn);
   }
-  if (d.status === "closed") await audit(technicianId, "closed", lastMinute);
+  if (d.status === "closed") await audit(technicianId, "close", lastMinute);
 }
 
 /** 13:00 UTC on the case's day (morning in the demo shops' zones), never later than three hours ago. */

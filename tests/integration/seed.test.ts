@@ -1,5 +1,7 @@
 import { afterAll, describe, expect, it } from "vitest";
 import { verifyPassword } from "@/lib/auth/password";
+import { diagnose, diagnosisInputSchema, ENGINE_VERSION } from "@/lib/diagnosis";
+import { interviewAnswersSchema } from "@/lib/interview";
 import { closeSequelize } from "@/lib/db/sequelize";
 import { demoCases } from "@/lib/demo/cases";
 import { demoCustomers, demoPassword, demoShops } from "@/lib/demo/people";
@@ -34,6 +36,11 @@ async function demoShop(name: string) {
   const shop = await getModels().Shop.findOne({ where: { name } });
   if (!shop) throw new Error(`demo shop ${name} missing`);
   return shop;
+}
+
+async function demoShopIds(): Promise<number[]> {
+  const shops = await getModels().Shop.findAll({ where: { name: demoShops.map((s) => s.name) } });
+  return shops.map((s) => s.id);
 }
 
 describe("demo seed", () => {
@@ -107,16 +114,14 @@ describe("demo seed", () => {
 
   it("keeps each case's history in order: created, readings, submitted, verdicts", async () => {
     const models = getModels();
-    const cases = await models.Case.findAll({
+    const seeded = await models.Case.findAll({
+      where: { shopId: await demoShopIds() },
       include: [
         { model: models.SignOff, as: "signOffs" },
         { model: models.ReadingSet, as: "readingSets" },
       ],
     });
-    const seeded = cases.filter(
-      (c) => c.engineVersion === "demo-seed" || c.interviewStep === "running_readings",
-    );
-    expect(seeded.length).toBeGreaterThanOrEqual(demoCases.length);
+    expect(seeded).toHaveLength(demoCases.length);
     for (const c of seeded) {
       const readings = c.get("readingSets") as { takenAt: Date }[];
       const verdicts = c.get("signOffs") as { createdAt: Date }[];
@@ -125,6 +130,42 @@ describe("demo seed", () => {
         for (const v of verdicts) expect(v.createdAt.getTime()).toBeGreaterThan(c.submittedAt.getTime());
       expect(c.updatedAt.getTime()).toBeGreaterThanOrEqual(c.createdAt.getTime());
       expect(c.createdAt.getTime()).toBeLessThan(Date.now());
+    }
+  });
+
+  it("stores the interview record in the interview's own shape, so drafts resume", async () => {
+    const models = getModels();
+    const cases = await models.Case.findAll({ where: { shopId: await demoShopIds() } });
+    expect(cases).toHaveLength(demoCases.length);
+    for (const c of cases) {
+      const record = c.answers as { answers: unknown; drafts: unknown; skipped: unknown; visited: string[] };
+      expect(interviewAnswersSchema.safeParse(record.answers).success, c.complaint).toBe(true);
+      expect(record.drafts).toEqual({});
+      expect(record.visited).toContain(c.interviewStep);
+      const behaviour = (record.answers as { behaviour?: { symptoms: string[] } }).behaviour;
+      expect(c.symptomTags).toEqual(behaviour?.symptoms ?? []);
+    }
+    expect(cases.filter((c) => c.status === "draft").map((c) => c.interviewStep)).not.toContain("findings");
+  });
+
+  it("stores for each submitted case the findings engine's own output on its answers", async () => {
+    const models = getModels();
+    const demoSubmitted = await models.Case.findAll({
+      where: {
+        shopId: await demoShopIds(),
+        status: ["awaiting_signoff", "sent_back", "signed_off", "closed"],
+      },
+    });
+    expect(demoSubmitted).toHaveLength(demoCases.filter((c) => c.diagnosed).length);
+    for (const c of demoSubmitted) {
+      const stored = c.findings as { input: unknown; suspects: { cause: string }[] };
+      const recomputed = JSON.parse(
+        JSON.stringify(diagnose(diagnosisInputSchema.parse(stored.input))),
+      ) as object;
+      expect(c.engineVersion).toBe(ENGINE_VERSION);
+      expect(stored).toEqual({ input: stored.input, ...recomputed });
+      expect(c.computed).toEqual((recomputed as { computed: unknown }).computed);
+      expect(stored.suspects.length).toBeGreaterThan(0);
     }
   });
 
