@@ -54,7 +54,7 @@ export class ServiceRecord extends Model<InferAttributes<ServiceRecord>, InferCr
   declare updatedAt: CreationOptional<Date>;
 
   static initModel(sequelize: Sequelize) {
-    const int = { type: DataTypes.INTEGER, allowNull: true };
+    const int = () => ({ type: DataTypes.INTEGER, allowNull: true });
     // DECIMAL comes back from the driver as a string; the getter keeps the model numeric.
     const decimal = (precision: number, scale: number, name: "purityPct" | "airPct" | "deepestKpaAbs" | "holdStartKpaAbs" | "holdEndKpaAbs" | "holdMinutes") => ({
       type: DataTypes.DECIMAL(precision, scale),
@@ -70,15 +70,15 @@ export class ServiceRecord extends Model<InferAttributes<ServiceRecord>, InferCr
         version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
         step: { type: DataTypes.STRING(20), allowNull: false, defaultValue: "identify" },
         refrigerant: { type: DataTypes.ENUM(...vehicleRefrigerants), allowNull: false },
-        specEntryId: int,
-        labelChargeG: int,
+        specEntryId: int(),
+        labelChargeG: int(),
         purityPct: decimal(5, 2, "purityPct"),
         airPct: decimal(5, 2, "airPct"),
         recoveryStartedAt: { type: DataTypes.DATE(3), allowNull: true },
         recoveryEndedAt: { type: DataTypes.DATE(3), allowNull: true },
-        recoveredG: int,
-        recoveryCylinderId: int,
-        oilDrainedMl: int,
+        recoveredG: int(),
+        recoveryCylinderId: int(),
+        oilDrainedMl: int(),
         oilPulled: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         slowRecoveryNote: { type: DataTypes.TEXT, allowNull: true },
         deepestKpaAbs: decimal(7, 3, "deepestKpaAbs"),
@@ -87,12 +87,12 @@ export class ServiceRecord extends Model<InferAttributes<ServiceRecord>, InferCr
         holdMinutes: decimal(6, 1, "holdMinutes"),
         holdPassed: { type: DataTypes.BOOLEAN, allowNull: true },
         oilAddedType: { type: DataTypes.STRING(60), allowNull: true },
-        oilAddedMl: int,
+        oilAddedMl: int(),
         partsReplaced: { type: DataTypes.JSON, allowNull: false, defaultValue: [] },
-        targetG: int,
-        chargedG: int,
-        chargeCylinderId: int,
-        finalReadingSetId: int,
+        targetG: int(),
+        chargedG: int(),
+        chargeCylinderId: int(),
+        finalReadingSetId: int(),
         notes: { type: DataTypes.TEXT, allowNull: true },
         createdAt: DataTypes.DATE(3),
         updatedAt: DataTypes.DATE(3),

@@ -17,6 +17,8 @@ export type Permission =
   | "specs:read"
   | "specs:edit"
   | "ledger:read"
+  | "ledger:write"
+  | "service:write"
   | "users:manage"
   | "shop:settings";
 
@@ -29,11 +31,14 @@ const GRANTS: Record<Role, readonly Permission[]> = {
     "specs:read",
     "specs:edit",
     "ledger:read",
+    "ledger:write",
+    "service:write",
     "users:manage",
     "shop:settings",
   ],
-  senior: ["cases:read", "cases:write", "signoff:review", "casebook:search", "specs:read", "specs:edit", "ledger:read"],
-  technician: ["cases:read", "cases:write", "casebook:search", "specs:read", "ledger:read"],
+  senior: ["cases:read", "cases:write", "signoff:review", "casebook:search", "specs:read", "specs:edit", "ledger:read", "ledger:write", "service:write"],
+  // Recovering and charging refrigerant is certified work: apprentices read the record but do not enter it.
+  technician: ["cases:read", "cases:write", "casebook:search", "specs:read", "ledger:read", "ledger:write", "service:write"],
   apprentice: ["cases:read", "cases:write", "casebook:search", "specs:read"],
 };
 

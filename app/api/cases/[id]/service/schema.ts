@@ -1,0 +1,79 @@
+import { z } from "zod";
+import { REPLACED_PART_IDS } from "@/lib/service/oil";
+
+export const SERVICE_STEPS = ["identify", "recovery", "evacuation", "oil", "recharge", "final"] as const;
+export type ServiceStepId = (typeof SERVICE_STEPS)[number];
+
+const num = (label: string, min: number, max: number, unit: string) =>
+  z
+    .number({ message: `${label} is a number.` })
+    .min(min, `${label} cannot be below ${min} ${unit}.`)
+    .max(max, `${label} cannot be above ${max} ${unit}.`)
+    .nullable()
+    .optional();
+const whole = (label: string, min: number, max: number, unit: string) =>
+  z.number({ message: `${label} is a number.` }).int(`${label} is in whole ${unit}.`).min(min, `${label} cannot be below ${min} ${unit}.`).max(max, `${label} cannot be above ${max} ${unit}.`).nullable().optional();
+const id = (label: string) => z.number({ message: `${label}: choose one from the list.` }).int().positive().nullable().optional();
+const instant = z.iso.datetime({ offset: true, message: "Give a date and time." }).nullable().optional();
+const text = (max: number) => z.string().trim().max(max, `At most ${max} characters.`).nullable().optional();
+
+/** A save of the service record: every value in internal units (g, mL, kPa absolute, °C); empty fields are null. */
+export const serviceRecordInputSchema = z
+  .object({
+    baseVersion: z.number({ message: "baseVersion is the version you last loaded (0 for a new record)." }).int().min(0),
+    step: z.enum(SERVICE_STEPS, { message: "Unknown step." }),
+    specEntryId: id("Spec row"),
+    labelChargeG: whole("Label charge", 50, 5000, "g"),
+    purityPct: num("Purity", 0, 100, "%"),
+    airPct: num("Air", 0, 100, "%"),
+    recoveryStartedAt: instant,
+    recoveryEndedAt: instant,
+    recoveredG: whole("Recovered mass", 0, 10_000, "g"),
+    recoveryCylinderId: id("Recovery cylinder"),
+    oilDrainedMl: whole("Oil drained", 0, 1000, "mL"),
+    oilPulled: z.boolean().default(false),
+    slowRecoveryNote: text(2000),
+    deepestKpaAbs: num("Deepest vacuum", 0, 110, "kPa absolute"),
+    holdStartKpaAbs: num("Vacuum at the start of the hold", 0, 110, "kPa absolute"),
+    holdEndKpaAbs: num("Vacuum at the end of the hold", 0, 110, "kPa absolute"),
+    holdMinutes: num("Hold time", 0.5, 240, "min"),
+    oilAddedType: text(60),
+    oilAddedMl: whole("Oil added", 0, 1000, "mL"),
+    partsReplaced: z
+      .array(
+        z.object({
+          part: z.enum(REPLACED_PART_IDS, { message: "Unknown part." }),
+          count: z.number().int().min(1).max(10).default(1),
+          measuredMl: whole("Oil measured from the part", 0, 500, "mL"),
+        }),
+      )
+      .max(12, "At most 12 replaced parts.")
+      .default([]),
+    targetG: whole("Target charge", 50, 5000, "g"),
+    chargedG: whole("Charged mass", 0, 10_000, "g"),
+    chargeCylinderId: id("Charging cylinder"),
+    finalAmbientC: num("Ambient temperature", -30, 60, "°C"),
+    finalHighKpaGauge: num("High side", -101, 4000, "kPa gauge"),
+    finalLowKpaGauge: num("Low side", -101, 1500, "kPa gauge"),
+    finalVentC: num("Centre vent temperature", -10, 50, "°C"),
+    notes: text(4000),
+  })
+  .strict()
+  .refine((r) => !r.recoveryStartedAt || !r.recoveryEndedAt || Date.parse(r.recoveryEndedAt) >= Date.parse(r.recoveryStartedAt), {
+    message: "Recovery cannot end before it started.",
+    path: ["recoveryEndedAt"],
+  })
+  .refine((r) => !(r.recoveredG && r.recoveredG > 0) || r.recoveryCylinderId, {
+    message: "Choose the recovery cylinder the refrigerant went into: the ledger needs it.",
+    path: ["recoveryCylinderId"],
+  })
+  .refine((r) => !(r.chargedG && r.chargedG > 0) || r.chargeCylinderId, {
+    message: "Choose the cylinder the charge came from: the ledger needs it.",
+    path: ["chargeCylinderId"],
+  });
+export type ServiceRecordInput = z.infer<typeof serviceRecordInputSchema>;
+export type ServiceRecordDraft = z.input<typeof serviceRecordInputSchema>;
+
+export const serviceRecordDeleteQuerySchema = z.object({
+  version: z.coerce.number({ message: "version is the version you last loaded." }).int().positive(),
+});
