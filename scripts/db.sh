@@ -29,11 +29,16 @@ die() { say "error: $*"; exit 1; }
 
 root_sql() { mariadb --no-defaults --socket="$SOCK" -uroot --batch --skip-column-names "$@"; }
 
+# Alive and ours: after a reboot the pid in a stale file may belong to some other process.
 pid_alive() {
   [[ -f "$PID_FILE" ]] || return 1
   local pid
   pid="$(cat "$PID_FILE" 2>/dev/null || true)"
-  [[ -n "$pid" ]] && kill -0 "$pid" 2>/dev/null
+  [[ "$pid" =~ ^[0-9]+$ ]] && kill -0 "$pid" 2>/dev/null || return 1
+  [[ -r "/proc/$pid/cmdline" ]] || return 0
+  local cmdline
+  cmdline="$(tr '\0' ' ' <"/proc/$pid/cmdline")"
+  [[ "$cmdline" == *"--datadir=$DB_DIR/data "* ]]
 }
 
 answers() { mariadb-admin --no-defaults --socket="$SOCK" -uroot --connect-timeout=2 ping >/dev/null 2>&1; }

@@ -1,5 +1,6 @@
-import { mkdtempSync, rmSync } from "node:fs";
+import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
 import { createServer } from "node:net";
+import path from "node:path";
 import mysql from "mysql2/promise";
 import { afterAll, describe, expect, it } from "vitest";
 import { integrationDb, runDbScript } from "./helpers";
@@ -122,6 +123,10 @@ describe("scripts/db.sh with a folder of its own", () => {
     expect(stopped.code).toBe(3);
     expect(stopped.stdout).toMatch(/^down/);
     expect((await runDbScript("down", env)).stderr).toContain("not running");
+
+    // A stale pid file naming some other live process (here: this test worker) is not taken for the server.
+    writeFileSync(path.join(dir, "pid"), String(process.pid));
+    expect((await runDbScript("status", env)).code).toBe(3);
 
     expect((await runDbScript("up", env)).code).toBe(0);
     const again = await connect();
