@@ -1,0 +1,78 @@
+import {
+  type MassUnit,
+  type PressureUnit,
+  type TemperatureUnit,
+  type VolumeUnit,
+  barometricKpa,
+  massToG,
+  parseQuantity,
+  pressureToKpa,
+  temperatureToC,
+  vacuumInHgToKpaAbs,
+  volumeToMl,
+} from "@/lib/units";
+
+/** What a typed entry reads as: empty, a value in internal units, or a message for the technician. */
+export type Entry = { empty: true } | { value: number } | { error: string };
+
+const EMPTY: Entry = { empty: true };
+
+/** "650", "1.4 kg", "1 lb 7 oz" → grams (whole grams, as the ledger stores them). */
+export function readMassG(text: string, defaultUnit: MassUnit = "g"): Entry {
+  if (text.trim() === "") return EMPTY;
+  const q = parseQuantity(text, "mass", defaultUnit);
+  if ("error" in q) return q;
+  if (q.value < 0) return { error: "A mass cannot be negative." };
+  return { value: Math.round(massToG(q.value, q.unit as MassUnit)) };
+}
+
+/** "45", "45 mL", "1.5 fl oz" → millilitres (whole). A bare "oz" on an oil volume means fluid ounces. */
+export function readVolumeMl(text: string, defaultUnit: VolumeUnit = "mL"): Entry {
+  if (text.trim() === "") return EMPTY;
+  const spelled = /fl/i.test(text) ? text : text.replace(/\boz\b/i, "fl oz");
+  const q = parseQuantity(spelled, "volume", defaultUnit);
+  if ("error" in q) return q;
+  if (q.value < 0) return { error: "A volume cannot be negative." };
+  return { value: Math.round(volumeToMl(q.value, q.unit as VolumeUnit)) };
+}
+
+/**
+ * A vacuum reading → kPa absolute. Inches of mercury are read as a vacuum gauge shows them,
+ * below the local atmosphere (so the shop's altitude matters); kPa, bar and psi are taken as
+ * absolute, the way electronic vacuum gauges show them.
+ */
+export function readVacuumKpaAbs(text: string, opts: { altitudeM?: number; defaultUnit?: PressureUnit } = {}): Entry {
+  if (text.trim() === "") return EMPTY;
+  const q = parseQuantity(text, "pressure", opts.defaultUnit ?? "inHg");
+  if ("error" in q) return q;
+  if (q.reference === "gauge") return { error: "Give the vacuum in inHg below the atmosphere, or as an absolute pressure (kPa abs)." };
+  const atmosphereKpa = barometricKpa({ altitudeM: opts.altitudeM ?? 0 });
+  const kpaAbs = q.unit === "inHg" ? vacuumInHgToKpaAbs(q.value, { barometricKpa: atmosphereKpa }) : pressureToKpa(q.value, q.unit as PressureUnit);
+  if (kpaAbs < 0) return { error: "That is deeper than a perfect vacuum here: check the reading and the shop's altitude." };
+  if (kpaAbs > atmosphereKpa + 0.5) return { error: "That is above the atmosphere, not a vacuum." };
+  return { value: Math.round(kpaAbs * 1000) / 1000 };
+}
+
+/** A gauge pressure ("210 kPa", "32 psi") → kPa gauge. */
+export function readGaugeKpa(text: string, defaultUnit: PressureUnit = "kPa"): Entry {
+  if (text.trim() === "") return EMPTY;
+  const q = parseQuantity(text, "pressure", defaultUnit);
+  if ("error" in q) return q;
+  if (q.reference === "absolute") return { error: "Give the gauge reading, not an absolute pressure." };
+  return { value: Math.round(pressureToKpa(q.value, q.unit as PressureUnit) * 100) / 100 };
+}
+
+export function readTemperatureC(text: string, defaultUnit: TemperatureUnit = "C"): Entry {
+  if (text.trim() === "") return EMPTY;
+  const q = parseQuantity(text, "temperature", defaultUnit);
+  if ("error" in q) return q;
+  return { value: Math.round(temperatureToC(q.value, q.unit as TemperatureUnit) * 100) / 100 };
+}
+
+/** A plain number with optional unit word dropped ("99.2", "99.2 %", "5 min"). */
+export function readPlainNumber(text: string, what: string): Entry {
+  const t = text.trim().replace(/\s*(%|min|minutes?)$/i, "").replace(",", ".");
+  if (t === "") return EMPTY;
+  const n = Number(t);
+  return Number.isFinite(n) ? { value: n } : { error: `Could not read “${text.trim()}” as ${what}.` };
+}
