@@ -1,16 +1,16 @@
 import type { SnapshotFrom } from "xstate";
 import type { DiagnosisInput } from "@/lib/diagnosis";
-import type { InterviewAnswers } from "@/lib/interview/answers";
 import { cautionsFor, type Caution } from "@/lib/interview/cautions";
 import { progressFor, type ProgressEntry } from "@/lib/interview/progress";
-import { answersOnRoute } from "@/lib/interview/route";
+import type { SavedInterview } from "@/lib/interview/saved";
 import { groupForStep, isOptionalGroup, type GroupId, type StepId } from "@/lib/interview/steps";
-import { toDiagnosisInput } from "@/lib/interview/to-diagnosis-input";
+import { diagnosisInputFor } from "@/lib/interview/to-diagnosis-input";
 import type { AnswerIssue } from "@/lib/interview/validate";
 import type { InterviewContext } from "./interview-context";
 import type { interviewMachine } from "./interview";
 
 export type InterviewSnapshot = SnapshotFrom<typeof interviewMachine>;
+export type { SavedInterview };
 
 /** Everything a screen needs to draw the interview at this moment. */
 export interface InterviewView {
@@ -34,7 +34,7 @@ export function viewOf(snapshot: InterviewSnapshot): InterviewView {
   const context = snapshot.context;
   const step = context.step;
   const group = groupForStep[step];
-  const diagnosisInput = toDiagnosisInput(answersOnRoute(context.answers, context.shop), context.shop);
+  const diagnosisInput = diagnosisInputFor(context.answers, context.shop);
   return {
     step,
     group,
@@ -51,15 +51,7 @@ export function viewOf(snapshot: InterviewSnapshot): InterviewView {
   };
 }
 
-/** What autosave stores with the case; passing it back as `input` resumes the interview where it was left. */
-export interface SavedInterview {
-  answers: InterviewAnswers;
-  drafts: Partial<Record<GroupId, unknown>>;
-  skipped: GroupId[];
-  visited: StepId[];
-  step: StepId;
-}
-
+/** The interview as autosave stores it (see savedInterviewSchema). */
 export function savedInterviewOf(context: InterviewContext): SavedInterview {
   const { answers, drafts, skipped, visited, step } = context;
   return { answers, drafts, skipped, visited, step };

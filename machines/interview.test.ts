@@ -2,7 +2,8 @@ import { describe, expect, it } from "vitest";
 import type { InterviewAnswers } from "@/lib/interview/answers";
 import { contaminatedAnswers, emptySystemAnswers, exampleAnswers } from "@/lib/interview/example-answers";
 import { routeFor } from "@/lib/interview/route";
-import { viewOf } from "./interview-view";
+import { savedInterviewSchema } from "@/lib/interview/saved";
+import { savedInterviewOf, viewOf } from "./interview-view";
 import { answer, isFallBack, startInterview, stepOf, walk } from "./interview-test-kit";
 
 const cautionIds = (actor: ReturnType<typeof startInterview>) =>
@@ -395,6 +396,17 @@ describe("resuming a saved interview", () => {
     expect(context.skipped).toEqual(["static"]);
     expect(context.errors.running?.[0]?.field).toBe("lowKpaGauge");
     expect(context.visited).toEqual(["complaint", "system", "conditions", "static", "running"]);
+  });
+
+  it("resumes from what autosave stored, through JSON and the route's schema, at the same step with the same view", () => {
+    const actor = startInterview({ shop: { altitudeM: 400 } });
+    walk(actor, { ...exampleAnswers, behaviour: undefined }, 4);
+    answer(actor, "running", { highKpaGauge: 300, lowKpaGauge: 900 });
+    const stored = JSON.parse(JSON.stringify(savedInterviewOf(actor.getSnapshot().context)));
+    const saved = savedInterviewSchema.parse(stored);
+    const resumed = startInterview({ ...saved, shop: { altitudeM: 400 } });
+    expect(stepOf(resumed)).toBe(stepOf(actor));
+    expect(viewOf(resumed.getSnapshot())).toEqual(viewOf(actor.getSnapshot()));
   });
 
   it("counts the steps before the resumed one as visited when none were saved", () => {

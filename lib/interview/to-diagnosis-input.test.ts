@@ -5,7 +5,7 @@ import { interviewAnswersSchema, type InterviewAnswers } from "./answers";
 import { behaviourSymptomIds, leakPlaceChoices } from "./choices";
 import { crossCheck } from "./cross-checks";
 import { emptySystemAnswers, exampleAnswers } from "./example-answers";
-import { toDiagnosisInput } from "./to-diagnosis-input";
+import { diagnosisInputFor, toDiagnosisInput } from "./to-diagnosis-input";
 
 describe("toDiagnosisInput", () => {
   it("is null until refrigerant, expansion device and ambient are known", () => {
@@ -80,6 +80,16 @@ describe("toDiagnosisInput", () => {
       "cooling_fades_then_returns",
       "identifier_flags_hydrocarbon",
     ]);
+  });
+
+  it("diagnosisInputFor leaves out readings from steps the route no longer takes", () => {
+    const emptied: InterviewAnswers = { ...exampleAnswers, static: { staticKpaGauge: 0 } };
+    expect(toDiagnosisInput(emptied)).toHaveProperty("highKpaGauge", 1550);
+    const input = diagnosisInputFor(emptied);
+    expect(input).not.toHaveProperty("highKpaGauge");
+    expect(input).not.toHaveProperty("identifierPurityPct");
+    expect(input).toHaveProperty("staticKpaGauge", 0);
+    expect(diagnosisInputFor(exampleAnswers)).toEqual(toDiagnosisInput(exampleAnswers));
   });
 
   it("gives the findings engine an input it accepts for any valid set of answers (property)", () => {

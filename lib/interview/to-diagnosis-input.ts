@@ -1,6 +1,7 @@
 import type { DiagnosisInput, SymptomId } from "@/lib/diagnosis";
 import type { InterviewAnswers } from "./answers";
 import { altitudeFor, type ShopSettings } from "./branches";
+import { answersOnRoute } from "./route";
 
 /**
  * The findings engine's input from the interview's answers, or null until the refrigerant,
@@ -35,6 +36,15 @@ export function toDiagnosisInput(answers: InterviewAnswers, shop?: ShopSettings)
   return Object.fromEntries(
     Object.entries(fields).filter(([, value]) => value !== undefined),
   ) as DiagnosisInput;
+}
+
+/**
+ * The input the findings should be computed from: only the answers on the current route count, so
+ * running readings left over from before a system proved empty do not reach the engine. The screen
+ * (viewOf) and the server should both use this.
+ */
+export function diagnosisInputFor(answers: InterviewAnswers, shop?: ShopSettings): DiagnosisInput | null {
+  return toDiagnosisInput(answersOnRoute(answers, shop), shop);
 }
 
 /** Ticked behaviours plus what the identifier and the leak search found; absent when none of those was asked. */
