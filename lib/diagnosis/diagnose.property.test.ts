@@ -111,3 +111,43 @@ describe("diagnose on any input the schema accepts (fast-check)", () => {
     );
   });
 });
+
+describe("monotone where the physics says so (fast-check)", () => {
+  const scoreOf = (input: DiagnosisInput, cause: string) => diagnose(input).suspects.find((s) => s.cause === cause)?.score ?? Number.NaN;
+
+  it("never lowers overcharge nor raises undercharge as more refrigerant is recovered against the same label (charge by weight: TM 5-3805-291-23-1)", () => {
+    const pair = fc.tuple(validInput, real(50, 3000), real(0, 1), real(0, 1));
+    fc.assert(
+      fc.property(pair, ([input, labelChargeG, a, b]) => {
+        const [less, more] = (a <= b ? [a, b] : [b, a]).map((f) => f * labelChargeG * 2.9);
+        const base = { ...input, labelChargeG, staticKpaGauge: undefined };
+        const lower = { ...base, recoveredChargeG: less };
+        const higher = { ...base, recoveredChargeG: more };
+        fc.pre(diagnosisInputSchema.safeParse(lower).success && diagnosisInputSchema.safeParse(higher).success);
+        expect(scoreOf(higher, "overcharge")).toBeGreaterThanOrEqual(scoreOf(lower, "overcharge"));
+        expect(scoreOf(higher, "undercharge")).toBeLessThanOrEqual(scoreOf(lower, "undercharge"));
+      }),
+      { numRuns: 300 },
+    );
+  });
+
+  it("never lowers non-condensables as the identifier's air reading rises (SAE J2912 reports NCG weight %)", () => {
+    fc.assert(
+      fc.property(validInput, real(0, 100), real(0, 100), (input, a, b) => {
+        const [less, more] = a <= b ? [a, b] : [b, a];
+        expect(scoreOf({ ...input, identifierAirPct: more }, "non_condensables")).toBeGreaterThanOrEqual(scoreOf({ ...input, identifierAirPct: less }, "non_condensables"));
+      }),
+      { numRuns: 300 },
+    );
+  });
+
+  it("never raises contaminated refrigerant as the identifier's purity rises (SAE J2099 98 % mark)", () => {
+    fc.assert(
+      fc.property(validInput, real(0, 100), real(0, 100), (input, a, b) => {
+        const [less, more] = a <= b ? [a, b] : [b, a];
+        expect(scoreOf({ ...input, identifierPurityPct: more }, "contaminated_refrigerant")).toBeLessThanOrEqual(scoreOf({ ...input, identifierPurityPct: less }, "contaminated_refrigerant"));
+      }),
+      { numRuns: 300 },
+    );
+  });
+});

@@ -1,8 +1,9 @@
 import { describe, expect, it } from "vitest";
 import { canonicalJson, ENGINE_SEMVER, ENGINE_VERSION, fnv1a32, scoringTableHash } from "./engine-version";
+import { GRADING } from "./grading";
 import { CAUSE_PRIORS, LIKELIHOOD_TABLE, RANKING_GATES } from "./likelihood-table";
 
-const current = { priors: CAUSE_PRIORS, rows: LIKELIHOOD_TABLE, gates: RANKING_GATES };
+const current = { priors: CAUSE_PRIORS, rows: LIKELIHOOD_TABLE, gates: RANKING_GATES, grading: GRADING };
 
 describe("ENGINE_VERSION", () => {
   it("is the semver plus the hash of the scoring table", () => {
@@ -30,6 +31,7 @@ describe("ENGINE_VERSION", () => {
     const base = scoringTableHash(current);
     expect(scoringTableHash({ ...current, priors: { ...CAUSE_PRIORS, oil_loss: { ...CAUSE_PRIORS.oil_loss, logOdds: -3.1 } } })).not.toBe(base);
     expect(scoringTableHash({ ...current, gates: RANKING_GATES.slice(1) })).not.toBe(base);
+    expect(scoringTableHash({ ...current, grading: { ...GRADING, PURITY_PASS_PCT: 97 } })).not.toBe(base);
     expect(canonicalJson({ b: 1, a: [2, { d: 3, c: 4 }] })).toBe(canonicalJson({ a: [2, { c: 4, d: 3 }], b: 1 }));
   });
 });

@@ -1,6 +1,7 @@
+import { GRADING } from "./grading";
 import { CAUSE_PRIORS, LIKELIHOOD_TABLE, RANKING_GATES } from "./likelihood-table";
 
-/** Bump by hand when the engine's code changes how it reads evidence; table edits change the hash by themselves. */
+/** Bump by hand when the engine's code changes how it reads evidence; table and threshold edits change the hash by themselves. */
 export const ENGINE_SEMVER = "1.0.0";
 
 /** Key-sorted JSON, so the hash depends on content, not on the order keys were written in. */
@@ -25,8 +26,8 @@ export function fnv1a32(text: string): string {
   return hash.toString(16).padStart(8, "0");
 }
 
-export function scoringTableHash(table: { priors: unknown; rows: unknown; gates: unknown }): string {
+export function scoringTableHash(table: { priors: unknown; rows: unknown; gates: unknown; grading: unknown }): string {
   return fnv1a32(canonicalJson(table));
 }
 
-export const ENGINE_VERSION = `${ENGINE_SEMVER}+${scoringTableHash({ priors: CAUSE_PRIORS, rows: LIKELIHOOD_TABLE, gates: RANKING_GATES })}`;
+export const ENGINE_VERSION = `${ENGINE_SEMVER}+${scoringTableHash({ priors: CAUSE_PRIORS, rows: LIKELIHOOD_TABLE, gates: RANKING_GATES, grading: GRADING })}`;

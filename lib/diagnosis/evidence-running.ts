@@ -4,17 +4,9 @@ import { saturationTemperatureOrNull as saturationOrNull, tempInTable } from "./
 import type { Extraction, SaturationBand } from "./evidence-types";
 import { degC, kelvin, kpaGauge, plain } from "./format";
 import type { DiagnosisInput } from "./schema";
+import { FALLBACK_CONDENSING_OVER_AMBIENT_K, FALLBACK_EVAPORATING_C, HIGH_SIDE_FAR_K, LIFT_CLOSE_MARGIN_K, LOW_SIDE_FAR_BELOW_K, SUBCOOLING_K, SUPERHEAT_K } from "./grading";
 
-// Grading margins beyond the expected band (common practice: a few kelvin of saturation
-// temperature is within gauge and thermometer error; ten is a clear fault).
-const HIGH_SIDE_FAR_K = { below: 10, above: 8 } as const;
-const LOW_SIDE_FAR_BELOW_K = 8;
-// The compressor's lift is "close together" when it is this far under the smallest lift the bands allow.
-const LIFT_CLOSE_MARGIN_K = 5;
-// Fallback when the physics core has no band: condensing 14–30 K over ambient (TM 5-3805-291-23-1
-// quick-check table as converted by the physics core), evaporating −4…8 °C (common practice).
-const FALLBACK_CONDENSING_OVER_AMBIENT_K = { min: 14, max: 30 } as const;
-const FALLBACK_EVAPORATING_C = { min: -4, max: 8 } as const;
+
 
 function bandsFor(input: DiagnosisInput, barometricKpa: number): { high: SaturationBand; low: SaturationBand; fromTables: boolean } {
   // Skip the call when the band would leave the table (R-744 above ~0 °C ambient): it would only return null.
@@ -119,10 +111,6 @@ export function addRunningEvidence(input: DiagnosisInput, barometricKpa: number,
   }
 }
 
-// Typical ranges, K (from memory; the vehicle maker's figures win): TXV systems subcool 3–9 K and hold
-// superheat 2–10 K; orifice-tube evaporators flood into the accumulator, so near-zero superheat is normal there.
-const SUBCOOLING_K = { txv: { none: 1, low: 3, high: 9, veryHigh: 15 }, orifice_tube: { none: 0.5, low: 2, high: 8, veryHigh: 14 } } as const;
-const SUPERHEAT_K = { txv: { nearZero: 2, high: 10, veryHigh: 20 }, orifice_tube: { nearZero: -Infinity, high: 4, veryHigh: 12 } } as const;
 
 function addSubcooling(input: DiagnosisInput, condensingC: number, liquidLineC: number, out: Extraction): void {
   const subcoolingK = condensingC - liquidLineC;
@@ -144,7 +132,7 @@ function addSuperheat(input: DiagnosisInput, evaporatingC: number, suctionLineC:
   const t = SUPERHEAT_K[input.expansionDevice];
   const lead = `Superheat ${kelvin(superheatK)} (suction line ${degC(suctionLineC)} against ${degC(evaporatingC)} evaporating)`;
   const device = input.expansionDevice === "txv" ? "an expansion-valve" : "an orifice-tube";
-  if (superheatK < t.nearZero) out.observations.push({ id: "superheat:near_zero", text: `${lead}: the evaporator is flooding, unusual for ${device} system.` });
+  if (t.nearZero !== null && superheatK < t.nearZero) out.observations.push({ id: "superheat:near_zero", text: `${lead}: the evaporator is flooding, unusual for ${device} system.` });
   else if (superheatK <= t.high) out.observations.push({ id: "superheat:normal", text: `${lead} is normal for ${device} system.` });
   else if (superheatK <= t.veryHigh) out.observations.push({ id: "superheat:high", text: `${lead} is high for ${device} system: the evaporator is starved.` });
   else out.observations.push({ id: "superheat:very_high", text: `${lead} is very high for ${device} system: the evaporator is badly starved.` });

@@ -3,15 +3,8 @@ import type { Extraction } from "./evidence-types";
 import { saturationPressureOrNull } from "./saturation-guard";
 import { degC, kpa, kpaGauge } from "./format";
 import type { DiagnosisInput } from "./schema";
+import { EMPTY_BELOW_FRACTION_OF_SATURATION, EMPTY_BELOW_KPA_GAUGE, STATIC_EXCESS_KPA } from "./grading";
 
-// A static reading under about 70 kPa gauge (10 psig), or under half the saturation pressure at
-// ambient, means next to no refrigerant is left (common practice).
-const EMPTY_BELOW_KPA_GAUGE = 70;
-const EMPTY_BELOW_FRACTION_OF_SATURATION = 0.5;
-// Static excess grading, kPa over saturation at ambient. About 1 K of thermometer error is ~20 kPa
-// for R-134a near 25 °C (saturation table slope) plus gauge error: 35 kPa is within tolerance
-// (from memory; the SAE J2211 container tolerance table itself was not available).
-const STATIC_EXCESS_KPA = { slight: 35, high: 70, veryHigh: 140 } as const;
 
 /** Engine-off static pressure against saturation at ambient: empty, no liquid, or how much excess. */
 export function addStaticEvidence(input: DiagnosisInput, barometricKpa: number, out: Extraction): void {

@@ -6,15 +6,8 @@ import type { Extraction } from "./evidence-types";
 import { degC, grams, pct } from "./format";
 import type { DiagnosisInput } from "./schema";
 import { SYMPTOM_LABELS, type SymptomId } from "./symptoms";
+import { AIR_PCT, CHARGE_PCT, PURITY_PASS_PCT, VENT_C } from "./grading";
 
-// SAE J2099 / J2912: below 98 % the refrigerant is not "pure" and must not be recycled.
-export const PURITY_PASS_PCT = 98;
-// Identifier air (NCG) grading, weight % (from memory).
-const AIR_PCT = { some: 1, high: 3 } as const;
-// Charge deviation grading, % of label (common practice; recovery can leave some behind, SAE J2762).
-const CHARGE_PCT = { empty: -85, veryLow: -35, low: -12, high: 8, veryHigh: 18 } as const;
-// Centre-vent grading, °C (NOLN article 1420: 3–8 °C expected); allowed to rise 0.3 K per K above 32 °C ambient (from memory).
-const VENT_C = { freezing: 2, cold: 8, warm: 15, hotAmbientC: 32, riseKPerK: 0.3 } as const;
 
 /** Turn readings into graded observations, each with a sentence carrying its numbers. */
 export function extractEvidence(input: DiagnosisInput): Extraction {

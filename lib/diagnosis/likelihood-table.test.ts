@@ -43,6 +43,16 @@ describe("likelihood table", () => {
     for (let i = 1; i < order.length; i++) expect(order[i]).toBeGreaterThanOrEqual(order[i - 1] ?? -Infinity);
   });
 
+  it("orders the charge rows as weight demands: overcharge rises and undercharge falls with the recovered mass (TM 5-3805-291-23-1)", () => {
+    const column = (cause: "overcharge" | "undercharge") => READING_GRADES.charge.map((grade) => LIKELIHOOD_TABLE.find((r) => r.observation === `charge:${grade}`)?.weights[cause] ?? 0);
+    const over = column("overcharge");
+    const under = column("undercharge");
+    for (let i = 1; i < over.length; i++) {
+      expect(over[i]).toBeGreaterThanOrEqual(over[i - 1] ?? -Infinity);
+      expect(under[i]).toBeLessThanOrEqual(under[i - 1] ?? Infinity);
+    }
+  });
+
   it("makes every gate's trigger a known observation with a source", () => {
     for (const gate of RANKING_GATES) {
       for (const id of gate.when) expect(validObservations.has(id), id).toBe(true);

@@ -1,0 +1,56 @@
+/**
+ * Where each reading's grades begin. Part of the model: these are hashed into ENGINE_VERSION together
+ * with the likelihood table, so moving a threshold changes the version stored with each case.
+ */
+
+// Grading margins beyond the expected band, K of saturation temperature (common practice: a few kelvin
+// is within gauge and thermometer error; ten is a clear fault).
+export const HIGH_SIDE_FAR_K = { below: 10, above: 8 } as const;
+export const LOW_SIDE_FAR_BELOW_K = 8;
+// The compressor's lift is "close together" this far under the smallest lift the bands allow (from memory).
+export const LIFT_CLOSE_MARGIN_K = 5;
+// Fallback when the physics core has no band: condensing 14–30 K over ambient (TM 5-3805-291-23-1
+// quick-check table as converted by the physics core), evaporating −4…8 °C (common practice).
+export const FALLBACK_CONDENSING_OVER_AMBIENT_K = { min: 14, max: 30 } as const;
+export const FALLBACK_EVAPORATING_C = { min: -4, max: 8 } as const;
+
+// Typical ranges, K (from memory; the vehicle maker's figures win): TXV systems subcool 3–9 K and hold
+// superheat 2–10 K; orifice-tube evaporators flood into the accumulator, so near-zero superheat is normal there
+// (nearZero null: not a separate grade).
+export const SUBCOOLING_K = { txv: { none: 1, low: 3, high: 9, veryHigh: 15 }, orifice_tube: { none: 0.5, low: 2, high: 8, veryHigh: 14 } } as const;
+export const SUPERHEAT_K = { txv: { nearZero: 2, high: 10, veryHigh: 20 }, orifice_tube: { nearZero: null, high: 4, veryHigh: 12 } } as const;
+
+// A static reading under about 70 kPa gauge (10 psig), or under half the saturation pressure at
+// ambient, means next to no refrigerant is left (common practice).
+export const EMPTY_BELOW_KPA_GAUGE = 70;
+export const EMPTY_BELOW_FRACTION_OF_SATURATION = 0.5;
+// Static excess grading, kPa over saturation at ambient. About 1 K of thermometer error is ~20 kPa
+// for R-134a near 25 °C (saturation table slope) plus gauge error: 35 kPa is within tolerance
+// (from memory; the SAE J2211 container tolerance table itself was not available).
+export const STATIC_EXCESS_KPA = { slight: 35, high: 70, veryHigh: 140 } as const;
+
+// SAE J2099 / J2912: below 98 % the refrigerant is not "pure" and must not be recycled.
+export const PURITY_PASS_PCT = 98;
+// Identifier air (NCG) grading, weight % (from memory).
+export const AIR_PCT = { some: 1, high: 3 } as const;
+// Charge deviation grading, % of label (common practice; recovery can leave some behind, SAE J2762).
+export const CHARGE_PCT = { empty: -85, veryLow: -35, low: -12, high: 8, veryHigh: 18 } as const;
+// Centre-vent grading, °C (NOLN article 1420: 3–8 °C expected); allowed to rise 0.3 K per K above 32 °C ambient (from memory).
+export const VENT_C = { freezing: 2, cold: 8, warm: 15, hotAmbientC: 32, riseKPerK: 0.3 } as const;
+
+export const GRADING = {
+  HIGH_SIDE_FAR_K,
+  LOW_SIDE_FAR_BELOW_K,
+  LIFT_CLOSE_MARGIN_K,
+  FALLBACK_CONDENSING_OVER_AMBIENT_K,
+  FALLBACK_EVAPORATING_C,
+  SUBCOOLING_K,
+  SUPERHEAT_K,
+  EMPTY_BELOW_KPA_GAUGE,
+  EMPTY_BELOW_FRACTION_OF_SATURATION,
+  STATIC_EXCESS_KPA,
+  PURITY_PASS_PCT,
+  AIR_PCT,
+  CHARGE_PCT,
+  VENT_C,
+} as const;
