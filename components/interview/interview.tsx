@@ -71,7 +71,12 @@ export function Interview({ caseId, version, record, pendingFromDevice, shop, is
   const onValues = useCallback((values: Record<string, unknown>) => view.group && send({ type: "ANSWER", group: view.group, values }), [send, view.group]);
 
   async function next() {
-    if (formRef.current && !(await formRef.current.check())) return;
+    if (formRef.current && view.group) {
+      const values = await formRef.current.check();
+      if (!values) return;
+      // An untouched group (no symptoms ticked, say) is still an answer.
+      send({ type: "ANSWER", group: view.group, values });
+    }
     send({ type: "NEXT" });
   }
 

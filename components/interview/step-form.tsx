@@ -14,8 +14,8 @@ import type { QuantityKind, UnitPreferences } from "./unit-preferences";
 import type { FormValues } from "./field-defs";
 
 export interface StepFormHandle {
-  /** Validates the group; returns false and focuses the first problem when something needs fixing. */
-  check: () => Promise<boolean>;
+  /** Validates the group; returns its values, or null after focusing the first problem. */
+  check: () => Promise<Record<string, unknown> | null>;
 }
 
 interface Props {
@@ -56,8 +56,9 @@ export const StepForm = forwardRef<StepFormHandle, Props>(function StepForm({ gr
       if (!ok) {
         const first = fields.find((f) => form.formState.errors[f.name]);
         if (first) form.setFocus(first.name);
+        return null;
       }
-      return ok;
+      return answerValuesOf(fields, form.getValues(), units);
     },
   }));
 

@@ -1,0 +1,247 @@
+import { expect, test, type Page } from "@playwright/test";
+import AxeBuilder from "@axe-core/playwright";
+import { SignInPage } from "./pages/sign-in-page";
+import { InterviewPage, openCase } from "./pages/interview-page";
+import { readCase } from "./pages/db";
+
+async function expectNoSeriousA11yIssues(page: Page, where: string) {
+  const results = await new AxeBuilder({ page }).analyze();
+  const serious = results.violations.filter((v) => v.impact === "serious" || v.impact === "critical");
+  expect(serious.map((v) => `${where}: ${v.id} (${v.nodes.length})`)).toEqual([]);
+}
+
+// Whole interviews with accessibility scans take longer than a page check.
+test.describe.configure({ timeout: 180_000 });
+
+test.beforeEach(async ({ page }) => {
+  await new SignInPage(page).signInAs("technician");
+});
+
+test("a clear overcharge on a hot day: overcharge first, conclusion saved with the findings snapshot (common practice signature: high side high, subcooling high, recovered mass ~25 % over label)", async ({ page }) => {
+  const interview = new InterviewPage(page);
+  await openCase(interview, /Honda CR-V/, "Cools a little on the highway, blows warm at lights; it was topped up at a quick-lube last month.");
+  await interview.expectStep("Vehicle system");
+  await expectNoSeriousA11yIssues(page, "system");
+  await expect(page.getByText(/mildly flammable|flammable/i).first()).toBeVisible();
+  await interview.next();
+
+  await interview.expectStep("Conditions");
+  await interview.digits("35");
+  await expectNoSeriousA11yIssues(page, "conditions");
+  await interview.press("Enter");
+
+  await interview.expectStep("Engine-off pressure");
+  await interview.digits("800");
+  await expect(page.getByText(/Saturation at 35.0 °C ambient/)).toBeVisible();
+  await expectNoSeriousA11yIssues(page, "static");
+  await interview.press("Enter");
+
+  await interview.expectStep("Running readings");
+  await interview.digits("2300");
+  await interview.enter("Low side", "330");
+  await interview.enter(/Liquid line/, "58");
+  await interview.enter(/Suction line/, "12");
+  await expect(page.getByText(/Condensing at/)).toBeVisible();
+  await expect(page.getByText(/Subcooling \d+\.\d K/)).toBeVisible();
+  await expect(page.getByText(/Superheat \d+\.\d K/)).toBeVisible();
+  await expectNoSeriousA11yIssues(page, "running");
+  await interview.press("Enter");
+
+  await interview.expectStep("What you see and hear");
+  await interview.choose(/shuts off on high pressure/);
+  await expectNoSeriousA11yIssues(page, "behaviour");
+  await interview.next();
+
+  await interview.expectStep("Refrigerant identifier");
+  await interview.enter("Purity", "100");
+  await interview.enter(/Air/, "0");
+  await expectNoSeriousA11yIssues(page, "identification");
+  await interview.next();
+
+  await interview.expectStep("Charge by weight");
+  await interview.choose(/^Yes$/);
+  await interview.enter("Mass recovered", "565");
+  await expect(page.getByText(/\+115 g \(\+25\.6 %\) against the 450 g label/)).toBeVisible();
+  await expectNoSeriousA11yIssues(page, "charge audit");
+  await interview.next();
+
+  await interview.expectStep("Findings");
+  await expect(interview.suspects().first()).toContainText("Too much refrigerant (overcharge)");
+  await expect(page.getByTestId("next-check")).not.toBeEmpty();
+  await expectNoSeriousA11yIssues(page, "findings");
+  await interview.waitUntilSaved();
+  const caseId = interview.caseIdFromUrl();
+  await page.getByLabel("Why, in a sentence or two").fill("Recovered 565 g against a 450 g label after a top-off; high side and subcooling both high.");
+  await page.getByRole("button", { name: "Submit the diagnosis" }).click();
+  await expect(page).toHaveURL(new RegExp(`/cases/${caseId}$`));
+
+  const saved = await readCase(caseId);
+  expect(saved.status).toBe("signed_off");
+  expect(saved.conclusion_cause).toBe("overcharge");
+  expect(saved.findings?.suspects[0]?.cause).toBe("overcharge");
+  expect(saved.engine_version).toBe(saved.findings?.engineVersion);
+  expect(saved.answers.answers.running).toMatchObject({ highKpaGauge: 2300, lowKpaGauge: 330, liquidLineC: 58, suctionLineC: 12 });
+  expect(saved.answers.answers.chargeAudit).toMatchObject({ recovered: true, recoveredChargeG: 565 });
+});
+
+test("an empty system branches to the leak search, skips running tests and ranks undercharge first", async ({ page }) => {
+  const interview = new InterviewPage(page);
+  await openCase(interview, /Silverado/, "No cold air at all since the spring; the compressor does not kick in.");
+  await interview.next();
+  await interview.expectStep("Conditions");
+  await interview.digits("24");
+  await interview.press("Enter");
+  await interview.expectStep("Engine-off pressure");
+  await interview.digits("0");
+  await interview.press("Enter");
+
+  await interview.expectStep("Leak search");
+  await expect(page.getByText("Do not run the compressor")).toBeVisible();
+  await expect(page.getByRole("navigation", { name: "Interview steps" }).getByRole("button", { name: /Running/ })).toHaveCount(0);
+  await expectNoSeriousA11yIssues(page, "leak search");
+  await interview.choose("Electronic detector");
+  await interview.choose("Condenser");
+  await interview.next();
+
+  await interview.expectStep("Findings");
+  await expect(interview.suspects().first()).toContainText("Not enough refrigerant");
+  await interview.waitUntilSaved();
+  const saved = await readCase(interview.caseIdFromUrl());
+  expect(saved.interview_step).toBe("findings");
+  expect(saved.answers.answers.static).toEqual({ staticKpaGauge: 0 });
+  expect(saved.answers.answers.leakFinding).toMatchObject({ method: "electronic_detector", whereFound: "condenser" });
+  expect(saved.answers.answers.running).toBeUndefined();
+});
+
+async function walkTwin(interview: InterviewPage, readings: { ambient: string; high: string; low: string; liquid: string; suction: string }) {
+  await interview.expectStep("Conditions");
+  await interview.digits(readings.ambient);
+  await interview.press("Enter");
+  await interview.skip();
+  await interview.expectStep("Running readings");
+  await interview.digits(readings.high);
+  await interview.enter("Low side", readings.low);
+  await interview.enter(/Liquid line/, readings.liquid);
+  await interview.enter(/Suction line/, readings.suction);
+  await interview.press("Enter");
+  await interview.next();
+  await interview.skip();
+  await interview.skip();
+  await interview.expectStep("Findings");
+  await interview.waitUntilSaved();
+  return readCase(interview.caseIdFromUrl());
+}
+
+test("a case entered in imperial units gives the same computed values as its metric twin (1 psi = 6.894757 kPa, NIST SP 811)", async ({ page }) => {
+  const metric = new InterviewPage(page);
+  await openCase(metric, /Silverado/, "Cooling is weak in the afternoon.");
+  await metric.next();
+  const metricCase = await walkTwin(metric, { ambient: "35", high: "1724", low: "276", liquid: "52", suction: "10" });
+
+  const imperial = new InterviewPage(page);
+  await openCase(imperial, /Silverado/, "Cooling is weak in the afternoon.");
+  await imperial.next();
+  await imperial.expectStep("Conditions");
+  await imperial.setUnit("Air temperature at the condenser", "°F");
+  // 95 °F = 35 °C; 250 psi = 1723.7 kPa; 40 psi = 275.8 kPa; 125.6 °F = 52 °C; 50 °F = 10 °C.
+  await imperial.field("Air temperature at the condenser").fill("95");
+  await imperial.press("Enter");
+  await imperial.skip();
+  await imperial.expectStep("Running readings");
+  await imperial.setUnit("High side", "psi");
+  await imperial.field("High side").fill("250");
+  await imperial.field("Low side").fill("40");
+  await imperial.field(/Liquid line/).fill("125.6");
+  await imperial.field(/Suction line/).fill("50");
+  await expect(page.getByText("= 250 psi · 1724 kPa · 17.24 bar")).toBeVisible();
+  await imperial.press("Enter");
+  await imperial.next();
+  await imperial.skip();
+  await imperial.skip();
+  await imperial.expectStep("Findings");
+  await imperial.waitUntilSaved();
+  const imperialCase = await readCase(imperial.caseIdFromUrl());
+
+  for (const key of ["condensingC", "evaporatingC", "subcoolingK", "superheatK", "condensingApproachK"] as const) {
+    expect(imperialCase.computed?.[key], key).toBeCloseTo(metricCase.computed![key]!, 1);
+  }
+  expect(imperialCase.answers.answers.conditions?.ambientC).toBeCloseTo(35, 6);
+});
+
+test("a standard performance check reaches the findings in at most 25 taps and key presses besides the digits", async ({ page }) => {
+  const interview = new InterviewPage(page);
+  await openCase(interview, /Ford Focus/, "Not as cold as it used to be.");
+  await interview.next();
+  await interview.expectStep("Conditions");
+  await interview.digits("30");
+  await interview.press("Enter");
+  await interview.expectStep("Engine-off pressure");
+  await interview.skip();
+  await interview.expectStep("Running readings");
+  await interview.digits("1500");
+  await interview.enter("Low side", "200");
+  await interview.press("Enter");
+  await interview.expectStep("What you see and hear");
+  await interview.next();
+  await interview.expectStep("Refrigerant identifier");
+  await interview.skip();
+  await interview.expectStep("Charge by weight");
+  await interview.skip();
+  await interview.expectStep("Findings");
+  await expect(interview.suspects().first()).toBeVisible();
+  console.log(`performance check: ${interview.taps} taps and key presses besides digits`);
+  expect(interview.taps).toBeLessThanOrEqual(25);
+});
+
+test("with the network cut mid-interview, answers wait on the device, reach the server when it returns, and a reload resumes at the same step", async ({ page, context }) => {
+  const interview = new InterviewPage(page);
+  await openCase(interview, /Ford Focus/, "Warm air after ten minutes of driving.");
+  await interview.next();
+  await interview.expectStep("Conditions");
+  await interview.waitUntilSaved();
+
+  await context.setOffline(true);
+  await interview.digits("28");
+  await interview.press("Enter");
+  await interview.expectStep("Engine-off pressure");
+  await interview.digits("650");
+  await interview.press("Enter");
+  await interview.expectStep("Running readings");
+  await interview.digits("1600");
+  await interview.enter("Low side", "210");
+  await expect(page.getByText(/No connection: \d+ changes? waiting on this device/)).toBeVisible();
+
+  await context.setOffline(false);
+  await interview.waitUntilSaved();
+  const caseId = interview.caseIdFromUrl();
+  const saved = await readCase(caseId);
+  expect(saved.answers.answers.conditions).toMatchObject({ ambientC: 28 });
+  expect(saved.answers.answers.static).toEqual({ staticKpaGauge: 650 });
+  expect(saved.answers.answers.running).toMatchObject({ highKpaGauge: 1600, lowKpaGauge: 210 });
+  expect(saved.interview_step).toBe("running");
+
+  await page.reload();
+  await interview.expectStep("Running readings");
+  await expect(interview.field("High side")).toHaveValue("1600");
+  await expect(interview.field("Low side")).toHaveValue("210");
+});
+
+test("an impossible reading gets a plain message beside the field and keeps what was typed", async ({ page }) => {
+  const interview = new InterviewPage(page);
+  await openCase(interview, /Ford Focus/, "Hissing from the dash.");
+  await interview.next();
+  await interview.digits("25");
+  await interview.press("Enter");
+  await interview.skip();
+  await interview.expectStep("Running readings");
+  await interview.digits("300");
+  await interview.enter("Low side", "900");
+  await interview.press("Enter");
+  await expect(page.getByText("The low side reads above the high side — check the hose connections")).toBeVisible();
+  await interview.expectStep("Running readings");
+  await expect(interview.field("Low side")).toHaveValue("900");
+  await interview.field("High side").fill("12.5.3");
+  await interview.press("Enter");
+  await expect(page.getByText(/High side: enter a number/)).toBeVisible();
+  await expect(interview.field("High side")).toHaveValue("12.5.3");
+});

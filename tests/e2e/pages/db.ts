@@ -1,0 +1,30 @@
+import mysql from "mysql2/promise";
+
+// The e2e server's own throwaway database (scripts/e2e-server.sh).
+const E2E_DATABASE = { host: "127.0.0.1", port: 3327, user: "chillwright", password: "chillwright-dev", database: "chillwright_e2e" };
+
+export interface SavedCaseRow {
+  status: string;
+  interview_step: string | null;
+  version: number;
+  answers: { answers: Record<string, Record<string, unknown>>; skipped: string[] };
+  computed: Record<string, number> | null;
+  findings: { engineVersion: string; suspects: { cause: string; score: number }[]; input: Record<string, unknown> } | null;
+  engine_version: string | null;
+  conclusion_cause: string | null;
+}
+
+const parse = (v: unknown) => (typeof v === "string" ? JSON.parse(v) : v);
+
+/** Reads a case straight from MariaDB, to check what the screens saved. */
+export async function readCase(caseId: number): Promise<SavedCaseRow> {
+  const connection = await mysql.createConnection(E2E_DATABASE);
+  try {
+    const [rows] = await connection.query("SELECT status, interview_step, version, answers, computed, findings, engine_version, conclusion_cause FROM service_case WHERE id = ?", [caseId]);
+    const row = (rows as Record<string, unknown>[])[0];
+    if (!row) throw new Error(`case ${caseId} not found`);
+    return { ...row, answers: parse(row.answers), computed: parse(row.computed), findings: parse(row.findings) } as SavedCaseRow;
+  } finally {
+    await connection.end();
+  }
+}
