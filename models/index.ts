@@ -109,7 +109,10 @@ function initModels(sequelize: Sequelize) {
   ServiceRecord.belongsTo(Case, { foreignKey: { name: "caseId", allowNull: false } });
   ServiceRecord.belongsTo(User, { foreignKey: { name: "technicianId", allowNull: false }, as: "technician" });
   RefrigerantMovement.belongsTo(Cylinder, { foreignKey: { name: "cylinderId", allowNull: false } });
-  RefrigerantMovement.belongsTo(User, { foreignKey: { name: "technicianId", allowNull: false }, as: "technician" });
+  RefrigerantMovement.belongsTo(User, {
+    foreignKey: { name: "technicianId", allowNull: false },
+    as: "technician",
+  });
 
   return {
     sequelize,
@@ -136,13 +139,18 @@ export type Models = ReturnType<typeof initModels>;
 const globalCache = globalThis as typeof globalThis & { chillwrightModels?: Models };
 let moduleCache: Models | undefined;
 
-/** The models bound to the process-wide Sequelize, initialised with their associations once. */
+/**
+ * The models bound to the process-wide Sequelize, initialised with their associations once.
+ * After closeSequelize() (scripts, tests) the next call binds them to the fresh instance.
+ */
 export function getModels(): Models {
+  const sequelize = getSequelize();
   // Outside production the cache lives on globalThis so hot reloads do not re-initialise the models.
   if (process.env.NODE_ENV === "production") {
-    moduleCache ??= initModels(getSequelize());
+    if (moduleCache?.sequelize !== sequelize) moduleCache = initModels(sequelize);
     return moduleCache;
   }
-  globalCache.chillwrightModels ??= initModels(getSequelize());
+  if (globalCache.chillwrightModels?.sequelize !== sequelize)
+    globalCache.chillwrightModels = initModels(sequelize);
   return globalCache.chillwrightModels;
 }
