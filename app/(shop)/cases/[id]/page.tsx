@@ -1,9 +1,14 @@
 import type { Metadata } from "next";
+import Link from "next/link";
 import { notFound } from "next/navigation";
 import { requireUser } from "@/lib/auth/guard";
+import { can } from "@/lib/auth/roles";
 import { getCase } from "@/lib/server/cases";
 import { isAppError } from "@/lib/errors";
 import { StatusBadge } from "@/components/cases/status-badge";
+import { CaseReadings } from "@/components/cases/case-readings";
+import { FindingsSnapshot } from "@/components/cases/findings-snapshot";
+import { SignOffForm } from "@/components/cases/sign-off-form";
 
 export const metadata: Metadata = { title: "Case" };
 
@@ -15,6 +20,11 @@ export default async function CasePage({ params }: { params: Promise<{ id: strin
     if (isAppError(error) && error.status === 404) notFound();
     throw error;
   });
+  const record = (detail.answers ?? {}) as { answers?: Record<string, never> };
+  const editable = detail.status === "draft" || detail.status === "sent_back";
+  const mayEdit = detail.technicianId === user.id || user.role === "owner" || user.role === "senior";
+  const mayReview = detail.status === "awaiting_signoff" && can(user.role, "signoff:review") && detail.technicianId !== user.id;
+  const findings = detail.findings as Parameters<typeof FindingsSnapshot>[0]["findings"] | null;
   return (
     <article className="space-y-4">
       <header className="flex flex-wrap items-center justify-between gap-2">
@@ -23,6 +33,27 @@ export default async function CasePage({ params }: { params: Promise<{ id: strin
         </h1>
         <StatusBadge status={detail.status} />
       </header>
+      {editable && mayEdit && (
+        <Link href={`/cases/${detail.id}/interview`} className="btn-primary min-h-glove w-full text-lg">
+          {detail.status === "sent_back" ? "Reopen the interview" : "Continue the interview"}
+        </Link>
+      )}
+      {detail.signOffs.length > 0 && (
+        <section className="card" aria-labelledby="review-heading">
+          <h2 id="review-heading" className="text-lg font-bold">
+            Sign-off
+          </h2>
+          <ul className="mt-2 space-y-2">
+            {detail.signOffs.map((s, i) => (
+              <li key={i}>
+                <span className="font-bold">{s.verdict === "signed_off" ? "Signed off" : "Sent back"}</span> by {s.reviewer}
+                {s.comment ? `: “${s.comment}”` : ""}
+              </li>
+            ))}
+          </ul>
+        </section>
+      )}
+      {mayReview && <SignOffForm caseId={detail.id} />}
       <section className="card">
         <h2 className="text-lg font-bold">Complaint, in the owner&apos;s words</h2>
         <p className="mt-1">&ldquo;{detail.complaint}&rdquo;</p>
@@ -37,25 +68,24 @@ export default async function CasePage({ params }: { params: Promise<{ id: strin
           <dd>{detail.expansionDevice === "txv" ? "TXV with receiver-drier" : detail.expansionDevice === "orifice_tube" ? "Orifice tube with accumulator" : "—"}</dd>
         </dl>
       </section>
-      {detail.conclusionNotes && (
-        <section className="card">
-          <h2 className="text-lg font-bold">Technician&apos;s conclusion</h2>
-          <p className="mt-1">{detail.conclusionNotes}</p>
-        </section>
+      <CaseReadings answers={record.answers ?? {}} />
+      {findings && Array.isArray(findings.suspects) ? (
+        <FindingsSnapshot findings={findings} conclusionCause={detail.conclusionCause} conclusionNotes={detail.conclusionNotes} />
+      ) : (
+        detail.conclusionNotes && (
+          <section className="card">
+            <h2 className="text-lg font-bold">Technician&apos;s conclusion</h2>
+            <p className="mt-1">{detail.conclusionNotes}</p>
+          </section>
+        )
       )}
-      {detail.signOffs.length > 0 && (
-        <section className="card">
-          <h2 className="text-lg font-bold">Sign-off</h2>
-          <ul className="mt-2 space-y-2">
-            {detail.signOffs.map((s, i) => (
-              <li key={i}>
-                <span className="font-bold">{s.verdict === "signed_off" ? "Signed off" : "Sent back"}</span> by {s.reviewer}
-                {s.comment ? `: “${s.comment}”` : ""}
-              </li>
-            ))}
-          </ul>
-        </section>
-      )}
+      <section className="card">
+        <h2 className="text-lg font-bold">Service record</h2>
+        <p className="mt-1">Recovery, evacuation and hold, oil and the recharge by weight; each step posts to the refrigerant ledger.</p>
+        <Link href={`/cases/${detail.id}/service`} className="btn-quiet mt-2">
+          Open the service record
+        </Link>
+      </section>
     </article>
   );
 }
