@@ -3,17 +3,17 @@ import AxeBuilder from "@axe-core/playwright";
 import { DEMO_USERS, SignInPage, type DemoRole } from "./pages/sign-in-page";
 
 const EXPECTED_NAV: Record<DemoRole, string[]> = {
-  owner: ["Cases", "Sign-off", "People"],
-  senior: ["Cases", "Sign-off"],
-  technician: ["Cases"],
-  apprentice: ["Cases"],
+  owner: ["Cases", "Sign-off", "Spec table", "Ledger", "People"],
+  senior: ["Cases", "Sign-off", "Spec table", "Ledger"],
+  technician: ["Cases", "Spec table", "Ledger"],
+  apprentice: ["Cases", "Spec table"],
 };
-const ALL_NAV = ["Cases", "Sign-off", "People"];
+const ALL_NAV = ["Cases", "Sign-off", "Spec table", "Ledger", "People"];
 const REFUSED_PAGES: Record<DemoRole, string[]> = {
   owner: [],
   senior: ["/settings/users"],
   technician: ["/settings/users", "/signoff"],
-  apprentice: ["/settings/users", "/signoff"],
+  apprentice: ["/settings/users", "/signoff", "/ledger"],
 };
 
 for (const role of Object.keys(DEMO_USERS) as DemoRole[]) {

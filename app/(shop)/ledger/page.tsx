@@ -1,0 +1,36 @@
+import type { Metadata } from "next";
+import { dehydrate, HydrationBoundary } from "@tanstack/react-query";
+import { requireUser } from "@/lib/auth/guard";
+import { can } from "@/lib/auth/roles";
+import { getQueryClient } from "@/lib/query-client";
+import { ledgerKeys } from "@/lib/queries/ledger";
+import { getShop } from "@/lib/server/shops";
+import { ledgerReport, listCylinders, listMovements } from "@/lib/server/ledger";
+import { cautionsFor } from "@/lib/service/cautions";
+import { LedgerView } from "@/components/ledger/ledger-view";
+import { CautionsList } from "@/components/service/cautions-list";
+
+export const metadata: Metadata = { title: "Ledger" };
+
+const LEDGER_CAUTIONS = ["recovery-cylinder-fill", "never-vent", "r1234yf-equipment-only", "local-rules-prevail"];
+
+export default async function LedgerPage() {
+  const user = await requireUser("ledger:read");
+  const shopId = user.shopId;
+  const [shop, cylinders, movements, report] = await Promise.all([getShop({ shopId }), listCylinders({ shopId }), listMovements({ shopId }), ledgerReport({ shopId })]);
+  const queryClient = getQueryClient();
+  queryClient.setQueryData(ledgerKeys.cylinders(), cylinders);
+  queryClient.setQueryData(ledgerKeys.movements(), movements);
+  queryClient.setQueryData(ledgerKeys.report(), { rows: report.rows, timeZone: report.timeZone });
+  return (
+    <>
+      <h1 className="mb-4 text-2xl font-bold">Refrigerant ledger</h1>
+      <HydrationBoundary state={dehydrate(queryClient)}>
+        <LedgerView massUnit={shop.units === "imperial" ? "lb" : "g"} canWrite={can(user.role, "ledger:write")} />
+      </HydrationBoundary>
+      <div className="card mt-6">
+        <CautionsList title="Cylinders and refrigerant" cautions={cautionsFor().filter((c) => LEDGER_CAUTIONS.includes(c.id))} />
+      </div>
+    </>
+  );
+}

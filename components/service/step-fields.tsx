@@ -1,0 +1,261 @@
+"use client";
+
+import type { Dispatch, SetStateAction } from "react";
+import type { ServiceStepId } from "@/app/api/cases/[id]/service/schema";
+import type { ServiceRecordSummary } from "@/lib/service/record-summary";
+import { REPLACED_PART_IDS, REPLACED_PART_LABELS } from "@/lib/service/oil";
+import { formatMass, formatVolume } from "@/lib/units";
+import type { Draft, TextField } from "./draft";
+import { EntryInput } from "./entry-input";
+import { ResultLine } from "./result-line";
+import type { ServiceRecordFormProps } from "./service-record-form";
+
+export interface CylinderChoice {
+  id: number;
+  label: string;
+  kind: "recovery" | "virgin" | "recycled";
+  netG: number;
+  fillMessage: string;
+}
+
+export interface SpecChoice {
+  id: number;
+  description: string;
+  labelChargeG: number;
+  oilType: string;
+  totalOilMl: number | null;
+  reasons: string[];
+}
+
+interface Props {
+  step: ServiceStepId;
+  draft: Draft;
+  setDraft: Dispatch<SetStateAction<Draft>>;
+  setText: (field: TextField, value: string) => void;
+  errorOf: (field: string) => string | undefined;
+  summary: ServiceRecordSummary;
+  props: ServiceRecordFormProps;
+}
+
+function CylinderSelect({ label, value, choices, onChange, error, massUnit }: { label: string; value: number | null; choices: CylinderChoice[]; onChange: (id: number | null) => void; error?: string; massUnit: Parameters<typeof formatMass>[1] }) {
+  const id = `cyl-${label.replace(/\W+/g, "-").toLowerCase()}`;
+  return (
+    <div>
+      <label htmlFor={id} className="field-label">
+        {label}
+      </label>
+      <select id={id} className="field-input" value={value ?? ""} onChange={(e) => onChange(e.target.value ? Number(e.target.value) : null)} aria-invalid={error ? true : undefined}>
+        <option value="">Choose a cylinder</option>
+        {choices.map((c) => (
+          <option key={c.id} value={c.id}>
+            {c.label} ({c.kind}, holds {formatMass(c.netG, massUnit)})
+          </option>
+        ))}
+      </select>
+      {choices.length === 0 && <p className="mt-1 text-ink-soft">No cylinder of this kind and refrigerant is in the ledger yet: add one on the Ledger page.</p>}
+      {error && <p className="field-error">{error}</p>}
+    </div>
+  );
+}
+
+export function StepFields({ step, draft, setDraft, setText, errorOf, summary, props }: Props) {
+  const u = props.units;
+  const massHint = `Type ${u.mass === "g" ? "grams" : u.mass} or add a unit: 650 g, 1.4 kg, 1 lb 7 oz.`;
+  const volHint = `Type ${u.volume === "mL" ? "mL" : "fl oz"} or add a unit: 45 mL, 1.5 fl oz.`;
+  const vacHint = "As the gauge shows it: 29.5 inHg of vacuum, or an absolute pressure such as 0.4 kPa.";
+  const t = draft.text;
+  const f = (field: TextField, label: string, hint?: string) => <EntryInput label={label} value={t[field]} onChange={(v) => setText(field, v)} hint={hint} error={errorOf(field)} />;
+
+  switch (step) {
+    case "identify":
+      return (
+        <div className="space-y-4">
+          <fieldset className="space-y-2">
+            <legend className="field-label">Spec-table row for this vehicle</legend>
+            {props.specChoices.length === 0 && <p className="text-ink-soft">No row of the shop&apos;s spec table matches this vehicle. Take the charge from the under-hood label.</p>}
+            {props.specChoices.map((s) => (
+              <label key={s.id} className="flex min-h-glove items-start gap-3 rounded-card border-2 border-paper-line p-3">
+                <input type="radio" name="spec" className="mt-1 h-6 w-6" checked={draft.specEntryId === s.id} onChange={() => setDraft((d) => ({ ...d, specEntryId: s.id }))} />
+                <span>
+                  <span className="block font-bold">{s.description}</span>
+                  <span className="block text-ink-soft">
+                    {formatMass(s.labelChargeG, u.mass)} · {s.oilType}
+                    {s.totalOilMl ? ` · ${formatVolume(s.totalOilMl, u.volume)} oil in total` : ""}
+                  </span>
+                  <span className="block text-sm text-ink-soft">{s.reasons.join("; ")}</span>
+                </span>
+              </label>
+            ))}
+            {props.specChoices.length > 0 && (
+              <button type="button" className="btn-quiet" onClick={() => setDraft((d) => ({ ...d, specEntryId: null }))}>
+                None of these applies
+              </button>
+            )}
+          </fieldset>
+          {f("labelCharge", "Label charge (under-hood label)", massHint)}
+          <div className="grid grid-cols-2 gap-3">
+            {f("purity", "Identifier: purity %")}
+            {f("air", "Identifier: air %")}
+          </div>
+          {summary.target?.warnings.map((w) => (
+            <ResultLine key={w} tone="bad">
+              {w}
+            </ResultLine>
+          ))}
+        </div>
+      );
+    case "recovery":
+      return (
+        <div className="space-y-4">
+          <div className="grid gap-3 sm:grid-cols-2">
+            <EntryInput type="datetime-local" label="Recovery started" value={t.recoveryStartedAt} onChange={(v) => setText("recoveryStartedAt", v)} error={errorOf("recoveryStartedAt")} />
+            <EntryInput type="datetime-local" label="Recovery ended" value={t.recoveryEndedAt} onChange={(v) => setText("recoveryEndedAt", v)} error={errorOf("recoveryEndedAt")} />
+          </div>
+          {f("recovered", "Recovered mass", massHint)}
+          <CylinderSelect
+            label="Recovered into cylinder"
+            value={draft.recoveryCylinderId}
+            choices={props.cylinders.filter((c) => c.kind === "recovery")}
+            onChange={(id) => setDraft((d) => ({ ...d, recoveryCylinderId: id }))}
+            error={errorOf("recoveryCylinderId")}
+            massUnit={u.mass}
+          />
+          {f("oilDrained", "Oil drained into the machine's bottle", volHint)}
+          <label className="flex min-h-glove items-center gap-3">
+            <input type="checkbox" className="h-6 w-6" checked={draft.oilPulled} onChange={(e) => setDraft((d) => ({ ...d, oilPulled: e.target.checked }))} />
+            <span className="font-bold">Oil came out with liquid (recovery went too fast)</span>
+          </label>
+          <div>
+            <label htmlFor="slow-note" className="field-label">
+              Note on the recovery (optional)
+            </label>
+            <textarea id="slow-note" rows={2} className="field-input py-2" value={t.slowRecoveryNote} onChange={(e) => setText("slowRecoveryNote", e.target.value)} />
+          </div>
+          {summary.recovered && (
+            <ResultLine tone={summary.recovered.verdict === "within" ? "good" : "bad"} sources={summary.recovered.sources} testId="recovered-vs-label">
+              {summary.recovered.sentence}
+            </ResultLine>
+          )}
+          {summary.pulledOil && (
+            <ResultLine tone="bad" sources={summary.pulledOil.sources} testId="pulled-oil">
+              {summary.pulledOil.sentence}
+            </ResultLine>
+          )}
+        </div>
+      );
+    case "evacuation":
+      return (
+        <div className="space-y-4">
+          {f("deepest", "Deepest vacuum reached", vacHint)}
+          {f("holdStart", "Vacuum at the start of the hold", vacHint)}
+          {f("holdEnd", "Vacuum at the end of the hold", vacHint)}
+          {f("holdMinutes", "Hold time, minutes")}
+          {summary.evacuation?.messages.map((m) => (
+            <ResultLine key={m} tone={summary.evacuation?.reached ? "good" : "bad"} sources={summary.evacuation?.sources}>
+              {m}
+            </ResultLine>
+          ))}
+          {summary.hold && (
+            <ResultLine tone={summary.hold.verdict === "pass" ? "good" : "bad"} sources={summary.hold.sources} testId="hold-verdict">
+              Hold {summary.hold.verdict === "pass" ? "passed" : "failed"}. {summary.hold.message} {summary.hold.warnings.join(" ")}
+            </ResultLine>
+          )}
+        </div>
+      );
+    case "oil":
+      return (
+        <div className="space-y-4">
+          <fieldset className="space-y-2">
+            <legend className="field-label">Parts replaced</legend>
+            {REPLACED_PART_IDS.map((part) => {
+              const picked = draft.parts[part];
+              return (
+                <div key={part} className="rounded-card border-2 border-paper-line p-2">
+                  <label className="flex min-h-touch items-center gap-3">
+                    <input
+                      type="checkbox"
+                      className="h-6 w-6"
+                      checked={Boolean(picked)}
+                      onChange={(e) =>
+                        setDraft((d) => {
+                          const parts = { ...d.parts };
+                          if (e.target.checked) parts[part] = { count: 1, measured: "" };
+                          else delete parts[part];
+                          return { ...d, parts };
+                        })
+                      }
+                    />
+                    <span>
+                      {REPLACED_PART_LABELS[part]}
+                      <span className="text-ink-soft"> — shop allowance {props.allowancesMl[part] == null ? "drain and measure" : formatVolume(props.allowancesMl[part] ?? 0, u.volume)}</span>
+                    </span>
+                  </label>
+                  {picked && (
+                    <EntryInput
+                      label={`Oil measured from the old ${REPLACED_PART_LABELS[part].toLowerCase()} (optional)`}
+                      value={picked.measured}
+                      onChange={(v) => setDraft((d) => ({ ...d, parts: { ...d.parts, [part]: { count: picked.count, measured: v } } }))}
+                      error={errorOf(`part-${part}`)}
+                    />
+                  )}
+                </div>
+              );
+            })}
+          </fieldset>
+          {summary.addBack && (
+            <ResultLine tone={summary.addBack.complete ? "info" : "bad"} sources={summary.addBack.lines.map((l) => l.source)} testId="oil-add-back">
+              Add back {formatVolume(summary.addBack.totalMl, u.volume)}:{" "}
+              {summary.addBack.lines.map((l) => `${l.label} ${l.volumeMl == null ? "(to measure)" : formatVolume(l.volumeMl, u.volume)}`).join(", ")}. {summary.addBack.warnings.join(" ")}
+            </ResultLine>
+          )}
+          {!summary.addBack && <p className="text-ink-soft">Enter the oil drained during recovery (step 2) to see how much to add back.</p>}
+          <EntryInput label="Oil type added" inputMode="text" value={t.oilAddedType} onChange={(v) => setText("oilAddedType", v)} error={errorOf("oilAddedType")} />
+          {f("oilAdded", "Oil added", volHint)}
+          {summary.oilAddedSentence && <ResultLine tone={Math.abs(summary.oilAddedDeltaMl ?? 0) <= 5 ? "good" : "bad"} sources={["common practice — an oil injector reads to about 5 mL"]}>{summary.oilAddedSentence}</ResultLine>}
+          {summary.oilWarnings.map((w) => (
+            <ResultLine key={w.id} tone="bad" sources={[w.source]}>
+              {w.text}
+            </ResultLine>
+          ))}
+        </div>
+      );
+    case "recharge":
+      return (
+        <div className="space-y-4">
+          {f("target", "Target charge", summary.target ? `Leave empty to charge to ${formatMass(summary.target.targetG, u.mass)} (from the ${summary.target.basis === "label" ? "label" : summary.target.basis === "spec_table" ? "spec table" : "maker's revised figure"}).` : massHint)}
+          {f("charged", "Charged mass (machine display)", massHint)}
+          <CylinderSelect
+            label="Charged from cylinder"
+            value={draft.chargeCylinderId}
+            choices={props.cylinders.filter((c) => c.kind !== "recovery")}
+            onChange={(id) => setDraft((d) => ({ ...d, chargeCylinderId: id }))}
+            error={errorOf("chargeCylinderId")}
+            massUnit={u.mass}
+          />
+          {summary.charge && (
+            <ResultLine tone={summary.charge.within ? "good" : "bad"} sources={[summary.charge.source]} testId="charge-check">
+              {summary.charge.sentence}
+            </ResultLine>
+          )}
+        </div>
+      );
+    case "final":
+      return (
+        <div className="space-y-4">
+          <p className="text-ink-soft">The performance reading after the recharge, engine running, doors closed, A/C at maximum.</p>
+          <div className="grid grid-cols-2 gap-3">
+            {f("finalAmbient", "Ambient temperature")}
+            {f("finalVent", "Centre vent temperature")}
+            {f("finalHigh", "High side (gauge)")}
+            {f("finalLow", "Low side (gauge)")}
+          </div>
+          <div>
+            <label htmlFor="record-notes" className="field-label">
+              Notes for the record (optional)
+            </label>
+            <textarea id="record-notes" rows={3} className="field-input py-2" value={t.notes} onChange={(e) => setText("notes", e.target.value)} />
+          </div>
+        </div>
+      );
+  }
+}
