@@ -40,6 +40,22 @@ describe("parseQuantity reads what a technician types", () => {
     expect(parseQuantity(text, kind, "kPa")).toEqual(expected);
   });
 
+  it("a comma before three digits is a decimal comma by default, or refused as ambiguous on request", () => {
+    expect(parseQuantity("1,250 kg", "mass", "g")).toEqual({ value: 1.25, unit: "kg" });
+    const refused = parseQuantity("1,400 g", "mass", "g", { ambiguousComma: "reject" });
+    expect("error" in refused && refused.error).toMatch(/ambiguous/);
+    expect(parseQuantity("12,500 kPa", "pressure", "kPa", { ambiguousComma: "reject" })).toHaveProperty(
+      "error",
+    );
+  });
+
+  it("a decimal comma is accepted where it cannot be a thousands separator, even when ambiguity is refused", () => {
+    const reject = { ambiguousComma: "reject" } as const;
+    expect(parseQuantity("0,125 kg", "mass", "g", reject)).toEqual({ value: 0.125, unit: "kg" });
+    expect(parseQuantity("1,45 MPa", "pressure", "kPa", reject)).toEqual({ value: 1.45, unit: "MPa" });
+    expect(parseQuantity("1,4000 kg", "mass", "g", reject)).toEqual({ value: 1.4, unit: "kg" });
+  });
+
   it("a bare number takes the default unit", () => {
     expect(parseQuantity("180", "pressure", "psi")).toEqual({ value: 180, unit: "psi" });
     expect(parseQuantity(" 24 ", "temperature", "C")).toEqual({ value: 24, unit: "C" });

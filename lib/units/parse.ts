@@ -50,13 +50,29 @@ const EXAMPLES: Record<QuantityKind, string> = {
 
 const PART = /([+-]?\d+(?:\.\d+)?|[+-]?\.\d+)\s*([^\d\s+-][^\d+-]*?)?\s*(?=[+-]?\d|[+-]?\.\d|$)/gy;
 
+const THOUSANDS_OR_DECIMAL = /(^|[^\d.,])[1-9]\d{0,2},\d{3}(?![\d,])/;
+
 /** Reads what a technician types: "32 psi", "2,1 bar", "75F", "−5 °C", "1 lb 4 oz". A bare number takes defaultUnit. */
-export function parseQuantity(text: string, kind: QuantityKind, defaultUnit: string): ParsedQuantity {
+export function parseQuantity(
+  text: string,
+  kind: QuantityKind,
+  defaultUnit: string,
+  opts?: {
+    /** "decimal" (default): "2,1" and "1,400" are decimal commas. "reject": "1,400" is refused as ambiguous. */
+    ambiguousComma?: "decimal" | "reject";
+  },
+): ParsedQuantity {
   const cleaned = text
     .trim()
     .replace(/[\u2212\u2013]/g, "-")
     .replace(/(\d),(\d)/g, "$1.$2")
     .replace(/\s+/g, " ");
+  // "1,400" could be 1400 or 1.4; where nothing else says which, a question beats a misread charge.
+  if (opts?.ambiguousComma === "reject" && THOUSANDS_OR_DECIMAL.test(text)) {
+    return {
+      error: `“${text.trim()}” is ambiguous: write it without a thousands separator (1400) or with a decimal point (1.4).`,
+    };
+  }
   const failure = {
     error: `Could not read “${text.trim()}” as a ${kind}. Try for example ${EXAMPLES[kind]}.`,
   };
