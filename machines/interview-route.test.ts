@@ -19,7 +19,8 @@ const answersArb: fc.Arbitrary<InterviewAnswers> = fc
     altitudeM: fc.option(fc.integer({ min: 0, max: 3000 }), { nil: undefined }),
     staticKpaGauge: fc.oneof(
       fc.constant(0),
-      fc.integer({ min: -80, max: 900 }),
+      // Above a full vacuum at any altitude generated here: about −70 kPa at 3000 m (ISO 2533).
+      fc.integer({ min: -60, max: 900 }),
       fc.integer({ min: 3000, max: 7000 }),
     ),
     purityPct: fc.oneof(fc.constant(98), fc.integer({ min: 85, max: 100 })),

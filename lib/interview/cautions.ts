@@ -35,7 +35,7 @@ const byId = {
     level: "notice",
     title: "Certified hands, no venting",
     text: "Only a certified technician recovers or charges refrigerant, with approved equipment. Never vent it.",
-    basis: "40 CFR 82 Subpart B (§82.34, §82.154); EU Regulation 307/2008",
+    basis: "40 CFR 82.34 (certified technicians, approved equipment); 40 CFR 82.154(a) (venting prohibition); EU Regulation 307/2008",
   },
   flammable: {
     id: "flammable_r1234yf",
@@ -64,7 +64,7 @@ const byId = {
     level: "warning",
     title: "Non-conductive oil only",
     text: "Electric compressors need the maker's non-conductive (dielectric) oil. A small amount of ordinary PAG oil can break down the motor's insulation and make the case live. Use equipment that injects no oil, or flush it first.",
-    basis: "SAE J2788H (no oil injection); ABRN, 'Readying your shop for hybrid A/C service', 2014",
+    basis: "ABRN, 'Readying your shop for hybrid A/C service', 2014; the vehicle maker's oil specification",
   },
   recoverSlowly: {
     id: "recover_slowly_accumulator",
