@@ -61,16 +61,37 @@ describe("wet bulb (ASHRAE Handbook—Fundamentals 2017 ch. 1, through PsychroLi
           expect(wet).toBeGreaterThanOrEqual(dew - 0.01);
         },
       ),
-      { numRuns: 300 },
+      { numRuns: 1000 },
     );
   });
 });
 
 describe("inputs", () => {
+  it("never throws anything but RangeError, whatever the numbers (property-based)", () => {
+    fc.assert(
+      fc.property(
+        fc.double(),
+        fc.double(),
+        fc.option(fc.double(), { nil: undefined }),
+        (dryBulbC, relativeHumidityPct, pressureKpa) => {
+          for (const compute of [dewPointC, wetBulbC]) {
+            try {
+              expect(Number.isFinite(compute({ dryBulbC, relativeHumidityPct, pressureKpa }))).toBe(true);
+            } catch (error) {
+              expect(error).toBeInstanceOf(RangeError);
+            }
+          }
+        },
+      ),
+      { numRuns: 1000 },
+    );
+  });
+
   it("refuses humidity outside (0, 100] % and impossible temperatures with a RangeError", () => {
     expect(() => dewPointC({ dryBulbC: 25, relativeHumidityPct: 0 })).toThrow(RangeError);
     expect(() => dewPointC({ dryBulbC: 25, relativeHumidityPct: 120 })).toThrow(RangeError);
     expect(() => wetBulbC({ dryBulbC: Number.NaN, relativeHumidityPct: 50 })).toThrow(RangeError);
+    expect(() => wetBulbC({ dryBulbC: 95, relativeHumidityPct: 50 })).toThrow(RangeError);
     expect(() => wetBulbC({ dryBulbC: 25, relativeHumidityPct: 50, pressureKpa: 0 })).toThrow(RangeError);
   });
 });

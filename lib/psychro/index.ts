@@ -1,6 +1,8 @@
 import { psychrolibSi } from "./psychrolib-si";
 
 const STANDARD_ATMOSPHERE_KPA = 101.325;
+// Air a vehicle meets, outside or at a vent; PsychroLib's iterations are checked across this span.
+const AIR_RANGE_C = { min: -50, max: 80 } as const;
 
 interface AirState {
   dryBulbC: number;
@@ -10,8 +12,8 @@ interface AirState {
 }
 
 function checked(a: AirState): { tempC: number; relHum: number; pressurePa: number } {
-  if (!Number.isFinite(a.dryBulbC) || a.dryBulbC < -100 || a.dryBulbC > 200)
-    throw new RangeError("Air temperature must be between −100 and 200 °C.");
+  if (!(a.dryBulbC >= AIR_RANGE_C.min && a.dryBulbC <= AIR_RANGE_C.max))
+    throw new RangeError(`Air temperature must be between −${-AIR_RANGE_C.min} and ${AIR_RANGE_C.max} °C.`);
   if (!(a.relativeHumidityPct > 0 && a.relativeHumidityPct <= 100))
     throw new RangeError("Relative humidity must be above 0 % and at most 100 %.");
   const pressureKpa = a.pressureKpa ?? STANDARD_ATMOSPHERE_KPA;
@@ -23,11 +25,22 @@ function checked(a: AirState): { tempC: number; relHum: number; pressurePa: numb
 /** Dew point, °C (ASHRAE Handbook—Fundamentals ch. 1, via PsychroLib). Air at the vents below it sheds water; fins below 0 °C ice. */
 export function dewPointC(a: AirState): number {
   const { tempC, relHum } = checked(a);
-  return psychrolibSi().GetTDewPointFromRelHum(tempC, relHum);
+  return outsideEquations(() => psychrolibSi().GetTDewPointFromRelHum(tempC, relHum));
 }
 
 /** Thermodynamic wet-bulb temperature, °C (ASHRAE Handbook—Fundamentals ch. 1, via PsychroLib). */
 export function wetBulbC(a: AirState): number {
   const { tempC, relHum, pressurePa } = checked(a);
-  return psychrolibSi().GetTWetBulbFromRelHum(tempC, relHum, pressurePa);
+  return outsideEquations(() => psychrolibSi().GetTWetBulbFromRelHum(tempC, relHum, pressurePa));
+}
+
+/** PsychroLib throws a plain Error when air is too dry for its equations; callers get a RangeError like any bad input. */
+function outsideEquations(compute: () => number): number {
+  try {
+    return compute();
+  } catch (error) {
+    throw new RangeError(
+      `This air is outside the range of the psychrometric equations: ${(error as Error).message}`,
+    );
+  }
 }
