@@ -68,6 +68,30 @@ describe("case version (optimistic concurrency)", () => {
   });
 });
 
+describe("concurrent writers", () => {
+  it("lets exactly one of several simultaneous writes at the same version through", async () => {
+    const models = getModels();
+    const { shop, serviceCase } = await createShopWithCase(models);
+    const devices = ["phone", "tablet", "bench", "office", "spare"];
+    const results = await Promise.all(
+      devices.map((device) =>
+        updateCaseAtVersion({
+          shopId: shop.id,
+          caseId: serviceCase.id,
+          expectedVersion: 1,
+          changes: { answers: { from: device } },
+        }),
+      ),
+    );
+    expect(results.filter((v) => v === 2)).toHaveLength(1);
+    expect(results.filter((v) => v === null)).toHaveLength(devices.length - 1);
+    const winner = devices[results.indexOf(2)];
+    const stored = await models.Case.findByPk(serviceCase.id);
+    expect(stored?.version).toBe(2);
+    expect(stored?.answers).toEqual({ from: winner });
+  });
+});
+
 describe("append-only tables", () => {
   it("refuses edits to sign-offs and audit events through the models", async () => {
     const models = getModels();
