@@ -5,7 +5,7 @@
 set -euo pipefail
 
 REPO="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
-DB_DIR="${DB_DIR:-$REPO/.data/mariadb}"
+DB_DIR="$(realpath -m "${DB_DIR:-$REPO/.data/mariadb}")"
 DB_PORT="${DB_PORT:-3307}"
 DB_NAME="${DB_NAME:-chillwright}"
 DB_USER="${DB_USER:-chillwright}"
