@@ -4,6 +4,7 @@ import { createMigrator } from "@/lib/db/migrator";
 import { closeSequelize } from "@/lib/db/sequelize";
 import { demoPassword } from "@/lib/demo/people";
 import { seedDemo } from "@/lib/demo/seed-demo";
+import { seedServiceDemo } from "@/lib/demo/service-demo";
 import { getModels } from "@/models";
 
 async function main() {
@@ -17,6 +18,7 @@ async function main() {
   const { created, skipped } = await seedDemo({ models, passwordHash });
   for (const name of created) console.log(`seeded   ${name}`);
   for (const name of skipped) console.log(`present  ${name} (left as it is)`);
+  for (const name of await seedServiceDemo({ models })) console.log(`seeded   ${name}`);
 }
 
 main()
