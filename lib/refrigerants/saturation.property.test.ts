@@ -1,6 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { VAPOUR_PRESSURE_EQUATIONS, wagnerPressureKpaAbs } from "@/data/refrigerants/equations";
+import { SATURATION_TABLES } from "./catalog";
 import {
   REFRIGERANT_IDS,
   refrigerantInfo,
@@ -43,6 +44,20 @@ describe("saturation lookups, property-based", () => {
       }),
       RUNS,
     );
+  });
+
+  it("round trips at and either side of every grid node, where interval look-up is most fragile", () => {
+    for (const id of REFRIGERANT_IDS) {
+      const { minTempC, maxTempC } = refrigerantInfo(id);
+      for (const nodeC of SATURATION_TABLES[id].tempC) {
+        for (const offsetK of [-1e-7, 0, 1e-7]) {
+          const tempC = Math.min(maxTempC, Math.max(minTempC, nodeC + offsetK));
+          expect(Math.abs(saturationTemperature(id, saturationPressure(id, tempC)) - tempC)).toBeLessThan(
+            1e-4,
+          );
+        }
+      }
+    }
   });
 
   it("pressure rises strictly with temperature", () => {

@@ -18,6 +18,27 @@ interface Lookup {
   forwardSlopes: Float64Array;
   /** d(1/T) / d ln p at each node */
   inverseSlopes: Float64Array;
+  /** Even buckets over ln p, each holding the grid interval where it starts, so p → T needs no search. */
+  bucketWidth: number;
+  bucketInterval: Uint16Array;
+}
+
+function buildBuckets(lnPressure: Float64Array): { bucketWidth: number; bucketInterval: Uint16Array } {
+  let narrowest = Infinity;
+  // The short last step up to the critical point is left out; the forward scan covers it.
+  for (let i = 1; i < lnPressure.length - 1; i++)
+    narrowest = Math.min(narrowest, lnPressure[i]! - lnPressure[i - 1]!);
+  const first = lnPressure[0]!;
+  const count = Math.ceil((lnPressure[lnPressure.length - 1]! - first) / narrowest) + 1;
+  const bucketWidth = (lnPressure[lnPressure.length - 1]! - first) / (count - 1);
+  const bucketInterval = new Uint16Array(count);
+  let interval = 0;
+  for (let k = 0; k < count; k++) {
+    const start = first + k * bucketWidth;
+    while (interval < lnPressure.length - 2 && lnPressure[interval + 1]! <= start) interval++;
+    bucketInterval[k] = interval;
+  }
+  return { bucketWidth, bucketInterval };
 }
 
 // ln p is nearly linear in 1/T (Clausius–Clapeyron), so a cubic on those axes adds almost no error.
@@ -35,6 +56,7 @@ function buildLookup(id: RefrigerantId, table: SaturationTableData): Lookup {
     lnPressure,
     forwardSlopes: monotoneSlopes(inverseTempK, lnPressure),
     inverseSlopes: monotoneSlopes(lnPressure, inverseTempK),
+    ...buildBuckets(lnPressure),
   };
 }
 
@@ -80,13 +102,12 @@ export function saturationTemperature(refrigerant: RefrigerantId, pressureKpaAbs
   const last = t.lastInterval + 1;
   if (!(lnP >= ys[0]! - EDGE_TOLERANCE)) throw rangeError(t, "pressure", "below", Math.exp(ys[0]!));
   if (!(lnP <= ys[last]! + EDGE_TOLERANCE)) throw rangeError(t, "pressure", "above", Math.exp(ys[last]!));
-  let low = 0;
-  let high = last;
-  while (high - low > 1) {
-    const mid = (low + high) >> 1;
-    if (ys[mid]! <= lnP) low = mid;
-    else high = mid;
-  }
+  const bucket = Math.floor((lnP - ys[0]!) / t.bucketWidth);
+  let low =
+    t.bucketInterval[
+      bucket < 0 ? 0 : bucket >= t.bucketInterval.length ? t.bucketInterval.length - 1 : bucket
+    ]!;
+  while (low < last - 1 && ys[low + 1]! <= lnP) low++;
   const y0 = ys[low]!;
   const x = hermite(
     lnP,
