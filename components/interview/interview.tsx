@@ -27,7 +27,8 @@ export interface InterviewProps {
 }
 
 export function Interview({ caseId, version, record, pendingFromDevice, shop, isApprentice, heading }: InterviewProps) {
-  const [snapshot, send, actor] = useMachine(interviewMachine, { input: { ...record, shop: { altitudeM: shop.altitudeM } } });
+  const machineShop = useMemo(() => ({ altitudeM: shop.altitudeM }), [shop.altitudeM]);
+  const [snapshot, send, actor] = useMachine(interviewMachine, { input: { ...record, shop: machineShop } });
   const view = viewOf(snapshot);
   const { answers, drafts, step } = snapshot.context;
   const { units, setUnit } = useUnitPreferences(shop.units);
@@ -115,6 +116,7 @@ export function Interview({ caseId, version, record, pendingFromDevice, shop, is
               units={units}
               setUnit={(kind, unit) => setUnit(kind, unit as never)}
               physics={physics}
+              shop={machineShop}
               onValues={onValues}
             />
             <div className="sticky bottom-0 -mx-4 mt-6 flex gap-2 border-t border-paper-line bg-paper px-4 py-3">

@@ -4,6 +4,7 @@ import { forwardRef, useImperativeHandle, useMemo } from "react";
 import type { InterviewAnswers } from "@/lib/interview/answers";
 import type { GroupId } from "@/lib/interview/steps";
 import type { AnswerIssue } from "@/lib/interview/validate";
+import type { ShopSettings } from "@/lib/interview/branches";
 import { GroupForm } from "./group-form";
 import { GROUP_FIELDS } from "./group-fields";
 import { liveReadouts, type PhysicsContext, type ReadoutLine } from "./live-physics";
@@ -26,6 +27,7 @@ interface Props {
   units: UnitPreferences;
   setUnit: (kind: QuantityKind, unit: string) => void;
   physics: PhysicsContext;
+  shop: ShopSettings;
   onValues: (values: Record<string, unknown>) => void;
 }
 
@@ -45,9 +47,9 @@ function Readout({ lines, conversion }: { lines: ReadoutLine[]; conversion?: str
   );
 }
 
-export const StepForm = forwardRef<StepFormHandle, Props>(function StepForm({ group, saved, answers, issues, units, setUnit, physics, onValues }, ref) {
+export const StepForm = forwardRef<StepFormHandle, Props>(function StepForm({ group, saved, answers, issues, units, setUnit, physics, shop, onValues }, ref) {
   const fields = GROUP_FIELDS[group];
-  const form = useGroupForm({ group, fields, saved, otherAnswers: answers, units, onValues });
+  const form = useGroupForm({ group, fields, saved, otherAnswers: answers, units, shop, onValues });
   const values = form.watch() as FormValues;
 
   useImperativeHandle(ref, () => ({

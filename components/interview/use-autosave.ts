@@ -29,6 +29,8 @@ export function useAutosave({ caseId, initialVersion }: { caseId: number; initia
   const timer = useRef<ReturnType<typeof setTimeout> | undefined>(undefined);
   const retryMs = useRef(1000);
   const blocked = useRef(false);
+  // Timers call the latest flush through this ref; flush schedules itself again on failure.
+  const flushRef = useRef<() => Promise<void>>(async () => {});
 
   const flush = useCallback(async () => {
     clearTimeout(timer.current);
@@ -67,16 +69,19 @@ export function useAutosave({ caseId, initialVersion }: { caseId: number; initia
       } else {
         // The network or the server is away: keep the copy in IndexedDB and try again later.
         setStatus({ kind: "waiting", pending, reason: navigator.onLine ? "retrying" : "offline" });
-        timer.current = setTimeout(() => void flush(), retryMs.current);
+        timer.current = setTimeout(() => void flushRef.current(), retryMs.current);
         retryMs.current = Math.min(retryMs.current * 2, MAX_RETRY_MS);
       }
     } finally {
       inFlight.current = false;
     }
     if (latest.current && !blocked.current && latest.current.json !== lastSentJson.current) {
-      timer.current = setTimeout(() => void flush(), DEBOUNCE_MS);
+      timer.current = setTimeout(() => void flushRef.current(), DEBOUNCE_MS);
     }
   }, [caseId]);
+  useEffect(() => {
+    flushRef.current = flush;
+  }, [flush]);
 
   const queue = useCallback(
     (record: SavedInterview, options: { pendingFromEarlier?: number } = {}) => {

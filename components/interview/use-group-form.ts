@@ -5,6 +5,7 @@ import { useForm, type FieldErrors, type Resolver } from "react-hook-form";
 import type { InterviewAnswers } from "@/lib/interview/answers";
 import type { GroupId } from "@/lib/interview/steps";
 import { validateGroup } from "@/lib/interview/validate";
+import type { ShopSettings } from "@/lib/interview/branches";
 import type { FieldDef, FormValues } from "./field-defs";
 import { answerValuesOf, formValuesOf } from "./form-values";
 import type { UnitPreferences } from "./unit-preferences";
@@ -20,6 +21,7 @@ export function useGroupForm({
   saved,
   otherAnswers,
   units,
+  shop,
   onValues,
 }: {
   group: GroupId;
@@ -27,15 +29,18 @@ export function useGroupForm({
   saved: unknown;
   otherAnswers: InterviewAnswers;
   units: UnitPreferences;
+  shop: ShopSettings;
   onValues: (values: Record<string, unknown>) => void;
 }) {
-  const latest = useRef({ otherAnswers, units, onValues });
-  latest.current = { otherAnswers, units, onValues };
+  const latest = useRef({ otherAnswers, units, shop, onValues });
+  useEffect(() => {
+    latest.current = { otherAnswers, units, shop, onValues };
+  }, [otherAnswers, units, shop, onValues]);
 
   const resolver = useMemo<Resolver<FormValues>>(
     () => async (values) => {
-      const { otherAnswers: others, units: u } = latest.current;
-      const check = validateGroup(group, answerValuesOf(fields, values, u), others);
+      const { otherAnswers: others, units: u, shop: s } = latest.current;
+      const check = validateGroup(group, answerValuesOf(fields, values, u), others, s);
       if (check.ok) return { values, errors: {} };
       const errors: FieldErrors<FormValues> = {};
       for (const issue of check.issues) {
@@ -53,12 +58,24 @@ export function useGroupForm({
     mode: "onTouched",
   });
 
+  // A unit switch rewrites the texts first and the units after: hand the machine the values again
+  // once both agree, so 30 psi switched to kPa stays 206.8 kPa and never reads as 30 kPa.
+  const { subscribe, getValues } = form;
+  const unitsSeen = useRef(units);
   useEffect(() => {
-    const subscription = form.watch((values) => {
-      latest.current.onValues(answerValuesOf(fields, values as FormValues, latest.current.units));
-    });
-    return () => subscription.unsubscribe();
-  }, [form, fields]);
+    if (unitsSeen.current === units) return;
+    unitsSeen.current = units;
+    latest.current.onValues(answerValuesOf(fields, getValues(), units));
+  }, [units, fields, getValues]);
+
+  useEffect(
+    () =>
+      subscribe({
+        formState: { values: true },
+        callback: ({ values }) => latest.current.onValues(answerValuesOf(fields, values as FormValues, latest.current.units)),
+      }),
+    [subscribe, fields],
+  );
 
   return form;
 }

@@ -71,7 +71,8 @@ describe("toDiagnosisInput", () => {
       ...emptySystemAnswers,
       leakFinding: { method: "electronic_detector", whereFound: "not_found_yet" },
     };
-    expect(toDiagnosisInput(notFound)?.symptoms).toEqual(["no_leak_found"]);
+    // A search still under way is no evidence either way.
+    expect(toDiagnosisInput(notFound)?.symptoms).toEqual([]);
     const flagged: InterviewAnswers = {
       ...exampleAnswers,
       identification: { purityPct: 95, hydrocarbonFlagged: true },

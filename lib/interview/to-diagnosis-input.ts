@@ -57,7 +57,8 @@ function symptomsFrom(answers: InterviewAnswers): SymptomId[] | undefined {
   if (!asked) return undefined;
   const symptoms: SymptomId[] = [...(behaviour?.symptoms ?? [])];
   if (identification?.hydrocarbonFlagged) symptoms.push("identifier_flags_hydrocarbon");
-  if (leakFinding?.whereFound !== undefined)
-    symptoms.push(leakFinding.whereFound === "not_found_yet" ? "no_leak_found" : "leak_found");
+  // "Not found yet" is a search still under way, not a clean result at the detector's most
+  // sensitive setting (which is what the engine's no_leak_found means): it moves no score.
+  if (leakFinding?.whereFound !== undefined && leakFinding.whereFound !== "not_found_yet") symptoms.push("leak_found");
   return symptoms;
 }

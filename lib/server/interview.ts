@@ -3,7 +3,7 @@ import type { User } from "lucia";
 import { getModels, type JsonObject, type JsonValue } from "@/models";
 import { AppError } from "@/lib/errors";
 import { sortSavedAnswers } from "@/lib/interview/validate";
-import { toDiagnosisInput } from "@/lib/interview/to-diagnosis-input";
+import { diagnosisInputFor } from "@/lib/interview/to-diagnosis-input";
 import { diagnose, ENGINE_VERSION } from "@/lib/diagnosis";
 import type { CaseSubmitInput, InterviewSaveInput } from "@/app/api/cases/interview-schema";
 import { recordAudit } from "./audit";
@@ -45,9 +45,10 @@ async function updateIfVersion({ caseId, shopId, baseVersion, values }: { caseId
 export async function saveInterview({ user, caseId, input, shopAltitudeM }: { user: User; caseId: number; input: InterviewSaveInput; shopAltitudeM: number }) {
   await editableCase({ user, caseId });
   // Nothing typed is lost: a group that fails validation is stored as a draft, not refused.
-  const sorted = sortSavedAnswers(input.answers);
+  const shop = { altitudeM: shopAltitudeM };
+  const sorted = sortSavedAnswers(input.answers, shop);
   const drafts = { ...input.drafts, ...sorted.drafts };
-  const diagnosisInput = toDiagnosisInput(sorted.answers, { altitudeM: shopAltitudeM });
+  const diagnosisInput = diagnosisInputFor(sorted.answers, shop);
   const computed = diagnosisInput ? (diagnose(diagnosisInput).computed as unknown as JsonObject) : null;
   const version = await updateIfVersion({
     caseId,
@@ -69,8 +70,10 @@ export async function submitCase({ user, caseId, input, shopAltitudeM }: { user:
     throw new AppError("conflict:engine", "The findings were worked out by an older version of Chillwright. Reload the page and submit again.");
   }
   const record = row.answers as { answers?: unknown };
-  const { answers } = sortSavedAnswers(record.answers);
-  const diagnosisInput = toDiagnosisInput(answers, { altitudeM: shopAltitudeM });
+  const shop = { altitudeM: shopAltitudeM };
+  const { answers } = sortSavedAnswers(record.answers, shop);
+  // The same route-filtered input the findings screen used, so the stored snapshot is what was shown.
+  const diagnosisInput = diagnosisInputFor(answers, shop);
   if (!diagnosisInput) throw new AppError("bad_request:case", "Answer the system and conditions steps before submitting.");
   const findings = diagnose(diagnosisInput);
   const technician = await getModels().User.findOne({ where: { id: row.technicianId, shopId: user.shopId }, attributes: ["role"], raw: true });
