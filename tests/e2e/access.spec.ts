@@ -10,6 +10,8 @@ const clients = new Map<Who, APIRequestContext>();
 let harbourlineCaseId = 0;
 let ridgebackUserId = "";
 let harbourlineTechId = "";
+let harbourlineVehicleId = 0;
+let harbourlineCylinderId = 0;
 
 test.beforeAll(async () => {
   clients.set("anonymous", await apiClient());
@@ -21,6 +23,10 @@ test.beforeAll(async () => {
   ridgebackUserId = ridgebackUsers.users[0].id;
   const harbourlineUsers = await (await clients.get("owner")!.get("/api/users")).json();
   harbourlineTechId = harbourlineUsers.users.find((u: { email: string }) => u.email === DEMO_USERS.technician.email).id;
+  const vehicles = await (await clients.get("owner")!.get("/api/vehicles")).json();
+  harbourlineVehicleId = vehicles.vehicles[0].vehicleId;
+  const cylinders = await (await clients.get("owner")!.get("/api/cylinders")).json();
+  harbourlineCylinderId = cylinders.cylinders.find((c: { retired: boolean }) => !c.retired).id;
 });
 
 test.afterAll(async () => {
@@ -73,6 +79,101 @@ const table: { name: string; call: (c: APIRequestContext) => Promise<{ status():
     name: "GET /api/cases/:id (not a number)",
     call: (c) => c.get("/api/cases/abc"),
     expect: { anonymous: 401, owner: 400, senior: 400, technician: 400, apprentice: 400, otherShopOwner: 400 },
+  },
+  {
+    name: "GET /api/specs",
+    call: (c) => c.get("/api/specs?q=Silverado"),
+    expect: { anonymous: 401, owner: 200, senior: 200, technician: 200, apprentice: 200, otherShopOwner: 200 },
+  },
+  {
+    name: "POST /api/specs (malformed)",
+    call: (c) => c.post("/api/specs", { data: { make: "", labelChargeG: "lots" } }),
+    expect: { anonymous: 401, owner: 400, senior: 400, technician: 403, apprentice: 403, otherShopOwner: 400 },
+  },
+  {
+    name: "DELETE /api/specs/:id (no such row)",
+    call: (c) => c.delete("/api/specs/999999999"),
+    expect: { anonymous: 401, owner: 404, senior: 404, technician: 403, apprentice: 403, otherShopOwner: 404 },
+  },
+  {
+    name: "POST /api/specs/import?step=preview (empty file)",
+    call: (c) => c.post("/api/specs/import?step=preview", { data: { csv: "" } }),
+    expect: { anonymous: 401, owner: 400, senior: 400, technician: 403, apprentice: 403, otherShopOwner: 400 },
+  },
+  {
+    name: "GET /api/specs/export",
+    call: (c) => c.get("/api/specs/export"),
+    expect: { anonymous: 401, owner: 200, senior: 200, technician: 200, apprentice: 200, otherShopOwner: 200 },
+  },
+  {
+    name: "GET /api/specs/matches (a Harbourline vehicle)",
+    call: (c) => c.get(`/api/specs/matches?vehicleId=${harbourlineVehicleId}`),
+    expect: { anonymous: 401, owner: 200, senior: 200, technician: 200, apprentice: 200, otherShopOwner: 404 },
+  },
+  {
+    name: "GET /api/specs/matches (not a number)",
+    call: (c) => c.get("/api/specs/matches?vehicleId=abc"),
+    expect: { anonymous: 401, owner: 400, senior: 400, technician: 400, apprentice: 400, otherShopOwner: 400 },
+  },
+  {
+    name: "GET /api/specs/oil-allowances",
+    call: (c) => c.get("/api/specs/oil-allowances"),
+    expect: { anonymous: 401, owner: 200, senior: 200, technician: 200, apprentice: 200, otherShopOwner: 200 },
+  },
+  {
+    name: "PUT /api/specs/oil-allowances (malformed)",
+    call: (c) => c.put("/api/specs/oil-allowances", { data: { allowancesMl: { condenser: -4, wiper: 3 } } }),
+    expect: { anonymous: 401, owner: 400, senior: 400, technician: 403, apprentice: 403, otherShopOwner: 400 },
+  },
+  {
+    name: "GET /api/cases/:id/service (a Harbourline case)",
+    call: (c) => c.get(`/api/cases/${harbourlineCaseId}/service`),
+    expect: { anonymous: 401, owner: 200, senior: 200, technician: 200, apprentice: 200, otherShopOwner: 404 },
+  },
+  {
+    name: "PUT /api/cases/:id/service (malformed)",
+    call: (c) => c.put(`/api/cases/${harbourlineCaseId}/service`, { data: { baseVersion: -1, step: "somewhere", recoveredG: "lots" } }),
+    expect: { anonymous: 401, owner: 400, senior: 400, technician: 400, apprentice: 403, otherShopOwner: 400 },
+  },
+  {
+    name: "DELETE /api/cases/:id/service (version missing)",
+    call: (c) => c.delete(`/api/cases/${harbourlineCaseId}/service`),
+    expect: { anonymous: 401, owner: 400, senior: 400, technician: 400, apprentice: 403, otherShopOwner: 400 },
+  },
+  {
+    name: "GET /api/cylinders",
+    call: (c) => c.get("/api/cylinders"),
+    expect: { anonymous: 401, owner: 200, senior: 200, technician: 200, apprentice: 403, otherShopOwner: 200 },
+  },
+  {
+    name: "POST /api/cylinders (malformed)",
+    call: (c) => c.post("/api/cylinders", { data: { label: "", tareG: -1 } }),
+    expect: { anonymous: 401, owner: 400, senior: 400, technician: 400, apprentice: 403, otherShopOwner: 400 },
+  },
+  {
+    name: "PATCH /api/cylinders/:id (a Harbourline cylinder, kept active)",
+    call: (c) => c.patch(`/api/cylinders/${harbourlineCylinderId}`, { data: { retired: false } }),
+    expect: { anonymous: 401, owner: 200, senior: 200, technician: 200, apprentice: 403, otherShopOwner: 404 },
+  },
+  {
+    name: "GET /api/ledger/movements",
+    call: (c) => c.get("/api/ledger/movements"),
+    expect: { anonymous: 401, owner: 200, senior: 200, technician: 200, apprentice: 403, otherShopOwner: 200 },
+  },
+  {
+    name: "POST /api/ledger/movements (malformed)",
+    call: (c) => c.post("/api/ledger/movements", { data: { type: "vented", massG: 0 } }),
+    expect: { anonymous: 401, owner: 400, senior: 400, technician: 400, apprentice: 403, otherShopOwner: 400 },
+  },
+  {
+    name: "GET /api/ledger/report?format=csv",
+    call: (c) => c.get("/api/ledger/report?format=csv"),
+    expect: { anonymous: 401, owner: 200, senior: 200, technician: 200, apprentice: 403, otherShopOwner: 200 },
+  },
+  {
+    name: "GET /api/ledger/report?format=xml",
+    call: (c) => c.get("/api/ledger/report?format=xml"),
+    expect: { anonymous: 401, owner: 400, senior: 400, technician: 400, apprentice: 403, otherShopOwner: 400 },
   },
 ];
 
