@@ -1,10 +1,9 @@
-// npx tsx scripts/seed.ts: adds the demo shops, people, vehicles and cases (idempotent).
+// npx tsx scripts/seed.ts: adds the demo shops, people, vehicles, cases and service records (idempotent).
 import { hashPassword } from "@/lib/auth/password";
 import { createMigrator } from "@/lib/db/migrator";
 import { closeSequelize } from "@/lib/db/sequelize";
 import { demoPassword } from "@/lib/demo/people";
-import { seedDemo } from "@/lib/demo/seed-demo";
-import { seedServiceDemo } from "@/lib/demo/service-demo";
+import { seedAllDemo } from "@/lib/demo/seed-all";
 import { getModels } from "@/models";
 
 async function main() {
@@ -15,10 +14,7 @@ async function main() {
   }
   // argon2 is slow on purpose: hash once and share it across the demo accounts.
   const passwordHash = await hashPassword(demoPassword);
-  const { created, skipped } = await seedDemo({ models, passwordHash });
-  for (const name of created) console.log(`seeded   ${name}`);
-  for (const name of skipped) console.log(`present  ${name} (left as it is)`);
-  for (const name of await seedServiceDemo({ models })) console.log(`seeded   ${name}`);
+  for (const line of await seedAllDemo({ models, passwordHash })) console.log(line);
 }
 
 main()

@@ -41,6 +41,8 @@ export type DemoCase = {
   conclusionNotes: string | null;
   confirmedRepair: string | null;
   submittedMinutesIn: number | null;
+  /** For a closed case: when it was closed, after the repair. */
+  closedMinutesIn?: number;
   readingSets: DemoReadingSet[];
   signOffs: DemoSignOff[];
 };

@@ -52,6 +52,7 @@ describe("demo data", () => {
       if (c.answers.running) expect(firstRunning, c.key).toMatchObject(c.answers.running);
       expect(c.diagnosed, c.key).toBe(c.interviewStep === "findings");
       expect(c.status === "draft", c.key).toBe(c.submittedMinutesIn === null);
+      expect(c.status === "closed", c.key).toBe(c.closedMinutesIn !== undefined);
     }
   });
 

@@ -26,16 +26,19 @@ const focus: DemoCase = {
     static: { staticKpaGauge: 645 },
     running: { highKpaGauge: 880, lowKpaGauge: 95, liquidLineC: 37, suctionLineC: 14, ventC: 17 },
     behaviour: { symptoms: ["clutch_rapid_cycling", "worse_at_idle", "oil_residue_at_fitting"] },
-    identification: { purityPct: 99.5, airPct: 0.3 },
-    chargeAudit: { recovered: true, recoveredChargeG: 310, oilRemovedMl: 10 },
+    identification: { purityPct: 99.4, airPct: 0.3 },
+    chargeAudit: { recovered: true, recoveredChargeG: 430, oilRemovedMl: 12 },
   },
   diagnosed: true,
   conclusionCause: "undercharge",
   conclusionNotes:
-    "Both sides low, high superheat and rapid cycling. Static pressure matches ambient, so some charge is left; recovered 310 g against a 570 g label.",
+    "Both sides low, high superheat and rapid cycling. Static pressure matches ambient, so some charge is left; recovered 430 g against a 570 g label.",
   confirmedRepair:
-    "Oily residue at the condenser inlet fitting, confirmed with an electronic detector. Replaced the O-ring, evacuated, vacuum held 15 min, recharged 570 g by weight.",
+    "Oily residue on the condenser core, leak confirmed with an electronic detector. Replaced the condenser, put back the 12 mL drained plus the part's oil allowance, evacuated, vacuum held 10 min, recharged 572 g against the 570 g label.",
   submittedMinutesIn: 55,
+  // The repair itself (recovery, new condenser, vacuum hold, recharge, final readings) is the
+  // service record the service-side demo adds, between sign-off and closing.
+  closedMinutesIn: 215,
   readingSets: [
     {
       kind: "static",
@@ -56,18 +59,6 @@ const focus: DemoCase = {
       liquidLineC: 37,
       suctionLineC: 14,
       ventC: 17,
-    },
-    {
-      kind: "final",
-      minutesIn: 160,
-      ambientC: 28,
-      relativeHumidityPct: 58,
-      engineRpm: 1500,
-      highKpaGauge: 1350,
-      lowKpaGauge: 210,
-      liquidLineC: 44,
-      suctionLineC: 6,
-      ventC: 6,
     },
   ],
   signOffs: [

@@ -140,6 +140,7 @@ async function seedCase(
   const vehicle = required(vehicles.get(d.vehicleKey), `vehicle ${d.vehicleKey}`);
   const technicianId = required(userIds.get(d.technicianKey), `user ${d.technicianKey}`);
   const lastMinute = Math.max(
+    d.closedMinutesIn ?? 0,
     d.submittedMinutesIn ?? 0,
     ...d.readingSets.map((r) => r.minutesIn),
     ...d.signOffs.map((s) => s.minutesIn),

@@ -42,7 +42,7 @@ export const demoVehicles: DemoVehicle[] = [
     expansionDevice: "txv",
     electricCompressor: false,
     labelChargeG: 450,
-    oilType: "PAG (R-1234yf rated)",
+    oilType: "PAG 46",
   },
   {
     key: "silverado",
@@ -68,7 +68,7 @@ export const demoVehicles: DemoVehicle[] = [
     expansionDevice: "txv",
     electricCompressor: true,
     labelChargeG: 480,
-    oilType: "POE, electric-compressor grade",
+    oilType: "POE (dielectric)",
   },
   {
     key: "ranger",

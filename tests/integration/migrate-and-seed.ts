@@ -2,7 +2,7 @@ import { hashPassword } from "@/lib/auth/password";
 import { createMigrator } from "@/lib/db/migrator";
 import { closeSequelize } from "@/lib/db/sequelize";
 import { demoPassword } from "@/lib/demo/people";
-import { seedDemo } from "@/lib/demo/seed-demo";
+import { seedAllDemo } from "@/lib/demo/seed-all";
 import { getModels } from "@/models";
 
 /** What `migrate.ts up` and `seed.ts` do, in one process, for the integration database. */
@@ -10,7 +10,7 @@ export async function migrateAndSeed() {
   const models = getModels();
   try {
     await createMigrator(models.sequelize).up();
-    await seedDemo({ models, passwordHash: await hashPassword(demoPassword) });
+    await seedAllDemo({ models, passwordHash: await hashPassword(demoPassword) });
   } finally {
     await closeSequelize();
   }
