@@ -1,53 +1,27 @@
-import { create, createUnitDependencies, unitDependencies } from "mathjs";
-
 export type PressureUnit = "kPa" | "bar" | "MPa" | "psi" | "inHg";
 export type TemperatureUnit = "C" | "F" | "K";
 export type MassUnit = "g" | "kg" | "oz" | "lb";
 export type VolumeUnit = "mL" | "floz";
 
-// A private mathjs instance, so defining inHg never touches anyone else's.
-const math = create({ createUnitDependencies: createUnitDependencies!, unitDependencies: unitDependencies! });
-// Inch of mercury, conventional: 3.386389 kPa (NIST SP 811, appendix B.8).
-math.createUnit("inHg", "3.386389 kPa");
+export interface UnitFactors {
+  KPA_PER_UNIT: Readonly<Record<PressureUnit, number>>;
+  GRAMS_PER_UNIT: Readonly<Record<MassUnit, number>>;
+  MILLILITRES_PER_UNIT: Readonly<Record<VolumeUnit, number>>;
+  /** °C = scale · value + offset */
+  TEMPERATURE_TO_C: Readonly<Record<TemperatureUnit, { scale: number; offset: number }>>;
+  /** Kelvin per unit of temperature difference (no offset). */
+  KELVIN_PER_DIFFERENCE_UNIT: Readonly<Record<"K" | "F", number>>;
+}
 
-const factor = (from: string, to: string) => math.unit(1, from).toNumber(to);
-
-/** Conversion factors worked out once with mathjs units; the hot path multiplies plain numbers. */
-export const KPA_PER_UNIT: Readonly<Record<PressureUnit, number>> = {
-  kPa: 1,
-  bar: factor("bar", "kPa"),
-  MPa: factor("MPa", "kPa"),
-  psi: factor("psi", "kPa"),
-  inHg: factor("inHg", "kPa"),
-};
-
-export const GRAMS_PER_UNIT: Readonly<Record<MassUnit, number>> = {
-  g: 1,
-  kg: factor("kg", "g"),
-  oz: factor("oz", "g"),
-  lb: factor("lb", "g"),
-};
-
+// The numbers mathjs gives (mathjs-factors.ts), kept as constants so the browser need not load mathjs;
+// factors.test.ts fails if the two ever differ. The hot path multiplies plain numbers.
+export const KPA_PER_UNIT: UnitFactors["KPA_PER_UNIT"] = { kPa: 1, bar: 100, MPa: 1000, psi: 6.89475729276459, inHg: 3.386389 };
+export const GRAMS_PER_UNIT: UnitFactors["GRAMS_PER_UNIT"] = { g: 1, kg: 1000, oz: 28.349523125, lb: 453.59237 };
 /** US fluid ounce. */
-export const MILLILITRES_PER_UNIT: Readonly<Record<VolumeUnit, number>> = {
-  mL: 1,
-  floz: factor("floz", "mL"),
+export const MILLILITRES_PER_UNIT: UnitFactors["MILLILITRES_PER_UNIT"] = { mL: 1, floz: 29.573529562500003 };
+export const TEMPERATURE_TO_C: UnitFactors["TEMPERATURE_TO_C"] = {
+  C: { scale: 1, offset: 0 },
+  F: { scale: 0.5555555555555571, offset: -17.77777777777778 },
+  K: { scale: 1, offset: -273.15 },
 };
-
-const MATHJS_TEMPERATURE: Record<TemperatureUnit, string> = { C: "degC", F: "degF", K: "K" };
-
-/** °C = scale · value + offset */
-export const TEMPERATURE_TO_C: Readonly<Record<TemperatureUnit, { scale: number; offset: number }>> =
-  Object.fromEntries(
-    (Object.keys(MATHJS_TEMPERATURE) as TemperatureUnit[]).map((u) => {
-      const offset = math.unit(0, MATHJS_TEMPERATURE[u]).toNumber("degC");
-      const scale = math.unit(1, MATHJS_TEMPERATURE[u]).toNumber("degC") - offset;
-      return [u, { scale, offset }];
-    }),
-  ) as Record<TemperatureUnit, { scale: number; offset: number }>;
-
-/** Kelvin per unit of temperature difference (no offset). */
-export const KELVIN_PER_DIFFERENCE_UNIT: Readonly<Record<"K" | "F", number>> = {
-  K: 1,
-  F: TEMPERATURE_TO_C.F.scale,
-};
+export const KELVIN_PER_DIFFERENCE_UNIT: UnitFactors["KELVIN_PER_DIFFERENCE_UNIT"] = { K: 1, F: TEMPERATURE_TO_C.F.scale };
