@@ -6,6 +6,7 @@ import type { MassUnit } from "@/lib/units";
 import { formatMass } from "@/lib/units";
 import { cylindersQuery, ledgerReportQuery, movementsQuery } from "@/lib/queries/ledger";
 import { AddCylinderForm, RetireButton } from "./cylinder-forms";
+import { MovementForm } from "./movement-form";
 
 const MOVEMENT_WORDS = { recovered_into: "Recovered into", charged_from: "Charged from", recycled: "Recycled in", sent_out: "Sent out from", adjustment: "Weighed adjustment to" } as const;
 
@@ -66,6 +67,7 @@ export function LedgerView({ massUnit, canWrite }: { massUnit: MassUnit; canWrit
             </li>
           ))}
         </ul>
+        {canWrite && cylinders.length > 0 && <MovementForm cylinders={cylinders} massUnit={massUnit} />}
       </section>
 
       <section aria-labelledby="report-heading" className="card">

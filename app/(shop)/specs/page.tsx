@@ -7,11 +7,10 @@ import { specKeys } from "@/lib/queries/specs";
 import { getShop } from "@/lib/server/shops";
 import { listSpecs } from "@/lib/server/specs";
 import { getPartOilAllowances } from "@/lib/server/oil-allowances";
-import { REPLACED_PART_IDS, REPLACED_PART_LABELS } from "@/lib/service/oil";
 import { SERVICE_SOURCES } from "@/lib/service/sources";
-import { formatVolume } from "@/lib/units";
 import { SpecTable } from "@/components/specs/spec-table";
 import { SpecImport } from "@/components/specs/spec-import";
+import { OilAllowancesForm } from "@/components/specs/oil-allowances-form";
 
 export const metadata: Metadata = { title: "Spec table" };
 
@@ -32,17 +31,7 @@ export default async function SpecsPage() {
         <SpecTable canEdit={canEdit} mass={imperial ? "oz" : "g"} volume={imperial ? "floz" : "mL"} />
         {canEdit && <SpecImport />}
       </HydrationBoundary>
-      <section aria-labelledby="allowances-heading" className="card">
-        <h2 id="allowances-heading" className="text-xl font-bold">Oil carried out by replaced parts</h2>
-        <ul className="mt-2 grid grid-cols-2 gap-1">
-          {REPLACED_PART_IDS.map((p) => (
-            <li key={p}>
-              {REPLACED_PART_LABELS[p]}: {allowances[p] == null ? "drain and measure" : formatVolume(allowances[p] ?? 0, imperial ? "floz" : "mL")}
-            </li>
-          ))}
-        </ul>
-        <p className="mt-2 text-sm text-ink-soft">Source: {SERVICE_SOURCES.partOilAllowance}.</p>
-      </section>
+      <OilAllowancesForm initial={allowances} volume={imperial ? "floz" : "mL"} canEdit={canEdit} source={SERVICE_SOURCES.partOilAllowance} />
     </div>
   );
 }
