@@ -7,6 +7,7 @@ import { diagnosisInputFor } from "@/lib/interview/to-diagnosis-input";
 import { diagnose, ENGINE_VERSION } from "@/lib/diagnosis";
 import type { CaseSubmitInput, InterviewSaveInput } from "@/app/api/cases/interview-schema";
 import { recordAudit } from "./audit";
+import { updateCaseAtVersion, type CaseChanges } from "@/lib/db/versioned-update";
 
 const EDITABLE = new Set(["draft", "sent_back"]);
 
@@ -25,21 +26,15 @@ async function editableCase({ user, caseId }: { user: User; caseId: number }) {
   return row;
 }
 
-/** Atomic compare-and-set on `version`: two tabs or devices never silently overwrite each other. */
-async function updateIfVersion({ caseId, shopId, baseVersion, values }: { caseId: number; shopId: number; baseVersion: number; values: Record<string, unknown> }) {
-  const { Case } = getModels();
-  const [count] = await Case.update(
-    { ...values, version: baseVersion + 1 },
-    { where: { id: caseId, shopId, version: baseVersion }, fields: [...Object.keys(values), "version"] as never },
+/** Applies the change only at the version the client last saw; otherwise says plainly what happened. */
+async function updateIfVersion({ caseId, shopId, baseVersion, values }: { caseId: number; shopId: number; baseVersion: number; values: CaseChanges }) {
+  const version = await updateCaseAtVersion({ shopId, caseId, expectedVersion: baseVersion, changes: values });
+  if (version !== null) return version;
+  const current = await getModels().Case.findOne({ where: { id: caseId, shopId }, attributes: ["updatedAt"], raw: true });
+  throw new AppError(
+    "conflict:case",
+    `This case was changed on another screen${current ? ` at ${current.updatedAt.toISOString().slice(11, 16)} UTC` : ""}. Reload to see those answers; what you typed here is kept on this device.`,
   );
-  if (count === 0) {
-    const current = await Case.findOne({ where: { id: caseId, shopId }, attributes: ["version", "updatedAt"], raw: true });
-    throw new AppError(
-      "conflict:case",
-      `This case was changed on another screen${current ? ` at ${current.updatedAt.toISOString().slice(11, 16)} UTC` : ""}. Reload to see those answers; what you typed here is kept on this device.`,
-    );
-  }
-  return baseVersion + 1;
 }
 
 export async function saveInterview({ user, caseId, input, shopAltitudeM }: { user: User; caseId: number; input: InterviewSaveInput; shopAltitudeM: number }) {
