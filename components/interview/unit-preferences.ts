@@ -1,6 +1,6 @@
 "use client";
 
-import { useCallback, useSyncExternalStore } from "react";
+import { useCallback, useMemo, useSyncExternalStore } from "react";
 import type { MassUnit, TemperatureUnit, VolumeUnit } from "@/lib/units";
 
 export type GaugeUnit = "kPa" | "bar" | "psi";
@@ -53,7 +53,8 @@ const EMPTY: Partial<UnitPreferences> = {};
 
 export function useUnitPreferences(shopSystem: "metric" | "imperial") {
   const stored = useSyncExternalStore(subscribe, read, () => EMPTY);
-  const units: UnitPreferences = { ...defaultUnits(shopSystem), ...stored };
+  // One object per actual change: screens compare units by identity.
+  const units: UnitPreferences = useMemo(() => ({ ...defaultUnits(shopSystem), ...stored }), [shopSystem, stored]);
   const setUnit = useCallback(<K extends QuantityKind>(kind: K, unit: UnitPreferences[K]) => {
     window.localStorage.setItem(KEY, JSON.stringify({ ...read(), [kind]: unit }));
     listeners.forEach((l) => l());

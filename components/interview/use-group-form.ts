@@ -63,7 +63,8 @@ export function useGroupForm({
   const { subscribe, getValues } = form;
   const unitsSeen = useRef(units);
   useEffect(() => {
-    if (unitsSeen.current === units) return;
+    const seen = unitsSeen.current;
+    if (seen.pressure === units.pressure && seen.temperature === units.temperature && seen.mass === units.mass && seen.volume === units.volume) return;
     unitsSeen.current = units;
     latest.current.onValues(answerValuesOf(fields, getValues(), units));
   }, [units, fields, getValues]);

@@ -273,3 +273,19 @@ test("two screens on one case: the second never silently overwrites the first, a
   expect(saved.answers.answers.conditions).toMatchObject({ ambientC: 27 });
   await otherDevice.close();
 });
+
+test("switching units converts what was typed and keeps the quantity (1 psi = 6.894757 kPa, NIST SP 811)", async ({ page }) => {
+  const interview = new InterviewPage(page);
+  await openCase(interview, /Ford Focus/, "Cooling comes and goes.");
+  await interview.next();
+  await interview.digits("30");
+  await interview.press("Enter");
+  await interview.expectStep("Engine-off pressure");
+  await interview.setUnit("Static pressure (either gauge)", "psi");
+  await interview.enter(/Static pressure/, "90");
+  await interview.setUnit("Static pressure (either gauge)", "kPa");
+  await expect(interview.field(/Static pressure/)).toHaveValue("620.5");
+  await interview.waitUntilSaved();
+  const saved = await readCase(interview.caseIdFromUrl());
+  expect(saved.answers.answers.static?.staticKpaGauge).toBeCloseTo(90 * 6.894757, 1);
+});
