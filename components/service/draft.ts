@@ -43,7 +43,9 @@ function toLocalInput(iso: string | null | undefined): string {
 export function draftFromRecord(r: ServiceRecordDto | null, u: ShopUnitsPrefs, defaults: { labelChargeG: number | null; oilType: string | null }): Draft {
   const mass = (g: number | null | undefined) => (g == null ? "" : withUnit(round(massFromG(g, u.mass), u.mass === "g" ? 0 : 2), u.mass));
   const vol = (ml: number | null | undefined) => (ml == null ? "" : withUnit(round(volumeFromMl(ml, u.volume), u.volume === "mL" ? 0 : 1), u.volume));
-  const vac = (k: number | null | undefined) => (k == null ? "" : `${round(kpaAbsToVacuumInHg(k, { altitudeM: u.altitudeM }), 2)} inHg`);
+  // Metric shops see the stored absolute pressure as it is; others see inHg of vacuum, to 0.001 so a re-save does not drift.
+  const vac = (k: number | null | undefined) =>
+    k == null ? "" : u.gauge === "kPa" ? `${round(k, 3)} kPa` : `${round(kpaAbsToVacuumInHg(k, { altitudeM: u.altitudeM }), 3)} inHg`;
   const gauge = (k: number | null | undefined) => (k == null ? "" : withUnit(round(pressureFromKpa(k, u.gauge), 1), u.gauge));
   const temp = (c: number | null | undefined) => (c == null ? "" : withUnit(round(temperatureFromC(c, u.temperature), 1), u.temperature));
   const plain = (n: number | null | undefined) => (n == null ? "" : String(n));
