@@ -29,7 +29,7 @@ function percentile(sorted: number[], p: number) {
 async function main() {
   let server: ChildProcess | undefined;
   if (!process.env.BENCH_URL) {
-    server = spawn("bash", ["scripts/e2e-server.sh"], { stdio: "ignore", detached: true });
+    server = spawn("bash", ["scripts/e2e-server.sh"], { stdio: "ignore" });
   }
   try {
     await waitForHealth(180_000);
@@ -107,7 +107,12 @@ async function main() {
       `keystroke → recomputed values on screen (${samples.length} samples): p50 ${percentile(samples, 50).toFixed(1)} ms, p95 ${percentile(samples, 95).toFixed(1)} ms, p99 ${percentile(samples, 99).toFixed(1)} ms`,
     );
   } finally {
-    if (server?.pid) process.kill(-server.pid, "SIGTERM");
+    // e2e-server.sh stops the app and its database when it is told to stop.
+    if (server && server.exitCode === null) {
+      const exited = new Promise((resolve) => server!.once("exit", resolve));
+      server.kill("SIGTERM");
+      await exited;
+    }
   }
 }
 

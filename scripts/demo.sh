@@ -30,6 +30,6 @@ if [[ ! -f .next/BUILD_ID ]] || [[ -n "$(find app components lib machines models
 fi
 
 echo "Chillwright is starting at $APP_ORIGIN (demo accounts in README.md). Ctrl-C stops it."
-npx next start -H 127.0.0.1 -p 3000 &
+"$REPO/node_modules/.bin/next" start -H 127.0.0.1 -p 3000 &
 app_pid=$!
 wait "$app_pid"

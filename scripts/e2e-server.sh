@@ -19,6 +19,6 @@ cleanup() {
 trap cleanup EXIT INT TERM
 npx tsx scripts/migrate.ts up
 npx tsx scripts/seed.ts
-npx next start -H 127.0.0.1 -p 3100 &
+"$REPO/node_modules/.bin/next" start -H 127.0.0.1 -p 3100 &
 app_pid=$!
 wait "$app_pid"
