@@ -10,6 +10,7 @@ import { FindingsStep } from "./findings-step";
 import { STEP_COPY } from "./labels";
 import { ProgressStrip } from "./progress-strip";
 import { SaveBanner } from "./save-banner";
+import { SpecMatches } from "./spec-matches";
 import { StepForm, type StepFormHandle } from "./step-form";
 import { useAutosave } from "./use-autosave";
 import { useUnitPreferences } from "./unit-preferences";
@@ -24,9 +25,10 @@ export interface InterviewProps {
   shop: { altitudeM: number; units: "metric" | "imperial" };
   isApprentice: boolean;
   heading: string;
+  vehicleId: number | null;
 }
 
-export function Interview({ caseId, version, record, pendingFromDevice, shop, isApprentice, heading }: InterviewProps) {
+export function Interview({ caseId, version, record, pendingFromDevice, shop, isApprentice, heading, vehicleId }: InterviewProps) {
   const machineShop = useMemo(() => ({ altitudeM: shop.altitudeM }), [shop.altitudeM]);
   const [snapshot, send, actor] = useMachine(interviewMachine, { input: { ...record, shop: machineShop } });
   const view = viewOf(snapshot);
@@ -98,6 +100,7 @@ export function Interview({ caseId, version, record, pendingFromDevice, shop, is
           <p className="text-ink-soft">{copy.lead}</p>
         </header>
         {step !== "findings" && <CautionsList cautions={view.cautions.filter((c) => c.id !== "defer_to_procedure" || step === "complaint")} />}
+        {step === "system" && vehicleId !== null && <SpecMatches vehicleId={vehicleId} onPick={(pick) => formRef.current?.apply({ ...pick })} />}
         {group && (
           <form
             noValidate

@@ -8,7 +8,7 @@ import type { ShopSettings } from "@/lib/interview/branches";
 import { GroupForm } from "./group-form";
 import { GROUP_FIELDS } from "./group-fields";
 import { liveReadouts, type PhysicsContext, type ReadoutLine } from "./live-physics";
-import { answerValuesOf } from "./form-values";
+import { answerValuesOf, formValuesOf } from "./form-values";
 import { otherSystem } from "./quantities";
 import { useGroupForm } from "./use-group-form";
 import type { QuantityKind, UnitPreferences } from "./unit-preferences";
@@ -17,6 +17,8 @@ import type { FormValues } from "./field-defs";
 export interface StepFormHandle {
   /** Validates the group; returns its values, or null after focusing the first problem. */
   check: () => Promise<Record<string, unknown> | null>;
+  /** Fills fields from internal values (a spec-table row, say), as if the technician had typed them. */
+  apply: (values: Record<string, unknown>) => void;
 }
 
 interface Props {
@@ -61,6 +63,12 @@ export const StepForm = forwardRef<StepFormHandle, Props>(function StepForm({ gr
         return null;
       }
       return answerValuesOf(fields, form.getValues(), units);
+    },
+    apply: (values) => {
+      const shown = formValuesOf(fields, values, units);
+      for (const [name, value] of Object.entries(shown)) {
+        if (values[name] !== undefined) form.setValue(name, value, { shouldDirty: true, shouldValidate: true });
+      }
     },
   }));
 

@@ -14,6 +14,7 @@ export interface CaseListItem {
 
 export interface CaseDetail extends CaseListItem {
   technicianId: string;
+  vehicleId: number | null;
   refrigerant: string | null;
   expansionDevice: string | null;
   interviewStep: string | null;
@@ -93,6 +94,7 @@ export async function getCase({ shopId, caseId }: { shopId: number; caseId: numb
     customer: c.Customer?.name ?? null,
     technician: c.technician.name,
     technicianId: c.technicianId as string,
+    vehicleId: (c.vehicleId as number | null) ?? null,
     updatedAt: (c.updatedAt as Date).toISOString(),
     refrigerant: c.Vehicle?.refrigerant ?? null,
     expansionDevice: c.Vehicle?.expansionDevice ?? null,

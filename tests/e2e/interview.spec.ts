@@ -289,3 +289,18 @@ test("switching units converts what was typed and keeps the quantity (1 psi = 6.
   const saved = await readCase(interview.caseIdFromUrl());
   expect(saved.answers.answers.static?.staticKpaGauge).toBeCloseTo(90 * 6.894757, 1);
 });
+
+test("the system step offers the spec-table rows for the vehicle and the technician picks the variant that applies", async ({ page }) => {
+  const interview = new InterviewPage(page);
+  await openCase(interview, /Silverado/, "Rear vents blow warm, front is fine.");
+  await interview.expectStep("Vehicle system");
+  const offers = page.getByRole("region", { name: "From the shop's spec table" });
+  await expect(offers.getByRole("button", { name: /front A\/C only/ })).toBeVisible();
+  await interview.tap(offers.getByRole("button", { name: /front and rear A\/C/ }));
+  await expect(interview.field("Label charge")).toHaveValue("1130");
+  await interview.next();
+  await interview.expectStep("Conditions");
+  await interview.waitUntilSaved();
+  const saved = await readCase(interview.caseIdFromUrl());
+  expect(saved.answers.answers.system).toMatchObject({ refrigerant: "R-134a", labelChargeG: 1130, oilType: "pag" });
+});

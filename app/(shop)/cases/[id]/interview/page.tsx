@@ -34,6 +34,7 @@ export default async function InterviewPage({ params }: { params: Promise<{ id: 
       shop={{ altitudeM: shop.altitudeM, units: shop.units }}
       isApprentice={user.role === "apprentice"}
       heading={`Case ${caseId} · ${detail.vehicle ?? "vehicle"}`}
+      vehicleId={detail.vehicleId}
     />
   );
 }
