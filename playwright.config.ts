@@ -30,6 +30,8 @@ export default defineConfig({
     url: `http://127.0.0.1:${PORT}/api/health`,
     timeout: 180_000,
     reuseExistingServer: false,
+    // SIGTERM first, so scripts/e2e-server.sh can stop its database and remove its folder.
+    gracefulShutdown: { signal: "SIGTERM", timeout: 15_000 },
     stdout: "pipe",
     stderr: "pipe",
   },
