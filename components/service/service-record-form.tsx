@@ -39,7 +39,8 @@ export interface ServiceRecordFormProps {
   specChoices: SpecChoice[];
   allowancesMl: Partial<Record<ReplacedPartId, number | null>>;
   units: ShopUnitsPrefs;
-  canEdit: boolean;
+  /** null when this user may save; otherwise why not, shown instead of the save button */
+  readOnlyReason: string | null;
 }
 
 export function ServiceRecordForm(props: ServiceRecordFormProps) {
@@ -157,12 +158,12 @@ export function ServiceRecordForm(props: ServiceRecordFormProps) {
             {message.text}
           </p>
         )}
-        {props.canEdit ? (
+        {props.readOnlyReason === null ? (
           <button type="submit" className="btn-primary min-h-glove w-full text-lg" disabled={save.isPending}>
             {save.isPending ? "Saving…" : next ? `Save and go to ${STEP_TITLES[next].toLowerCase()}` : "Save the service record"}
           </button>
         ) : (
-          <p className="text-ink-soft">Your role can read this record; a technician or senior enters it.</p>
+          <p className="text-ink-soft">{props.readOnlyReason}</p>
         )}
       </form>
     </div>

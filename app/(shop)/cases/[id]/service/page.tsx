@@ -33,7 +33,15 @@ export default async function ServiceRecordPage({ params }: { params: Promise<{ 
       ? await listSpecMatches({ shopId, vehicle: { year: serviceCase.year, make: serviceCase.make, model: serviceCase.model, engine: serviceCase.engine } })
       : [];
   const imperial = shop.units === "imperial";
-  const canEdit = can(user.role, "service:write") && serviceCase.status !== "closed" && Boolean(serviceCase.refrigerant);
+  const readOnlyReason = !can(user.role, "service:write")
+    ? "Your role can read this record; a technician or senior enters it."
+    : serviceCase.status === "closed"
+      ? "This case is closed: its service record is kept as it was saved."
+      : !serviceCase.refrigerant
+        ? "Record the vehicle on the case before its service record."
+        : record && record.technicianId !== user.id && user.role !== "owner" && user.role !== "senior"
+          ? `${record.technician} started this record; only they or a senior can change it.`
+          : null;
   return (
     <article className="space-y-4">
       <header>
@@ -66,7 +74,7 @@ export default async function ServiceRecordPage({ params }: { params: Promise<{ 
         }))}
         allowancesMl={allowancesMl}
         units={{ mass: imperial ? "oz" : "g", volume: imperial ? "floz" : "mL", gauge: imperial ? "psi" : "kPa", temperature: imperial ? "F" : "C", altitudeM: shop.altitudeM }}
-        canEdit={canEdit}
+        readOnlyReason={readOnlyReason}
       />
     </article>
   );
