@@ -1,8 +1,5 @@
-/**
- * What the technician saw, heard or found. The first block is the interview's
- * behaviour questions; the second block records the results of next checks.
- */
-export const SYMPTOM_IDS = [
+/** What the technician saw or heard at the vehicle: the interview's behaviour questions. */
+export const BEHAVIOUR_SYMPTOM_IDS = [
   "high_pressure_cutout",
   "clutch_rapid_cycling",
   "clutch_not_cycling",
@@ -20,6 +17,11 @@ export const SYMPTOM_IDS = [
   "oil_residue_at_fitting",
   "oil_pulled_during_recovery",
   "recent_service_elsewhere",
+] as const;
+
+/** What the technician saw, heard or found: the behaviour questions, then the results of next checks. */
+export const SYMPTOM_IDS = [
+  ...BEHAVIOUR_SYMPTOM_IDS,
   "evaporator_airflow_drops",
   "pressures_equalise_fast",
   "clutch_or_belt_slipping",
