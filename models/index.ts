@@ -27,26 +27,27 @@ export type { ReadingSetKind } from "./reading-set";
 export type { SignOffVerdict } from "./sign-off";
 export type { ExpansionDevice, VehicleRefrigerant } from "./vehicle";
 
+// Every model, once: initialised in this order and handed out by getModels().
+const MODELS = {
+  Shop,
+  User,
+  Session,
+  SignInAttempt,
+  Customer,
+  Vehicle,
+  Case,
+  ReadingSet,
+  SignOff,
+  AuditEvent,
+  SpecEntry,
+  PartOilAllowance,
+  Cylinder,
+  ServiceRecord,
+  RefrigerantMovement,
+};
+
 function initModels(sequelize: Sequelize) {
-  for (const model of [
-    Shop,
-    User,
-    Session,
-    SignInAttempt,
-    Customer,
-    Vehicle,
-    Case,
-    ReadingSet,
-    SignOff,
-    AuditEvent,
-    SpecEntry,
-    PartOilAllowance,
-    Cylinder,
-    ServiceRecord,
-    RefrigerantMovement,
-  ]) {
-    model.initModel(sequelize);
-  }
+  for (const model of Object.values(MODELS)) model.initModel(sequelize);
 
   const shopScoped = { foreignKey: { name: "shopId", allowNull: false } } as const;
   Shop.hasMany(User, shopScoped);
@@ -114,24 +115,7 @@ function initModels(sequelize: Sequelize) {
     as: "technician",
   });
 
-  return {
-    sequelize,
-    Shop,
-    User,
-    Session,
-    SignInAttempt,
-    Customer,
-    Vehicle,
-    Case,
-    ReadingSet,
-    SignOff,
-    AuditEvent,
-    SpecEntry,
-    PartOilAllowance,
-    Cylinder,
-    ServiceRecord,
-    RefrigerantMovement,
-  };
+  return { sequelize, ...MODELS };
 }
 
 export type Models = ReturnType<typeof initModels>;
