@@ -3,7 +3,7 @@
 import { useState } from "react";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import type { ManualMovementInput } from "@/app/api/ledger/schema";
-import { apiFetch, ApiError } from "@/lib/queries/api-fetch";
+import { apiFetch, saveErrorOf } from "@/lib/queries/api-fetch";
 import { type CylinderDto, ledgerKeys } from "@/lib/queries/ledger";
 import { readMassG } from "@/lib/service/entry";
 import type { MassUnit } from "@/lib/units";
@@ -25,10 +25,9 @@ export function MovementForm({ cylinders, massUnit }: { cylinders: CylinderDto[]
       return queryClient.invalidateQueries({ queryKey: ledgerKeys.all });
     },
     onError: (e) => {
-      if (e instanceof ApiError) {
-        setErrors(Object.fromEntries(Object.entries(e.fieldErrors ?? {}).map(([k, v]) => [k, v[0] ?? ""])));
-        setStatus(`${e.message} What you typed is kept.`);
-      } else setStatus("No answer from the server; what you typed is kept.");
+      const { fieldErrors, message } = saveErrorOf(e);
+      setErrors(fieldErrors);
+      setStatus(message);
     },
   });
   const set = (k: keyof typeof EMPTY) => (v: string) => setForm((f) => ({ ...f, [k]: v }));

@@ -2,7 +2,7 @@
 
 import { useState } from "react";
 import { useMutation } from "@tanstack/react-query";
-import { apiFetch, ApiError } from "@/lib/queries/api-fetch";
+import { apiFetch, saveErrorOf } from "@/lib/queries/api-fetch";
 import { readVolumeMl } from "@/lib/service/entry";
 import { REPLACED_PART_IDS, REPLACED_PART_LABELS, type ReplacedPartId } from "@/lib/service/oil";
 import { type VolumeUnit, formatVolume } from "@/lib/units";
@@ -20,7 +20,7 @@ export function OilAllowancesForm({ initial, volume, canEdit, source }: { initia
   const save = useMutation({
     mutationFn: (allowancesMl: Allowances) => apiFetch<{ allowancesMl: Allowances }>("/api/specs/oil-allowances", { method: "PUT", body: { allowancesMl } }),
     onSuccess: () => setStatus("Saved the shop's oil allowances."),
-    onError: (e) => setStatus(e instanceof ApiError ? `${e.message} What you typed is kept.` : "No answer from the server; what you typed is kept."),
+    onError: (e) => setStatus(saveErrorOf(e).message),
   });
 
   function submit(e: React.FormEvent) {

@@ -3,7 +3,7 @@
 import { useState } from "react";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import type { SpecInput } from "@/app/api/specs/schema";
-import { apiFetch, ApiError } from "@/lib/queries/api-fetch";
+import { apiFetch, saveErrorOf } from "@/lib/queries/api-fetch";
 import { type SpecEntryDto, specKeys } from "@/lib/queries/specs";
 import { readMassG, readVolumeMl } from "@/lib/service/entry";
 import { type MassUnit, type VolumeUnit, formatMass, formatVolume } from "@/lib/units";
@@ -39,10 +39,9 @@ export function SpecForm({ row, mass, volume, onDone }: { row: SpecEntryDto | nu
       onDone();
     },
     onError: (e) => {
-      if (e instanceof ApiError) {
-        setErrors(Object.fromEntries(Object.entries(e.fieldErrors ?? {}).map(([k, v]) => [k, v[0] ?? ""])));
-        setStatus(`${e.message} What you typed is kept.`);
-      } else setStatus("No answer from the server; what you typed is kept.");
+      const { fieldErrors, message } = saveErrorOf(e);
+      setErrors(fieldErrors);
+      setStatus(message);
     },
   });
   const set = (k: keyof FormText) => (v: string) => setForm((f) => ({ ...f, [k]: v }));

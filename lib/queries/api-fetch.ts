@@ -37,3 +37,12 @@ export async function apiFetch<T = unknown>(
   }
   return data as T;
 }
+
+/** A failed save as a form shows it: the first message per field, and a line saying nothing typed was lost. */
+export function saveErrorOf(error: unknown): { fieldErrors: Record<string, string>; message: string } {
+  if (error instanceof ApiError) {
+    const fieldErrors = Object.fromEntries(Object.entries(error.fieldErrors ?? {}).map(([field, messages]) => [field, messages[0] ?? ""]));
+    return { fieldErrors, message: `${error.message} What you typed is kept.` };
+  }
+  return { fieldErrors: {}, message: "No answer from the server; what you typed is kept." };
+}
