@@ -1,7 +1,9 @@
 import { saturationTemperature, type RefrigerantId } from "@/lib/refrigerants";
-import { chargeDeviation, staticCheck, subcoolingK, superheatK } from "@/lib/refrigerants/derived";
+import { staticCheck, subcoolingK, superheatK } from "@/lib/refrigerants/derived";
 import { expectedBands } from "@/lib/refrigerants/expected-bands";
 import { absoluteToGaugeKpa, gaugeToAbsoluteKpa } from "@/lib/units";
+import { STATIC_EXCESS_KPA, SUBCOOLING_K, SUPERHEAT_K } from "@/lib/diagnosis/grading";
+import { recoveredAgainstLabel } from "@/lib/service/charge";
 
 export type BandStatus = "inside" | "below" | "above" | "unknown";
 export interface ReadoutLine {
@@ -50,8 +52,11 @@ export function liveReadouts(group: string, values: Record<string, unknown>, ctx
       const satGauge = absoluteToGaugeKpa(check.saturationKpaAbs, at);
       const lines: ReadoutLine[] = [{ text: `Saturation at ${fmt(ambientC)} °C ambient: ${fmt(satGauge, 0)} kPa gauge` }];
       if (check.kind === "no_liquid") lines.push({ text: check.message, status: "below", verdict: "" });
-      // 35 kPa: the tolerance the findings engine grades against (thermometer and gauge error; from memory).
-      else lines.push({ text: `Static pressure is ${fmt(Math.abs(check.excessKpa), 0)} kPa ${check.excessKpa >= 0 ? "above" : "below"} saturation`, status: check.excessKpa > 35 ? "above" : "inside", verdict: check.excessKpa > 35 ? "air or another gas is likely present" : "no sign of air" });
+      // The same tolerance the findings engine grades against, so the screen and the findings agree.
+      else {
+        const air = check.excessKpa > STATIC_EXCESS_KPA.slight;
+        lines.push({ text: `Static pressure is ${fmt(Math.abs(check.excessKpa), 0)} kPa ${check.excessKpa >= 0 ? "above" : "below"} saturation`, status: air ? "above" : "inside", verdict: air ? "air or another gas is likely present" : "no sign of air" });
+      }
       return lines;
     });
   }
@@ -89,8 +94,9 @@ export function liveReadouts(group: string, values: Record<string, unknown>, ctx
       const liquidLineC = values.liquidLineC;
       out.liquidLineC = safely(() => {
         const sc = subcoolingK({ refrigerant, highKpaAbs, liquidLineC });
-        // TXV systems typically hold 3–8 K (5–15 °F) of subcooling: common practice.
-        const typical = ctx.expansionDevice === "txv" ? { text: " (typical for a TXV system 3–8 K)", status: band(sc, 3, 8) } : { text: "", status: undefined };
+        // The findings engine's typical range for a TXV system (lib/diagnosis/grading.ts).
+        const { low, high } = SUBCOOLING_K.txv;
+        const typical = ctx.expansionDevice === "txv" ? { text: ` (typical for a TXV system ${low}–${high} K)`, status: band(sc, low, high) } : { text: "", status: undefined };
         return [{ text: `Subcooling ${fmt(sc)} K${typical.text}`, status: typical.status }];
       });
     }
@@ -99,7 +105,8 @@ export function liveReadouts(group: string, values: Record<string, unknown>, ctx
       const suctionLineC = values.suctionLineC;
       out.suctionLineC = safely(() => {
         const sh = superheatK({ refrigerant, lowKpaAbs, suctionLineC });
-        const typical = ctx.expansionDevice === "txv" ? { text: " (typical for a TXV system 3–8 K)", status: band(sh, 3, 8) } : { text: " (an orifice-tube evaporator runs near 0 K)", status: undefined };
+        const { nearZero, high } = SUPERHEAT_K.txv;
+        const typical = ctx.expansionDevice === "txv" ? { text: ` (typical for a TXV system ${nearZero}–${high} K)`, status: band(sh, nearZero, high) } : { text: " (an orifice-tube evaporator runs near 0 K)", status: undefined };
         return [{ text: `Superheat ${fmt(sh)} K${typical.text}`, status: typical.status }];
       });
     }
@@ -109,10 +116,14 @@ export function liveReadouts(group: string, values: Record<string, unknown>, ctx
   }
 
   if (group === "chargeAudit" && num(values.recoveredChargeG) && num(ctx.labelChargeG)) {
-    const { deltaG, deltaPct } = chargeDeviation({ labelChargeG: ctx.labelChargeG, recoveredChargeG: values.recoveredChargeG });
-    // Recovery machines must remove at least 95 % (SAE J2788), so up to 5 % short is not evidence of a leak.
-    const status: BandStatus = deltaPct > 5 ? "above" : deltaPct < -5 ? "below" : "inside";
-    out.recoveredChargeG = [{ text: `${deltaG >= 0 ? "+" : "−"}${fmt(Math.abs(deltaG), 0)} g (${deltaPct >= 0 ? "+" : "−"}${fmt(Math.abs(deltaPct))} %) against the ${fmt(ctx.labelChargeG, 0)} g label`, status }];
+    const labelChargeG = ctx.labelChargeG;
+    const recoveredChargeG = values.recoveredChargeG;
+    out.recoveredChargeG = safely(() => {
+      // The service record's verdict (SAE J2788/J2843 recovery allowance), so both screens agree.
+      const { deltaG, deltaPct, verdict } = recoveredAgainstLabel({ labelChargeG, recoveredChargeG, refrigerant });
+      const status: BandStatus = verdict === "over" ? "above" : verdict === "under" ? "below" : "inside";
+      return [{ text: `${deltaG >= 0 ? "+" : "−"}${fmt(Math.abs(deltaG), 0)} g (${deltaPct >= 0 ? "+" : "−"}${fmt(Math.abs(deltaPct))} %) against the ${fmt(labelChargeG, 0)} g label`, status }];
+    });
   }
   return out;
 }
