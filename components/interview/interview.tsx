@@ -5,6 +5,7 @@ import { useMachine } from "@xstate/react";
 import { interviewMachine } from "@/machines/interview";
 import { savedInterviewOf, viewOf, type SavedInterview } from "@/machines/interview-view";
 import type { GroupId } from "@/lib/interview/steps";
+import { altitudeFor } from "@/lib/interview/branches";
 import { CautionsList } from "./cautions-list";
 import { FindingsStep } from "./findings-step";
 import { STEP_COPY } from "./labels";
@@ -66,9 +67,9 @@ export function Interview({ caseId, version, record, pendingFromDevice, shop, is
       labelChargeG: answers.system?.labelChargeG,
       ambientC: answers.conditions?.ambientC,
       relativeHumidityPct: answers.conditions?.relativeHumidityPct,
-      altitudeM: answers.conditions?.altitudeM ?? shop.altitudeM,
+      altitudeM: altitudeFor(answers, machineShop),
     }),
-    [answers.system, answers.conditions, shop.altitudeM],
+    [answers, machineShop],
   );
 
   const onValues = useCallback((values: Record<string, unknown>) => view.group && send({ type: "ANSWER", group: view.group, values }), [send, view.group]);

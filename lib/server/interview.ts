@@ -7,20 +7,18 @@ import { diagnosisInputFor } from "@/lib/interview/to-diagnosis-input";
 import { diagnose, ENGINE_VERSION } from "@/lib/diagnosis";
 import type { CaseSubmitInput, InterviewSaveInput } from "@/app/api/cases/interview-schema";
 import { recordAudit } from "./audit";
+import { caseIsEditable, mayChangeCase } from "@/lib/auth/case-access";
 import { updateCaseAtVersion, type CaseChanges } from "@/lib/db/versioned-update";
-
-const EDITABLE = new Set(["draft", "sent_back"]);
 
 /** Loads a case of the user's shop that this user may change, or throws 404/403/409. */
 async function editableCase({ user, caseId }: { user: User; caseId: number }) {
   const { Case } = getModels();
   const row = await Case.findOne({ where: { id: caseId, shopId: user.shopId }, raw: true });
   if (!row) throw new AppError("not_found:case", "No such case in this shop.");
-  const reviewer = user.role === "owner" || user.role === "senior";
-  if (row.technicianId !== user.id && !reviewer) {
+  if (!mayChangeCase(user, row)) {
     throw new AppError("forbidden:case", "Only the case's technician or a senior can change this case.");
   }
-  if (!EDITABLE.has(row.status)) {
+  if (!caseIsEditable(row)) {
     throw new AppError("conflict:case", "This case has been submitted; a senior must send it back before it can change.");
   }
   return row;

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { requireUser } from "@/lib/auth/guard";
+import { caseIsEditable, mayChangeCase } from "@/lib/auth/case-access";
 import { can } from "@/lib/auth/roles";
 import { getCase } from "@/lib/server/cases";
 import { isAppError } from "@/lib/errors";
@@ -21,8 +22,8 @@ export default async function CasePage({ params }: { params: Promise<{ id: strin
     throw error;
   });
   const record = (detail.answers ?? {}) as { answers?: Record<string, never> };
-  const editable = detail.status === "draft" || detail.status === "sent_back";
-  const mayEdit = detail.technicianId === user.id || user.role === "owner" || user.role === "senior";
+  const editable = caseIsEditable(detail);
+  const mayEdit = mayChangeCase(user, detail);
   const mayReview = detail.status === "awaiting_signoff" && can(user.role, "signoff:review") && detail.technicianId !== user.id;
   const findings = detail.findings as Parameters<typeof FindingsSnapshot>[0]["findings"] | null;
   return (

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import { notFound, redirect } from "next/navigation";
 import { requireUser } from "@/lib/auth/guard";
+import { caseIsEditable, mayChangeCase } from "@/lib/auth/case-access";
 import { getCase } from "@/lib/server/cases";
 import { getShop } from "@/lib/server/shops";
 import { isAppError } from "@/lib/errors";
@@ -20,8 +21,8 @@ export default async function InterviewPage({ params }: { params: Promise<{ id: 
     }),
     getShop({ shopId: user.shopId }),
   ]);
-  const editable = detail.status === "draft" || detail.status === "sent_back";
-  const mayEdit = detail.technicianId === user.id || user.role === "owner" || user.role === "senior";
+  const editable = caseIsEditable(detail);
+  const mayEdit = mayChangeCase(user, detail);
   if (!editable || !mayEdit) redirect(`/cases/${caseId}`);
 
   const saved = (detail.answers ?? {}) as Partial<SavedInterview>;
