@@ -15,7 +15,7 @@ export async function recordSignOff({ user, caseId, verdict, comment }: { user: 
     await SignOff.create({ shopId: user.shopId, caseId, reviewerId: user.id, verdict, comment: comment ?? null }, { transaction });
     row.set("status", verdict);
     await row.save({ transaction });
-    await recordAudit({ shopId: user.shopId, actorId: user.id, entity: "case", entityId: caseId, action: verdict, detail: { comment: comment ?? null } });
+    await recordAudit({ shopId: user.shopId, actorId: user.id, entity: "case", entityId: caseId, action: verdict, detail: { comment: comment ?? null }, transaction });
     return { status: verdict, version: row.version };
   });
 }
