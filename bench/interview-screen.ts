@@ -1,12 +1,12 @@
 // Prints the client JavaScript shipped for the interview route (gzip) and the time from a keystroke
 // in a reading to the recomputed values on screen. Figures to read; nothing here passes or fails.
 // Needs a production build (`npx next build`). Starts its own throwaway database and server
-// (scripts/e2e-server.sh on port 3100) unless BENCH_URL points at a running one.
+// (scripts/e2e-server.sh on port 3100, or E2E_PORT) unless BENCH_URL points at a running one.
 import { spawn, type ChildProcess } from "node:child_process";
 import { gzipSync } from "node:zlib";
 import { chromium } from "@playwright/test";
 
-const BASE = process.env.BENCH_URL ?? "http://127.0.0.1:3100";
+const BASE = process.env.BENCH_URL ?? `http://127.0.0.1:${process.env.E2E_PORT ?? 3100}`;
 const KEYSTROKES = 60;
 
 async function waitForHealth(timeoutMs: number) {
@@ -35,9 +35,20 @@ async function main() {
     await waitForHealth(180_000);
     const browser = await chromium.launch({
       executablePath: "/usr/bin/chromium",
-      args: ["--no-sandbox", "--disable-gpu", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
+      args: [
+        "--no-sandbox",
+        "--disable-gpu",
+        "--disable-background-networking",
+        "--disable-component-update",
+        "--disable-sync",
+      ],
     });
-    const context = await browser.newContext({ baseURL: BASE, viewport: { width: 412, height: 915 }, isMobile: true, hasTouch: true });
+    const context = await browser.newContext({
+      baseURL: BASE,
+      viewport: { width: 412, height: 915 },
+      isMobile: true,
+      hasTouch: true,
+    });
     const page = await context.newPage();
     await page.goto("/sign-in");
     await page.getByLabel("E-mail").fill("tech@harbourline.test");
@@ -50,7 +61,9 @@ async function main() {
       data: { vehicleId: 1, complaint: "Benchmark case: warm air at idle." },
     });
     const caseId = ((await created.json()) as { case: { id: number } }).case.id;
-    const detail = (await (await page.request.get(`/api/cases/${caseId}`)).json()) as { case: { version: number; answers: { answers: object } } };
+    const detail = (await (await page.request.get(`/api/cases/${caseId}`)).json()) as {
+      case: { version: number; answers: { answers: object } };
+    };
     await page.request.put(`/api/cases/${caseId}/interview`, {
       headers: { origin: BASE },
       data: {
@@ -90,16 +103,24 @@ async function main() {
           w.__t0 = 0;
         }
       });
-      observer.observe(document.getElementById("interview-step")!, { subtree: true, childList: true, characterData: true });
+      observer.observe(document.getElementById("interview-step")!, {
+        subtree: true,
+        childList: true,
+        characterData: true,
+      });
     });
     for (let i = 0; i < KEYSTROKES; i++) {
       await high.fill("");
       await page.keyboard.type(String(1200 + i * 10), { delay: 20 });
     }
-    const samples = (await page.evaluate(() => (window as unknown as { __samples: number[] }).__samples)).sort((a, b) => a - b);
+    const samples = (
+      await page.evaluate(() => (window as unknown as { __samples: number[] }).__samples)
+    ).sort((a, b) => a - b);
     await browser.close();
 
-    console.log(`interview route, client JavaScript: ${scripts.size} files, ${(totalGzip / 1024).toFixed(1)} kB gzip`);
+    console.log(
+      `interview route, client JavaScript: ${scripts.size} files, ${(totalGzip / 1024).toFixed(1)} kB gzip`,
+    );
     for (const [url, size] of [...scripts.entries()].sort((a, b) => b[1] - a[1]).slice(0, 8)) {
       console.log(`  ${(size / 1024).toFixed(1).padStart(6)} kB  ${new URL(url).pathname}`);
     }

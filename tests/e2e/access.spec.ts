@@ -1,5 +1,5 @@
 import { expect, test, type APIRequestContext } from "@playwright/test";
-import { apiClient, signedInClient } from "./pages/api-client";
+import { apiClient, BASE_URL, signedInClient } from "./pages/api-client";
 import { DEMO_USERS, type DemoRole } from "./pages/sign-in-page";
 
 // The role × route table: for each API route, each role, no session and another shop's owner.
@@ -15,14 +15,17 @@ let harbourlineCylinderId = 0;
 
 test.beforeAll(async () => {
   clients.set("anonymous", await apiClient());
-  for (const role of Object.keys(DEMO_USERS) as DemoRole[]) clients.set(role, await signedInClient(DEMO_USERS[role].email));
+  for (const role of Object.keys(DEMO_USERS) as DemoRole[])
+    clients.set(role, await signedInClient(DEMO_USERS[role].email));
   clients.set("otherShopOwner", await signedInClient("owner@ridgeback.test"));
   const cases = await (await clients.get("owner")!.get("/api/cases")).json();
   harbourlineCaseId = cases.cases[0].id;
   const ridgebackUsers = await (await clients.get("otherShopOwner")!.get("/api/users")).json();
   ridgebackUserId = ridgebackUsers.users[0].id;
   const harbourlineUsers = await (await clients.get("owner")!.get("/api/users")).json();
-  harbourlineTechId = harbourlineUsers.users.find((u: { email: string }) => u.email === DEMO_USERS.technician.email).id;
+  harbourlineTechId = harbourlineUsers.users.find(
+    (u: { email: string }) => u.email === DEMO_USERS.technician.email,
+  ).id;
   const vehicles = await (await clients.get("owner")!.get("/api/vehicles")).json();
   harbourlineVehicleId = vehicles.vehicles[0].vehicleId;
   const cylinders = await (await clients.get("owner")!.get("/api/cylinders")).json();
@@ -34,146 +37,349 @@ test.afterAll(async () => {
 });
 
 type Expectation = Record<Who, number>;
-const table: { name: string; call: (c: APIRequestContext) => Promise<{ status(): number }>; expect: Expectation }[] = [
+const table: {
+  name: string;
+  call: (c: APIRequestContext) => Promise<{ status(): number }>;
+  expect: Expectation;
+}[] = [
   {
     name: "GET /api/health",
     call: (c) => c.get("/api/health"),
-    expect: { anonymous: 200, owner: 200, senior: 200, technician: 200, apprentice: 200, otherShopOwner: 200 },
+    expect: {
+      anonymous: 200,
+      owner: 200,
+      senior: 200,
+      technician: 200,
+      apprentice: 200,
+      otherShopOwner: 200,
+    },
   },
   {
     name: "GET /api/me",
     call: (c) => c.get("/api/me"),
-    expect: { anonymous: 401, owner: 200, senior: 200, technician: 200, apprentice: 200, otherShopOwner: 200 },
+    expect: {
+      anonymous: 401,
+      owner: 200,
+      senior: 200,
+      technician: 200,
+      apprentice: 200,
+      otherShopOwner: 200,
+    },
   },
   {
     name: "GET /api/users",
     call: (c) => c.get("/api/users"),
-    expect: { anonymous: 401, owner: 200, senior: 403, technician: 403, apprentice: 403, otherShopOwner: 200 },
+    expect: {
+      anonymous: 401,
+      owner: 200,
+      senior: 403,
+      technician: 403,
+      apprentice: 403,
+      otherShopOwner: 200,
+    },
   },
   {
     name: "POST /api/users (malformed)",
     call: (c) => c.post("/api/users", { data: { email: "nope", role: "boss" } }),
-    expect: { anonymous: 401, owner: 400, senior: 403, technician: 403, apprentice: 403, otherShopOwner: 400 },
+    expect: {
+      anonymous: 401,
+      owner: 400,
+      senior: 403,
+      technician: 403,
+      apprentice: 403,
+      otherShopOwner: 400,
+    },
   },
   {
     name: "PATCH /api/users/:id (a Harbourline technician)",
     call: (c) => c.patch(`/api/users/${harbourlineTechId}`, { data: { role: "technician" } }),
-    expect: { anonymous: 401, owner: 200, senior: 403, technician: 403, apprentice: 403, otherShopOwner: 404 },
+    expect: {
+      anonymous: 401,
+      owner: 200,
+      senior: 403,
+      technician: 403,
+      apprentice: 403,
+      otherShopOwner: 404,
+    },
   },
   {
     name: "PATCH /api/users/:id (a Ridgeback user)",
     call: (c) => c.patch(`/api/users/${ridgebackUserId}`, { data: { active: true } }),
-    expect: { anonymous: 401, owner: 404, senior: 403, technician: 403, apprentice: 403, otherShopOwner: 200 },
+    expect: {
+      anonymous: 401,
+      owner: 404,
+      senior: 403,
+      technician: 403,
+      apprentice: 403,
+      otherShopOwner: 200,
+    },
   },
   {
     name: "GET /api/cases",
     call: (c) => c.get("/api/cases"),
-    expect: { anonymous: 401, owner: 200, senior: 200, technician: 200, apprentice: 200, otherShopOwner: 200 },
+    expect: {
+      anonymous: 401,
+      owner: 200,
+      senior: 200,
+      technician: 200,
+      apprentice: 200,
+      otherShopOwner: 200,
+    },
   },
   {
     name: "GET /api/cases/:id (a Harbourline case)",
     call: (c) => c.get(`/api/cases/${harbourlineCaseId}`),
-    expect: { anonymous: 401, owner: 200, senior: 200, technician: 200, apprentice: 200, otherShopOwner: 404 },
+    expect: {
+      anonymous: 401,
+      owner: 200,
+      senior: 200,
+      technician: 200,
+      apprentice: 200,
+      otherShopOwner: 404,
+    },
   },
   {
     name: "GET /api/cases/:id (not a number)",
     call: (c) => c.get("/api/cases/abc"),
-    expect: { anonymous: 401, owner: 400, senior: 400, technician: 400, apprentice: 400, otherShopOwner: 400 },
+    expect: {
+      anonymous: 401,
+      owner: 400,
+      senior: 400,
+      technician: 400,
+      apprentice: 400,
+      otherShopOwner: 400,
+    },
   },
   {
     name: "GET /api/specs",
     call: (c) => c.get("/api/specs?q=Silverado"),
-    expect: { anonymous: 401, owner: 200, senior: 200, technician: 200, apprentice: 200, otherShopOwner: 200 },
+    expect: {
+      anonymous: 401,
+      owner: 200,
+      senior: 200,
+      technician: 200,
+      apprentice: 200,
+      otherShopOwner: 200,
+    },
   },
   {
     name: "POST /api/specs (malformed)",
     call: (c) => c.post("/api/specs", { data: { make: "", labelChargeG: "lots" } }),
-    expect: { anonymous: 401, owner: 400, senior: 400, technician: 403, apprentice: 403, otherShopOwner: 400 },
+    expect: {
+      anonymous: 401,
+      owner: 400,
+      senior: 400,
+      technician: 403,
+      apprentice: 403,
+      otherShopOwner: 400,
+    },
   },
   {
     name: "DELETE /api/specs/:id (no such row)",
     call: (c) => c.delete("/api/specs/999999999"),
-    expect: { anonymous: 401, owner: 404, senior: 404, technician: 403, apprentice: 403, otherShopOwner: 404 },
+    expect: {
+      anonymous: 401,
+      owner: 404,
+      senior: 404,
+      technician: 403,
+      apprentice: 403,
+      otherShopOwner: 404,
+    },
   },
   {
     name: "POST /api/specs/import?step=preview (empty file)",
     call: (c) => c.post("/api/specs/import?step=preview", { data: { csv: "" } }),
-    expect: { anonymous: 401, owner: 400, senior: 400, technician: 403, apprentice: 403, otherShopOwner: 400 },
+    expect: {
+      anonymous: 401,
+      owner: 400,
+      senior: 400,
+      technician: 403,
+      apprentice: 403,
+      otherShopOwner: 400,
+    },
   },
   {
     name: "GET /api/specs/export",
     call: (c) => c.get("/api/specs/export"),
-    expect: { anonymous: 401, owner: 200, senior: 200, technician: 200, apprentice: 200, otherShopOwner: 200 },
+    expect: {
+      anonymous: 401,
+      owner: 200,
+      senior: 200,
+      technician: 200,
+      apprentice: 200,
+      otherShopOwner: 200,
+    },
   },
   {
     name: "GET /api/specs/matches (a Harbourline vehicle)",
     call: (c) => c.get(`/api/specs/matches?vehicleId=${harbourlineVehicleId}`),
-    expect: { anonymous: 401, owner: 200, senior: 200, technician: 200, apprentice: 200, otherShopOwner: 404 },
+    expect: {
+      anonymous: 401,
+      owner: 200,
+      senior: 200,
+      technician: 200,
+      apprentice: 200,
+      otherShopOwner: 404,
+    },
   },
   {
     name: "GET /api/specs/matches (not a number)",
     call: (c) => c.get("/api/specs/matches?vehicleId=abc"),
-    expect: { anonymous: 401, owner: 400, senior: 400, technician: 400, apprentice: 400, otherShopOwner: 400 },
+    expect: {
+      anonymous: 401,
+      owner: 400,
+      senior: 400,
+      technician: 400,
+      apprentice: 400,
+      otherShopOwner: 400,
+    },
   },
   {
     name: "GET /api/specs/oil-allowances",
     call: (c) => c.get("/api/specs/oil-allowances"),
-    expect: { anonymous: 401, owner: 200, senior: 200, technician: 200, apprentice: 200, otherShopOwner: 200 },
+    expect: {
+      anonymous: 401,
+      owner: 200,
+      senior: 200,
+      technician: 200,
+      apprentice: 200,
+      otherShopOwner: 200,
+    },
   },
   {
     name: "PUT /api/specs/oil-allowances (malformed)",
     call: (c) => c.put("/api/specs/oil-allowances", { data: { allowancesMl: { condenser: -4, wiper: 3 } } }),
-    expect: { anonymous: 401, owner: 400, senior: 400, technician: 403, apprentice: 403, otherShopOwner: 400 },
+    expect: {
+      anonymous: 401,
+      owner: 400,
+      senior: 400,
+      technician: 403,
+      apprentice: 403,
+      otherShopOwner: 400,
+    },
   },
   {
     name: "GET /api/cases/:id/service (a Harbourline case)",
     call: (c) => c.get(`/api/cases/${harbourlineCaseId}/service`),
-    expect: { anonymous: 401, owner: 200, senior: 200, technician: 200, apprentice: 200, otherShopOwner: 404 },
+    expect: {
+      anonymous: 401,
+      owner: 200,
+      senior: 200,
+      technician: 200,
+      apprentice: 200,
+      otherShopOwner: 404,
+    },
   },
   {
     name: "PUT /api/cases/:id/service (malformed)",
-    call: (c) => c.put(`/api/cases/${harbourlineCaseId}/service`, { data: { baseVersion: -1, step: "somewhere", recoveredG: "lots" } }),
-    expect: { anonymous: 401, owner: 400, senior: 400, technician: 400, apprentice: 403, otherShopOwner: 400 },
+    call: (c) =>
+      c.put(`/api/cases/${harbourlineCaseId}/service`, {
+        data: { baseVersion: -1, step: "somewhere", recoveredG: "lots" },
+      }),
+    expect: {
+      anonymous: 401,
+      owner: 400,
+      senior: 400,
+      technician: 400,
+      apprentice: 403,
+      otherShopOwner: 400,
+    },
   },
   {
     name: "DELETE /api/cases/:id/service (version missing)",
     call: (c) => c.delete(`/api/cases/${harbourlineCaseId}/service`),
-    expect: { anonymous: 401, owner: 400, senior: 400, technician: 400, apprentice: 403, otherShopOwner: 400 },
+    expect: {
+      anonymous: 401,
+      owner: 400,
+      senior: 400,
+      technician: 400,
+      apprentice: 403,
+      otherShopOwner: 400,
+    },
   },
   {
     name: "GET /api/cylinders",
     call: (c) => c.get("/api/cylinders"),
-    expect: { anonymous: 401, owner: 200, senior: 200, technician: 200, apprentice: 403, otherShopOwner: 200 },
+    expect: {
+      anonymous: 401,
+      owner: 200,
+      senior: 200,
+      technician: 200,
+      apprentice: 403,
+      otherShopOwner: 200,
+    },
   },
   {
     name: "POST /api/cylinders (malformed)",
     call: (c) => c.post("/api/cylinders", { data: { label: "", tareG: -1 } }),
-    expect: { anonymous: 401, owner: 400, senior: 400, technician: 400, apprentice: 403, otherShopOwner: 400 },
+    expect: {
+      anonymous: 401,
+      owner: 400,
+      senior: 400,
+      technician: 400,
+      apprentice: 403,
+      otherShopOwner: 400,
+    },
   },
   {
     name: "PATCH /api/cylinders/:id (a Harbourline cylinder, kept active)",
     call: (c) => c.patch(`/api/cylinders/${harbourlineCylinderId}`, { data: { retired: false } }),
-    expect: { anonymous: 401, owner: 200, senior: 200, technician: 200, apprentice: 403, otherShopOwner: 404 },
+    expect: {
+      anonymous: 401,
+      owner: 200,
+      senior: 200,
+      technician: 200,
+      apprentice: 403,
+      otherShopOwner: 404,
+    },
   },
   {
     name: "GET /api/ledger/movements",
     call: (c) => c.get("/api/ledger/movements"),
-    expect: { anonymous: 401, owner: 200, senior: 200, technician: 200, apprentice: 403, otherShopOwner: 200 },
+    expect: {
+      anonymous: 401,
+      owner: 200,
+      senior: 200,
+      technician: 200,
+      apprentice: 403,
+      otherShopOwner: 200,
+    },
   },
   {
     name: "POST /api/ledger/movements (malformed)",
     call: (c) => c.post("/api/ledger/movements", { data: { type: "vented", massG: 0 } }),
-    expect: { anonymous: 401, owner: 400, senior: 400, technician: 400, apprentice: 403, otherShopOwner: 400 },
+    expect: {
+      anonymous: 401,
+      owner: 400,
+      senior: 400,
+      technician: 400,
+      apprentice: 403,
+      otherShopOwner: 400,
+    },
   },
   {
     name: "GET /api/ledger/report?format=csv",
     call: (c) => c.get("/api/ledger/report?format=csv"),
-    expect: { anonymous: 401, owner: 200, senior: 200, technician: 200, apprentice: 403, otherShopOwner: 200 },
+    expect: {
+      anonymous: 401,
+      owner: 200,
+      senior: 200,
+      technician: 200,
+      apprentice: 403,
+      otherShopOwner: 200,
+    },
   },
   {
     name: "GET /api/ledger/report?format=xml",
     call: (c) => c.get("/api/ledger/report?format=xml"),
-    expect: { anonymous: 401, owner: 400, senior: 400, technician: 400, apprentice: 403, otherShopOwner: 400 },
+    expect: {
+      anonymous: 401,
+      owner: 400,
+      senior: 400,
+      technician: 400,
+      apprentice: 403,
+      otherShopOwner: 400,
+    },
   },
 ];
 
@@ -187,10 +393,12 @@ for (const row of table) {
 
 test("a state-changing request from another origin is refused", async ({ playwright }) => {
   const foreign = await playwright.request.newContext({
-    baseURL: "http://127.0.0.1:3100",
+    baseURL: BASE_URL,
     extraHTTPHeaders: { origin: "https://evil.example" },
   });
-  const response = await foreign.post("/api/session", { data: { email: DEMO_USERS.owner.email, password: "x" } });
+  const response = await foreign.post("/api/session", {
+    data: { email: DEMO_USERS.owner.email, password: "x" },
+  });
   expect(response.status()).toBe(403);
   await foreign.dispose();
 });
@@ -198,13 +406,20 @@ test("a state-changing request from another origin is refused", async ({ playwri
 test("sign-in: malformed body 400, wrong content type 415, wrong password 401, a burst 429", async () => {
   const client = await apiClient();
   expect((await client.post("/api/session", { data: { email: 42 } })).status()).toBe(400);
-  const text = await client.post("/api/session", { data: "email=x", headers: { "content-type": "text/plain" } });
+  const text = await client.post("/api/session", {
+    data: "email=x",
+    headers: { "content-type": "text/plain" },
+  });
   expect(text.status()).toBe(415);
-  const broken = await client.post("/api/session", { data: "{not json", headers: { "content-type": "application/json" } });
+  const broken = await client.post("/api/session", {
+    data: "{not json",
+    headers: { "content-type": "application/json" },
+  });
   expect(broken.status()).toBe(400);
   const email = "burst-target@harbourline.test";
   const statuses: number[] = [];
-  for (let i = 0; i < 7; i++) statuses.push((await client.post("/api/session", { data: { email, password: `wrong-${i}` } })).status());
+  for (let i = 0; i < 7; i++)
+    statuses.push((await client.post("/api/session", { data: { email, password: `wrong-${i}` } })).status());
   expect(statuses.slice(0, 5)).toEqual([401, 401, 401, 401, 401]);
   expect(statuses.slice(5)).toEqual([429, 429]);
   const limited = await client.post("/api/session", { data: { email, password: "wrong" } });

@@ -3,10 +3,14 @@ import AxeBuilder from "@axe-core/playwright";
 import { SignInPage } from "./pages/sign-in-page";
 import { InterviewPage, openCase } from "./pages/interview-page";
 import { readCase } from "./pages/db";
+import { BASE_URL } from "./pages/e2e-env";
 
 async function expectNoSeriousA11yIssues(page: Page, where: string) {
   // The WCAG A/AA rules, on the page's main content (the shared header is scanned on the sign-in and case pages).
-  const results = await new AxeBuilder({ page }).include("main").withTags(["wcag2a", "wcag2aa", "wcag21a", "wcag21aa"]).analyze();
+  const results = await new AxeBuilder({ page })
+    .include("main")
+    .withTags(["wcag2a", "wcag2aa", "wcag21a", "wcag21aa"])
+    .analyze();
   const serious = results.violations.filter((v) => v.impact === "serious" || v.impact === "critical");
   expect(serious.map((v) => `${where}: ${v.id} (${v.nodes.length})`)).toEqual([]);
 }
@@ -18,9 +22,15 @@ test.beforeEach(async ({ page }) => {
   await new SignInPage(page).signInAs("technician");
 });
 
-test("a clear overcharge on a hot day: overcharge first, conclusion saved with the findings snapshot (common practice signature: high side high, subcooling high, recovered mass ~25 % over label)", async ({ page }) => {
+test("a clear overcharge on a hot day: overcharge first, conclusion saved with the findings snapshot (common practice signature: high side high, subcooling high, recovered mass ~25 % over label)", async ({
+  page,
+}) => {
   const interview = new InterviewPage(page);
-  await openCase(interview, /Honda CR-V/, "Cools a little on the highway, blows warm at lights; it was topped up at a quick-lube last month.");
+  await openCase(
+    interview,
+    /Honda CR-V/,
+    "Cools a little on the highway, blows warm at lights; it was topped up at a quick-lube last month.",
+  );
   await interview.expectStep("Vehicle system");
   await expectNoSeriousA11yIssues(page, "system");
   await expect(page.getByText(/mildly flammable|flammable/i).first()).toBeVisible();
@@ -72,7 +82,9 @@ test("a clear overcharge on a hot day: overcharge first, conclusion saved with t
   await expectNoSeriousA11yIssues(page, "findings");
   await interview.waitUntilSaved();
   const caseId = interview.caseIdFromUrl();
-  await page.getByLabel("Why, in a sentence or two").fill("Recovered 565 g against a 450 g label after a top-off; high side and subcooling both high.");
+  await page
+    .getByLabel("Why, in a sentence or two")
+    .fill("Recovered 565 g against a 450 g label after a top-off; high side and subcooling both high.");
   await page.getByRole("button", { name: "Submit the diagnosis" }).click();
   await expect(page).toHaveURL(new RegExp(`/cases/${caseId}$`));
 
@@ -81,13 +93,24 @@ test("a clear overcharge on a hot day: overcharge first, conclusion saved with t
   expect(saved.conclusion_cause).toBe("overcharge");
   expect(saved.findings?.suspects[0]?.cause).toBe("overcharge");
   expect(saved.engine_version).toBe(saved.findings?.engineVersion);
-  expect(saved.answers.answers.running).toMatchObject({ highKpaGauge: 2300, lowKpaGauge: 330, liquidLineC: 58, suctionLineC: 12 });
+  expect(saved.answers.answers.running).toMatchObject({
+    highKpaGauge: 2300,
+    lowKpaGauge: 330,
+    liquidLineC: 58,
+    suctionLineC: 12,
+  });
   expect(saved.answers.answers.chargeAudit).toMatchObject({ recovered: true, recoveredChargeG: 565 });
 });
 
-test("an empty system branches to the leak search, skips running tests and ranks undercharge first", async ({ page }) => {
+test("an empty system branches to the leak search, skips running tests and ranks undercharge first", async ({
+  page,
+}) => {
   const interview = new InterviewPage(page);
-  await openCase(interview, /Silverado/, "No cold air at all since the spring; the compressor does not kick in.");
+  await openCase(
+    interview,
+    /Silverado/,
+    "No cold air at all since the spring; the compressor does not kick in.",
+  );
   await interview.next();
   await interview.expectStep("Conditions");
   await interview.digits("24");
@@ -98,7 +121,9 @@ test("an empty system branches to the leak search, skips running tests and ranks
 
   await interview.expectStep("Leak search");
   await expect(page.getByText("Do not run the compressor")).toBeVisible();
-  await expect(page.getByRole("navigation", { name: "Interview steps" }).getByRole("button", { name: /Running/ })).toHaveCount(0);
+  await expect(
+    page.getByRole("navigation", { name: "Interview steps" }).getByRole("button", { name: /Running/ }),
+  ).toHaveCount(0);
   await expectNoSeriousA11yIssues(page, "leak search");
   await interview.choose("Electronic detector");
   await interview.choose("Condenser");
@@ -110,11 +135,17 @@ test("an empty system branches to the leak search, skips running tests and ranks
   const saved = await readCase(interview.caseIdFromUrl());
   expect(saved.interview_step).toBe("findings");
   expect(saved.answers.answers.static).toEqual({ staticKpaGauge: 0 });
-  expect(saved.answers.answers.leakFinding).toMatchObject({ method: "electronic_detector", whereFound: "condenser" });
+  expect(saved.answers.answers.leakFinding).toMatchObject({
+    method: "electronic_detector",
+    whereFound: "condenser",
+  });
   expect(saved.answers.answers.running).toBeUndefined();
 });
 
-async function walkTwin(interview: InterviewPage, readings: { ambient: string; high: string; low: string; liquid: string; suction: string }) {
+async function walkTwin(
+  interview: InterviewPage,
+  readings: { ambient: string; high: string; low: string; liquid: string; suction: string },
+) {
   await interview.expectStep("Conditions");
   await interview.digits(readings.ambient);
   await interview.press("Enter");
@@ -133,11 +164,19 @@ async function walkTwin(interview: InterviewPage, readings: { ambient: string; h
   return readCase(interview.caseIdFromUrl());
 }
 
-test("a case entered in imperial units gives the same computed values as its metric twin (1 psi = 6.894757 kPa, NIST SP 811)", async ({ page }) => {
+test("a case entered in imperial units gives the same computed values as its metric twin (1 psi = 6.894757 kPa, NIST SP 811)", async ({
+  page,
+}) => {
   const metric = new InterviewPage(page);
   await openCase(metric, /Silverado/, "Cooling is weak in the afternoon.");
   await metric.next();
-  const metricCase = await walkTwin(metric, { ambient: "35", high: "1724", low: "276", liquid: "52", suction: "10" });
+  const metricCase = await walkTwin(metric, {
+    ambient: "35",
+    high: "1724",
+    low: "276",
+    liquid: "52",
+    suction: "10",
+  });
 
   const imperial = new InterviewPage(page);
   await openCase(imperial, /Silverado/, "Cooling is weak in the afternoon.");
@@ -163,13 +202,21 @@ test("a case entered in imperial units gives the same computed values as its met
   await imperial.waitUntilSaved();
   const imperialCase = await readCase(imperial.caseIdFromUrl());
 
-  for (const key of ["condensingC", "evaporatingC", "subcoolingK", "superheatK", "condensingApproachK"] as const) {
+  for (const key of [
+    "condensingC",
+    "evaporatingC",
+    "subcoolingK",
+    "superheatK",
+    "condensingApproachK",
+  ] as const) {
     expect(imperialCase.computed?.[key], key).toBeCloseTo(metricCase.computed![key]!, 1);
   }
   expect(imperialCase.answers.answers.conditions?.ambientC).toBeCloseTo(35, 6);
 });
 
-test("a standard performance check reaches the findings in at most 25 taps and key presses besides the digits", async ({ page }) => {
+test("a standard performance check reaches the findings in at most 25 taps and key presses besides the digits", async ({
+  page,
+}) => {
   const interview = new InterviewPage(page);
   await openCase(interview, /Ford Focus/, "Not as cold as it used to be.");
   await interview.next();
@@ -194,7 +241,10 @@ test("a standard performance check reaches the findings in at most 25 taps and k
   expect(interview.taps).toBeLessThanOrEqual(25);
 });
 
-test("with the network cut mid-interview, answers wait on the device, reach the server when it returns, and a reload resumes at the same step", async ({ page, context }) => {
+test("with the network cut mid-interview, answers wait on the device, reach the server when it returns, and a reload resumes at the same step", async ({
+  page,
+  context,
+}) => {
   const interview = new InterviewPage(page);
   await openCase(interview, /Ford Focus/, "Warm air after ten minutes of driving.");
   await interview.next();
@@ -227,7 +277,9 @@ test("with the network cut mid-interview, answers wait on the device, reach the 
   await expect(interview.field("Low side")).toHaveValue("210");
 });
 
-test("an impossible reading gets a plain message beside the field and keeps what was typed", async ({ page }) => {
+test("an impossible reading gets a plain message beside the field and keeps what was typed", async ({
+  page,
+}) => {
   const interview = new InterviewPage(page);
   await openCase(interview, /Ford Focus/, "Hissing from the dash.");
   await interview.next();
@@ -238,7 +290,9 @@ test("an impossible reading gets a plain message beside the field and keeps what
   await interview.digits("300");
   await interview.enter("Low side", "900");
   await interview.press("Enter");
-  await expect(page.getByText("The low side reads above the high side — check the hose connections")).toBeVisible();
+  await expect(
+    page.getByText("The low side reads above the high side — check the hose connections"),
+  ).toBeVisible();
   await interview.expectStep("Running readings");
   await expect(interview.field("Low side")).toHaveValue("900");
   await interview.field("High side").fill("12.5.3");
@@ -247,7 +301,10 @@ test("an impossible reading gets a plain message beside the field and keeps what
   await expect(interview.field("High side")).toHaveValue("12.5.3");
 });
 
-test("two screens on one case: the second never silently overwrites the first, and another device resumes at the same step", async ({ page, browser }) => {
+test("two screens on one case: the second never silently overwrites the first, and another device resumes at the same step", async ({
+  page,
+  browser,
+}) => {
   const first = new InterviewPage(page);
   await openCase(first, /Ford Focus/, "Cold on the left vents only.");
   await first.next();
@@ -256,7 +313,7 @@ test("two screens on one case: the second never silently overwrites the first, a
   const caseId = first.caseIdFromUrl();
 
   // The same technician on a second device opens the case where the first left it.
-  const otherDevice = await browser.newContext({ baseURL: "http://127.0.0.1:3100", viewport: { width: 412, height: 915 } });
+  const otherDevice = await browser.newContext({ baseURL: BASE_URL, viewport: { width: 412, height: 915 } });
   const otherPage = await otherDevice.newPage();
   await new SignInPage(otherPage).signInAs("technician");
   await otherPage.goto(`/cases/${caseId}/interview`);
@@ -274,7 +331,9 @@ test("two screens on one case: the second never silently overwrites the first, a
   await otherDevice.close();
 });
 
-test("switching units converts what was typed and keeps the quantity (1 psi = 6.894757 kPa, NIST SP 811)", async ({ page }) => {
+test("switching units converts what was typed and keeps the quantity (1 psi = 6.894757 kPa, NIST SP 811)", async ({
+  page,
+}) => {
   const interview = new InterviewPage(page);
   await openCase(interview, /Ford Focus/, "Cooling comes and goes.");
   await interview.next();
@@ -290,7 +349,9 @@ test("switching units converts what was typed and keeps the quantity (1 psi = 6.
   expect(saved.answers.answers.static?.staticKpaGauge).toBeCloseTo(90 * 6.894757, 1);
 });
 
-test("the system step offers the spec-table rows for the vehicle and the technician picks the variant that applies", async ({ page }) => {
+test("the system step offers the spec-table rows for the vehicle and the technician picks the variant that applies", async ({
+  page,
+}) => {
   const interview = new InterviewPage(page);
   await openCase(interview, /Silverado/, "Rear vents blow warm, front is fine.");
   await interview.expectStep("Vehicle system");
@@ -302,5 +363,9 @@ test("the system step offers the spec-table rows for the vehicle and the technic
   await interview.expectStep("Conditions");
   await interview.waitUntilSaved();
   const saved = await readCase(interview.caseIdFromUrl());
-  expect(saved.answers.answers.system).toMatchObject({ refrigerant: "R-134a", labelChargeG: 1130, oilType: "pag" });
+  expect(saved.answers.answers.system).toMatchObject({
+    refrigerant: "R-134a",
+    labelChargeG: 1130,
+    oilType: "pag",
+  });
 });

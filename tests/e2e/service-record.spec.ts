@@ -6,14 +6,18 @@ import { ServiceRecordPage } from "./pages/service-record-page";
 // The demo RAV4 case (R-1234yf, electric compressor) belongs to the demo technician and has no service record yet.
 async function rav4CaseId(): Promise<number> {
   const client = await signedInClient(DEMO_USERS.technician.email);
-  const { cases } = (await (await client.get("/api/cases")).json()) as { cases: { id: number; vehicle: string | null }[] };
+  const { cases } = (await (await client.get("/api/cases")).json()) as {
+    cases: { id: number; vehicle: string | null }[];
+  };
   await client.dispose();
   const found = cases.find((c) => c.vehicle?.includes("RAV4"));
   if (!found) throw new Error("the demo RAV4 case is missing");
   return found.id;
 }
 
-test("a technician completes a service record on the phone and the ledger shows the movements", async ({ page }) => {
+test("a technician completes a service record on the phone and the ledger shows the movements", async ({
+  page,
+}) => {
   const caseId = await rav4CaseId();
   await new SignInPage(page).signInAs("technician");
   const record = new ServiceRecordPage(page);
@@ -39,7 +43,12 @@ test("a technician completes a service record on the phone and the ledger shows 
   await expect(page.getByRole("status")).toContainText("1 ledger entry posted");
 
   // 3. Evacuation and hold: 0.2 inHg lost in 10 min is inside the 2 inHg / 5 min field limit.
-  await record.fill({ "Deepest vacuum reached": "29.6 inHg", "Vacuum at the start of the hold": "29.6 inHg", "Vacuum at the end of the hold": "29.4 inHg", "Hold time, minutes": "10" });
+  await record.fill({
+    "Deepest vacuum reached": "29.6 inHg",
+    "Vacuum at the start of the hold": "29.6 inHg",
+    "Vacuum at the end of the hold": "29.4 inHg",
+    "Hold time, minutes": "10",
+  });
   await expect(record.result("hold-verdict")).toContainText("Hold passed");
   await record.saveAndExpect("evacuation and hold");
 
@@ -57,14 +66,32 @@ test("a technician completes a service record on the phone and the ledger shows 
   await record.saveAndExpect("recharge");
 
   // 6. Final reading.
-  await record.fill({ "Ambient temperature": "26", "Centre vent temperature": "7", "High side (gauge)": "1300", "Low side (gauge)": "230" });
+  await record.fill({
+    "Ambient temperature": "26",
+    "Centre vent temperature": "7",
+    "High side (gauge)": "1300",
+    "Low side (gauge)": "230",
+  });
   await record.saveAndExpect("final reading");
 
-  await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Ledger", exact: true }).click();
+  await page
+    .getByRole("navigation", { name: "Main" })
+    .getByRole("link", { name: "Ledger", exact: true })
+    .click();
   await expect(page.getByRole("heading", { name: "Refrigerant ledger" })).toBeVisible();
   const movements = page.getByTestId("movement-list");
-  await expect(movements.getByRole("listitem").filter({ hasText: `case ${caseId}` }).filter({ hasText: "Recovered into HL-REC-YF" })).toContainText("510 g");
-  await expect(movements.getByRole("listitem").filter({ hasText: `case ${caseId}` }).filter({ hasText: "Charged from HL-SUP-YF" })).toContainText("486 g");
+  await expect(
+    movements
+      .getByRole("listitem")
+      .filter({ hasText: `case ${caseId}` })
+      .filter({ hasText: "Recovered into HL-REC-YF" }),
+  ).toContainText("510 g");
+  await expect(
+    movements
+      .getByRole("listitem")
+      .filter({ hasText: `case ${caseId}` })
+      .filter({ hasText: "Charged from HL-SUP-YF" }),
+  ).toContainText("486 g");
   // HL-REC-YF started the demo holding 880 g (invented), so it now holds 880 + 510 g.
   await expect(page.getByTestId("cylinder-HL-REC-YF").getByTestId("cylinder-net")).toHaveText("1390 g");
 });

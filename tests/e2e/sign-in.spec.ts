@@ -17,7 +17,9 @@ const REFUSED_PAGES: Record<DemoRole, string[]> = {
 };
 
 for (const role of Object.keys(DEMO_USERS) as DemoRole[]) {
-  test(`${role} signs in, sees the navigation for the role, is refused other pages, signs out`, async ({ page }) => {
+  test(`${role} signs in, sees the navigation for the role, is refused other pages, signs out`, async ({
+    page,
+  }) => {
     const signIn = new SignInPage(page);
     await signIn.signInAs(role);
     const nav = page.getByRole("navigation", { name: "Main" });

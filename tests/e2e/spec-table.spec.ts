@@ -8,9 +8,14 @@ const CSV = [
   "2015,2019,Subaru,Outback,2.5 L,maybe,R-134a,19.4,PAG 46,130",
 ].join("\n");
 
-test("an owner previews a CSV import, sees the bad row's problem before saving, and saves the good row", async ({ page }) => {
+test("an owner previews a CSV import, sees the bad row's problem before saving, and saves the good row", async ({
+  page,
+}) => {
   await new SignInPage(page).signInAs("owner");
-  await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Spec table", exact: true }).click();
+  await page
+    .getByRole("navigation", { name: "Main" })
+    .getByRole("link", { name: "Spec table", exact: true })
+    .click();
   await expect(page.getByRole("heading", { name: "Spec table", level: 1 })).toBeVisible();
   await page.getByLabel("Or paste the CSV text").fill(CSV);
   await page.getByRole("button", { name: "Preview the import" }).click();

@@ -1,7 +1,9 @@
 import { request, type APIRequestContext } from "@playwright/test";
 import { DEMO_PASSWORD } from "./sign-in-page";
 
-export const BASE_URL = "http://127.0.0.1:3100";
+import { BASE_URL } from "./e2e-env";
+
+export { BASE_URL };
 
 /** An API client that sends the Origin header our state-changing routes require. */
 export async function apiClient(): Promise<APIRequestContext> {

@@ -1,7 +1,14 @@
 import mysql from "mysql2/promise";
+import { E2E_DB_PORT } from "./e2e-env";
 
 // The e2e server's own throwaway database (scripts/e2e-server.sh).
-const E2E_DATABASE = { host: "127.0.0.1", port: 3327, user: "chillwright", password: "chillwright-dev", database: "chillwright_e2e" };
+const E2E_DATABASE = {
+  host: "127.0.0.1",
+  port: E2E_DB_PORT,
+  user: "chillwright",
+  password: "chillwright-dev",
+  database: "chillwright_e2e",
+};
 
 export interface SavedCaseRow {
   status: string;
@@ -9,7 +16,11 @@ export interface SavedCaseRow {
   version: number;
   answers: { answers: Record<string, Record<string, unknown>>; skipped: string[] };
   computed: Record<string, number> | null;
-  findings: { engineVersion: string; suspects: { cause: string; score: number }[]; input: Record<string, unknown> } | null;
+  findings: {
+    engineVersion: string;
+    suspects: { cause: string; score: number }[];
+    input: Record<string, unknown>;
+  } | null;
   engine_version: string | null;
   conclusion_cause: string | null;
 }
@@ -20,10 +31,18 @@ const parse = (v: unknown) => (typeof v === "string" ? JSON.parse(v) : v);
 export async function readCase(caseId: number): Promise<SavedCaseRow> {
   const connection = await mysql.createConnection(E2E_DATABASE);
   try {
-    const [rows] = await connection.query("SELECT status, interview_step, version, answers, computed, findings, engine_version, conclusion_cause FROM service_case WHERE id = ?", [caseId]);
+    const [rows] = await connection.query(
+      "SELECT status, interview_step, version, answers, computed, findings, engine_version, conclusion_cause FROM service_case WHERE id = ?",
+      [caseId],
+    );
     const row = (rows as Record<string, unknown>[])[0];
     if (!row) throw new Error(`case ${caseId} not found`);
-    return { ...row, answers: parse(row.answers), computed: parse(row.computed), findings: parse(row.findings) } as SavedCaseRow;
+    return {
+      ...row,
+      answers: parse(row.answers),
+      computed: parse(row.computed),
+      findings: parse(row.findings),
+    } as SavedCaseRow;
   } finally {
     await connection.end();
   }

@@ -61,7 +61,11 @@ export class InterviewPage {
   }
 
   async setUnit(fieldLabel: string, unit: string) {
-    await this.tap(this.page.getByRole("group", { name: `Unit for ${fieldLabel.toLowerCase()}` }).getByRole("button", { name: unit, exact: true }));
+    await this.tap(
+      this.page
+        .getByRole("group", { name: `Unit for ${fieldLabel.toLowerCase()}` })
+        .getByRole("button", { name: unit, exact: true }),
+    );
   }
 
   async waitUntilSaved() {

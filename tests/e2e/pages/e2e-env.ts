@@ -1,0 +1,4 @@
+// Where the e2e server listens. Overridable so two checkouts on one machine can run Playwright side by side.
+export const E2E_PORT = Number(process.env.E2E_PORT ?? 3100);
+export const E2E_DB_PORT = Number(process.env.E2E_DB_PORT ?? 3327);
+export const BASE_URL = `http://127.0.0.1:${E2E_PORT}`;
