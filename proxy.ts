@@ -18,7 +18,12 @@ export function proxy(req: NextRequest) {
     }
     if (!sameOrigin) {
       return NextResponse.json(
-        { error: { code: "forbidden:origin", message: "This request did not come from Chillwright's own pages." } },
+        {
+          error: {
+            code: "forbidden:origin",
+            message: "This request did not come from Chillwright's own pages.",
+          },
+        },
         { status: 403 },
       );
     }

@@ -12,7 +12,13 @@ export default defineConfig({
         extends: true,
         test: {
           name: "unit",
-          include: ["lib/**/*.test.ts", "machines/**/*.test.ts", "data/**/*.test.ts", "tests/unit/**/*.test.ts", "components/**/*.test.ts"],
+          include: [
+            "lib/**/*.test.ts",
+            "machines/**/*.test.ts",
+            "data/**/*.test.ts",
+            "tests/unit/**/*.test.ts",
+            "components/**/*.test.ts",
+          ],
           environment: "node",
         },
       },

@@ -30,7 +30,7 @@ function variedInputs(count: number): DiagnosisInput[] {
       ambientC,
       relativeHumidityPct: maybe(20 + random() * 70),
       altitudeM: maybe(random() * 1800),
-      staticKpaGauge: maybe((random() * 900) * scale),
+      staticKpaGauge: maybe(random() * 900 * scale),
       highKpaGauge: maybe((400 + random() * 2000) * scale),
       lowKpaGauge: maybe((-30 + random() * 450) * (refrigerant === "R-744" ? 10 : 1)),
       liquidLineC: maybe(ambientC + random() * 30),
@@ -75,12 +75,21 @@ const cpu = process.cpuUsage(cpuStarted);
 // On a shared, busy machine wall time includes waiting for a core; CPU time is the work itself.
 const cpuS = (cpu.user + cpu.system) / 1e6;
 latenciesUs.sort((a, b) => a - b);
-const pct = (p: number) => latenciesUs[Math.min(latenciesUs.length - 1, Math.floor((p / 100) * latenciesUs.length))] ?? Number.NaN;
+const pct = (p: number) =>
+  latenciesUs[Math.min(latenciesUs.length - 1, Math.floor((p / 100) * latenciesUs.length))] ?? Number.NaN;
 
-console.log(`inputs: ${inputs.length} varied (${WORKED_CASES.length} worked cases + generated), ${rounds * perRound} diagnoses`);
+console.log(
+  `inputs: ${inputs.length} varied (${WORKED_CASES.length} worked cases + generated), ${rounds * perRound} diagnoses`,
+);
 roundRates.sort((a, b) => a - b);
 const rate = (value: number) => Math.round(value).toLocaleString("en-US");
-console.log(`diagnoses/second: ${rate((rounds * perRound) / elapsedS)} overall, ${rate(roundRates[Math.floor(rounds / 2)] ?? 0)} median round, ${rate(roundRates.at(-1) ?? 0)} best round`);
-console.log(`diagnoses per CPU-second: ${rate((rounds * perRound) / cpuS)} (process CPU ${cpuS.toFixed(2)} s over ${elapsedS.toFixed(2)} s wall)`);
-console.log(`latency µs (sampled 1 in 50): p50 ${pct(50).toFixed(1)}, p95 ${pct(95).toFixed(1)}, p99 ${pct(99).toFixed(1)}`);
+console.log(
+  `diagnoses/second: ${rate((rounds * perRound) / elapsedS)} overall, ${rate(roundRates[Math.floor(rounds / 2)] ?? 0)} median round, ${rate(roundRates.at(-1) ?? 0)} best round`,
+);
+console.log(
+  `diagnoses per CPU-second: ${rate((rounds * perRound) / cpuS)} (process CPU ${cpuS.toFixed(2)} s over ${elapsedS.toFixed(2)} s wall)`,
+);
+console.log(
+  `latency µs (sampled 1 in 50): p50 ${pct(50).toFixed(1)}, p95 ${pct(95).toFixed(1)}, p99 ${pct(99).toFixed(1)}`,
+);
 console.log(`machine load average (1 min) during the run: ${loadavg()[0]?.toFixed(1)}; (checksum ${sink})`);

@@ -63,7 +63,11 @@ export class AppError extends Error {
 
   toJSON() {
     return {
-      error: { code: this.code, message: this.message, ...(this.fieldErrors ? { fieldErrors: this.fieldErrors } : {}) },
+      error: {
+        code: this.code,
+        message: this.message,
+        ...(this.fieldErrors ? { fieldErrors: this.fieldErrors } : {}),
+      },
     };
   }
 }

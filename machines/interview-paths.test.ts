@@ -172,4 +172,3 @@ describe("answers and NEXT", () => {
     expect(viewOf(actor.getSnapshot()).canComputeFindings).toBe(true);
   });
 });
-

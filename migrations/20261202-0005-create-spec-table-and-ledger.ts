@@ -1,6 +1,13 @@
 import { DataTypes, type QueryInterface } from "sequelize";
 import type { MigrationParams } from "umzug";
-import { addShopIdKey, addShopScopedForeignKey, intId, shopIdColumn, tableOptions, timestamps } from "@/lib/db/schema-helpers";
+import {
+  addShopIdKey,
+  addShopScopedForeignKey,
+  intId,
+  shopIdColumn,
+  tableOptions,
+  timestamps,
+} from "@/lib/db/schema-helpers";
 
 type Params = MigrationParams<QueryInterface>;
 
@@ -29,10 +36,14 @@ export async function up({ context: qi }: Params) {
     tableOptions,
   );
   await addShopIdKey(qi, "spec_entry");
-  await qi.addIndex("spec_entry", ["shop_id", "make", "model", "variant", "year_from", "year_to", "rear_ac"], {
-    unique: true,
-    name: "spec_entry_shop_vehicle_unique",
-  });
+  await qi.addIndex(
+    "spec_entry",
+    ["shop_id", "make", "model", "variant", "year_from", "year_to", "rear_ac"],
+    {
+      unique: true,
+      name: "spec_entry_shop_vehicle_unique",
+    },
+  );
 
   await qi.createTable(
     "part_oil_allowance",
@@ -46,7 +57,10 @@ export async function up({ context: qi }: Params) {
     },
     tableOptions,
   );
-  await qi.addIndex("part_oil_allowance", ["shop_id", "part"], { unique: true, name: "part_oil_allowance_shop_part" });
+  await qi.addIndex("part_oil_allowance", ["shop_id", "part"], {
+    unique: true,
+    name: "part_oil_allowance_shop_part",
+  });
 
   await qi.createTable(
     "cylinder",
@@ -108,11 +122,36 @@ export async function up({ context: qi }: Params) {
   );
   await addShopIdKey(qi, "service_record");
   await qi.addIndex("service_record", ["case_id"], { unique: true, name: "service_record_case_unique" });
-  await addShopScopedForeignKey(qi, { table: "service_record", column: "case_id", references: "service_case", onDelete: "RESTRICT" });
-  await addShopScopedForeignKey(qi, { table: "service_record", column: "technician_id", references: "user", onDelete: "RESTRICT" });
-  await addShopScopedForeignKey(qi, { table: "service_record", column: "recovery_cylinder_id", references: "cylinder", onDelete: "RESTRICT" });
-  await addShopScopedForeignKey(qi, { table: "service_record", column: "charge_cylinder_id", references: "cylinder", onDelete: "RESTRICT" });
-  await addShopScopedForeignKey(qi, { table: "service_record", column: "spec_entry_id", references: "spec_entry", onDelete: "RESTRICT" });
+  await addShopScopedForeignKey(qi, {
+    table: "service_record",
+    column: "case_id",
+    references: "service_case",
+    onDelete: "RESTRICT",
+  });
+  await addShopScopedForeignKey(qi, {
+    table: "service_record",
+    column: "technician_id",
+    references: "user",
+    onDelete: "RESTRICT",
+  });
+  await addShopScopedForeignKey(qi, {
+    table: "service_record",
+    column: "recovery_cylinder_id",
+    references: "cylinder",
+    onDelete: "RESTRICT",
+  });
+  await addShopScopedForeignKey(qi, {
+    table: "service_record",
+    column: "charge_cylinder_id",
+    references: "cylinder",
+    onDelete: "RESTRICT",
+  });
+  await addShopScopedForeignKey(qi, {
+    table: "service_record",
+    column: "spec_entry_id",
+    references: "spec_entry",
+    onDelete: "RESTRICT",
+  });
   // reading_set has no (shop_id, id) key; the server sets this only to a reading set of the record's own case.
   await qi.addConstraint("service_record", {
     type: "foreign key",
@@ -146,12 +185,36 @@ export async function up({ context: qi }: Params) {
     tableOptions,
   );
   await addShopIdKey(qi, "refrigerant_movement");
-  await qi.addIndex("refrigerant_movement", ["shop_id", "occurred_at"], { name: "refrigerant_movement_shop_occurred" });
-  await qi.addIndex("refrigerant_movement", ["shop_id", "service_record_id"], { name: "refrigerant_movement_shop_record" });
-  await addShopScopedForeignKey(qi, { table: "refrigerant_movement", column: "cylinder_id", references: "cylinder", onDelete: "RESTRICT" });
-  await addShopScopedForeignKey(qi, { table: "refrigerant_movement", column: "case_id", references: "service_case", onDelete: "RESTRICT" });
-  await addShopScopedForeignKey(qi, { table: "refrigerant_movement", column: "technician_id", references: "user", onDelete: "RESTRICT" });
-  await addShopScopedForeignKey(qi, { table: "refrigerant_movement", column: "reverses_id", references: "refrigerant_movement", onDelete: "RESTRICT" });
+  await qi.addIndex("refrigerant_movement", ["shop_id", "occurred_at"], {
+    name: "refrigerant_movement_shop_occurred",
+  });
+  await qi.addIndex("refrigerant_movement", ["shop_id", "service_record_id"], {
+    name: "refrigerant_movement_shop_record",
+  });
+  await addShopScopedForeignKey(qi, {
+    table: "refrigerant_movement",
+    column: "cylinder_id",
+    references: "cylinder",
+    onDelete: "RESTRICT",
+  });
+  await addShopScopedForeignKey(qi, {
+    table: "refrigerant_movement",
+    column: "case_id",
+    references: "service_case",
+    onDelete: "RESTRICT",
+  });
+  await addShopScopedForeignKey(qi, {
+    table: "refrigerant_movement",
+    column: "technician_id",
+    references: "user",
+    onDelete: "RESTRICT",
+  });
+  await addShopScopedForeignKey(qi, {
+    table: "refrigerant_movement",
+    column: "reverses_id",
+    references: "refrigerant_movement",
+    onDelete: "RESTRICT",
+  });
 }
 
 export async function down({ context: qi }: Params) {

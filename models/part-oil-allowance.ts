@@ -11,7 +11,10 @@ import { REPLACED_PART_IDS, type ReplacedPartId } from "@/lib/service/oil";
 import type { Shop } from "./shop";
 
 /** The shop's own figure for the oil a replaced part carries out (mL); null = drain and measure. */
-export class PartOilAllowance extends Model<InferAttributes<PartOilAllowance>, InferCreationAttributes<PartOilAllowance>> {
+export class PartOilAllowance extends Model<
+  InferAttributes<PartOilAllowance>,
+  InferCreationAttributes<PartOilAllowance>
+> {
   declare id: CreationOptional<number>;
   declare shopId: ForeignKey<Shop["id"]>;
   declare part: ReplacedPartId;

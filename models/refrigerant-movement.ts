@@ -16,7 +16,10 @@ const appendOnly = () => {
 };
 
 /** One line of the refrigerant ledger. Never updated or deleted; a correction cancels it. */
-export class RefrigerantMovement extends Model<InferAttributes<RefrigerantMovement>, InferCreationAttributes<RefrigerantMovement>> {
+export class RefrigerantMovement extends Model<
+  InferAttributes<RefrigerantMovement>,
+  InferCreationAttributes<RefrigerantMovement>
+> {
   declare id: CreationOptional<number>;
   declare shopId: ForeignKey<Shop["id"]>;
   declare cylinderId: number;
@@ -55,7 +58,12 @@ export class RefrigerantMovement extends Model<InferAttributes<RefrigerantMoveme
         modelName: "RefrigerantMovement",
         underscored: true,
         updatedAt: false,
-        hooks: { beforeUpdate: appendOnly, beforeBulkUpdate: appendOnly, beforeDestroy: appendOnly, beforeBulkDestroy: appendOnly },
+        hooks: {
+          beforeUpdate: appendOnly,
+          beforeBulkUpdate: appendOnly,
+          beforeDestroy: appendOnly,
+          beforeBulkDestroy: appendOnly,
+        },
       },
     );
   }

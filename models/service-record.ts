@@ -18,7 +18,10 @@ type Opt<T> = CreationOptional<T | null>;
 
 // One per case. Pressures are absolute kPa (vacuum readings converted at the edge with the
 // shop's altitude), masses grams, volumes millilitres. `version` guards step-by-step saves.
-export class ServiceRecord extends Model<InferAttributes<ServiceRecord>, InferCreationAttributes<ServiceRecord>> {
+export class ServiceRecord extends Model<
+  InferAttributes<ServiceRecord>,
+  InferCreationAttributes<ServiceRecord>
+> {
   declare id: CreationOptional<number>;
   declare shopId: ForeignKey<Shop["id"]>;
   declare caseId: ForeignKey<Case["id"]>;
@@ -56,7 +59,11 @@ export class ServiceRecord extends Model<InferAttributes<ServiceRecord>, InferCr
   static initModel(sequelize: Sequelize) {
     const int = () => ({ type: DataTypes.INTEGER, allowNull: true });
     // DECIMAL comes back from the driver as a string; the getter keeps the model numeric.
-    const decimal = (precision: number, scale: number, name: "purityPct" | "airPct" | "deepestKpaAbs" | "holdStartKpaAbs" | "holdEndKpaAbs" | "holdMinutes") => ({
+    const decimal = (
+      precision: number,
+      scale: number,
+      name: "purityPct" | "airPct" | "deepestKpaAbs" | "holdStartKpaAbs" | "holdEndKpaAbs" | "holdMinutes",
+    ) => ({
       type: DataTypes.DECIMAL(precision, scale),
       allowNull: true,
       get(this: ServiceRecord) {

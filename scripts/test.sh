@@ -11,6 +11,7 @@ step() { echo; echo "== $* ($(( $(date +%s) - started )) s)"; }
 
 step "typecheck"; npx tsc --noEmit
 step "lint"; npx eslint . --max-warnings=0
+step "formatting"; npx prettier --check . --log-level warn
 step "unit and integration tests"; npx vitest run
 step "production build"; npx next build
 step "browser tests"; npx playwright test

@@ -13,7 +13,10 @@ export default async function ShopLayout({ children }: { children: React.ReactNo
   const items = navigationFor(user.role).map(({ href, label }) => ({ href, label }));
   return (
     <div className="min-h-dvh">
-      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:bg-paper focus:p-2">
+      <a
+        href="#main"
+        className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:bg-paper focus:p-2"
+      >
         Skip to content
       </a>
       <header className="bg-glacier-900 text-white">

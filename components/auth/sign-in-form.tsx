@@ -15,7 +15,10 @@ export function SignInForm({ next }: { next: string }) {
     handleSubmit,
     setError,
     formState: { errors, isSubmitting },
-  } = useForm<SignInInput>({ resolver: zodResolver(signInSchema), defaultValues: { email: "", password: "" } });
+  } = useForm<SignInInput>({
+    resolver: zodResolver(signInSchema),
+    defaultValues: { email: "", password: "" },
+  });
 
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
@@ -77,7 +80,10 @@ export function SignInForm({ next }: { next: string }) {
         )}
       </div>
       {formError && (
-        <p role="alert" className="rounded-card border-2 border-ember-500 bg-ember-50 p-3 font-bold text-ember-700">
+        <p
+          role="alert"
+          className="rounded-card border-2 border-ember-500 bg-ember-50 p-3 font-bold text-ember-700"
+        >
           {formError}
         </p>
       )}

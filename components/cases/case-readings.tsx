@@ -3,27 +3,50 @@ import { formatPressure, formatTemperature } from "@/lib/units";
 type Answers = {
   conditions?: { ambientC?: number; relativeHumidityPct?: number; engineRpm?: number };
   static?: { staticKpaGauge?: number };
-  running?: { highKpaGauge?: number; lowKpaGauge?: number; liquidLineC?: number; suctionLineC?: number; ventC?: number };
+  running?: {
+    highKpaGauge?: number;
+    lowKpaGauge?: number;
+    liquidLineC?: number;
+    suctionLineC?: number;
+    ventC?: number;
+  };
   identification?: { purityPct?: number; airPct?: number };
   chargeAudit?: { recovered?: boolean; recoveredChargeG?: number; oilRemovedMl?: number };
 };
 
-const pressure = (kpa?: number) => (kpa === undefined ? "—" : `${formatPressure(kpa, "kPa")} · ${formatPressure(kpa, "psi")} gauge`);
-const temperature = (c?: number) => (c === undefined ? "—" : `${formatTemperature(c, "C")} · ${formatTemperature(c, "F")}`);
+const pressure = (kpa?: number) =>
+  kpa === undefined ? "—" : `${formatPressure(kpa, "kPa")} · ${formatPressure(kpa, "psi")} gauge`;
+const temperature = (c?: number) =>
+  c === undefined ? "—" : `${formatTemperature(c, "C")} · ${formatTemperature(c, "F")}`;
 
 /** The readings as the technician entered them, in both unit systems. */
 export function CaseReadings({ answers }: { answers: Answers }) {
   const rows: [string, string][] = [
     ["Air temperature", temperature(answers.conditions?.ambientC)],
-    ["Relative humidity", answers.conditions?.relativeHumidityPct === undefined ? "—" : `${answers.conditions.relativeHumidityPct} %`],
+    [
+      "Relative humidity",
+      answers.conditions?.relativeHumidityPct === undefined
+        ? "—"
+        : `${answers.conditions.relativeHumidityPct} %`,
+    ],
     ["Static pressure", pressure(answers.static?.staticKpaGauge)],
     ["High side", pressure(answers.running?.highKpaGauge)],
     ["Low side", pressure(answers.running?.lowKpaGauge)],
     ["Liquid line", temperature(answers.running?.liquidLineC)],
     ["Suction line", temperature(answers.running?.suctionLineC)],
     ["Centre vent", temperature(answers.running?.ventC)],
-    ["Identifier", answers.identification?.purityPct === undefined ? "—" : `${answers.identification.purityPct} % pure, ${answers.identification.airPct ?? "?"} % air`],
-    ["Recovered", answers.chargeAudit?.recoveredChargeG === undefined ? "—" : `${answers.chargeAudit.recoveredChargeG} g, ${answers.chargeAudit.oilRemovedMl ?? "?"} mL oil`],
+    [
+      "Identifier",
+      answers.identification?.purityPct === undefined
+        ? "—"
+        : `${answers.identification.purityPct} % pure, ${answers.identification.airPct ?? "?"} % air`,
+    ],
+    [
+      "Recovered",
+      answers.chargeAudit?.recoveredChargeG === undefined
+        ? "—"
+        : `${answers.chargeAudit.recoveredChargeG} g, ${answers.chargeAudit.oilRemovedMl ?? "?"} mL oil`,
+    ],
   ];
   return (
     <section aria-labelledby="readings-heading" className="card">

@@ -8,7 +8,15 @@ interface Snapshot {
 }
 
 /** The findings exactly as the technician was shown them when the case was submitted. */
-export function FindingsSnapshot({ findings, conclusionCause, conclusionNotes }: { findings: Snapshot; conclusionCause: string | null; conclusionNotes: string | null }) {
+export function FindingsSnapshot({
+  findings,
+  conclusionCause,
+  conclusionNotes,
+}: {
+  findings: Snapshot;
+  conclusionCause: string | null;
+  conclusionNotes: string | null;
+}) {
   const top = findings.suspects[0];
   const differs = conclusionCause && top && top.cause !== conclusionCause;
   return (
@@ -19,7 +27,9 @@ export function FindingsSnapshot({ findings, conclusionCause, conclusionNotes }:
       {conclusionCause && (
         <p>
           <strong>Conclusion:</strong> {CAUSE_LABELS[conclusionCause as CauseId] ?? conclusionCause}
-          {differs && <span className="ml-1 font-bold text-caution-700">(differs from the leading suspect)</span>}
+          {differs && (
+            <span className="ml-1 font-bold text-caution-700">(differs from the leading suspect)</span>
+          )}
         </p>
       )}
       {conclusionNotes && <p className="italic">&ldquo;{conclusionNotes}&rdquo;</p>}

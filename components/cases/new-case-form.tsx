@@ -22,9 +22,15 @@ export function NewCaseForm() {
   const { data: vehicles = [], isFetching } = useQuery(vehicleChoicesQuery(search.trim()));
 
   const create = useMutation({
-    mutationFn: (body: CreateCaseInput) => apiFetch<{ case: { id: number } }>("/api/cases", { method: "POST", body }),
+    mutationFn: (body: CreateCaseInput) =>
+      apiFetch<{ case: { id: number } }>("/api/cases", { method: "POST", body }),
     onSuccess: ({ case: c }) => router.push(`/cases/${c.id}/interview`),
-    onError: (error) => setErrors(error instanceof ApiError ? { _: [error.message], ...(error.fieldErrors ?? {}) } : { _: ["No answer from the server; what you typed is kept. Try again."] }),
+    onError: (error) =>
+      setErrors(
+        error instanceof ApiError
+          ? { _: [error.message], ...(error.fieldErrors ?? {}) }
+          : { _: ["No answer from the server; what you typed is kept. Try again."] },
+      ),
   });
 
   function submit(event: React.FormEvent) {
@@ -47,7 +53,14 @@ export function NewCaseForm() {
         <label htmlFor="vehicle-search" className="field-label mt-2">
           Find by customer, make, model or VIN
         </label>
-        <input id="vehicle-search" type="search" className="field-input" value={search} onChange={(e) => setSearch(e.target.value)} autoComplete="off" />
+        <input
+          id="vehicle-search"
+          type="search"
+          className="field-input"
+          value={search}
+          onChange={(e) => setSearch(e.target.value)}
+          autoComplete="off"
+        />
         <ul className="mt-3 space-y-2" aria-busy={isFetching}>
           {vehicles.map((v) => (
             <li key={v.vehicleId}>
@@ -73,7 +86,12 @@ export function NewCaseForm() {
           ))}
           {vehicles.length === 0 && <li className="text-ink-soft">No vehicle matches “{search}”.</li>}
         </ul>
-        <button type="button" className="btn-quiet mt-3 w-full" aria-pressed={picked === "new"} onClick={() => setPicked("new")}>
+        <button
+          type="button"
+          className="btn-quiet mt-3 w-full"
+          aria-pressed={picked === "new"}
+          onClick={() => setPicked("new")}
+        >
           A vehicle not listed here
         </button>
         {picked === "new" && <NewVehicleFields onChange={setDraft} errors={errors} />}
@@ -101,7 +119,10 @@ export function NewCaseForm() {
       </div>
 
       {firstError("_") && (
-        <p role="alert" className="rounded-card border-2 border-ember-500 bg-ember-50 p-3 font-bold text-ember-700">
+        <p
+          role="alert"
+          className="rounded-card border-2 border-ember-500 bg-ember-50 p-3 font-bold text-ember-700"
+        >
           {firstError("_")}
         </p>
       )}

@@ -17,10 +17,27 @@ export interface NewVehicleDraft {
   };
 }
 
-const EMPTY = { name: "", phone: "", year: "", make: "", model: "", engine: "", vin: "", refrigerant: "R-1234yf", expansionDevice: "txv", electric: false };
+const EMPTY = {
+  name: "",
+  phone: "",
+  year: "",
+  make: "",
+  model: "",
+  engine: "",
+  vin: "",
+  refrigerant: "R-1234yf",
+  expansionDevice: "txv",
+  electric: false,
+};
 
 /** The customer and vehicle for a first visit. Server-side validation has the final word. */
-export function NewVehicleFields({ onChange, errors }: { onChange: (draft: NewVehicleDraft) => void; errors: Record<string, string[]> }) {
+export function NewVehicleFields({
+  onChange,
+  errors,
+}: {
+  onChange: (draft: NewVehicleDraft) => void;
+  errors: Record<string, string[]>;
+}) {
   const [f, setF] = useState(EMPTY);
   useEffect(() => {
     onChange({
@@ -40,13 +57,27 @@ export function NewVehicleFields({ onChange, errors }: { onChange: (draft: NewVe
 
   const vin = normaliseVin(f.vin);
   const vinProblem = vin ? vinFormatError(vin) : null;
-  const vinWarning = vin && !vinProblem && !vinCheckDigitMatches(vin) ? "The 9th character does not match the check digit: recheck the VIN (vehicles built for outside North America may not use one)." : null;
-  const field = (key: keyof typeof EMPTY, label: string, errorKey: string, props: React.InputHTMLAttributes<HTMLInputElement> = {}) => (
+  const vinWarning =
+    vin && !vinProblem && !vinCheckDigitMatches(vin)
+      ? "The 9th character does not match the check digit: recheck the VIN (vehicles built for outside North America may not use one)."
+      : null;
+  const field = (
+    key: keyof typeof EMPTY,
+    label: string,
+    errorKey: string,
+    props: React.InputHTMLAttributes<HTMLInputElement> = {},
+  ) => (
     <div>
       <label htmlFor={`nv-${key}`} className="field-label">
         {label}
       </label>
-      <input id={`nv-${key}`} className="field-input" value={String(f[key])} onChange={(e) => setF({ ...f, [key]: e.target.value })} {...props} />
+      <input
+        id={`nv-${key}`}
+        className="field-input"
+        value={String(f[key])}
+        onChange={(e) => setF({ ...f, [key]: e.target.value })}
+        {...props}
+      />
       {errors[errorKey]?.[0] && <p className="field-error">{errors[errorKey]![0]}</p>}
     </div>
   );
@@ -60,7 +91,10 @@ export function NewVehicleFields({ onChange, errors }: { onChange: (draft: NewVe
       {field("model", "Model", "newVehicle.model")}
       {field("engine", "Engine (optional)", "newVehicle.engine")}
       <div className="sm:col-span-2">
-        {field("vin", "VIN (optional)", "newVehicle.vin", { autoCapitalize: "characters", autoComplete: "off" })}
+        {field("vin", "VIN (optional)", "newVehicle.vin", {
+          autoCapitalize: "characters",
+          autoComplete: "off",
+        })}
         {vinProblem && <p className="field-error">{vinProblem}</p>}
         {vinWarning && <p className="mt-1 font-bold text-caution-700">{vinWarning}</p>}
       </div>
@@ -68,7 +102,12 @@ export function NewVehicleFields({ onChange, errors }: { onChange: (draft: NewVe
         <label htmlFor="nv-refrigerant" className="field-label">
           Refrigerant on the label
         </label>
-        <select id="nv-refrigerant" className="field-input" value={f.refrigerant} onChange={(e) => setF({ ...f, refrigerant: e.target.value })}>
+        <select
+          id="nv-refrigerant"
+          className="field-input"
+          value={f.refrigerant}
+          onChange={(e) => setF({ ...f, refrigerant: e.target.value })}
+        >
           <option value="R-1234yf">R-1234yf</option>
           <option value="R-134a">R-134a</option>
           <option value="R-744">R-744 (CO₂)</option>
@@ -79,13 +118,23 @@ export function NewVehicleFields({ onChange, errors }: { onChange: (draft: NewVe
         <label htmlFor="nv-device" className="field-label">
           Expansion device
         </label>
-        <select id="nv-device" className="field-input" value={f.expansionDevice} onChange={(e) => setF({ ...f, expansionDevice: e.target.value })}>
+        <select
+          id="nv-device"
+          className="field-input"
+          value={f.expansionDevice}
+          onChange={(e) => setF({ ...f, expansionDevice: e.target.value })}
+        >
           <option value="txv">TXV with receiver-drier</option>
           <option value="orifice_tube">Orifice tube with accumulator</option>
         </select>
       </div>
       <label className="flex min-h-glove items-center gap-3 sm:col-span-2">
-        <input type="checkbox" className="h-6 w-6" checked={f.electric} onChange={(e) => setF({ ...f, electric: e.target.checked })} />
+        <input
+          type="checkbox"
+          className="h-6 w-6"
+          checked={f.electric}
+          onChange={(e) => setF({ ...f, electric: e.target.checked })}
+        />
         <span className="font-bold">Electric (high-voltage) compressor</span>
       </label>
     </div>

@@ -19,7 +19,9 @@ const STYLES: Record<CaseStatus, string> = {
 
 export function StatusBadge({ status }: { status: CaseStatus }) {
   return (
-    <span className={clsx("inline-block rounded-full border-2 px-2 py-0.5 text-sm font-bold", STYLES[status])}>
+    <span
+      className={clsx("inline-block rounded-full border-2 px-2 py-0.5 text-sm font-bold", STYLES[status])}
+    >
       {STATUS_LABELS[status]}
     </span>
   );

@@ -9,7 +9,13 @@ export interface CautionItem {
 }
 
 /** Safety and service cautions: danger and warnings open, the rest folded away but present. */
-export function CautionsList({ cautions, heading = "Cautions" }: { cautions: CautionItem[]; heading?: string }) {
+export function CautionsList({
+  cautions,
+  heading = "Cautions",
+}: {
+  cautions: CautionItem[];
+  heading?: string;
+}) {
   const loud = cautions.filter((c) => c.level === "danger" || c.level === "warning");
   const quiet = cautions.filter((c) => !(c.level === "danger" || c.level === "warning"));
   return (
@@ -17,11 +23,25 @@ export function CautionsList({ cautions, heading = "Cautions" }: { cautions: Cau
       {loud.map((c) => (
         <div
           key={c.id}
-          className={clsx("flex gap-2 rounded-card border-2 p-3", c.level === "danger" ? "border-ember-500 bg-ember-50 text-ember-700" : "border-caution-500 bg-caution-50 text-caution-700")}
+          className={clsx(
+            "flex gap-2 rounded-card border-2 p-3",
+            c.level === "danger"
+              ? "border-ember-500 bg-ember-50 text-ember-700"
+              : "border-caution-500 bg-caution-50 text-caution-700",
+          )}
         >
-          {c.level === "danger" ? <ShieldAlert aria-hidden className="mt-0.5 h-5 w-5 shrink-0" /> : <AlertTriangle aria-hidden className="mt-0.5 h-5 w-5 shrink-0" />}
+          {c.level === "danger" ? (
+            <ShieldAlert aria-hidden className="mt-0.5 h-5 w-5 shrink-0" />
+          ) : (
+            <AlertTriangle aria-hidden className="mt-0.5 h-5 w-5 shrink-0" />
+          )}
           <p>
-            {c.title && <strong>{c.level === "danger" ? "Danger: " : ""}{c.title}. </strong>}
+            {c.title && (
+              <strong>
+                {c.level === "danger" ? "Danger: " : ""}
+                {c.title}.{" "}
+              </strong>
+            )}
             {c.text}
           </p>
         </div>

@@ -10,7 +10,14 @@ export type FieldDef =
   | { name: string; label: string; kind: QuantityKind; hint?: string }
   | { name: string; label: string; kind: "plain"; unit: string; hint?: string; placeholder?: string }
   | { name: string; label: string; kind: "text"; multiline?: boolean; hint?: string }
-  | { name: string; label: string; kind: "choice"; options: ChoiceOption[]; optional?: boolean; hint?: string }
+  | {
+      name: string;
+      label: string;
+      kind: "choice";
+      options: ChoiceOption[];
+      optional?: boolean;
+      hint?: string;
+    }
   | { name: string; label: string; kind: "yesno"; hint?: string }
   | { name: string; label: string; kind: "multi"; options: ChoiceOption[]; hint?: string };
 

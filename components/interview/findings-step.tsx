@@ -19,7 +19,15 @@ interface Props {
   onBack: () => void;
 }
 
-export function FindingsStep({ caseId, input, interviewCautions, isApprentice, saveStatus, currentVersion, onBack }: Props) {
+export function FindingsStep({
+  caseId,
+  input,
+  interviewCautions,
+  isApprentice,
+  saveStatus,
+  currentVersion,
+  onBack,
+}: Props) {
   const router = useRouter();
   const findings = useMemo(() => (input ? diagnose(input) : null), [input]);
   const [cause, setCause] = useState<CauseId | "">("");
@@ -30,7 +38,10 @@ export function FindingsStep({ caseId, input, interviewCautions, isApprentice, s
   if (!findings) {
     return (
       <div className="space-y-3">
-        <p>The findings need the refrigerant, the expansion device and the air temperature. Go back and fill those in.</p>
+        <p>
+          The findings need the refrigerant, the expansion device and the air temperature. Go back and fill
+          those in.
+        </p>
         <button type="button" className="btn-quiet" onClick={onBack}>
           Back
         </button>
@@ -40,23 +51,34 @@ export function FindingsStep({ caseId, input, interviewCautions, isApprentice, s
 
   const chosen = cause || findings.suspects[0]?.cause || "";
   const cautions: CautionItem[] = [...interviewCautions];
-  for (const c of findings.cautions) if (!cautions.some((x) => x.id === c.id)) cautions.push({ id: c.id, text: c.text, level: "notice" });
+  for (const c of findings.cautions)
+    if (!cautions.some((x) => x.id === c.id)) cautions.push({ id: c.id, text: c.text, level: "notice" });
 
   async function submit(event: React.FormEvent) {
     event.preventDefault();
     setError(null);
-    if (saveStatus.kind !== "saved") return setError("Some answers are still waiting to be saved. Submit once they are.");
+    if (saveStatus.kind !== "saved")
+      return setError("Some answers are still waiting to be saved. Submit once they are.");
     if (!findings) return;
     setPending(true);
     try {
       await apiFetch(`/api/cases/${caseId}/submit`, {
         method: "POST",
-        body: { baseVersion: currentVersion(), engineVersion: findings.engineVersion, conclusionCause: chosen, conclusionNotes: notes },
+        body: {
+          baseVersion: currentVersion(),
+          engineVersion: findings.engineVersion,
+          conclusionCause: chosen,
+          conclusionNotes: notes,
+        },
       });
       router.push(`/cases/${caseId}`);
       router.refresh();
     } catch (e) {
-      setError(e instanceof ApiError ? (Object.values(e.fieldErrors ?? {})[0]?.[0] ?? e.message) : "No answer from the server; nothing is lost. Try again.");
+      setError(
+        e instanceof ApiError
+          ? (Object.values(e.fieldErrors ?? {})[0]?.[0] ?? e.message)
+          : "No answer from the server; nothing is lost. Try again.",
+      );
       setPending(false);
     }
   }
@@ -76,7 +98,9 @@ export function FindingsStep({ caseId, input, interviewCautions, isApprentice, s
         </ol>
         {findings.suspects.length > 4 && (
           <details className="mt-3">
-            <summary className="min-h-touch cursor-pointer font-bold">The other {findings.suspects.length - 4} causes considered</summary>
+            <summary className="min-h-touch cursor-pointer font-bold">
+              The other {findings.suspects.length - 4} causes considered
+            </summary>
             <ol className="mt-2 space-y-3" start={5}>
               {findings.suspects.slice(4).map((s, i) => (
                 <li key={s.cause}>
@@ -88,7 +112,10 @@ export function FindingsStep({ caseId, input, interviewCautions, isApprentice, s
         )}
       </section>
 
-      <section aria-labelledby="next-check-heading" className="rounded-card border-2 border-glacier-600 bg-glacier-50 p-4">
+      <section
+        aria-labelledby="next-check-heading"
+        className="rounded-card border-2 border-glacier-600 bg-glacier-50 p-4"
+      >
         <h2 id="next-check-heading" className="text-xl font-bold text-glacier-900">
           Next check
         </h2>
@@ -114,7 +141,12 @@ export function FindingsStep({ caseId, input, interviewCautions, isApprentice, s
           <label htmlFor="conclusion-cause" className="field-label">
             The cause you conclude
           </label>
-          <select id="conclusion-cause" className="field-input" value={chosen} onChange={(e) => setCause(e.target.value as CauseId)}>
+          <select
+            id="conclusion-cause"
+            className="field-input"
+            value={chosen}
+            onChange={(e) => setCause(e.target.value as CauseId)}
+          >
             {CAUSE_IDS.map((id) => (
               <option key={id} value={id}>
                 {CAUSE_LABELS[id]}
@@ -126,7 +158,13 @@ export function FindingsStep({ caseId, input, interviewCautions, isApprentice, s
           <label htmlFor="conclusion-notes" className="field-label">
             Why, in a sentence or two
           </label>
-          <textarea id="conclusion-notes" rows={3} className="field-input py-2" value={notes} onChange={(e) => setNotes(e.target.value)} />
+          <textarea
+            id="conclusion-notes"
+            rows={3}
+            className="field-input py-2"
+            value={notes}
+            onChange={(e) => setNotes(e.target.value)}
+          />
         </div>
         {error && (
           <p role="alert" className="field-error">

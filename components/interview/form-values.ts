@@ -2,7 +2,12 @@ import type { FieldDef, FormValues } from "./field-defs";
 import { fromInternal, toInternal } from "./quantities";
 import type { UnitPreferences } from "./unit-preferences";
 
-const isQuantity = (def: FieldDef) => def.kind === "pressure" || def.kind === "temperature" || def.kind === "mass" || def.kind === "volume" || def.kind === "plain";
+const isQuantity = (def: FieldDef) =>
+  def.kind === "pressure" ||
+  def.kind === "temperature" ||
+  def.kind === "mass" ||
+  def.kind === "volume" ||
+  def.kind === "plain";
 
 /** What the form shows for a saved answer or draft. */
 export function formValuesOf(fields: FieldDef[], saved: unknown, units: UnitPreferences): FormValues {
@@ -19,7 +24,11 @@ export function formValuesOf(fields: FieldDef[], saved: unknown, units: UnitPref
 }
 
 /** The answer group's values in internal units; empty fields are left out. */
-export function answerValuesOf(fields: FieldDef[], values: FormValues, units: UnitPreferences): Record<string, unknown> {
+export function answerValuesOf(
+  fields: FieldDef[],
+  values: FormValues,
+  units: UnitPreferences,
+): Record<string, unknown> {
   const out: Record<string, unknown> = {};
   for (const def of fields) {
     const raw = values[def.name];

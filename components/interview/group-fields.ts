@@ -3,7 +3,9 @@ import { METHOD_OPTIONS, OIL_OPTIONS, PLACE_OPTIONS, SYMPTOM_OPTIONS } from "./l
 
 /** The questions of each group, in the order asked. Names are the answer schemas' field names. */
 export const GROUP_FIELDS: GroupFields = {
-  complaint: [{ name: "ownerWords", label: "The complaint, in the owner's words", kind: "text", multiline: true }],
+  complaint: [
+    { name: "ownerWords", label: "The complaint, in the owner's words", kind: "text", multiline: true },
+  ],
   system: [
     {
       name: "refrigerant",
@@ -25,13 +27,24 @@ export const GROUP_FIELDS: GroupFields = {
       ],
     },
     { name: "electricCompressor", label: "Electric (high-voltage) compressor?", kind: "yesno" },
-    { name: "labelChargeG", label: "Label charge", kind: "mass", hint: "From the under-hood label or the spec table." },
+    {
+      name: "labelChargeG",
+      label: "Label charge",
+      kind: "mass",
+      hint: "From the under-hood label or the spec table.",
+    },
     { name: "oilType", label: "Oil type on the label", kind: "choice", options: OIL_OPTIONS, optional: true },
   ],
   conditions: [
     { name: "ambientC", label: "Air temperature at the condenser", kind: "temperature" },
     { name: "relativeHumidityPct", label: "Relative humidity", kind: "plain", unit: "%" },
-    { name: "altitudeM", label: "Altitude", kind: "plain", unit: "m", hint: "Leave empty to use the shop's altitude." },
+    {
+      name: "altitudeM",
+      label: "Altitude",
+      kind: "plain",
+      unit: "m",
+      hint: "Leave empty to use the shop's altitude.",
+    },
     { name: "engineRpm", label: "Engine speed", kind: "plain", unit: "rpm" },
   ],
   static: [{ name: "staticKpaGauge", label: "Static pressure (either gauge)", kind: "pressure" }],

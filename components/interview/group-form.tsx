@@ -30,7 +30,8 @@ export function GroupForm({ form, fields, units, setUnit, readouts = {}, serverI
       const text = getValues(def.name);
       if (typeof text !== "string" || text.trim() === "") continue;
       const internal = toInternal(kind, text, units);
-      if (typeof internal === "number") setValue(def.name, fromInternal(kind, internal, next), { shouldDirty: true });
+      if (typeof internal === "number")
+        setValue(def.name, fromInternal(kind, internal, next), { shouldDirty: true });
     }
     setUnit(kind, unit);
   }
@@ -39,10 +40,16 @@ export function GroupForm({ form, fields, units, setUnit, readouts = {}, serverI
     <div className="space-y-5">
       {fields.map((def) => {
         const id = `f-${def.name}`;
-        const error = formState.errors[def.name]?.message ?? serverIssues.find((i) => i.field === def.name)?.message;
-        const describedBy = [def.hint ? `${id}-hint` : null, readouts[def.name] ? `${id}-readout` : null, error ? `${id}-error` : null]
-          .filter(Boolean)
-          .join(" ") || undefined;
+        const error =
+          formState.errors[def.name]?.message ?? serverIssues.find((i) => i.field === def.name)?.message;
+        const describedBy =
+          [
+            def.hint ? `${id}-hint` : null,
+            readouts[def.name] ? `${id}-readout` : null,
+            error ? `${id}-error` : null,
+          ]
+            .filter(Boolean)
+            .join(" ") || undefined;
         const common = { "aria-invalid": error ? true : undefined, "aria-describedby": describedBy } as const;
         return (
           <div key={def.name}>
@@ -53,9 +60,23 @@ export function GroupForm({ form, fields, units, setUnit, readouts = {}, serverI
                 render={({ field }) => (
                   <fieldset aria-describedby={describedBy}>
                     <legend className="field-label">{def.label}</legend>
-                    <div className={clsx("grid gap-2", def.kind === "multi" ? "sm:grid-cols-2" : "grid-cols-2 sm:grid-cols-3")}>
-                      {(def.kind === "yesno" ? [{ value: "yes", label: "Yes" }, { value: "no", label: "No" }] : def.options).map((option) => {
-                        const selected = def.kind === "multi" ? (field.value as string[]).includes(option.value) : field.value === option.value;
+                    <div
+                      className={clsx(
+                        "grid gap-2",
+                        def.kind === "multi" ? "sm:grid-cols-2" : "grid-cols-2 sm:grid-cols-3",
+                      )}
+                    >
+                      {(def.kind === "yesno"
+                        ? [
+                            { value: "yes", label: "Yes" },
+                            { value: "no", label: "No" },
+                          ]
+                        : def.options
+                      ).map((option) => {
+                        const selected =
+                          def.kind === "multi"
+                            ? (field.value as string[]).includes(option.value)
+                            : field.value === option.value;
                         return (
                           <button
                             key={option.value}
@@ -64,15 +85,23 @@ export function GroupForm({ form, fields, units, setUnit, readouts = {}, serverI
                             onClick={() => {
                               if (def.kind === "multi") {
                                 const list = field.value as string[];
-                                field.onChange(selected ? list.filter((v) => v !== option.value) : [...list, option.value]);
+                                field.onChange(
+                                  selected ? list.filter((v) => v !== option.value) : [...list, option.value],
+                                );
                               } else {
-                                field.onChange(selected && (def.kind === "yesno" || ("optional" in def && def.optional)) ? "" : option.value);
+                                field.onChange(
+                                  selected && (def.kind === "yesno" || ("optional" in def && def.optional))
+                                    ? ""
+                                    : option.value,
+                                );
                               }
                               field.onBlur();
                             }}
                             className={clsx(
                               "min-h-glove rounded-card border-2 px-3 py-2 text-left font-bold",
-                              selected ? "border-glacier-700 bg-glacier-700 text-white" : "border-ink-muted bg-paper text-ink",
+                              selected
+                                ? "border-glacier-700 bg-glacier-700 text-white"
+                                : "border-ink-muted bg-paper text-ink",
                             )}
                           >
                             {option.label}
@@ -100,7 +129,13 @@ export function GroupForm({ form, fields, units, setUnit, readouts = {}, serverI
                     {...register(def.name)}
                   />
                 ) : def.kind === "text" && def.multiline ? (
-                  <textarea id={id} rows={3} className="field-input py-2" {...common} {...register(def.name)} />
+                  <textarea
+                    id={id}
+                    rows={3}
+                    className="field-input py-2"
+                    {...common}
+                    {...register(def.name)}
+                  />
                 ) : (
                   <input
                     id={id}

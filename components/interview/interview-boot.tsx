@@ -15,7 +15,9 @@ type Boot =
  * Based on the server's current version they simply continue; based on an older one, the
  * technician chooses, because someone else has saved the case since.
  */
-export function InterviewBoot(props: Omit<InterviewProps, "record" | "pendingFromDevice"> & { serverRecord: Partial<SavedInterview> }) {
+export function InterviewBoot(
+  props: Omit<InterviewProps, "record" | "pendingFromDevice"> & { serverRecord: Partial<SavedInterview> },
+) {
   const { caseId, version, serverRecord } = props;
   const [boot, setBoot] = useState<Boot>({ kind: "loading" });
 
@@ -26,7 +28,8 @@ export function InterviewBoot(props: Omit<InterviewProps, "record" | "pendingFro
       .then((local) => {
         if (!live) return;
         if (!local) setBoot({ kind: "ready", record: serverRecord, pending: 0 });
-        else if (local.baseVersion === version) setBoot({ kind: "ready", record: local.record, pending: Math.max(1, local.pendingChanges) });
+        else if (local.baseVersion === version)
+          setBoot({ kind: "ready", record: local.record, pending: Math.max(1, local.pendingChanges) });
         else setBoot({ kind: "choose", local });
       });
     return () => {
@@ -40,11 +43,22 @@ export function InterviewBoot(props: Omit<InterviewProps, "record" | "pendingFro
       <div role="alert" className="card space-y-3">
         <h1 className="text-xl font-bold">Two versions of this interview</h1>
         <p>
-          This device holds {boot.local.pendingChanges === 1 ? "1 change" : `${boot.local.pendingChanges} changes`} that never reached the server, and the case has been saved
-          elsewhere since. Which answers should continue?
+          This device holds{" "}
+          {boot.local.pendingChanges === 1 ? "1 change" : `${boot.local.pendingChanges} changes`} that never
+          reached the server, and the case has been saved elsewhere since. Which answers should continue?
         </p>
         <div className="flex flex-wrap gap-2">
-          <button type="button" className="btn-primary" onClick={() => setBoot({ kind: "ready", record: boot.local.record, pending: Math.max(1, boot.local.pendingChanges) })}>
+          <button
+            type="button"
+            className="btn-primary"
+            onClick={() =>
+              setBoot({
+                kind: "ready",
+                record: boot.local.record,
+                pending: Math.max(1, boot.local.pendingChanges),
+              })
+            }
+          >
             Keep this device&apos;s answers
           </button>
           <button

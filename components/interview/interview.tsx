@@ -29,7 +29,16 @@ export interface InterviewProps {
   vehicleId: number | null;
 }
 
-export function Interview({ caseId, version, record, pendingFromDevice, shop, isApprentice, heading, vehicleId }: InterviewProps) {
+export function Interview({
+  caseId,
+  version,
+  record,
+  pendingFromDevice,
+  shop,
+  isApprentice,
+  heading,
+  vehicleId,
+}: InterviewProps) {
   const machineShop = useMemo(() => ({ altitudeM: shop.altitudeM }), [shop.altitudeM]);
   const [snapshot, send, actor] = useMachine(interviewMachine, { input: { ...record, shop: machineShop } });
   const view = viewOf(snapshot);
@@ -56,7 +65,9 @@ export function Interview({ caseId, version, record, pendingFromDevice, shop, is
       firstRender.current = false;
       return;
     }
-    const input = document.querySelector<HTMLElement>("#interview-step input[type=text], #interview-step textarea");
+    const input = document.querySelector<HTMLElement>(
+      "#interview-step input[type=text], #interview-step textarea",
+    );
     (input ?? headingRef.current)?.focus();
   }, [step]);
 
@@ -72,7 +83,10 @@ export function Interview({ caseId, version, record, pendingFromDevice, shop, is
     [answers, machineShop],
   );
 
-  const onValues = useCallback((values: Record<string, unknown>) => view.group && send({ type: "ANSWER", group: view.group, values }), [send, view.group]);
+  const onValues = useCallback(
+    (values: Record<string, unknown>) => view.group && send({ type: "ANSWER", group: view.group, values }),
+    [send, view.group],
+  );
 
   async function next() {
     if (formRef.current && view.group) {
@@ -100,8 +114,14 @@ export function Interview({ caseId, version, record, pendingFromDevice, shop, is
           </h1>
           <p className="text-ink-soft">{copy.lead}</p>
         </header>
-        {step !== "findings" && <CautionsList cautions={view.cautions.filter((c) => c.id !== "defer_to_procedure" || step === "complaint")} />}
-        {step === "system" && vehicleId !== null && <SpecMatches vehicleId={vehicleId} onPick={(pick) => formRef.current?.apply({ ...pick })} />}
+        {step !== "findings" && (
+          <CautionsList
+            cautions={view.cautions.filter((c) => c.id !== "defer_to_procedure" || step === "complaint")}
+          />
+        )}
+        {step === "system" && vehicleId !== null && (
+          <SpecMatches vehicleId={vehicleId} onPick={(pick) => formRef.current?.apply({ ...pick })} />
+        )}
         {group && (
           <form
             noValidate

@@ -1,5 +1,10 @@
 import { SYMPTOM_LABELS } from "@/lib/diagnosis";
-import { behaviourSymptomIds, leakMethodChoices, leakPlaceChoices, oilTypeChoices } from "@/lib/interview/choices";
+import {
+  behaviourSymptomIds,
+  leakMethodChoices,
+  leakPlaceChoices,
+  oilTypeChoices,
+} from "@/lib/interview/choices";
 import type { StepId } from "@/lib/interview/steps";
 import type { ChoiceOption, StepCopy } from "./field-defs";
 
@@ -7,13 +12,34 @@ export const STEP_COPY: Record<StepId, StepCopy> = {
   complaint: { title: "Complaint", lead: "What the owner says, in their words." },
   system: { title: "Vehicle system", lead: "From the under-hood label and what you can see." },
   conditions: { title: "Conditions", lead: "Where and how the readings are taken." },
-  static: { title: "Engine-off pressure", lead: "Engine off for a while, pressures equalised, system at the air temperature." },
-  running: { title: "Running readings", lead: "A/C at maximum, recirculation, blower high, doors open, after 5–10 minutes at a steady engine speed." },
-  behaviour: { title: "What you see and hear", lead: "Tick everything you noticed. Leave it empty if nothing stood out." },
-  leakFinding: { title: "Leak search", lead: "The system has lost its charge: find the leak before anything is run or charged." },
-  identification: { title: "Refrigerant identifier", lead: "Run the identifier before anything goes into the recovery machine." },
-  chargeAudit: { title: "Charge by weight", lead: "If you recovered the charge, what came out and how much oil with it." },
-  recoveryHeld: { title: "Recovery on hold", lead: "This refrigerant must not go into the shop's recovery machine." },
+  static: {
+    title: "Engine-off pressure",
+    lead: "Engine off for a while, pressures equalised, system at the air temperature.",
+  },
+  running: {
+    title: "Running readings",
+    lead: "A/C at maximum, recirculation, blower high, doors open, after 5–10 minutes at a steady engine speed.",
+  },
+  behaviour: {
+    title: "What you see and hear",
+    lead: "Tick everything you noticed. Leave it empty if nothing stood out.",
+  },
+  leakFinding: {
+    title: "Leak search",
+    lead: "The system has lost its charge: find the leak before anything is run or charged.",
+  },
+  identification: {
+    title: "Refrigerant identifier",
+    lead: "Run the identifier before anything goes into the recovery machine.",
+  },
+  chargeAudit: {
+    title: "Charge by weight",
+    lead: "If you recovered the charge, what came out and how much oil with it.",
+  },
+  recoveryHeld: {
+    title: "Recovery on hold",
+    lead: "This refrigerant must not go into the shop's recovery machine.",
+  },
   findings: { title: "Findings", lead: "The likely causes, ranked, with the evidence for and against each." },
 };
 
@@ -66,4 +92,7 @@ const options = <T extends string>(values: readonly T[], labels: Record<T, strin
 export const OIL_OPTIONS = options(oilTypeChoices, OIL_LABELS);
 export const METHOD_OPTIONS = options(leakMethodChoices, METHOD_LABELS);
 export const PLACE_OPTIONS = options(leakPlaceChoices, PLACE_LABELS);
-export const SYMPTOM_OPTIONS: ChoiceOption[] = behaviourSymptomIds.map((id) => ({ value: id, label: SYMPTOM_LABELS[id] }));
+export const SYMPTOM_OPTIONS: ChoiceOption[] = behaviourSymptomIds.map((id) => ({
+  value: id,
+  label: SYMPTOM_LABELS[id],
+}));

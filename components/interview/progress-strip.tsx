@@ -14,7 +14,13 @@ const MARK: Record<ProgressEntry["status"], string> = {
   ahead: "",
 };
 
-export function ProgressStrip({ entries, onOpen }: { entries: ProgressEntry[]; onOpen: (step: StepId) => void }) {
+export function ProgressStrip({
+  entries,
+  onOpen,
+}: {
+  entries: ProgressEntry[];
+  onOpen: (step: StepId) => void;
+}) {
   return (
     <nav aria-label="Interview steps">
       <ol className="flex gap-1 overflow-x-auto pb-1">
@@ -31,7 +37,8 @@ export function ProgressStrip({ entries, onOpen }: { entries: ProgressEntry[]; o
                 entry.status === "answered" && "border-glacier-500 bg-glacier-50 text-glacier-900",
                 entry.status === "needs_fixing" && "border-ember-500 bg-ember-50 text-ember-700",
                 entry.status === "skipped" && "border-dashed border-ink-muted bg-paper text-ink-soft",
-                (entry.status === "open" || entry.status === "ahead") && "border-paper-line bg-paper text-ink-soft",
+                (entry.status === "open" || entry.status === "ahead") &&
+                  "border-paper-line bg-paper text-ink-soft",
               )}
             >
               <span className="font-bold">

@@ -11,7 +11,11 @@ import {
 import type { QuantityKind, UnitPreferences } from "./unit-preferences";
 
 /** Text typed in the technician's unit → the internal value; text that is not a number stays text so nothing is lost. */
-export function toInternal(kind: QuantityKind | "plain", raw: string, units: UnitPreferences): number | string | undefined {
+export function toInternal(
+  kind: QuantityKind | "plain",
+  raw: string,
+  units: UnitPreferences,
+): number | string | undefined {
   const text = raw.trim().replace(",", ".");
   if (text === "") return undefined;
   const value = Number(text);
@@ -62,7 +66,19 @@ export function otherSystem(kind: QuantityKind, value: number): string {
   }
 }
 
-export const UNIT_LABELS: Record<string, string> = { C: "°C", F: "°F", floz: "fl oz", kPa: "kPa", bar: "bar", psi: "psi", g: "g", kg: "kg", oz: "oz", lb: "lb", mL: "mL" };
+export const UNIT_LABELS: Record<string, string> = {
+  C: "°C",
+  F: "°F",
+  floz: "fl oz",
+  kPa: "kPa",
+  bar: "bar",
+  psi: "psi",
+  g: "g",
+  kg: "kg",
+  oz: "oz",
+  lb: "lb",
+  mL: "mL",
+};
 
 function round(value: number, decimals: number): number {
   const f = 10 ** decimals;

@@ -13,7 +13,10 @@ type Props = React.InputHTMLAttributes<HTMLInputElement> & {
 };
 
 /** A large numeric input with the unit switch beside it. */
-export const QuantityInput = forwardRef<HTMLInputElement, Props>(function QuantityInput({ kind, units, onUnitChange, unitGroupLabel, id, ...props }, ref) {
+export const QuantityInput = forwardRef<HTMLInputElement, Props>(function QuantityInput(
+  { kind, units, onUnitChange, unitGroupLabel, id, ...props },
+  ref,
+) {
   const current = units[kind];
   return (
     <div className="flex items-stretch gap-2">
@@ -26,14 +29,21 @@ export const QuantityInput = forwardRef<HTMLInputElement, Props>(function Quanti
         className="field-input min-w-0 flex-1 font-mono text-2xl"
         {...props}
       />
-      <div role="group" aria-label={unitGroupLabel} className="flex overflow-hidden rounded-card border-2 border-ink-muted">
+      <div
+        role="group"
+        aria-label={unitGroupLabel}
+        className="flex overflow-hidden rounded-card border-2 border-ink-muted"
+      >
         {(UNIT_CHOICES[kind] as readonly string[]).map((unit) => (
           <button
             key={unit}
             type="button"
             aria-pressed={unit === current}
             onClick={() => onUnitChange(unit)}
-            className={clsx("min-h-glove min-w-touch px-2 font-bold", unit === current ? "bg-glacier-700 text-white" : "bg-paper text-ink")}
+            className={clsx(
+              "min-h-glove min-w-touch px-2 font-bold",
+              unit === current ? "bg-glacier-700 text-white" : "bg-paper text-ink",
+            )}
           >
             {UNIT_LABELS[unit] ?? unit}
           </button>

@@ -27,7 +27,15 @@ export function SaveBanner({ status, onReload }: { status: SaveStatus; onReload:
           ? `No connection: ${plural(status.pending)} waiting on this device, sent when the network is back`
           : `Server not answering: ${plural(status.pending)} waiting on this device, trying again`;
   return (
-    <p role="status" data-save-state={status.kind} className={status.kind === "waiting" ? "rounded-card bg-caution-50 px-3 py-2 font-bold text-caution-700" : "px-1 text-sm text-ink-soft"}>
+    <p
+      role="status"
+      data-save-state={status.kind}
+      className={
+        status.kind === "waiting"
+          ? "rounded-card bg-caution-50 px-3 py-2 font-bold text-caution-700"
+          : "px-1 text-sm text-ink-soft"
+      }
+    >
       {text}
     </p>
   );

@@ -35,11 +35,16 @@ export function SpecMatches({ vehicleId, onPick }: { vehicleId: number; onPick: 
   const [picked, setPicked] = useState<number | null>(null);
   if (isError || !matches || matches.length === 0) return null;
   return (
-    <section aria-labelledby="spec-matches-heading" className="rounded-card border-2 border-glacier-500 bg-glacier-50 p-3">
+    <section
+      aria-labelledby="spec-matches-heading"
+      className="rounded-card border-2 border-glacier-500 bg-glacier-50 p-3"
+    >
       <h2 id="spec-matches-heading" className="font-bold">
         From the shop&apos;s spec table
       </h2>
-      <p className="text-sm text-ink-soft">Check the under-hood label and pick the row that applies to this vehicle.</p>
+      <p className="text-sm text-ink-soft">
+        Check the under-hood label and pick the row that applies to this vehicle.
+      </p>
       <ul className="mt-2 space-y-2">
         {matches.slice(0, 4).map((match) => (
           <li key={match.row.id}>
@@ -48,16 +53,23 @@ export function SpecMatches({ vehicleId, onPick }: { vehicleId: number; onPick: 
               aria-pressed={picked === match.row.id}
               onClick={() => {
                 setPicked(match.row.id);
-                onPick({ refrigerant: match.row.refrigerant, labelChargeG: match.row.labelChargeG, oilType: oilChoice(match.row.oilType) });
+                onPick({
+                  refrigerant: match.row.refrigerant,
+                  labelChargeG: match.row.labelChargeG,
+                  oilType: oilChoice(match.row.oilType),
+                });
               }}
               className={clsx(
                 "min-h-glove w-full rounded-card border-2 p-2 text-left",
-                picked === match.row.id ? "border-glacier-700 bg-glacier-700 text-white" : "border-ink-muted bg-paper",
+                picked === match.row.id
+                  ? "border-glacier-700 bg-glacier-700 text-white"
+                  : "border-ink-muted bg-paper",
               )}
             >
               <span className="block font-bold">{describe(match)}</span>
               <span className="block">
-                {match.row.refrigerant} · {match.row.labelChargeG} g{match.row.oilType ? ` · ${match.row.oilType}` : ""}
+                {match.row.refrigerant} · {match.row.labelChargeG} g
+                {match.row.oilType ? ` · ${match.row.oilType}` : ""}
                 {match.row.totalOilMl ? ` · ${match.row.totalOilMl} mL oil in total` : ""}
               </span>
             </button>

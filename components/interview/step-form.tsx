@@ -40,16 +40,34 @@ function Readout({ lines, conversion }: { lines: ReadoutLine[]; conversion?: str
     <div className="space-y-0.5 font-mono text-base">
       {conversion && <p className="text-ink-soft">= {conversion}</p>}
       {lines.map((line, i) => (
-        <p key={i} className={line.status === "above" || line.status === "below" ? "font-bold text-ember-700" : line.status === "inside" ? "text-sound-700" : "text-ink"}>
+        <p
+          key={i}
+          className={
+            line.status === "above" || line.status === "below"
+              ? "font-bold text-ember-700"
+              : line.status === "inside"
+                ? "text-sound-700"
+                : "text-ink"
+          }
+        >
           {line.text}
-          {line.verdict !== undefined ? (line.verdict ? ` — ${line.verdict}` : "") : line.status && STATUS_TEXT[line.status] ? ` — ${STATUS_TEXT[line.status]}` : ""}
+          {line.verdict !== undefined
+            ? line.verdict
+              ? ` — ${line.verdict}`
+              : ""
+            : line.status && STATUS_TEXT[line.status]
+              ? ` — ${STATUS_TEXT[line.status]}`
+              : ""}
         </p>
       ))}
     </div>
   );
 }
 
-export const StepForm = forwardRef<StepFormHandle, Props>(function StepForm({ group, saved, answers, issues, units, setUnit, physics, shop, onValues }, ref) {
+export const StepForm = forwardRef<StepFormHandle, Props>(function StepForm(
+  { group, saved, answers, issues, units, setUnit, physics, shop, onValues },
+  ref,
+) {
   const fields = GROUP_FIELDS[group];
   const form = useGroupForm({ group, fields, saved, otherAnswers: answers, units, shop, onValues });
   const values = form.watch() as FormValues;
@@ -67,7 +85,8 @@ export const StepForm = forwardRef<StepFormHandle, Props>(function StepForm({ gr
     apply: (values) => {
       const shown = formValuesOf(fields, values, units);
       for (const [name, value] of Object.entries(shown)) {
-        if (values[name] !== undefined) form.setValue(name, value, { shouldDirty: true, shouldValidate: true });
+        if (values[name] !== undefined)
+          form.setValue(name, value, { shouldDirty: true, shouldValidate: true });
       }
     },
   }));
@@ -78,10 +97,23 @@ export const StepForm = forwardRef<StepFormHandle, Props>(function StepForm({ gr
   for (const def of fields) {
     const value = internal[def.name];
     const kind = def.kind as QuantityKind;
-    const conversion = (kind === "pressure" || kind === "temperature" || kind === "mass" || kind === "volume") && typeof value === "number" ? otherSystem(kind, value) : undefined;
+    const conversion =
+      (kind === "pressure" || kind === "temperature" || kind === "mass" || kind === "volume") &&
+      typeof value === "number"
+        ? otherSystem(kind, value)
+        : undefined;
     const lines = physicsLines[def.name] ?? [];
     if (conversion || lines.length) readouts[def.name] = <Readout conversion={conversion} lines={lines} />;
   }
 
-  return <GroupForm form={form} fields={fields} units={units} setUnit={setUnit} readouts={readouts} serverIssues={issues} />;
+  return (
+    <GroupForm
+      form={form}
+      fields={fields}
+      units={units}
+      setUnit={setUnit}
+      readouts={readouts}
+      serverIssues={issues}
+    />
+  );
 });

@@ -8,7 +8,10 @@ function confidenceWord(confidence: number): string {
 export function SuspectCard({ suspect, rank }: { suspect: Suspect; rank: number }) {
   const pct = Math.round(suspect.score * 100);
   return (
-    <article className="rounded-card border border-paper-line bg-paper p-3" aria-label={`${rank}. ${CAUSE_LABELS[suspect.cause]}`}>
+    <article
+      className="rounded-card border border-paper-line bg-paper p-3"
+      aria-label={`${rank}. ${CAUSE_LABELS[suspect.cause]}`}
+    >
       <div className="flex items-baseline justify-between gap-2">
         <h3 className="font-bold">
           {rank}. {CAUSE_LABELS[suspect.cause]}

@@ -54,7 +54,10 @@ const EMPTY: Partial<UnitPreferences> = {};
 export function useUnitPreferences(shopSystem: "metric" | "imperial") {
   const stored = useSyncExternalStore(subscribe, read, () => EMPTY);
   // One object per actual change: screens compare units by identity.
-  const units: UnitPreferences = useMemo(() => ({ ...defaultUnits(shopSystem), ...stored }), [shopSystem, stored]);
+  const units: UnitPreferences = useMemo(
+    () => ({ ...defaultUnits(shopSystem), ...stored }),
+    [shopSystem, stored],
+  );
   const setUnit = useCallback(<K extends QuantityKind>(kind: K, unit: UnitPreferences[K]) => {
     window.localStorage.setItem(KEY, JSON.stringify({ ...read(), [kind]: unit }));
     listeners.forEach((l) => l());

@@ -56,7 +56,13 @@ export function useAutosave({ caseId, initialVersion }: { caseId: number; initia
         setStatus({ kind: "saved", pending: 0 });
       } else if (latest.current) {
         latest.current.pending = Math.max(1, latest.current.pending - item.pending);
-        await writeOutbox({ caseId, record: latest.current.record, baseVersion: version.current, pendingChanges: latest.current.pending, savedAt: Date.now() });
+        await writeOutbox({
+          caseId,
+          record: latest.current.record,
+          baseVersion: version.current,
+          pendingChanges: latest.current.pending,
+          savedAt: Date.now(),
+        });
       }
     } catch (error) {
       const pending = latest.current?.pending ?? item.pending;
@@ -89,8 +95,20 @@ export function useAutosave({ caseId, initialVersion }: { caseId: number; initia
       if (json === (latest.current?.json ?? lastSentJson.current)) return;
       const pending = (latest.current?.pending ?? 0) + 1 + (options.pendingFromEarlier ?? 0);
       latest.current = { record, json, pending };
-      void writeOutbox({ caseId, record, baseVersion: version.current, pendingChanges: pending, savedAt: Date.now() });
-      setStatus((s) => (s.kind === "conflict" || s.kind === "refused" ? { ...s, pending } : s.kind === "waiting" ? { ...s, pending } : { kind: "saving", pending }));
+      void writeOutbox({
+        caseId,
+        record,
+        baseVersion: version.current,
+        pendingChanges: pending,
+        savedAt: Date.now(),
+      });
+      setStatus((s) =>
+        s.kind === "conflict" || s.kind === "refused"
+          ? { ...s, pending }
+          : s.kind === "waiting"
+            ? { ...s, pending }
+            : { kind: "saving", pending },
+      );
       clearTimeout(timer.current);
       timer.current = setTimeout(() => void flush(), DEBOUNCE_MS);
     },

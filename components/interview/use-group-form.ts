@@ -64,7 +64,13 @@ export function useGroupForm({
   const unitsSeen = useRef(units);
   useEffect(() => {
     const seen = unitsSeen.current;
-    if (seen.pressure === units.pressure && seen.temperature === units.temperature && seen.mass === units.mass && seen.volume === units.volume) return;
+    if (
+      seen.pressure === units.pressure &&
+      seen.temperature === units.temperature &&
+      seen.mass === units.mass &&
+      seen.volume === units.volume
+    )
+      return;
     unitsSeen.current = units;
     latest.current.onValues(answerValuesOf(fields, getValues(), units));
   }, [units, fields, getValues]);
@@ -73,7 +79,8 @@ export function useGroupForm({
     () =>
       subscribe({
         formState: { values: true },
-        callback: ({ values }) => latest.current.onValues(answerValuesOf(fields, values as FormValues, latest.current.units)),
+        callback: ({ values }) =>
+          latest.current.onValues(answerValuesOf(fields, values as FormValues, latest.current.units)),
       }),
     [subscribe, fields],
   );

@@ -19,7 +19,13 @@ export function RetireButton({ id, retired, label }: { id: number; retired: bool
   });
   return (
     <span>
-      <button type="button" className="btn-quiet" onClick={() => change.mutate()} disabled={change.isPending} aria-label={`${retired ? "Reactivate" : "Retire"} ${label}`}>
+      <button
+        type="button"
+        className="btn-quiet"
+        onClick={() => change.mutate()}
+        disabled={change.isPending}
+        aria-label={`${retired ? "Reactivate" : "Retire"} ${label}`}
+      >
         {retired ? "Reactivate" : "Retire"}
       </button>
       {error && <span className="field-error ml-2">{error}</span>}
@@ -27,7 +33,15 @@ export function RetireButton({ id, retired, label }: { id: number; retired: bool
   );
 }
 
-const EMPTY = { label: "", serial: "", refrigerant: "R-134a", kind: "recovery", tare: "", capacity: "", initial: "0" };
+const EMPTY = {
+  label: "",
+  serial: "",
+  refrigerant: "R-134a",
+  kind: "recovery",
+  tare: "",
+  capacity: "",
+  initial: "0",
+};
 
 export function AddCylinderForm({ massUnit }: { massUnit: MassUnit }) {
   const queryClient = useQueryClient();
@@ -52,42 +66,103 @@ export function AddCylinderForm({ massUnit }: { massUnit: MassUnit }) {
   function submit(e: React.FormEvent) {
     e.preventDefault();
     setStatus(null);
-    const masses = { tareG: readMassG(form.tare, massUnit), capacityG: readMassG(form.capacity, massUnit), initialNetG: readMassG(form.initial, massUnit) };
+    const masses = {
+      tareG: readMassG(form.tare, massUnit),
+      capacityG: readMassG(form.capacity, massUnit),
+      initialNetG: readMassG(form.initial, massUnit),
+    };
     const next: Record<string, string> = {};
-    for (const [k, r] of Object.entries(masses)) if ("error" in r) next[k] = r.error;
-    else if ("empty" in r) next[k] = "Enter a mass.";
+    for (const [k, r] of Object.entries(masses))
+      if ("error" in r) next[k] = r.error;
+      else if ("empty" in r) next[k] = "Enter a mass.";
     if (!form.label.trim()) next.label = "Give the cylinder a label the shop can read on it.";
     setErrors(next);
     if (Object.keys(next).length) return;
     const g = (r: (typeof masses)["tareG"]) => ("value" in r ? r.value : 0);
-    create.mutate({ label: form.label, serial: form.serial || undefined, refrigerant: form.refrigerant as CreateCylinderInput["refrigerant"], kind: form.kind as CreateCylinderInput["kind"], tareG: g(masses.tareG), capacityG: g(masses.capacityG), initialNetG: g(masses.initialNetG) });
+    create.mutate({
+      label: form.label,
+      serial: form.serial || undefined,
+      refrigerant: form.refrigerant as CreateCylinderInput["refrigerant"],
+      kind: form.kind as CreateCylinderInput["kind"],
+      tareG: g(masses.tareG),
+      capacityG: g(masses.capacityG),
+      initialNetG: g(masses.initialNetG),
+    });
   }
 
   return (
     <form onSubmit={submit} noValidate className="mt-4 space-y-3 border-t-2 border-paper-line pt-4">
       <h3 className="text-lg font-bold">Add a cylinder</h3>
-      <EntryInput label="Label on the cylinder" inputMode="text" value={form.label} onChange={set("label")} error={errors.label} />
-      <EntryInput label="Serial number (optional)" inputMode="text" value={form.serial} onChange={set("serial")} error={errors.serial} />
+      <EntryInput
+        label="Label on the cylinder"
+        inputMode="text"
+        value={form.label}
+        onChange={set("label")}
+        error={errors.label}
+      />
+      <EntryInput
+        label="Serial number (optional)"
+        inputMode="text"
+        value={form.serial}
+        onChange={set("serial")}
+        error={errors.serial}
+      />
       <div className="grid grid-cols-2 gap-3">
         <div>
-          <label htmlFor="cyl-refrigerant" className="field-label">Refrigerant</label>
-          <select id="cyl-refrigerant" className="field-input" value={form.refrigerant} onChange={(e) => set("refrigerant")(e.target.value)}>
-            {["R-134a", "R-1234yf", "R-744", "R-12"].map((r) => <option key={r}>{r}</option>)}
+          <label htmlFor="cyl-refrigerant" className="field-label">
+            Refrigerant
+          </label>
+          <select
+            id="cyl-refrigerant"
+            className="field-input"
+            value={form.refrigerant}
+            onChange={(e) => set("refrigerant")(e.target.value)}
+          >
+            {["R-134a", "R-1234yf", "R-744", "R-12"].map((r) => (
+              <option key={r}>{r}</option>
+            ))}
           </select>
         </div>
         <div>
-          <label htmlFor="cyl-kind" className="field-label">Kind</label>
-          <select id="cyl-kind" className="field-input" value={form.kind} onChange={(e) => set("kind")(e.target.value)}>
+          <label htmlFor="cyl-kind" className="field-label">
+            Kind
+          </label>
+          <select
+            id="cyl-kind"
+            className="field-input"
+            value={form.kind}
+            onChange={(e) => set("kind")(e.target.value)}
+          >
             <option value="recovery">Recovery</option>
             <option value="virgin">Virgin</option>
             <option value="recycled">Recycled</option>
           </select>
         </div>
       </div>
-      <EntryInput label="Tare (stamped on the collar)" value={form.tare} onChange={set("tare")} error={errors.tareG} hint="For example 7.2 kg or 15 lb 14 oz." />
-      <EntryInput label="Refrigerant capacity" value={form.capacity} onChange={set("capacity")} error={errors.capacityG} />
-      <EntryInput label="Refrigerant in it now" value={form.initial} onChange={set("initial")} error={errors.initialNetG} />
-      {status && <p role="status" className="font-bold">{status}</p>}
+      <EntryInput
+        label="Tare (stamped on the collar)"
+        value={form.tare}
+        onChange={set("tare")}
+        error={errors.tareG}
+        hint="For example 7.2 kg or 15 lb 14 oz."
+      />
+      <EntryInput
+        label="Refrigerant capacity"
+        value={form.capacity}
+        onChange={set("capacity")}
+        error={errors.capacityG}
+      />
+      <EntryInput
+        label="Refrigerant in it now"
+        value={form.initial}
+        onChange={set("initial")}
+        error={errors.initialNetG}
+      />
+      {status && (
+        <p role="status" className="font-bold">
+          {status}
+        </p>
+      )}
       <button type="submit" className="btn-primary w-full" disabled={create.isPending}>
         {create.isPending ? "Adding…" : "Add the cylinder"}
       </button>

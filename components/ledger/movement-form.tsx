@@ -44,32 +44,87 @@ export function MovementForm({ cylinders, massUnit }: { cylinders: CylinderDto[]
     setErrors(next);
     if (Object.keys(next).length) return;
     const massG = "value" in mass ? mass.value * (negative ? -1 : 1) : 0;
-    post.mutate({ cylinderId: Number(form.cylinderId), type: form.type as ManualMovementInput["type"], massG, destination: form.destination || undefined, note: form.note || undefined });
+    post.mutate({
+      cylinderId: Number(form.cylinderId),
+      type: form.type as ManualMovementInput["type"],
+      massG,
+      destination: form.destination || undefined,
+      note: form.note || undefined,
+    });
   }
 
   return (
     <form onSubmit={submit} noValidate className="mt-4 space-y-3 border-t-2 border-paper-line pt-4">
       <h3 className="text-lg font-bold">Post recycling, a shipment or a weighed correction</h3>
       <div>
-        <label htmlFor="mv-cylinder" className="field-label">Cylinder</label>
-        <select id="mv-cylinder" className="field-input" value={form.cylinderId} onChange={(e) => set("cylinderId")(e.target.value)} aria-invalid={errors.cylinderId ? true : undefined}>
+        <label htmlFor="mv-cylinder" className="field-label">
+          Cylinder
+        </label>
+        <select
+          id="mv-cylinder"
+          className="field-input"
+          value={form.cylinderId}
+          onChange={(e) => set("cylinderId")(e.target.value)}
+          aria-invalid={errors.cylinderId ? true : undefined}
+        >
           <option value="">Choose a cylinder</option>
-          {cylinders.filter((c) => !c.retired).map((c) => <option key={c.id} value={c.id}>{c.label} ({c.refrigerant}, {c.kind})</option>)}
+          {cylinders
+            .filter((c) => !c.retired)
+            .map((c) => (
+              <option key={c.id} value={c.id}>
+                {c.label} ({c.refrigerant}, {c.kind})
+              </option>
+            ))}
         </select>
         {errors.cylinderId && <p className="field-error">{errors.cylinderId}</p>}
       </div>
       <div>
-        <label htmlFor="mv-type" className="field-label">What happened</label>
-        <select id="mv-type" className="field-input" value={form.type} onChange={(e) => set("type")(e.target.value)}>
+        <label htmlFor="mv-type" className="field-label">
+          What happened
+        </label>
+        <select
+          id="mv-type"
+          className="field-input"
+          value={form.type}
+          onChange={(e) => set("type")(e.target.value)}
+        >
           <option value="recycled">Recycled in the shop&apos;s machine</option>
           <option value="sent_out">Sent out for reclaim or destruction</option>
           <option value="adjustment">Weighed correction (may be negative)</option>
         </select>
       </div>
-      <EntryInput label="Mass" value={form.mass} onChange={set("mass")} error={errors.massG} hint={form.type === "adjustment" ? "Start with a minus sign when the scale shows less than the ledger." : undefined} />
-      {form.type === "sent_out" && <EntryInput label="Sent to (facility)" inputMode="text" value={form.destination} onChange={set("destination")} error={errors.destination} />}
-      <EntryInput label={form.type === "adjustment" ? "Why the weighed mass differs" : "Note (optional)"} inputMode="text" value={form.note} onChange={set("note")} error={errors.note} />
-      {status && <p role="status" className="font-bold">{status}</p>}
+      <EntryInput
+        label="Mass"
+        value={form.mass}
+        onChange={set("mass")}
+        error={errors.massG}
+        hint={
+          form.type === "adjustment"
+            ? "Start with a minus sign when the scale shows less than the ledger."
+            : undefined
+        }
+      />
+      {form.type === "sent_out" && (
+        <EntryInput
+          label="Sent to (facility)"
+          inputMode="text"
+          value={form.destination}
+          onChange={set("destination")}
+          error={errors.destination}
+        />
+      )}
+      <EntryInput
+        label={form.type === "adjustment" ? "Why the weighed mass differs" : "Note (optional)"}
+        inputMode="text"
+        value={form.note}
+        onChange={set("note")}
+        error={errors.note}
+      />
+      {status && (
+        <p role="status" className="font-bold">
+          {status}
+        </p>
+      )}
       <button type="submit" className="btn-quiet w-full" disabled={post.isPending}>
         {post.isPending ? "Posting…" : "Post to the ledger"}
       </button>

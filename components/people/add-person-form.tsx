@@ -51,7 +51,13 @@ export function AddPersonForm() {
         })}
       >
         <TextField label="Name" error={errors.name?.message} {...form.register("name")} autoComplete="off" />
-        <TextField label="E-mail" type="email" error={errors.email?.message} {...form.register("email")} autoComplete="off" />
+        <TextField
+          label="E-mail"
+          type="email"
+          error={errors.email?.message}
+          {...form.register("email")}
+          autoComplete="off"
+        />
         <div>
           <label htmlFor="new-role" className="field-label">
             Role

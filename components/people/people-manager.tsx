@@ -15,7 +15,9 @@ export function PeopleManager({ currentUserId }: { currentUserId: string }) {
     mutationFn: ({ id, ...body }: { id: string; role?: Role; active?: boolean }) =>
       apiFetch<{ user: ShopUserDto }>(`/api/users/${id}`, { method: "PATCH", body }),
     onSuccess: ({ user }) => {
-      setMessage(`${user.name} is now ${ROLE_LABELS[user.role].toLowerCase()}${user.active ? "" : " (inactive)"}.`);
+      setMessage(
+        `${user.name} is now ${ROLE_LABELS[user.role].toLowerCase()}${user.active ? "" : " (inactive)"}.`,
+      );
       return queryClient.invalidateQueries({ queryKey: userKeys.all });
     },
     onError: (error) => setMessage(error instanceof ApiError ? error.message : "The change was not saved."),
@@ -53,7 +55,11 @@ export function PeopleManager({ currentUserId }: { currentUserId: string }) {
                 ))}
               </select>
               {u.id !== currentUserId && (
-                <button type="button" className="btn-quiet" onClick={() => update.mutate({ id: u.id, active: !u.active })}>
+                <button
+                  type="button"
+                  className="btn-quiet"
+                  onClick={() => update.mutate({ id: u.id, active: !u.active })}
+                >
                   {u.active ? "Deactivate" : "Reactivate"}
                 </button>
               )}

@@ -9,7 +9,13 @@ const TONE = {
 const WORD = { danger: "Danger", warning: "Caution", notice: "Note" } as const;
 
 /** The step's cautions, each with where it comes from; the deferral to local rules comes last. */
-export function CautionsList({ cautions, title = "Before you go on" }: { cautions: readonly ServiceCaution[]; title?: string }) {
+export function CautionsList({
+  cautions,
+  title = "Before you go on",
+}: {
+  cautions: readonly ServiceCaution[];
+  title?: string;
+}) {
   if (cautions.length === 0) return null;
   return (
     <section aria-label={title} className="space-y-2">

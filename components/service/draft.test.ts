@@ -3,18 +3,57 @@ import type { ServiceRecordDto } from "@/lib/server/service-records";
 import { draftFromRecord, inputFromDraft, readDraft, type ShopUnitsPrefs } from "./draft";
 
 const metric: ShopUnitsPrefs = { mass: "g", volume: "mL", gauge: "kPa", temperature: "C", altitudeM: 12 };
-const imperial: ShopUnitsPrefs = { mass: "oz", volume: "floz", gauge: "psi", temperature: "F", altitudeM: 1500 };
+const imperial: ShopUnitsPrefs = {
+  mass: "oz",
+  volume: "floz",
+  gauge: "psi",
+  temperature: "F",
+  altitudeM: 1500,
+};
 
 const saved: ServiceRecordDto = {
-  id: 1, version: 3, step: "recharge", technicianId: "t", technician: "T", refrigerant: "R-134a", holdPassed: true, finalReadingSetId: null, updatedAt: "2026-12-01T10:00:00.000Z",
-  specEntryId: 4, labelChargeG: 570, purityPct: 99.4, airPct: 0.3, recoveryStartedAt: "2026-12-01T09:00:00.000Z", recoveryEndedAt: "2026-12-01T09:22:00.000Z",
-  recoveredG: 430, recoveryCylinderId: 7, oilDrainedMl: 12, oilPulled: false, slowRecoveryNote: null, deepestKpaAbs: 0.35, holdStartKpaAbs: 0.4, holdEndKpaAbs: 1.6,
-  holdMinutes: 10, oilAddedType: "PAG 46", oilAddedMl: 42, partsReplaced: [{ part: "condenser", count: 1, measuredMl: null }], targetG: 570, chargedG: 572,
-  chargeCylinderId: 8, finalAmbientC: 24, finalHighKpaGauge: 1180, finalLowKpaGauge: 200, finalVentC: 5.5, notes: null,
+  id: 1,
+  version: 3,
+  step: "recharge",
+  technicianId: "t",
+  technician: "T",
+  refrigerant: "R-134a",
+  holdPassed: true,
+  finalReadingSetId: null,
+  updatedAt: "2026-12-01T10:00:00.000Z",
+  specEntryId: 4,
+  labelChargeG: 570,
+  purityPct: 99.4,
+  airPct: 0.3,
+  recoveryStartedAt: "2026-12-01T09:00:00.000Z",
+  recoveryEndedAt: "2026-12-01T09:22:00.000Z",
+  recoveredG: 430,
+  recoveryCylinderId: 7,
+  oilDrainedMl: 12,
+  oilPulled: false,
+  slowRecoveryNote: null,
+  deepestKpaAbs: 0.35,
+  holdStartKpaAbs: 0.4,
+  holdEndKpaAbs: 1.6,
+  holdMinutes: 10,
+  oilAddedType: "PAG 46",
+  oilAddedMl: 42,
+  partsReplaced: [{ part: "condenser", count: 1, measuredMl: null }],
+  targetG: 570,
+  chargedG: 572,
+  chargeCylinderId: 8,
+  finalAmbientC: 24,
+  finalHighKpaGauge: 1180,
+  finalLowKpaGauge: 200,
+  finalVentC: 5.5,
+  notes: null,
 };
 
 describe("service record draft", () => {
-  for (const [name, units, tolerance] of [["metric", metric, { g: 0, ml: 0, kpa: 0 }], ["US customary at 1500 m", imperial, { g: 1, ml: 1, kpa: 0.002 }]] as const) {
+  for (const [name, units, tolerance] of [
+    ["metric", metric, { g: 0, ml: 0, kpa: 0 }],
+    ["US customary at 1500 m", imperial, { g: 1, ml: 1, kpa: 0.002 }],
+  ] as const) {
     it(`round-trips a saved record through what the screen shows (${name}; conversions per NIST SP 811)`, () => {
       const draft = draftFromRecord(saved, units, { labelChargeG: null, oilType: null });
       const read = readDraft(draft, units);
@@ -28,7 +67,13 @@ describe("service record draft", () => {
       expect(input.finalVentC).toBeCloseTo(5.5, 1);
       expect(input.recoveryEndedAt).toBe("2026-12-01T09:22:00.000Z");
       expect(input.partsReplaced).toEqual([{ part: "condenser", count: 1, measuredMl: null }]);
-      expect(input).toMatchObject({ baseVersion: 3, step: "final", recoveryCylinderId: 7, chargeCylinderId: 8, specEntryId: 4 });
+      expect(input).toMatchObject({
+        baseVersion: 3,
+        step: "final",
+        recoveryCylinderId: 7,
+        chargeCylinderId: 8,
+        specEntryId: 4,
+      });
     });
   }
 

@@ -1,8 +1,26 @@
 import type { ServiceRecordInput, ServiceStepId } from "@/app/api/cases/[id]/service/schema";
 import type { ServiceRecordDto } from "@/lib/server/service-records";
 import type { ReplacedPartId } from "@/lib/service/oil";
-import { type Entry, readGaugeKpa, readMassG, readPlainNumber, readTemperatureC, readVacuumKpaAbs, readVolumeMl } from "@/lib/service/entry";
-import { type MassUnit, type PressureUnit, type TemperatureUnit, type VolumeUnit, kpaAbsToVacuumInHg, massFromG, pressureFromKpa, temperatureFromC, volumeFromMl } from "@/lib/units";
+import {
+  type Entry,
+  readGaugeKpa,
+  readMassG,
+  readPlainNumber,
+  readTemperatureC,
+  readVacuumKpaAbs,
+  readVolumeMl,
+} from "@/lib/service/entry";
+import {
+  type MassUnit,
+  type PressureUnit,
+  type TemperatureUnit,
+  type VolumeUnit,
+  kpaAbsToVacuumInHg,
+  massFromG,
+  pressureFromKpa,
+  temperatureFromC,
+  volumeFromMl,
+} from "@/lib/units";
 
 export interface ShopUnitsPrefs {
   mass: MassUnit;
@@ -13,9 +31,27 @@ export interface ShopUnitsPrefs {
 }
 
 export const TEXT_FIELDS = [
-  "labelCharge", "purity", "air", "recoveryStartedAt", "recoveryEndedAt", "recovered", "oilDrained", "slowRecoveryNote",
-  "deepest", "holdStart", "holdEnd", "holdMinutes", "oilAddedType", "oilAdded", "target", "charged",
-  "finalAmbient", "finalHigh", "finalLow", "finalVent", "notes",
+  "labelCharge",
+  "purity",
+  "air",
+  "recoveryStartedAt",
+  "recoveryEndedAt",
+  "recovered",
+  "oilDrained",
+  "slowRecoveryNote",
+  "deepest",
+  "holdStart",
+  "holdEnd",
+  "holdMinutes",
+  "oilAddedType",
+  "oilAdded",
+  "target",
+  "charged",
+  "finalAmbient",
+  "finalHigh",
+  "finalLow",
+  "finalVent",
+  "notes",
 ] as const;
 export type TextField = (typeof TEXT_FIELDS)[number];
 
@@ -40,17 +76,30 @@ function toLocalInput(iso: string | null | undefined): string {
   return `${d.getFullYear()}-${pad(d.getMonth() + 1)}-${pad(d.getDate())}T${pad(d.getHours())}:${pad(d.getMinutes())}`;
 }
 
-export function draftFromRecord(r: ServiceRecordDto | null, u: ShopUnitsPrefs, defaults: { labelChargeG: number | null; oilType: string | null }): Draft {
-  const mass = (g: number | null | undefined) => (g == null ? "" : withUnit(round(massFromG(g, u.mass), u.mass === "g" ? 0 : 2), u.mass));
-  const vol = (ml: number | null | undefined) => (ml == null ? "" : withUnit(round(volumeFromMl(ml, u.volume), u.volume === "mL" ? 0 : 1), u.volume));
+export function draftFromRecord(
+  r: ServiceRecordDto | null,
+  u: ShopUnitsPrefs,
+  defaults: { labelChargeG: number | null; oilType: string | null },
+): Draft {
+  const mass = (g: number | null | undefined) =>
+    g == null ? "" : withUnit(round(massFromG(g, u.mass), u.mass === "g" ? 0 : 2), u.mass);
+  const vol = (ml: number | null | undefined) =>
+    ml == null ? "" : withUnit(round(volumeFromMl(ml, u.volume), u.volume === "mL" ? 0 : 1), u.volume);
   // Metric shops see the stored absolute pressure as it is; others see inHg of vacuum, to 0.001 so a re-save does not drift.
   const vac = (k: number | null | undefined) =>
-    k == null ? "" : u.gauge === "kPa" ? `${round(k, 3)} kPa` : `${round(kpaAbsToVacuumInHg(k, { altitudeM: u.altitudeM }), 3)} inHg`;
-  const gauge = (k: number | null | undefined) => (k == null ? "" : withUnit(round(pressureFromKpa(k, u.gauge), 1), u.gauge));
-  const temp = (c: number | null | undefined) => (c == null ? "" : withUnit(round(temperatureFromC(c, u.temperature), 1), u.temperature));
+    k == null
+      ? ""
+      : u.gauge === "kPa"
+        ? `${round(k, 3)} kPa`
+        : `${round(kpaAbsToVacuumInHg(k, { altitudeM: u.altitudeM }), 3)} inHg`;
+  const gauge = (k: number | null | undefined) =>
+    k == null ? "" : withUnit(round(pressureFromKpa(k, u.gauge), 1), u.gauge);
+  const temp = (c: number | null | undefined) =>
+    c == null ? "" : withUnit(round(temperatureFromC(c, u.temperature), 1), u.temperature);
   const plain = (n: number | null | undefined) => (n == null ? "" : String(n));
   const parts: Draft["parts"] = {};
-  for (const p of r?.partsReplaced ?? []) parts[p.part] = { count: p.count ?? 1, measured: p.measuredMl == null ? "" : vol(p.measuredMl) };
+  for (const p of r?.partsReplaced ?? [])
+    parts[p.part] = { count: p.count ?? 1, measured: p.measuredMl == null ? "" : vol(p.measuredMl) };
   return {
     text: {
       labelCharge: mass(r ? r.labelChargeG : defaults.labelChargeG),
@@ -83,7 +132,10 @@ export function draftFromRecord(r: ServiceRecordDto | null, u: ShopUnitsPrefs, d
   };
 }
 
-export type ReadDraft = { values: Partial<Record<TextField, number | null>>; errors: Partial<Record<string, string>> };
+export type ReadDraft = {
+  values: Partial<Record<TextField, number | null>>;
+  errors: Partial<Record<string, string>>;
+};
 
 /** Every typed field in internal units, with a message for each one that cannot be read. */
 export function readDraft(d: Draft, u: ShopUnitsPrefs): ReadDraft {
@@ -121,7 +173,13 @@ export function readDraft(d: Draft, u: ShopUnitsPrefs): ReadDraft {
 
 const iso = (local: string) => (local ? new Date(local).toISOString() : null);
 
-export function inputFromDraft(d: Draft, read: ReadDraft, step: ServiceStepId, baseVersion: number, u: ShopUnitsPrefs): ServiceRecordInput {
+export function inputFromDraft(
+  d: Draft,
+  read: ReadDraft,
+  step: ServiceStepId,
+  baseVersion: number,
+  u: ShopUnitsPrefs,
+): ServiceRecordInput {
   const v = read.values;
   return {
     baseVersion,
@@ -145,7 +203,11 @@ export function inputFromDraft(d: Draft, read: ReadDraft, step: ServiceStepId, b
     oilAddedMl: v.oilAdded ?? null,
     partsReplaced: Object.entries(d.parts).map(([part, p]) => {
       const m = readVolumeMl(p?.measured ?? "", u.volume);
-      return { part: part as ReplacedPartId, count: p?.count ?? 1, measuredMl: "value" in m ? m.value : null };
+      return {
+        part: part as ReplacedPartId,
+        count: p?.count ?? 1,
+        measuredMl: "value" in m ? m.value : null,
+      };
     }),
     targetG: v.target ?? null,
     chargedG: v.charged ?? null,

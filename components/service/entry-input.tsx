@@ -19,7 +19,8 @@ export function EntryInput({
   inputMode?: "decimal" | "text";
 }) {
   const id = useId();
-  const describedBy = [hint ? `${id}-hint` : null, error ? `${id}-error` : null].filter(Boolean).join(" ") || undefined;
+  const describedBy =
+    [hint ? `${id}-hint` : null, error ? `${id}-error` : null].filter(Boolean).join(" ") || undefined;
   return (
     <div>
       <label htmlFor={id} className="field-label">

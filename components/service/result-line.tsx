@@ -9,13 +9,25 @@ const TONE: Record<Tone, string> = {
 const WORD: Record<Tone, string> = { good: "OK", bad: "Check", info: "Worked out" };
 
 /** One computed result as the technician types, with what it rests on. */
-export function ResultLine({ tone, children, sources, testId }: { tone: Tone; children: React.ReactNode; sources?: readonly string[]; testId?: string }) {
+export function ResultLine({
+  tone,
+  children,
+  sources,
+  testId,
+}: {
+  tone: Tone;
+  children: React.ReactNode;
+  sources?: readonly string[];
+  testId?: string;
+}) {
   return (
     <div className={clsx("rounded-card border-2 p-3", TONE[tone])} data-testid={testId}>
       <p>
         <strong>{WORD[tone]}:</strong> {children}
       </p>
-      {sources && sources.length > 0 && <p className="mt-1 text-sm opacity-90">Source: {[...new Set(sources)].join("; ")}</p>}
+      {sources && sources.length > 0 && (
+        <p className="mt-1 text-sm opacity-90">Source: {[...new Set(sources)].join("; ")}</p>
+      )}
     </div>
   );
 }

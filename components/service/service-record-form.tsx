@@ -5,14 +5,26 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { clsx } from "clsx";
 import { SERVICE_STEPS, type ServiceStepId } from "@/app/api/cases/[id]/service/schema";
 import { ApiError } from "@/lib/queries/api-fetch";
-import { type ServiceCaseContext, type ServiceRecordDto, saveServiceRecord, serviceRecordKeys } from "@/lib/queries/service-record";
+import {
+  type ServiceCaseContext,
+  type ServiceRecordDto,
+  saveServiceRecord,
+  serviceRecordKeys,
+} from "@/lib/queries/service-record";
 import { ledgerKeys } from "@/lib/queries/ledger";
 import { cautionsFor } from "@/lib/service/cautions";
 import { summariseServiceRecord } from "@/lib/service/record-summary";
 import type { ReplacedPartId } from "@/lib/service/oil";
 import { readVolumeMl } from "@/lib/service/entry";
 import { CautionsList } from "./cautions-list";
-import { type Draft, type ShopUnitsPrefs, type TextField, draftFromRecord, inputFromDraft, readDraft } from "./draft";
+import {
+  type Draft,
+  type ShopUnitsPrefs,
+  type TextField,
+  draftFromRecord,
+  inputFromDraft,
+  readDraft,
+} from "./draft";
 import { StepFields, type CylinderChoice, type SpecChoice } from "./step-fields";
 
 export const STEP_TITLES: Record<ServiceStepId, string> = {
@@ -26,9 +38,22 @@ export const STEP_TITLES: Record<ServiceStepId, string> = {
 
 // Server field names → the draft field that shows their message.
 const SERVER_FIELD: Record<string, string> = {
-  labelChargeG: "labelCharge", purityPct: "purity", airPct: "air", recoveredG: "recovered", oilDrainedMl: "oilDrained", deepestKpaAbs: "deepest",
-  holdStartKpaAbs: "holdStart", holdEndKpaAbs: "holdEnd", holdMinutes: "holdMinutes", oilAddedMl: "oilAdded", targetG: "target", chargedG: "charged",
-  finalAmbientC: "finalAmbient", finalHighKpaGauge: "finalHigh", finalLowKpaGauge: "finalLow", finalVentC: "finalVent",
+  labelChargeG: "labelCharge",
+  purityPct: "purity",
+  airPct: "air",
+  recoveredG: "recovered",
+  oilDrainedMl: "oilDrained",
+  deepestKpaAbs: "deepest",
+  holdStartKpaAbs: "holdStart",
+  holdEndKpaAbs: "holdEnd",
+  holdMinutes: "holdMinutes",
+  oilAddedMl: "oilAdded",
+  targetG: "target",
+  chargedG: "charged",
+  finalAmbientC: "finalAmbient",
+  finalHighKpaGauge: "finalHigh",
+  finalLowKpaGauge: "finalLow",
+  finalVentC: "finalVent",
 };
 
 export interface ServiceRecordFormProps {
@@ -46,9 +71,16 @@ export interface ServiceRecordFormProps {
 export function ServiceRecordForm(props: ServiceRecordFormProps) {
   const { caseId, serviceCase, units } = props;
   const queryClient = useQueryClient();
-  const [draft, setDraft] = useState<Draft>(() => draftFromRecord(props.record, units, { labelChargeG: serviceCase.labelChargeG, oilType: serviceCase.oilType }));
+  const [draft, setDraft] = useState<Draft>(() =>
+    draftFromRecord(props.record, units, {
+      labelChargeG: serviceCase.labelChargeG,
+      oilType: serviceCase.oilType,
+    }),
+  );
   const [version, setVersion] = useState(props.record?.version ?? 0);
-  const [step, setStep] = useState<ServiceStepId>((props.record?.step as ServiceStepId | undefined) ?? "identify");
+  const [step, setStep] = useState<ServiceStepId>(
+    (props.record?.step as ServiceStepId | undefined) ?? "identify",
+  );
   const [serverErrors, setServerErrors] = useState<Record<string, string>>({});
   const [message, setMessage] = useState<{ tone: "ok" | "error"; text: string } | null>(null);
   const refrigerant = serviceCase.refrigerant ?? "R-134a";
@@ -69,7 +101,11 @@ export function ServiceRecordForm(props: ServiceRecordFormProps) {
           oilPulled: draft.oilPulled,
           partsReplaced: Object.entries(draft.parts).map(([part, p]) => {
             const measured = readVolumeMl(p?.measured ?? "", units.volume);
-            return { part: part as ReplacedPartId, count: p?.count ?? 1, ...("value" in measured ? { measuredMl: measured.value } : {}) };
+            return {
+              part: part as ReplacedPartId,
+              count: p?.count ?? 1,
+              ...("value" in measured ? { measuredMl: measured.value } : {}),
+            };
           }),
           deepestKpaAbs: read.values.deepest,
           holdStartKpaAbs: read.values.holdStart,
@@ -80,18 +116,29 @@ export function ServiceRecordForm(props: ServiceRecordFormProps) {
           targetG: read.values.target,
           chargedG: read.values.charged,
         },
-        { altitudeM: units.altitudeM, allowancesMl: props.allowancesMl, compressorDrive: serviceCase.electricCompressor ? "electric" : "belt" },
+        {
+          altitudeM: units.altitudeM,
+          allowancesMl: props.allowancesMl,
+          compressorDrive: serviceCase.electricCompressor ? "electric" : "belt",
+        },
       ),
     [draft, read, spec, refrigerant, serviceCase, units, props.allowancesMl],
   );
 
   const save = useMutation({
-    mutationFn: (nextStep: ServiceStepId) => saveServiceRecord(caseId, inputFromDraft(draft, read, nextStep, version, units)),
+    mutationFn: (nextStep: ServiceStepId) =>
+      saveServiceRecord(caseId, inputFromDraft(draft, read, nextStep, version, units)),
     onSuccess: (result, nextStep) => {
       setVersion(result.record.version);
       setServerErrors({});
-      const posted = result.posted > 0 ? ` ${result.posted} ledger ${result.posted === 1 ? "entry" : "entries"} posted.` : "";
-      setMessage({ tone: result.warnings.length ? "error" : "ok", text: `Saved ${STEP_TITLES[step].toLowerCase()}.${posted}${result.warnings.length ? ` ${result.warnings.join(" ")}` : ""}` });
+      const posted =
+        result.posted > 0
+          ? ` ${result.posted} ledger ${result.posted === 1 ? "entry" : "entries"} posted.`
+          : "";
+      setMessage({
+        tone: result.warnings.length ? "error" : "ok",
+        text: `Saved ${STEP_TITLES[step].toLowerCase()}.${posted}${result.warnings.length ? ` ${result.warnings.join(" ")}` : ""}`,
+      });
       setStep(nextStep);
       void queryClient.invalidateQueries({ queryKey: serviceRecordKeys.forCase(caseId) });
       void queryClient.invalidateQueries({ queryKey: ledgerKeys.all });
@@ -99,10 +146,15 @@ export function ServiceRecordForm(props: ServiceRecordFormProps) {
     onError: (error) => {
       if (error instanceof ApiError) {
         const mapped: Record<string, string> = {};
-        for (const [k, v] of Object.entries(error.fieldErrors ?? {})) if (v[0]) mapped[SERVER_FIELD[k] ?? k] = v[0];
+        for (const [k, v] of Object.entries(error.fieldErrors ?? {}))
+          if (v[0]) mapped[SERVER_FIELD[k] ?? k] = v[0];
         setServerErrors(mapped);
         setMessage({ tone: "error", text: `${error.message} Nothing you typed was lost.` });
-      } else setMessage({ tone: "error", text: "No answer from the server. Nothing you typed was lost; try again." });
+      } else
+        setMessage({
+          tone: "error",
+          text: "No answer from the server. Nothing you typed was lost; try again.",
+        });
     },
   });
 
@@ -115,7 +167,10 @@ export function ServiceRecordForm(props: ServiceRecordFormProps) {
   function submit(nextStep: ServiceStepId) {
     setMessage(null);
     if (Object.keys(read.errors).length > 0) {
-      setMessage({ tone: "error", text: "Some entries could not be read; they are marked below. Nothing was saved yet, and nothing you typed was lost." });
+      setMessage({
+        tone: "error",
+        text: "Some entries could not be read; they are marked below. Nothing was saved yet, and nothing you typed was lost.",
+      });
       return;
     }
     save.mutate(nextStep);
@@ -134,7 +189,10 @@ export function ServiceRecordForm(props: ServiceRecordFormProps) {
                 type="button"
                 aria-current={s === step ? "step" : undefined}
                 onClick={() => setStep(s)}
-                className={clsx("min-h-touch whitespace-nowrap rounded-card border-2 px-3 font-bold", s === step ? "border-glacier-600 bg-glacier-600 text-white" : "border-paper-line bg-paper")}
+                className={clsx(
+                  "min-h-touch whitespace-nowrap rounded-card border-2 px-3 font-bold",
+                  s === step ? "border-glacier-600 bg-glacier-600 text-white" : "border-paper-line bg-paper",
+                )}
               >
                 {i + 1}. {STEP_TITLES[s]}
               </button>
@@ -151,16 +209,43 @@ export function ServiceRecordForm(props: ServiceRecordFormProps) {
         }}
       >
         <h2 className="text-xl font-bold">{STEP_TITLES[step]}</h2>
-        <StepFields step={step} draft={draft} setDraft={setDraft} setText={setText} errorOf={errorOf} summary={summary} props={props} />
-        <CautionsList cautions={cautionsFor({ step: cautionStep, refrigerant, expansionDevice: serviceCase.expansionDevice ?? undefined, electricCompressor: serviceCase.electricCompressor })} />
+        <StepFields
+          step={step}
+          draft={draft}
+          setDraft={setDraft}
+          setText={setText}
+          errorOf={errorOf}
+          summary={summary}
+          props={props}
+        />
+        <CautionsList
+          cautions={cautionsFor({
+            step: cautionStep,
+            refrigerant,
+            expansionDevice: serviceCase.expansionDevice ?? undefined,
+            electricCompressor: serviceCase.electricCompressor,
+          })}
+        />
         {message && (
-          <p role={message.tone === "error" ? "alert" : "status"} className={clsx("rounded-card border-2 p-3 font-bold", message.tone === "error" ? "border-ember-500 bg-ember-50 text-ember-700" : "border-sound-500 bg-sound-50 text-sound-700")}>
+          <p
+            role={message.tone === "error" ? "alert" : "status"}
+            className={clsx(
+              "rounded-card border-2 p-3 font-bold",
+              message.tone === "error"
+                ? "border-ember-500 bg-ember-50 text-ember-700"
+                : "border-sound-500 bg-sound-50 text-sound-700",
+            )}
+          >
             {message.text}
           </p>
         )}
         {props.readOnlyReason === null ? (
           <button type="submit" className="btn-primary min-h-glove w-full text-lg" disabled={save.isPending}>
-            {save.isPending ? "Saving…" : next ? `Save and go to ${STEP_TITLES[next].toLowerCase()}` : "Save the service record"}
+            {save.isPending
+              ? "Saving…"
+              : next
+                ? `Save and go to ${STEP_TITLES[next].toLowerCase()}`
+                : "Save the service record"}
           </button>
         ) : (
           <p className="text-ink-soft">{props.readOnlyReason}</p>

@@ -37,14 +37,34 @@ interface Props {
   props: ServiceRecordFormProps;
 }
 
-function CylinderSelect({ label, value, choices, onChange, error, massUnit }: { label: string; value: number | null; choices: CylinderChoice[]; onChange: (id: number | null) => void; error?: string; massUnit: Parameters<typeof formatMass>[1] }) {
+function CylinderSelect({
+  label,
+  value,
+  choices,
+  onChange,
+  error,
+  massUnit,
+}: {
+  label: string;
+  value: number | null;
+  choices: CylinderChoice[];
+  onChange: (id: number | null) => void;
+  error?: string;
+  massUnit: Parameters<typeof formatMass>[1];
+}) {
   const id = `cyl-${label.replace(/\W+/g, "-").toLowerCase()}`;
   return (
     <div>
       <label htmlFor={id} className="field-label">
         {label}
       </label>
-      <select id={id} className="field-input" value={value ?? ""} onChange={(e) => onChange(e.target.value ? Number(e.target.value) : null)} aria-invalid={error ? true : undefined}>
+      <select
+        id={id}
+        className="field-input"
+        value={value ?? ""}
+        onChange={(e) => onChange(e.target.value ? Number(e.target.value) : null)}
+        aria-invalid={error ? true : undefined}
+      >
         <option value="">Choose a cylinder</option>
         {choices.map((c) => (
           <option key={c.id} value={c.id}>
@@ -52,7 +72,11 @@ function CylinderSelect({ label, value, choices, onChange, error, massUnit }: { 
           </option>
         ))}
       </select>
-      {choices.length === 0 && <p className="mt-1 text-ink-soft">No cylinder of this kind and refrigerant is in the ledger yet: add one on the Ledger page.</p>}
+      {choices.length === 0 && (
+        <p className="mt-1 text-ink-soft">
+          No cylinder of this kind and refrigerant is in the ledger yet: add one on the Ledger page.
+        </p>
+      )}
       {error && <p className="field-error">{error}</p>}
     </div>
   );
@@ -64,7 +88,15 @@ export function StepFields({ step, draft, setDraft, setText, errorOf, summary, p
   const volHint = `Type ${u.volume === "mL" ? "mL" : "fl oz"} or add a unit: 45 mL, 1.5 fl oz.`;
   const vacHint = "As the gauge shows it: 29.5 inHg of vacuum, or an absolute pressure such as 0.4 kPa.";
   const t = draft.text;
-  const f = (field: TextField, label: string, hint?: string) => <EntryInput label={label} value={t[field]} onChange={(v) => setText(field, v)} hint={hint} error={errorOf(field)} />;
+  const f = (field: TextField, label: string, hint?: string) => (
+    <EntryInput
+      label={label}
+      value={t[field]}
+      onChange={(v) => setText(field, v)}
+      hint={hint}
+      error={errorOf(field)}
+    />
+  );
 
   switch (step) {
     case "identify":
@@ -72,10 +104,24 @@ export function StepFields({ step, draft, setDraft, setText, errorOf, summary, p
         <div className="space-y-4">
           <fieldset className="space-y-2">
             <legend className="field-label">Spec-table row for this vehicle</legend>
-            {props.specChoices.length === 0 && <p className="text-ink-soft">No row of the shop&apos;s spec table matches this vehicle. Take the charge from the under-hood label.</p>}
+            {props.specChoices.length === 0 && (
+              <p className="text-ink-soft">
+                No row of the shop&apos;s spec table matches this vehicle. Take the charge from the under-hood
+                label.
+              </p>
+            )}
             {props.specChoices.map((s) => (
-              <label key={s.id} className="flex min-h-glove items-start gap-3 rounded-card border-2 border-paper-line p-3">
-                <input type="radio" name="spec" className="mt-1 h-6 w-6" checked={draft.specEntryId === s.id} onChange={() => setDraft((d) => ({ ...d, specEntryId: s.id }))} />
+              <label
+                key={s.id}
+                className="flex min-h-glove items-start gap-3 rounded-card border-2 border-paper-line p-3"
+              >
+                <input
+                  type="radio"
+                  name="spec"
+                  className="mt-1 h-6 w-6"
+                  checked={draft.specEntryId === s.id}
+                  onChange={() => setDraft((d) => ({ ...d, specEntryId: s.id }))}
+                />
                 <span>
                   <span className="block font-bold">{s.description}</span>
                   <span className="block text-ink-soft">
@@ -87,7 +133,11 @@ export function StepFields({ step, draft, setDraft, setText, errorOf, summary, p
               </label>
             ))}
             {props.specChoices.length > 0 && (
-              <button type="button" className="btn-quiet" onClick={() => setDraft((d) => ({ ...d, specEntryId: null }))}>
+              <button
+                type="button"
+                className="btn-quiet"
+                onClick={() => setDraft((d) => ({ ...d, specEntryId: null }))}
+              >
                 None of these applies
               </button>
             )}
@@ -108,8 +158,20 @@ export function StepFields({ step, draft, setDraft, setText, errorOf, summary, p
       return (
         <div className="space-y-4">
           <div className="grid gap-3 sm:grid-cols-2">
-            <EntryInput type="datetime-local" label="Recovery started" value={t.recoveryStartedAt} onChange={(v) => setText("recoveryStartedAt", v)} error={errorOf("recoveryStartedAt")} />
-            <EntryInput type="datetime-local" label="Recovery ended" value={t.recoveryEndedAt} onChange={(v) => setText("recoveryEndedAt", v)} error={errorOf("recoveryEndedAt")} />
+            <EntryInput
+              type="datetime-local"
+              label="Recovery started"
+              value={t.recoveryStartedAt}
+              onChange={(v) => setText("recoveryStartedAt", v)}
+              error={errorOf("recoveryStartedAt")}
+            />
+            <EntryInput
+              type="datetime-local"
+              label="Recovery ended"
+              value={t.recoveryEndedAt}
+              onChange={(v) => setText("recoveryEndedAt", v)}
+              error={errorOf("recoveryEndedAt")}
+            />
           </div>
           {f("recovered", "Recovered mass", massHint)}
           <CylinderSelect
@@ -122,17 +184,32 @@ export function StepFields({ step, draft, setDraft, setText, errorOf, summary, p
           />
           {f("oilDrained", "Oil drained into the machine's bottle", volHint)}
           <label className="flex min-h-glove items-center gap-3">
-            <input type="checkbox" className="h-6 w-6" checked={draft.oilPulled} onChange={(e) => setDraft((d) => ({ ...d, oilPulled: e.target.checked }))} />
+            <input
+              type="checkbox"
+              className="h-6 w-6"
+              checked={draft.oilPulled}
+              onChange={(e) => setDraft((d) => ({ ...d, oilPulled: e.target.checked }))}
+            />
             <span className="font-bold">Oil came out with liquid (recovery went too fast)</span>
           </label>
           <div>
             <label htmlFor="slow-note" className="field-label">
               Note on the recovery (optional)
             </label>
-            <textarea id="slow-note" rows={2} className="field-input py-2" value={t.slowRecoveryNote} onChange={(e) => setText("slowRecoveryNote", e.target.value)} />
+            <textarea
+              id="slow-note"
+              rows={2}
+              className="field-input py-2"
+              value={t.slowRecoveryNote}
+              onChange={(e) => setText("slowRecoveryNote", e.target.value)}
+            />
           </div>
           {summary.recovered && (
-            <ResultLine tone={summary.recovered.verdict === "within" ? "good" : "bad"} sources={summary.recovered.sources} testId="recovered-vs-label">
+            <ResultLine
+              tone={summary.recovered.verdict === "within" ? "good" : "bad"}
+              sources={summary.recovered.sources}
+              testId="recovered-vs-label"
+            >
               {summary.recovered.sentence}
             </ResultLine>
           )}
@@ -151,13 +228,22 @@ export function StepFields({ step, draft, setDraft, setText, errorOf, summary, p
           {f("holdEnd", "Vacuum at the end of the hold", vacHint)}
           {f("holdMinutes", "Hold time, minutes")}
           {summary.evacuation?.messages.map((m) => (
-            <ResultLine key={m} tone={summary.evacuation?.reached ? "good" : "bad"} sources={summary.evacuation?.sources}>
+            <ResultLine
+              key={m}
+              tone={summary.evacuation?.reached ? "good" : "bad"}
+              sources={summary.evacuation?.sources}
+            >
               {m}
             </ResultLine>
           ))}
           {summary.hold && (
-            <ResultLine tone={summary.hold.verdict === "pass" ? "good" : "bad"} sources={summary.hold.sources} testId="hold-verdict">
-              Hold {summary.hold.verdict === "pass" ? "passed" : "failed"}. {summary.hold.message} {summary.hold.warnings.join(" ")}
+            <ResultLine
+              tone={summary.hold.verdict === "pass" ? "good" : "bad"}
+              sources={summary.hold.sources}
+              testId="hold-verdict"
+            >
+              Hold {summary.hold.verdict === "pass" ? "passed" : "failed"}. {summary.hold.message}{" "}
+              {summary.hold.warnings.join(" ")}
             </ResultLine>
           )}
         </div>
@@ -187,14 +273,25 @@ export function StepFields({ step, draft, setDraft, setText, errorOf, summary, p
                     />
                     <span>
                       {REPLACED_PART_LABELS[part]}
-                      <span className="text-ink-soft"> — shop allowance {props.allowancesMl[part] == null ? "drain and measure" : formatVolume(props.allowancesMl[part] ?? 0, u.volume)}</span>
+                      <span className="text-ink-soft">
+                        {" "}
+                        — shop allowance{" "}
+                        {props.allowancesMl[part] == null
+                          ? "drain and measure"
+                          : formatVolume(props.allowancesMl[part] ?? 0, u.volume)}
+                      </span>
                     </span>
                   </label>
                   {picked && (
                     <EntryInput
                       label={`Oil measured from the old ${REPLACED_PART_LABELS[part].toLowerCase()} (optional)`}
                       value={picked.measured}
-                      onChange={(v) => setDraft((d) => ({ ...d, parts: { ...d.parts, [part]: { count: picked.count, measured: v } } }))}
+                      onChange={(v) =>
+                        setDraft((d) => ({
+                          ...d,
+                          parts: { ...d.parts, [part]: { count: picked.count, measured: v } },
+                        }))
+                      }
                       error={errorOf(`part-${part}`)}
                     />
                   )}
@@ -203,15 +300,42 @@ export function StepFields({ step, draft, setDraft, setText, errorOf, summary, p
             })}
           </fieldset>
           {summary.addBack && (
-            <ResultLine tone={summary.addBack.complete ? "info" : "bad"} sources={summary.addBack.lines.map((l) => l.source)} testId="oil-add-back">
+            <ResultLine
+              tone={summary.addBack.complete ? "info" : "bad"}
+              sources={summary.addBack.lines.map((l) => l.source)}
+              testId="oil-add-back"
+            >
               Add back {formatVolume(summary.addBack.totalMl, u.volume)}:{" "}
-              {summary.addBack.lines.map((l) => `${l.label} ${l.volumeMl == null ? "(to measure)" : formatVolume(l.volumeMl, u.volume)}`).join(", ")}. {summary.addBack.warnings.join(" ")}
+              {summary.addBack.lines
+                .map(
+                  (l) =>
+                    `${l.label} ${l.volumeMl == null ? "(to measure)" : formatVolume(l.volumeMl, u.volume)}`,
+                )
+                .join(", ")}
+              . {summary.addBack.warnings.join(" ")}
             </ResultLine>
           )}
-          {!summary.addBack && <p className="text-ink-soft">Enter the oil drained during recovery (step 2) to see how much to add back.</p>}
-          <EntryInput label="Oil type added" inputMode="text" value={t.oilAddedType} onChange={(v) => setText("oilAddedType", v)} error={errorOf("oilAddedType")} />
+          {!summary.addBack && (
+            <p className="text-ink-soft">
+              Enter the oil drained during recovery (step 2) to see how much to add back.
+            </p>
+          )}
+          <EntryInput
+            label="Oil type added"
+            inputMode="text"
+            value={t.oilAddedType}
+            onChange={(v) => setText("oilAddedType", v)}
+            error={errorOf("oilAddedType")}
+          />
           {f("oilAdded", "Oil added", volHint)}
-          {summary.oilAddedSentence && <ResultLine tone={Math.abs(summary.oilAddedDeltaMl ?? 0) <= 5 ? "good" : "bad"} sources={["common practice — an oil injector reads to about 5 mL"]}>{summary.oilAddedSentence}</ResultLine>}
+          {summary.oilAddedSentence && (
+            <ResultLine
+              tone={Math.abs(summary.oilAddedDeltaMl ?? 0) <= 5 ? "good" : "bad"}
+              sources={["common practice — an oil injector reads to about 5 mL"]}
+            >
+              {summary.oilAddedSentence}
+            </ResultLine>
+          )}
           {summary.oilWarnings.map((w) => (
             <ResultLine key={w.id} tone="bad" sources={[w.source]}>
               {w.text}
@@ -222,7 +346,13 @@ export function StepFields({ step, draft, setDraft, setText, errorOf, summary, p
     case "recharge":
       return (
         <div className="space-y-4">
-          {f("target", "Target charge", summary.target ? `Leave empty to charge to ${formatMass(summary.target.targetG, u.mass)} (from the ${summary.target.basis === "label" ? "label" : summary.target.basis === "spec_table" ? "spec table" : "maker's revised figure"}).` : massHint)}
+          {f(
+            "target",
+            "Target charge",
+            summary.target
+              ? `Leave empty to charge to ${formatMass(summary.target.targetG, u.mass)} (from the ${summary.target.basis === "label" ? "label" : summary.target.basis === "spec_table" ? "spec table" : "maker's revised figure"}).`
+              : massHint,
+          )}
           {f("charged", "Charged mass (machine display)", massHint)}
           <CylinderSelect
             label="Charged from cylinder"
@@ -233,7 +363,11 @@ export function StepFields({ step, draft, setDraft, setText, errorOf, summary, p
             massUnit={u.mass}
           />
           {summary.charge && (
-            <ResultLine tone={summary.charge.within ? "good" : "bad"} sources={[summary.charge.source]} testId="charge-check">
+            <ResultLine
+              tone={summary.charge.within ? "good" : "bad"}
+              sources={[summary.charge.source]}
+              testId="charge-check"
+            >
               {summary.charge.sentence}
             </ResultLine>
           )}
@@ -242,7 +376,9 @@ export function StepFields({ step, draft, setDraft, setText, errorOf, summary, p
     case "final":
       return (
         <div className="space-y-4">
-          <p className="text-ink-soft">The performance reading after the recharge, engine running, doors closed, A/C at maximum.</p>
+          <p className="text-ink-soft">
+            The performance reading after the recharge, engine running, doors closed, A/C at maximum.
+          </p>
           <div className="grid grid-cols-2 gap-3">
             {f("finalAmbient", "Ambient temperature")}
             {f("finalVent", "Centre vent temperature")}
@@ -253,7 +389,13 @@ export function StepFields({ step, draft, setDraft, setText, errorOf, summary, p
             <label htmlFor="record-notes" className="field-label">
               Notes for the record (optional)
             </label>
-            <textarea id="record-notes" rows={3} className="field-input py-2" value={t.notes} onChange={(e) => setText("notes", e.target.value)} />
+            <textarea
+              id="record-notes"
+              rows={3}
+              className="field-input py-2"
+              value={t.notes}
+              onChange={(e) => setText("notes", e.target.value)}
+            />
           </div>
         </div>
       );

@@ -11,14 +11,31 @@ import { EntryInput } from "@/components/service/entry-input";
 type Allowances = Record<ReplacedPartId, number | null>;
 
 /** The shop's figures for the oil each replaced part carries out; empty means "drain and measure". */
-export function OilAllowancesForm({ initial, volume, canEdit, source }: { initial: Allowances; volume: VolumeUnit; canEdit: boolean; source: string }) {
+export function OilAllowancesForm({
+  initial,
+  volume,
+  canEdit,
+  source,
+}: {
+  initial: Allowances;
+  volume: VolumeUnit;
+  canEdit: boolean;
+  source: string;
+}) {
   const [text, setText] = useState<Record<ReplacedPartId, string>>(
-    () => Object.fromEntries(REPLACED_PART_IDS.map((p) => [p, initial[p] == null ? "" : formatVolume(initial[p] ?? 0, volume)])) as Record<ReplacedPartId, string>,
+    () =>
+      Object.fromEntries(
+        REPLACED_PART_IDS.map((p) => [p, initial[p] == null ? "" : formatVolume(initial[p] ?? 0, volume)]),
+      ) as Record<ReplacedPartId, string>,
   );
   const [errors, setErrors] = useState<Partial<Record<ReplacedPartId, string>>>({});
   const [status, setStatus] = useState<string | null>(null);
   const save = useMutation({
-    mutationFn: (allowancesMl: Allowances) => apiFetch<{ allowancesMl: Allowances }>("/api/specs/oil-allowances", { method: "PUT", body: { allowancesMl } }),
+    mutationFn: (allowancesMl: Allowances) =>
+      apiFetch<{ allowancesMl: Allowances }>("/api/specs/oil-allowances", {
+        method: "PUT",
+        body: { allowancesMl },
+      }),
     onSuccess: () => setStatus("Saved the shop's oil allowances."),
     onError: (e) => setStatus(saveErrorOf(e).message),
   });
@@ -40,12 +57,23 @@ export function OilAllowancesForm({ initial, volume, canEdit, source }: { initia
 
   return (
     <form onSubmit={submit} noValidate className="card space-y-3" aria-labelledby="allowances-heading">
-      <h2 id="allowances-heading" className="text-xl font-bold">Oil carried out by replaced parts</h2>
-      <p className="text-ink-soft">The service record adds these to the oil to put back. Leave a part empty to have the technician drain and measure it. The vehicle maker&apos;s figure governs.</p>
+      <h2 id="allowances-heading" className="text-xl font-bold">
+        Oil carried out by replaced parts
+      </h2>
+      <p className="text-ink-soft">
+        The service record adds these to the oil to put back. Leave a part empty to have the technician drain
+        and measure it. The vehicle maker&apos;s figure governs.
+      </p>
       <div className="grid grid-cols-2 gap-3">
         {REPLACED_PART_IDS.map((p) =>
           canEdit ? (
-            <EntryInput key={p} label={REPLACED_PART_LABELS[p]} value={text[p]} onChange={(v) => setText((t) => ({ ...t, [p]: v }))} error={errors[p]} />
+            <EntryInput
+              key={p}
+              label={REPLACED_PART_LABELS[p]}
+              value={text[p]}
+              onChange={(v) => setText((t) => ({ ...t, [p]: v }))}
+              error={errors[p]}
+            />
           ) : (
             <p key={p}>
               <strong>{REPLACED_PART_LABELS[p]}:</strong> {text[p] || "drain and measure"}
@@ -54,7 +82,11 @@ export function OilAllowancesForm({ initial, volume, canEdit, source }: { initia
         )}
       </div>
       <p className="text-sm text-ink-soft">Source of the defaults: {source}</p>
-      {status && <p role="status" className="font-bold">{status}</p>}
+      {status && (
+        <p role="status" className="font-bold">
+          {status}
+        </p>
+      )}
       {canEdit && (
         <button type="submit" className="btn-quiet w-full" disabled={save.isPending}>
           {save.isPending ? "Saving…" : "Save the allowances"}

@@ -9,7 +9,18 @@ import { readMassG, readVolumeMl } from "@/lib/service/entry";
 import { type MassUnit, type VolumeUnit, formatMass, formatVolume } from "@/lib/units";
 import { EntryInput } from "@/components/service/entry-input";
 
-type FormText = { yearFrom: string; yearTo: string; make: string; model: string; variant: string; rearAc: boolean; refrigerant: string; charge: string; oilType: string; totalOil: string };
+type FormText = {
+  yearFrom: string;
+  yearTo: string;
+  make: string;
+  model: string;
+  variant: string;
+  rearAc: boolean;
+  refrigerant: string;
+  charge: string;
+  oilType: string;
+  totalOil: string;
+};
 
 function initial(row: SpecEntryDto | null, mass: MassUnit, volume: VolumeUnit): FormText {
   return {
@@ -27,13 +38,24 @@ function initial(row: SpecEntryDto | null, mass: MassUnit, volume: VolumeUnit): 
 }
 
 /** Add or edit one row; values typed in any unit are sent as grams and millilitres. */
-export function SpecForm({ row, mass, volume, onDone }: { row: SpecEntryDto | null; mass: MassUnit; volume: VolumeUnit; onDone: () => void }) {
+export function SpecForm({
+  row,
+  mass,
+  volume,
+  onDone,
+}: {
+  row: SpecEntryDto | null;
+  mass: MassUnit;
+  volume: VolumeUnit;
+  onDone: () => void;
+}) {
   const queryClient = useQueryClient();
   const [form, setForm] = useState(() => initial(row, mass, volume));
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [status, setStatus] = useState<string | null>(null);
   const save = useMutation({
-    mutationFn: (body: SpecInput) => apiFetch(row ? `/api/specs/${row.id}` : "/api/specs", { method: row ? "PUT" : "POST", body }),
+    mutationFn: (body: SpecInput) =>
+      apiFetch(row ? `/api/specs/${row.id}` : "/api/specs", { method: row ? "PUT" : "POST", body }),
     onSuccess: async () => {
       await queryClient.invalidateQueries({ queryKey: specKeys.all });
       onDone();
@@ -54,7 +76,8 @@ export function SpecForm({ row, mass, volume, onDone }: { row: SpecEntryDto | nu
     if ("error" in charge) next.labelChargeG = charge.error;
     if ("empty" in charge) next.labelChargeG = "Enter the label charge.";
     if ("error" in oil) next.totalOilMl = oil.error;
-    for (const k of ["yearFrom", "yearTo"] as const) if (!/^\d{4}$/.test(form[k].trim())) next[k] = "A four-digit year.";
+    for (const k of ["yearFrom", "yearTo"] as const)
+      if (!/^\d{4}$/.test(form[k].trim())) next[k] = "A four-digit year.";
     setErrors(next);
     setStatus(null);
     if (Object.keys(next).length) return;
@@ -73,28 +96,91 @@ export function SpecForm({ row, mass, volume, onDone }: { row: SpecEntryDto | nu
   }
 
   return (
-    <form onSubmit={submit} noValidate className="space-y-3 rounded-card border-2 border-glacier-500 p-3" aria-label={row ? "Edit spec row" : "New spec row"}>
+    <form
+      onSubmit={submit}
+      noValidate
+      className="space-y-3 rounded-card border-2 border-glacier-500 p-3"
+      aria-label={row ? "Edit spec row" : "New spec row"}
+    >
       <div className="grid grid-cols-2 gap-3">
-        <EntryInput label="Year from" value={form.yearFrom} onChange={set("yearFrom")} error={errors.yearFrom} />
+        <EntryInput
+          label="Year from"
+          value={form.yearFrom}
+          onChange={set("yearFrom")}
+          error={errors.yearFrom}
+        />
         <EntryInput label="Year to" value={form.yearTo} onChange={set("yearTo")} error={errors.yearTo} />
       </div>
-      <EntryInput label="Make" inputMode="text" value={form.make} onChange={set("make")} error={errors.make} />
-      <EntryInput label="Model" inputMode="text" value={form.model} onChange={set("model")} error={errors.model} />
-      <EntryInput label="Engine or variant (empty: every variant)" inputMode="text" value={form.variant} onChange={set("variant")} error={errors.variant} />
+      <EntryInput
+        label="Make"
+        inputMode="text"
+        value={form.make}
+        onChange={set("make")}
+        error={errors.make}
+      />
+      <EntryInput
+        label="Model"
+        inputMode="text"
+        value={form.model}
+        onChange={set("model")}
+        error={errors.model}
+      />
+      <EntryInput
+        label="Engine or variant (empty: every variant)"
+        inputMode="text"
+        value={form.variant}
+        onChange={set("variant")}
+        error={errors.variant}
+      />
       <label className="flex min-h-glove items-center gap-3">
-        <input type="checkbox" className="h-6 w-6" checked={form.rearAc} onChange={(e) => setForm((f) => ({ ...f, rearAc: e.target.checked }))} />
+        <input
+          type="checkbox"
+          className="h-6 w-6"
+          checked={form.rearAc}
+          onChange={(e) => setForm((f) => ({ ...f, rearAc: e.target.checked }))}
+        />
         <span className="font-bold">Front and rear A/C</span>
       </label>
       <div>
-        <label htmlFor="spec-refrigerant" className="field-label">Refrigerant</label>
-        <select id="spec-refrigerant" className="field-input" value={form.refrigerant} onChange={(e) => set("refrigerant")(e.target.value)}>
-          {["R-134a", "R-1234yf", "R-744", "R-12"].map((r) => <option key={r}>{r}</option>)}
+        <label htmlFor="spec-refrigerant" className="field-label">
+          Refrigerant
+        </label>
+        <select
+          id="spec-refrigerant"
+          className="field-input"
+          value={form.refrigerant}
+          onChange={(e) => set("refrigerant")(e.target.value)}
+        >
+          {["R-134a", "R-1234yf", "R-744", "R-12"].map((r) => (
+            <option key={r}>{r}</option>
+          ))}
         </select>
       </div>
-      <EntryInput label="Label charge" value={form.charge} onChange={set("charge")} error={errors.labelChargeG} hint="650 g, 1.4 kg or 1 lb 7 oz." />
-      <EntryInput label="Oil type" inputMode="text" value={form.oilType} onChange={set("oilType")} error={errors.oilType} />
-      <EntryInput label="Total oil in the system (optional)" value={form.totalOil} onChange={set("totalOil")} error={errors.totalOilMl} />
-      {status && <p role="alert" className="field-error">{status}</p>}
+      <EntryInput
+        label="Label charge"
+        value={form.charge}
+        onChange={set("charge")}
+        error={errors.labelChargeG}
+        hint="650 g, 1.4 kg or 1 lb 7 oz."
+      />
+      <EntryInput
+        label="Oil type"
+        inputMode="text"
+        value={form.oilType}
+        onChange={set("oilType")}
+        error={errors.oilType}
+      />
+      <EntryInput
+        label="Total oil in the system (optional)"
+        value={form.totalOil}
+        onChange={set("totalOil")}
+        error={errors.totalOilMl}
+      />
+      {status && (
+        <p role="alert" className="field-error">
+          {status}
+        </p>
+      )}
       <div className="flex gap-2">
         <button type="submit" className="btn-primary flex-1" disabled={save.isPending}>
           {save.isPending ? "Saving…" : row ? "Save the row" : "Add the row"}

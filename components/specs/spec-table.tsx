@@ -7,7 +7,17 @@ import { type SpecEntryDto, specKeys, specsQuery } from "@/lib/queries/specs";
 import { type MassUnit, type VolumeUnit, formatMass, formatVolume } from "@/lib/units";
 import { SpecForm } from "./spec-form";
 
-export function SpecTable({ canEdit, mass, volume, initialQuery = "" }: { canEdit: boolean; mass: MassUnit; volume: VolumeUnit; initialQuery?: string }) {
+export function SpecTable({
+  canEdit,
+  mass,
+  volume,
+  initialQuery = "",
+}: {
+  canEdit: boolean;
+  mass: MassUnit;
+  volume: VolumeUnit;
+  initialQuery?: string;
+}) {
   const [q, setQ] = useState(initialQuery);
   const [editing, setEditing] = useState<SpecEntryDto | "new" | null>(null);
   const [status, setStatus] = useState<string | null>(null);
@@ -25,19 +35,36 @@ export function SpecTable({ canEdit, mass, volume, initialQuery = "" }: { canEdi
   return (
     <section aria-labelledby="specs-heading" className="card space-y-3">
       <div className="flex flex-wrap items-center justify-between gap-2">
-        <h2 id="specs-heading" className="text-xl font-bold">The shop&apos;s spec table</h2>
-        <a className="btn-quiet" href={`/api/specs/export${mass === "oz" ? "?charge=oz&oil=floz" : ""}`} download>
+        <h2 id="specs-heading" className="text-xl font-bold">
+          The shop&apos;s spec table
+        </h2>
+        <a
+          className="btn-quiet"
+          href={`/api/specs/export${mass === "oz" ? "?charge=oz&oil=floz" : ""}`}
+          download
+        >
           Export CSV
         </a>
       </div>
-      <label htmlFor="spec-search" className="field-label">Search by make, model, variant or year</label>
-      <input id="spec-search" type="search" className="field-input" value={q} onChange={(e) => setQ(e.target.value)} autoComplete="off" />
+      <label htmlFor="spec-search" className="field-label">
+        Search by make, model, variant or year
+      </label>
+      <input
+        id="spec-search"
+        type="search"
+        className="field-input"
+        value={q}
+        onChange={(e) => setQ(e.target.value)}
+        autoComplete="off"
+      />
       {canEdit && editing !== "new" && (
         <button type="button" className="btn-primary w-full" onClick={() => setEditing("new")}>
           Add a row
         </button>
       )}
-      {editing === "new" && <SpecForm row={null} mass={mass} volume={volume} onDone={() => setEditing(null)} />}
+      {editing === "new" && (
+        <SpecForm row={null} mass={mass} volume={volume} onDone={() => setEditing(null)} />
+      )}
       {status && <p role="status">{status}</p>}
       <ul className="divide-y divide-paper-line" aria-busy={isFetching}>
         {rows.map((r) =>
@@ -52,16 +79,29 @@ export function SpecTable({ canEdit, mass, volume, initialQuery = "" }: { canEdi
                   {r.yearFrom}–{r.yearTo} {r.make} {r.model} {r.variant}
                 </p>
                 <p>
-                  {r.rearAc ? "Front and rear A/C" : "Front A/C only"} · {r.refrigerant} · <strong>{formatMass(r.labelChargeG, mass)}</strong> · {r.oilType}
+                  {r.rearAc ? "Front and rear A/C" : "Front A/C only"} · {r.refrigerant} ·{" "}
+                  <strong>{formatMass(r.labelChargeG, mass)}</strong> · {r.oilType}
                   {r.totalOilMl ? ` · ${formatVolume(r.totalOilMl, volume)} oil` : ""}
                 </p>
               </div>
               {canEdit && (
                 <>
-                  <button type="button" className="btn-quiet" onClick={() => setEditing(r)} aria-label={`Edit ${r.make} ${r.model} ${r.variant} ${r.yearFrom}–${r.yearTo}`}>
+                  <button
+                    type="button"
+                    className="btn-quiet"
+                    onClick={() => setEditing(r)}
+                    aria-label={`Edit ${r.make} ${r.model} ${r.variant} ${r.yearFrom}–${r.yearTo}`}
+                  >
                     Edit
                   </button>
-                  <button type="button" className="btn-quiet" onClick={() => window.confirm(`Delete ${r.make} ${r.model} ${r.yearFrom}–${r.yearTo}?`) && remove.mutate(r.id)}>
+                  <button
+                    type="button"
+                    className="btn-quiet"
+                    onClick={() =>
+                      window.confirm(`Delete ${r.make} ${r.model} ${r.yearFrom}–${r.yearTo}?`) &&
+                      remove.mutate(r.id)
+                    }
+                  >
                     Delete
                   </button>
                 </>

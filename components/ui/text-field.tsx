@@ -13,7 +13,9 @@ export const TextField = forwardRef<HTMLInputElement, TextFieldProps>(function T
 ) {
   const autoId = useId();
   const inputId = id ?? autoId;
-  const describedBy = [hint ? `${inputId}-hint` : null, error ? `${inputId}-error` : null].filter(Boolean).join(" ");
+  const describedBy = [hint ? `${inputId}-hint` : null, error ? `${inputId}-error` : null]
+    .filter(Boolean)
+    .join(" ");
   return (
     <div className={className}>
       <label htmlFor={inputId} className="field-label">

@@ -14,6 +14,7 @@ describe("who may change a case, and when", () => {
   it("keeps a submitted case closed until a senior sends it back", () => {
     expect(caseIsEditable({ status: "draft" })).toBe(true);
     expect(caseIsEditable({ status: "sent_back" })).toBe(true);
-    for (const status of ["awaiting_signoff", "signed_off", "closed"]) expect(caseIsEditable({ status })).toBe(false);
+    for (const status of ["awaiting_signoff", "signed_off", "closed"])
+      expect(caseIsEditable({ status })).toBe(false);
   });
 });

@@ -36,9 +36,27 @@ const GRANTS: Record<Role, readonly Permission[]> = {
     "users:manage",
     "shop:settings",
   ],
-  senior: ["cases:read", "cases:write", "signoff:review", "casebook:search", "specs:read", "specs:edit", "ledger:read", "ledger:write", "service:write"],
+  senior: [
+    "cases:read",
+    "cases:write",
+    "signoff:review",
+    "casebook:search",
+    "specs:read",
+    "specs:edit",
+    "ledger:read",
+    "ledger:write",
+    "service:write",
+  ],
   // Recovering and charging refrigerant is certified work: apprentices read the record but do not enter it.
-  technician: ["cases:read", "cases:write", "casebook:search", "specs:read", "ledger:read", "ledger:write", "service:write"],
+  technician: [
+    "cases:read",
+    "cases:write",
+    "casebook:search",
+    "specs:read",
+    "ledger:read",
+    "ledger:write",
+    "service:write",
+  ],
   apprentice: ["cases:read", "cases:write", "casebook:search", "specs:read"],
 };
 

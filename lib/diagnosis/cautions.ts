@@ -24,20 +24,34 @@ export interface Caution {
 }
 
 export const CAUTION_TEXT: Record<CautionId, string> = {
-  eye_and_skin: "Wear safety glasses and gloves whenever lines or hoses are opened, even if the gauges read empty: liquid refrigerant freezes skin and eyes on contact.",
-  never_vent: "Never vent refrigerant: recover it with certified equipment by a certified technician (US Clean Air Act Section 609; EU F-gas rules).",
-  flammable_r1234yf: "R-1234yf is mildly flammable (ASHRAE A2L): keep sparks and flames away, ventilate the work area and use equipment certified for it (SAE J2843 or J3030).",
-  r744_pressure: "R-744 (CO2) systems run at very high pressures: use only gauges, hoses and equipment rated for CO2, and ventilate, because released CO2 can displace the air in a closed space.",
-  high_voltage_compressor: "High-voltage electric compressor: follow the maker's isolation procedure before touching it, use only the specified dielectric oil and equipment without oil injection, since wrong oil can make the compressor case live.",
-  contaminated_do_not_recover: "Refrigerant failed identification: do not recover it into the shop's recovery machine or stock; use dedicated contaminated-refrigerant equipment (SAE J2851 type) or a separate labelled cylinder, and tell the owner in writing.",
-  hydrocarbon_flammable: "Hydrocarbon detected: treat the system as flammable, keep ignition sources away and ventilate.",
-  head_pressure_high: "High side near the cut-out: keep hands and hoses clear of belts and fans, and stop the test if the pressure keeps climbing.",
-  empty_system: "Do not run the compressor on an empty system; pressure-test only with dry nitrogen or an approved tracer gas, never compressed air or oxygen.",
-  recover_slowly_accumulator: "Recover slowly on orifice-tube/accumulator systems so oil is not pulled out; measure the oil removed and add the same amount of fresh, correct oil back.",
-  charge_by_weight: "Charge by weight to the label specification through certified equipment; pressures are only a guide.",
-  repair_before_refill: "Repair the leak before refilling: topping off a leaking system brings it back (and in the EU it is not allowed after an abnormal leak).",
-  moisture_and_acid: "Moisture with PAG oil forms acid: replace the receiver-drier or accumulator and evacuate thoroughly.",
-  defer_to_procedure: "These cautions are general: the vehicle maker's service procedure, your local codes and regulations, and certified practice take precedence.",
+  eye_and_skin:
+    "Wear safety glasses and gloves whenever lines or hoses are opened, even if the gauges read empty: liquid refrigerant freezes skin and eyes on contact.",
+  never_vent:
+    "Never vent refrigerant: recover it with certified equipment by a certified technician (US Clean Air Act Section 609; EU F-gas rules).",
+  flammable_r1234yf:
+    "R-1234yf is mildly flammable (ASHRAE A2L): keep sparks and flames away, ventilate the work area and use equipment certified for it (SAE J2843 or J3030).",
+  r744_pressure:
+    "R-744 (CO2) systems run at very high pressures: use only gauges, hoses and equipment rated for CO2, and ventilate, because released CO2 can displace the air in a closed space.",
+  high_voltage_compressor:
+    "High-voltage electric compressor: follow the maker's isolation procedure before touching it, use only the specified dielectric oil and equipment without oil injection, since wrong oil can make the compressor case live.",
+  contaminated_do_not_recover:
+    "Refrigerant failed identification: do not recover it into the shop's recovery machine or stock; use dedicated contaminated-refrigerant equipment (SAE J2851 type) or a separate labelled cylinder, and tell the owner in writing.",
+  hydrocarbon_flammable:
+    "Hydrocarbon detected: treat the system as flammable, keep ignition sources away and ventilate.",
+  head_pressure_high:
+    "High side near the cut-out: keep hands and hoses clear of belts and fans, and stop the test if the pressure keeps climbing.",
+  empty_system:
+    "Do not run the compressor on an empty system; pressure-test only with dry nitrogen or an approved tracer gas, never compressed air or oxygen.",
+  recover_slowly_accumulator:
+    "Recover slowly on orifice-tube/accumulator systems so oil is not pulled out; measure the oil removed and add the same amount of fresh, correct oil back.",
+  charge_by_weight:
+    "Charge by weight to the label specification through certified equipment; pressures are only a guide.",
+  repair_before_refill:
+    "Repair the leak before refilling: topping off a leaking system brings it back (and in the EU it is not allowed after an abnormal leak).",
+  moisture_and_acid:
+    "Moisture with PAG oil forms acid: replace the receiver-drier or accumulator and evacuate thoroughly.",
+  defer_to_procedure:
+    "These cautions are general: the vehicle maker's service procedure, your local codes and regulations, and certified practice take precedence.",
 };
 
 export function collectCautions(a: {
@@ -56,7 +70,8 @@ export function collectCautions(a: {
   if (input.electricCompressor) ids.push("high_voltage_compressor");
   if (mixed) ids.push("contaminated_do_not_recover");
   if (observations.has("symptom:identifier_flags_hydrocarbon")) ids.push("hydrocarbon_flammable");
-  if (observations.has("high_side:very_high") || observations.has("symptom:high_pressure_cutout")) ids.push("head_pressure_high");
+  if (observations.has("high_side:very_high") || observations.has("symptom:high_pressure_cutout"))
+    ids.push("head_pressure_high");
   if (systemEmpty) ids.push("empty_system");
   if (input.expansionDevice === "orifice_tube") ids.push("recover_slowly_accumulator");
   if (leaders.includes("overcharge") || leaders.includes("undercharge")) ids.push("charge_by_weight");

@@ -9,32 +9,36 @@ import { SYMPTOM_IDS } from "./symptoms";
 const optional = <T>(arb: fc.Arbitrary<T>) => fc.option(arb, { nil: undefined, freq: 3 });
 const real = (min: number, max: number) => fc.double({ min, max, noNaN: true, noDefaultInfinity: true });
 
-const candidateInput = fc.constantFrom("R-134a" as const, "R-1234yf" as const, "R-744" as const).chain((refrigerant) => {
-  const maxKpa = refrigerant === "R-744" ? 16000 : 4500;
-  const pressure = fc.oneof(real(-101.3, 3000), real(-101.3, maxKpa));
-  return fc.record({
-    refrigerant: fc.constant(refrigerant),
-    expansionDevice: fc.constantFrom("orifice_tube" as const, "txv" as const),
-    ambientC: real(-30, 60),
-    relativeHumidityPct: optional(real(0, 100)),
-    altitudeM: optional(real(-500, 5000)),
-    staticKpaGauge: optional(pressure),
-    highKpaGauge: optional(pressure),
-    lowKpaGauge: optional(pressure),
-    liquidLineC: optional(real(-40, 110)),
-    suctionLineC: optional(real(-50, 80)),
-    ventC: optional(real(-30, 60)),
-    labelChargeG: optional(real(1, 5000)),
-    recoveredChargeG: optional(real(0, 6000)),
-    identifierPurityPct: optional(real(0, 100)),
-    identifierAirPct: optional(real(0, 100)),
-    electricCompressor: optional(fc.boolean()),
-    symptoms: optional(fc.subarray([...SYMPTOM_IDS])),
+const candidateInput = fc
+  .constantFrom("R-134a" as const, "R-1234yf" as const, "R-744" as const)
+  .chain((refrigerant) => {
+    const maxKpa = refrigerant === "R-744" ? 16000 : 4500;
+    const pressure = fc.oneof(real(-101.3, 3000), real(-101.3, maxKpa));
+    return fc.record({
+      refrigerant: fc.constant(refrigerant),
+      expansionDevice: fc.constantFrom("orifice_tube" as const, "txv" as const),
+      ambientC: real(-30, 60),
+      relativeHumidityPct: optional(real(0, 100)),
+      altitudeM: optional(real(-500, 5000)),
+      staticKpaGauge: optional(pressure),
+      highKpaGauge: optional(pressure),
+      lowKpaGauge: optional(pressure),
+      liquidLineC: optional(real(-40, 110)),
+      suctionLineC: optional(real(-50, 80)),
+      ventC: optional(real(-30, 60)),
+      labelChargeG: optional(real(1, 5000)),
+      recoveredChargeG: optional(real(0, 6000)),
+      identifierPurityPct: optional(real(0, 100)),
+      identifierAirPct: optional(real(0, 100)),
+      electricCompressor: optional(fc.boolean()),
+      symptoms: optional(fc.subarray([...SYMPTOM_IDS])),
+    });
   });
-});
 
 /** Inputs the schema accepts: the engine's contract covers exactly these. */
-const validInput: fc.Arbitrary<DiagnosisInput> = candidateInput.filter((c) => diagnosisInputSchema.safeParse(c).success);
+const validInput: fc.Arbitrary<DiagnosisInput> = candidateInput.filter(
+  (c) => diagnosisInputSchema.safeParse(c).success,
+);
 
 describe("diagnose on any input the schema accepts (fast-check)", () => {
   it("returns every cause once, with scores and confidences in [0, 1], sorted, never NaN, and cautions ending in deference", () => {
@@ -73,8 +77,11 @@ describe("diagnose on any input the schema accepts (fast-check)", () => {
         const [lowKpa, highKpa] = a <= b ? [a, b] : [b, a];
         const lower = { ...input, staticKpaGauge: lowKpa };
         const higher = { ...input, staticKpaGauge: highKpa };
-        fc.pre(diagnosisInputSchema.safeParse(lower).success && diagnosisInputSchema.safeParse(higher).success);
-        const air = (i: DiagnosisInput) => diagnose(i).suspects.find((s) => s.cause === "non_condensables")?.score ?? Number.NaN;
+        fc.pre(
+          diagnosisInputSchema.safeParse(lower).success && diagnosisInputSchema.safeParse(higher).success,
+        );
+        const air = (i: DiagnosisInput) =>
+          diagnose(i).suspects.find((s) => s.cause === "non_condensables")?.score ?? Number.NaN;
         expect(air(higher)).toBeGreaterThanOrEqual(air(lower));
       }),
       { numRuns: 400 },
@@ -98,7 +105,9 @@ describe("diagnose on any input the schema accepts (fast-check)", () => {
       ambientC,
       staticKpaGauge: 10,
       identifierPurityPct: undefined,
-      symptoms: (input.symptoms ?? []).filter((s) => s !== "identifier_flags_hydrocarbon" && s !== "leak_found" && s !== "no_leak_found"),
+      symptoms: (input.symptoms ?? []).filter(
+        (s) => s !== "identifier_flags_hydrocarbon" && s !== "leak_found" && s !== "no_leak_found",
+      ),
     }));
     fc.assert(
       fc.property(emptyInput, (input) => {
@@ -113,7 +122,8 @@ describe("diagnose on any input the schema accepts (fast-check)", () => {
 });
 
 describe("monotone where the physics says so (fast-check)", () => {
-  const scoreOf = (input: DiagnosisInput, cause: string) => diagnose(input).suspects.find((s) => s.cause === cause)?.score ?? Number.NaN;
+  const scoreOf = (input: DiagnosisInput, cause: string) =>
+    diagnose(input).suspects.find((s) => s.cause === cause)?.score ?? Number.NaN;
 
   it("never lowers overcharge nor raises undercharge as more refrigerant is recovered against the same label (charge by weight: TM 5-3805-291-23-1)", () => {
     const pair = fc.tuple(validInput, real(50, 3000), real(0, 1), real(0, 1));
@@ -123,7 +133,9 @@ describe("monotone where the physics says so (fast-check)", () => {
         const base = { ...input, labelChargeG, staticKpaGauge: undefined };
         const lower = { ...base, recoveredChargeG: less };
         const higher = { ...base, recoveredChargeG: more };
-        fc.pre(diagnosisInputSchema.safeParse(lower).success && diagnosisInputSchema.safeParse(higher).success);
+        fc.pre(
+          diagnosisInputSchema.safeParse(lower).success && diagnosisInputSchema.safeParse(higher).success,
+        );
         expect(scoreOf(higher, "overcharge")).toBeGreaterThanOrEqual(scoreOf(lower, "overcharge"));
         expect(scoreOf(higher, "undercharge")).toBeLessThanOrEqual(scoreOf(lower, "undercharge"));
       }),
@@ -135,7 +147,9 @@ describe("monotone where the physics says so (fast-check)", () => {
     fc.assert(
       fc.property(validInput, real(0, 100), real(0, 100), (input, a, b) => {
         const [less, more] = a <= b ? [a, b] : [b, a];
-        expect(scoreOf({ ...input, identifierAirPct: more }, "non_condensables")).toBeGreaterThanOrEqual(scoreOf({ ...input, identifierAirPct: less }, "non_condensables"));
+        expect(scoreOf({ ...input, identifierAirPct: more }, "non_condensables")).toBeGreaterThanOrEqual(
+          scoreOf({ ...input, identifierAirPct: less }, "non_condensables"),
+        );
       }),
       { numRuns: 300 },
     );
@@ -145,7 +159,9 @@ describe("monotone where the physics says so (fast-check)", () => {
     fc.assert(
       fc.property(validInput, real(0, 100), real(0, 100), (input, a, b) => {
         const [less, more] = a <= b ? [a, b] : [b, a];
-        expect(scoreOf({ ...input, identifierPurityPct: more }, "contaminated_refrigerant")).toBeLessThanOrEqual(scoreOf({ ...input, identifierPurityPct: less }, "contaminated_refrigerant"));
+        expect(
+          scoreOf({ ...input, identifierPurityPct: more }, "contaminated_refrigerant"),
+        ).toBeLessThanOrEqual(scoreOf({ ...input, identifierPurityPct: less }, "contaminated_refrigerant"));
       }),
       { numRuns: 300 },
     );

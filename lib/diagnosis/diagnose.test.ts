@@ -2,13 +2,21 @@ import { describe, expect, it } from "vitest";
 import { diagnose } from "./diagnose";
 import type { DiagnosisInput } from "./schema";
 
-const rank = (input: DiagnosisInput, cause: string) => diagnose(input).suspects.findIndex((s) => s.cause === cause);
+const rank = (input: DiagnosisInput, cause: string) =>
+  diagnose(input).suspects.findIndex((s) => s.cause === cause);
 
 describe("trade check values (common practice)", () => {
   it("ranks overcharge first for a recovered mass 25 % over the label with high-pressure cut-outs at 30 °C", () => {
     for (const refrigerant of ["R-134a", "R-1234yf"] as const) {
       for (const expansionDevice of ["orifice_tube", "txv"] as const) {
-        const findings = diagnose({ refrigerant, expansionDevice, ambientC: 30, labelChargeG: 800, recoveredChargeG: 1000, symptoms: ["high_pressure_cutout"] });
+        const findings = diagnose({
+          refrigerant,
+          expansionDevice,
+          ambientC: 30,
+          labelChargeG: 800,
+          recoveredChargeG: 1000,
+          symptoms: ["high_pressure_cutout"],
+        });
         expect(findings.suspects[0]?.cause).toBe("overcharge");
         expect(findings.suspects[0]?.evidenceFor.join(" ")).toMatch(/200 g \(25 %\) over/);
       }
@@ -17,7 +25,16 @@ describe("trade check values (common practice)", () => {
 
   it("ranks air low when the identifier reads 100 % pure with no air, however high the head pressure", () => {
     for (let highKpaGauge = 1500; highKpaGauge <= 3000; highKpaGauge += 250) {
-      const findings = diagnose({ refrigerant: "R-134a", expansionDevice: "orifice_tube", ambientC: 30, highKpaGauge, lowKpaGauge: 300, identifierPurityPct: 100, identifierAirPct: 0, symptoms: ["high_pressure_cutout", "gauge_needle_flutter"] });
+      const findings = diagnose({
+        refrigerant: "R-134a",
+        expansionDevice: "orifice_tube",
+        ambientC: 30,
+        highKpaGauge,
+        lowKpaGauge: 300,
+        identifierPurityPct: 100,
+        identifierAirPct: 0,
+        symptoms: ["high_pressure_cutout", "gauge_needle_flutter"],
+      });
       const air = findings.suspects.find((s) => s.cause === "non_condensables");
       expect(air?.score).toBeLessThan(0.1);
       expect(findings.suspects.findIndex((s) => s.cause === "non_condensables")).toBeGreaterThanOrEqual(2);
@@ -27,14 +44,25 @@ describe("trade check values (common practice)", () => {
 
   it("ranks no refrigerant fault first for readings inside the quick-check band with a cold vent (TM 5-3805-291-23-1 Table 1)", () => {
     for (const ambientC of [22, 27, 32, 37]) {
-      const findings = diagnose({ refrigerant: "R-134a", expansionDevice: "orifice_tube", ambientC, highKpaGauge: 0, lowKpaGauge: 0, ventC: 6 });
+      const findings = diagnose({
+        refrigerant: "R-134a",
+        expansionDevice: "orifice_tube",
+        ambientC,
+        highKpaGauge: 0,
+        lowKpaGauge: 0,
+        ventC: 6,
+      });
       expect(findings.suspects[0]?.cause).not.toBe("no_refrigerant_fault"); // zero readings are not in band
       const inBand = diagnose({
         refrigerant: "R-134a",
         expansionDevice: "orifice_tube",
         ambientC,
-        highKpaGauge: (findings.computed.expectedHigh?.minKpaGauge ?? 0) * 0.5 + (findings.computed.expectedHigh?.maxKpaGauge ?? 0) * 0.5,
-        lowKpaGauge: (findings.computed.expectedLow?.minKpaGauge ?? 0) * 0.5 + (findings.computed.expectedLow?.maxKpaGauge ?? 0) * 0.5,
+        highKpaGauge:
+          (findings.computed.expectedHigh?.minKpaGauge ?? 0) * 0.5 +
+          (findings.computed.expectedHigh?.maxKpaGauge ?? 0) * 0.5,
+        lowKpaGauge:
+          (findings.computed.expectedLow?.minKpaGauge ?? 0) * 0.5 +
+          (findings.computed.expectedLow?.maxKpaGauge ?? 0) * 0.5,
         ventC: 6,
       });
       expect(inBand.suspects[0]?.cause).toBe("no_refrigerant_fault");
@@ -43,84 +71,209 @@ describe("trade check values (common practice)", () => {
 });
 
 describe("separating the known confusions", () => {
-  const lowSides = { refrigerant: "R-134a", expansionDevice: "txv", ambientC: 30, highKpaGauge: 1000, lowKpaGauge: 120, suctionLineC: 15 } as const;
+  const lowSides = {
+    refrigerant: "R-134a",
+    expansionDevice: "txv",
+    ambientC: 30,
+    highKpaGauge: 1000,
+    lowKpaGauge: 120,
+    suctionLineC: 15,
+  } as const;
   it("uses subcooling to split undercharge (low) from a metering restriction (high) (superheat/subcooling training handout)", () => {
     expect(diagnose({ ...lowSides, liquidLineC: 41 }).suspects[0]?.cause).toBe("undercharge");
-    expect(diagnose({ ...lowSides, liquidLineC: 28, symptoms: ["frost_at_metering_device"] }).suspects[0]?.cause).toBe("metering_restriction");
+    expect(
+      diagnose({ ...lowSides, liquidLineC: 28, symptoms: ["frost_at_metering_device"] }).suspects[0]?.cause,
+    ).toBe("metering_restriction");
   });
 
-  const highHead = { refrigerant: "R-134a", expansionDevice: "orifice_tube", ambientC: 30, highKpaGauge: 1900, lowKpaGauge: 320 } as const;
+  const highHead = {
+    refrigerant: "R-134a",
+    expansionDevice: "orifice_tube",
+    ambientC: 30,
+    highKpaGauge: 1900,
+    lowKpaGauge: 320,
+  } as const;
   it("splits overcharge, air and condenser airflow by static check, identifier and fan (SAE J2912; Apex Tech Nation T-22/8)", () => {
-    expect(diagnose({ ...highHead, staticKpaGauge: 800, identifierPurityPct: 99.5, identifierAirPct: 4 }).suspects[0]?.cause).toBe("non_condensables");
-    expect(diagnose({ ...highHead, staticKpaGauge: 672, labelChargeG: 700, recoveredChargeG: 860 }).suspects[0]?.cause).toBe("overcharge");
-    expect(diagnose({ ...highHead, staticKpaGauge: 672, symptoms: ["condenser_fan_not_running", "worse_at_idle"] }).suspects[0]?.cause).toBe("condenser_airflow");
+    expect(
+      diagnose({ ...highHead, staticKpaGauge: 800, identifierPurityPct: 99.5, identifierAirPct: 4 })
+        .suspects[0]?.cause,
+    ).toBe("non_condensables");
+    expect(
+      diagnose({ ...highHead, staticKpaGauge: 672, labelChargeG: 700, recoveredChargeG: 860 }).suspects[0]
+        ?.cause,
+    ).toBe("overcharge");
+    expect(
+      diagnose({ ...highHead, staticKpaGauge: 672, symptoms: ["condenser_fan_not_running", "worse_at_idle"] })
+        .suspects[0]?.cause,
+    ).toBe("condenser_airflow");
   });
 
   it("asks for the charge by weight before condemning a compressor, and follows the weight (Apex Tech Nation)", () => {
-    const close = { refrigerant: "R-134a", expansionDevice: "orifice_tube", ambientC: 30, highKpaGauge: 800, lowKpaGauge: 330, ventC: 19 } as const;
+    const close = {
+      refrigerant: "R-134a",
+      expansionDevice: "orifice_tube",
+      ambientC: 30,
+      highKpaGauge: 800,
+      lowKpaGauge: 330,
+      ventC: 19,
+    } as const;
     expect(diagnose({ ...close, labelChargeG: 700 }).nextCheck.check).toBe("recover_and_weigh");
-    expect(diagnose({ ...close, labelChargeG: 700, recoveredChargeG: 690 }).suspects[0]?.cause).toBe("weak_compressor");
-    expect(diagnose({ ...close, labelChargeG: 700, recoveredChargeG: 250 }).suspects[0]?.cause).toBe("undercharge");
+    expect(diagnose({ ...close, labelChargeG: 700, recoveredChargeG: 690 }).suspects[0]?.cause).toBe(
+      "weak_compressor",
+    );
+    expect(diagnose({ ...close, labelChargeG: 700, recoveredChargeG: 250 }).suspects[0]?.cause).toBe(
+      "undercharge",
+    );
   });
 
   it("splits moisture (swinging low side) from icing (steady low side, clutch not cycling) ('Frozen Expansion Valve'; 'Freeze Up')", () => {
-    const fading = { refrigerant: "R-134a", expansionDevice: "orifice_tube", ambientC: 30, highKpaGauge: 1250, lowKpaGauge: 110 } as const;
-    const undecided = diagnose({ ...fading, symptoms: ["cooling_fades_then_returns", "evaporator_airflow_drops"] });
-    expect(undecided.suspects.slice(0, 2).map((s) => s.cause).sort()).toEqual(["evaporator_icing", "moisture"]);
+    const fading = {
+      refrigerant: "R-134a",
+      expansionDevice: "orifice_tube",
+      ambientC: 30,
+      highKpaGauge: 1250,
+      lowKpaGauge: 110,
+    } as const;
+    const undecided = diagnose({
+      ...fading,
+      symptoms: ["cooling_fades_then_returns", "evaporator_airflow_drops"],
+    });
+    expect(
+      undecided.suspects
+        .slice(0, 2)
+        .map((s) => s.cause)
+        .sort(),
+    ).toEqual(["evaporator_icing", "moisture"]);
     expect(undecided.nextCheck.check).toBe("watch_low_side");
-    expect(diagnose({ ...fading, symptoms: ["cooling_fades_then_returns", "low_side_swings_to_vacuum"] }).suspects[0]?.cause).toBe("moisture");
-    expect(diagnose({ ...fading, symptoms: ["cooling_fades_then_returns", "low_side_steady", "clutch_not_cycling"] }).suspects[0]?.cause).toBe("evaporator_icing");
+    expect(
+      diagnose({ ...fading, symptoms: ["cooling_fades_then_returns", "low_side_swings_to_vacuum"] })
+        .suspects[0]?.cause,
+    ).toBe("moisture");
+    expect(
+      diagnose({
+        ...fading,
+        symptoms: ["cooling_fades_then_returns", "low_side_steady", "clutch_not_cycling"],
+      }).suspects[0]?.cause,
+    ).toBe("evaporator_icing");
   });
 });
 
 describe("gates, next check and cautions", () => {
   it("puts contaminated refrigerant first on a failed identifier, with the do-not-recover caution (SAE J2099/J2912)", () => {
-    const findings = diagnose({ refrigerant: "R-134a", expansionDevice: "orifice_tube", ambientC: 28, labelChargeG: 700, recoveredChargeG: 80, identifierPurityPct: 90, symptoms: ["leak_found", "bubbles_in_sight_glass", "oil_residue_at_fitting"] });
+    const findings = diagnose({
+      refrigerant: "R-134a",
+      expansionDevice: "orifice_tube",
+      ambientC: 28,
+      labelChargeG: 700,
+      recoveredChargeG: 80,
+      identifierPurityPct: 90,
+      symptoms: ["leak_found", "bubbles_in_sight_glass", "oil_residue_at_fitting"],
+    });
     expect(findings.suspects[0]?.cause).toBe("contaminated_refrigerant");
     expect(findings.cautions.map((c) => c.id)).toContain("contaminated_do_not_recover");
     expect(findings.nextCheck.instruction).toMatch(/J2851/);
   });
 
   it("puts undercharge first on an empty system and sends the technician to find the leak", () => {
-    const findings = diagnose({ refrigerant: "R-1234yf", expansionDevice: "txv", ambientC: 22, staticKpaGauge: 10, symptoms: ["condenser_fan_not_running", "compressor_noise", "recent_service_elsewhere"] });
+    const findings = diagnose({
+      refrigerant: "R-1234yf",
+      expansionDevice: "txv",
+      ambientC: 22,
+      staticKpaGauge: 10,
+      symptoms: ["condenser_fan_not_running", "compressor_noise", "recent_service_elsewhere"],
+    });
     expect(findings.suspects[0]?.cause).toBe("undercharge");
     expect(findings.nextCheck.check).toBe("leak_test");
-    expect(findings.cautions.map((c) => c.id)).toEqual(expect.arrayContaining(["empty_system", "flammable_r1234yf", "repair_before_refill"]));
+    expect(findings.cautions.map((c) => c.id)).toEqual(
+      expect.arrayContaining(["empty_system", "flammable_r1234yf", "repair_before_refill"]),
+    );
   });
 
   it("ends the cautions with deference to the maker's procedure, local codes and certified practice", () => {
-    const findings = diagnose({ refrigerant: "R-134a", expansionDevice: "txv", ambientC: 25, electricCompressor: true });
+    const findings = diagnose({
+      refrigerant: "R-134a",
+      expansionDevice: "txv",
+      ambientC: 25,
+      electricCompressor: true,
+    });
     expect(findings.cautions.at(-1)?.id).toBe("defer_to_procedure");
-    expect(findings.cautions.at(-1)?.text).toMatch(/maker's service procedure.*local codes.*certified practice/);
-    expect(findings.cautions.map((c) => c.id)).toEqual(expect.arrayContaining(["eye_and_skin", "never_vent", "high_voltage_compressor"]));
+    expect(findings.cautions.at(-1)?.text).toMatch(
+      /maker's service procedure.*local codes.*certified practice/,
+    );
+    expect(findings.cautions.map((c) => c.id)).toEqual(
+      expect.arrayContaining(["eye_and_skin", "never_vent", "high_voltage_compressor"]),
+    );
   });
 
   it("lowers confidence when key readings are missing", () => {
-    const full = diagnose({ refrigerant: "R-134a", expansionDevice: "orifice_tube", ambientC: 30, highKpaGauge: 1900, lowKpaGauge: 320, staticKpaGauge: 800, identifierPurityPct: 99.5, identifierAirPct: 4, liquidLineC: 60, ventC: 14 });
-    const sparse = diagnose({ refrigerant: "R-134a", expansionDevice: "orifice_tube", ambientC: 30, highKpaGauge: 1900 });
+    const full = diagnose({
+      refrigerant: "R-134a",
+      expansionDevice: "orifice_tube",
+      ambientC: 30,
+      highKpaGauge: 1900,
+      lowKpaGauge: 320,
+      staticKpaGauge: 800,
+      identifierPurityPct: 99.5,
+      identifierAirPct: 4,
+      liquidLineC: 60,
+      ventC: 14,
+    });
+    const sparse = diagnose({
+      refrigerant: "R-134a",
+      expansionDevice: "orifice_tube",
+      ambientC: 30,
+      highKpaGauge: 1900,
+    });
     const conf = (f: typeof full) => f.suspects.find((s) => s.cause === "non_condensables")?.confidence ?? 0;
     expect(conf(sparse)).toBeLessThan(conf(full));
   });
 
   it("phrases the next check as an instruction and names the two suspects it separates", () => {
-    const findings = diagnose({ refrigerant: "R-134a", expansionDevice: "orifice_tube", ambientC: 30, highKpaGauge: 1900, lowKpaGauge: 320 });
+    const findings = diagnose({
+      refrigerant: "R-134a",
+      expansionDevice: "orifice_tube",
+      ambientC: 30,
+      highKpaGauge: 1900,
+      lowKpaGauge: 320,
+    });
     expect(findings.nextCheck.separates).toEqual(findings.suspects.slice(0, 2).map((s) => s.cause));
     expect(findings.nextCheck.instruction).toMatch(/^[A-Z][a-z]+/);
     expect(findings.nextCheck.expectedShiftLogOdds).toBeGreaterThan(0);
   });
 
   it("handles R-744 running readings: says the high side is transcritical and lowers confidence", () => {
-    const findings = diagnose({ refrigerant: "R-744", expansionDevice: "txv", ambientC: 35, highKpaGauge: 9500, lowKpaGauge: 3400, liquidLineC: 40, ventC: 8 });
+    const findings = diagnose({
+      refrigerant: "R-744",
+      expansionDevice: "txv",
+      ambientC: 35,
+      highKpaGauge: 9500,
+      lowKpaGauge: 3400,
+      liquidLineC: 40,
+      ventC: 8,
+    });
     expect(findings.notes.join(" ")).toMatch(/transcritical/);
     expect(Math.max(...findings.suspects.map((s) => s.confidence))).toBeLessThan(0.6);
     expect(findings.cautions.map((c) => c.id)).toContain("r744_pressure");
   });
 
   it("puts every piece of evidence that moved a suspect into its for/against lists", () => {
-    const findings = diagnose({ refrigerant: "R-134a", expansionDevice: "orifice_tube", ambientC: 24, staticKpaGauge: 660 });
+    const findings = diagnose({
+      refrigerant: "R-134a",
+      expansionDevice: "orifice_tube",
+      ambientC: 24,
+      staticKpaGauge: 660,
+    });
     const air = findings.suspects.find((s) => s.cause === "non_condensables");
-    expect(air?.evidenceFor[0]).toMatch(/^Static pressure 660 kPa gauge is 11[5-7] kPa above saturation at 24\.0 °C/);
-    for (const s of findings.suspects) expect(s.evidenceFor.length + s.evidenceAgainst.length).toBe(s.evidence.length);
-    expect(rank({ refrigerant: "R-134a", expansionDevice: "orifice_tube", ambientC: 24, staticKpaGauge: 660 }, "non_condensables")).toBe(0);
+    expect(air?.evidenceFor[0]).toMatch(
+      /^Static pressure 660 kPa gauge is 11[5-7] kPa above saturation at 24\.0 °C/,
+    );
+    for (const s of findings.suspects)
+      expect(s.evidenceFor.length + s.evidenceAgainst.length).toBe(s.evidence.length);
+    expect(
+      rank(
+        { refrigerant: "R-134a", expansionDevice: "orifice_tube", ambientC: 24, staticKpaGauge: 660 },
+        "non_condensables",
+      ),
+    ).toBe(0);
   });
 });

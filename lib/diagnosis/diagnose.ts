@@ -33,7 +33,8 @@ export interface Findings {
 
 const CAUSE_ORDER = new Map<CauseId, number>(CAUSE_IDS.map((cause, i) => [cause, i]));
 const byStrength = (a: EvidenceItem, b: EvidenceItem) => Math.abs(b.weight) - Math.abs(a.weight);
-const byRank = (a: Suspect, b: Suspect) => b.logOdds - a.logOdds || (CAUSE_ORDER.get(a.cause) ?? 0) - (CAUSE_ORDER.get(b.cause) ?? 0);
+const byRank = (a: Suspect, b: Suspect) =>
+  b.logOdds - a.logOdds || (CAUSE_ORDER.get(a.cause) ?? 0) - (CAUSE_ORDER.get(b.cause) ?? 0);
 const round = (value: number, decimals: number) => Math.round(value * 10 ** decimals) / 10 ** decimals;
 
 /** Rank the likely causes of a cooling complaint. Expects input already accepted by diagnosisInputSchema. */
@@ -52,7 +53,10 @@ export function diagnose(input: DiagnosisInput): Findings {
       return {
         cause: s.cause,
         score: logistic(s.logOdds),
-        confidence: round(readingCoverage(s.cause, extraction.observedGroups) * extraction.confidenceFactor, 3),
+        confidence: round(
+          readingCoverage(s.cause, extraction.observedGroups) * extraction.confidenceFactor,
+          3,
+        ),
         evidenceFor,
         evidenceAgainst,
         logOdds: s.logOdds,

@@ -22,16 +22,25 @@ describe("ENGINE_VERSION", () => {
     LIKELIHOOD_TABLE.forEach((row, index) => {
       const [cause, weight] = Object.entries(row.weights)[0] ?? [];
       if (cause === undefined || weight === undefined) return;
-      const rows = LIKELIHOOD_TABLE.map((r, i) => (i === index ? { ...r, weights: { ...r.weights, [cause]: weight + 0.1 } } : r));
+      const rows = LIKELIHOOD_TABLE.map((r, i) =>
+        i === index ? { ...r, weights: { ...r.weights, [cause]: weight + 0.1 } } : r,
+      );
       expect(scoringTableHash({ ...current, rows }), row.observation).not.toBe(base);
     });
   });
 
   it("changes when a prior or a gate changes, but not when keys are merely reordered", () => {
     const base = scoringTableHash(current);
-    expect(scoringTableHash({ ...current, priors: { ...CAUSE_PRIORS, oil_loss: { ...CAUSE_PRIORS.oil_loss, logOdds: -3.1 } } })).not.toBe(base);
+    expect(
+      scoringTableHash({
+        ...current,
+        priors: { ...CAUSE_PRIORS, oil_loss: { ...CAUSE_PRIORS.oil_loss, logOdds: -3.1 } },
+      }),
+    ).not.toBe(base);
     expect(scoringTableHash({ ...current, gates: RANKING_GATES.slice(1) })).not.toBe(base);
     expect(scoringTableHash({ ...current, grading: { ...GRADING, PURITY_PASS_PCT: 97 } })).not.toBe(base);
-    expect(canonicalJson({ b: 1, a: [2, { d: 3, c: 4 }] })).toBe(canonicalJson({ a: [2, { c: 4, d: 3 }], b: 1 }));
+    expect(canonicalJson({ b: 1, a: [2, { d: 3, c: 4 }] })).toBe(
+      canonicalJson({ a: [2, { c: 4, d: 3 }], b: 1 }),
+    );
   });
 });

@@ -26,7 +26,12 @@ export function fnv1a32(text: string): string {
   return hash.toString(16).padStart(8, "0");
 }
 
-export function scoringTableHash(table: { priors: unknown; rows: unknown; gates: unknown; grading: unknown }): string {
+export function scoringTableHash(table: {
+  priors: unknown;
+  rows: unknown;
+  gates: unknown;
+  grading: unknown;
+}): string {
   return fnv1a32(canonicalJson(table));
 }
 

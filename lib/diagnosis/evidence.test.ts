@@ -20,15 +20,29 @@ describe("static pressure against saturation at ambient", () => {
   });
 
   it("grades the excess in steps and says how far above saturation, in kPa and °C", () => {
-    expect(ids({ ...r134aOrifice, staticKpaGauge: gauge(R134A_SAT_KPA_ABS[25]) + 50 })).toContain("static:slightly_high");
-    expect(ids({ ...r134aOrifice, staticKpaGauge: gauge(R134A_SAT_KPA_ABS[25]) + 100 })).toContain("static:high");
-    const extraction = extractEvidence({ ...r134aOrifice, staticKpaGauge: gauge(R134A_SAT_KPA_ABS[25]) + 160 });
+    expect(ids({ ...r134aOrifice, staticKpaGauge: gauge(R134A_SAT_KPA_ABS[25]) + 50 })).toContain(
+      "static:slightly_high",
+    );
+    expect(ids({ ...r134aOrifice, staticKpaGauge: gauge(R134A_SAT_KPA_ABS[25]) + 100 })).toContain(
+      "static:high",
+    );
+    const extraction = extractEvidence({
+      ...r134aOrifice,
+      staticKpaGauge: gauge(R134A_SAT_KPA_ABS[25]) + 160,
+    });
     const observation = extraction.observations.find((o) => o.id === "static:very_high");
-    expect(observation?.text).toMatch(/^Static pressure 724 kPa gauge is 160 kPa above saturation at 25\.0 °C \(564 kPa gauge\)\.$/);
+    expect(observation?.text).toMatch(
+      /^Static pressure 724 kPa gauge is 160 kPa above saturation at 25\.0 °C \(564 kPa gauge\)\.$/,
+    );
   });
 
   it("uses R-1234yf's own curve (Richter, McLinden & Lemmon 2011: 783.5 kPa abs at 30 °C)", () => {
-    const extraction = extractEvidence({ refrigerant: "R-1234yf", expansionDevice: "txv", ambientC: 30, staticKpaGauge: gauge(R1234YF_SAT_KPA_ABS[30]) + 80 });
+    const extraction = extractEvidence({
+      refrigerant: "R-1234yf",
+      expansionDevice: "txv",
+      ambientC: 30,
+      staticKpaGauge: gauge(R1234YF_SAT_KPA_ABS[30]) + 80,
+    });
     expect(extraction.computed.staticExcessKpa).toBeCloseTo(80, 0);
     expect(extraction.observations.map((o) => o.id)).toContain("static:high");
   });
@@ -41,16 +55,27 @@ describe("static pressure against saturation at ambient", () => {
 
 describe("running pressures, subcooling and superheat", () => {
   it("reads the condensing temperature from the high side (Tillner-Roth & Baehr 1994: 50 °C at 1317.9 kPa abs)", () => {
-    const extraction = extractEvidence({ ...r134aOrifice, ambientC: 30, highKpaGauge: gauge(R134A_SAT_KPA_ABS[50]) });
+    const extraction = extractEvidence({
+      ...r134aOrifice,
+      ambientC: 30,
+      highKpaGauge: gauge(R134A_SAT_KPA_ABS[50]),
+    });
     expect(extraction.computed.condensingC).toBeCloseTo(50, 1);
     expect(extraction.computed.condensingApproachK).toBeCloseTo(20, 1);
     expect(extraction.observations.map((o) => o.id)).toContain("high_side:normal");
   });
 
   it("works out subcooling from the 60 °C saturation point (1681.8 kPa abs, Tillner-Roth & Baehr 1994)", () => {
-    const extraction = extractEvidence({ ...r134aOrifice, ambientC: 35, highKpaGauge: gauge(R134A_SAT_KPA_ABS[60]), liquidLineC: 50 });
+    const extraction = extractEvidence({
+      ...r134aOrifice,
+      ambientC: 35,
+      highKpaGauge: gauge(R134A_SAT_KPA_ABS[60]),
+      liquidLineC: 50,
+    });
     expect(extraction.computed.subcoolingK).toBeCloseTo(10, 1);
-    expect(extraction.observations.find((o) => o.id.startsWith("subcooling:"))?.text).toMatch(/^Subcooling 10\.0 K \(liquid line 50\.0 °C against 60\.0 °C condensing\)/);
+    expect(extraction.observations.find((o) => o.id.startsWith("subcooling:"))?.text).toMatch(
+      /^Subcooling 10\.0 K \(liquid line 50\.0 °C against 60\.0 °C condensing\)/,
+    );
   });
 
   it("judges the same 6 K superheat normal on a TXV system and high on an orifice-tube system (from memory: orifice evaporators run near 0 K)", () => {
@@ -74,7 +99,14 @@ describe("running pressures, subcooling and superheat", () => {
   });
 
   it("says an R-744 high side above the critical pressure is transcritical and lowers confidence instead of failing", () => {
-    const extraction = extractEvidence({ refrigerant: "R-744", expansionDevice: "txv", ambientC: 35, highKpaGauge: 9500, lowKpaGauge: 3400, liquidLineC: 40 });
+    const extraction = extractEvidence({
+      refrigerant: "R-744",
+      expansionDevice: "txv",
+      ambientC: 35,
+      highKpaGauge: 9500,
+      lowKpaGauge: 3400,
+      liquidLineC: 40,
+    });
     expect(extraction.computed.highSideTranscritical).toBe(true);
     expect(extraction.computed.subcoolingK).toBeUndefined();
     expect(extraction.notes.join(" ")).toMatch(/transcritical/);
@@ -85,9 +117,16 @@ describe("running pressures, subcooling and superheat", () => {
 describe("identifier, charge and vent", () => {
   it("fails purity below 98 % and passes at 98 % (SAE J2099 / J2912 pass mark), skipping pressure–temperature checks on a fail", () => {
     expect(ids({ ...r134aOrifice, identifierPurityPct: 98 })).toContain("purity:pass");
-    const failed = extractEvidence({ ...r134aOrifice, identifierPurityPct: 97.9, staticKpaGauge: 800, highKpaGauge: 1500 });
+    const failed = extractEvidence({
+      ...r134aOrifice,
+      identifierPurityPct: 97.9,
+      staticKpaGauge: 800,
+      highKpaGauge: 1500,
+    });
     expect(failed.observations.map((o) => o.id)).toContain("purity:fail");
-    expect(failed.observations.some((o) => o.id.startsWith("static:") || o.id.startsWith("high_side:"))).toBe(false);
+    expect(failed.observations.some((o) => o.id.startsWith("static:") || o.id.startsWith("high_side:"))).toBe(
+      false,
+    );
     expect(failed.notes.join(" ")).toMatch(/pure refrigerant/);
   });
 
@@ -108,7 +147,16 @@ describe("identifier, charge and vent", () => {
 
 describe("symptom sentences", () => {
   it("reports interview answers and check results in readable sentences", () => {
-    const texts = extractEvidence({ ...r134aOrifice, symptoms: ["recent_service_elsewhere", "worse_at_idle", "leak_found"] }).observations.map((o) => o.text);
-    expect(texts).toEqual(expect.arrayContaining(["Reported: A/C was serviced elsewhere recently.", "Reported: cooling worse at idle than at road speed.", "Checked: leak found."]));
+    const texts = extractEvidence({
+      ...r134aOrifice,
+      symptoms: ["recent_service_elsewhere", "worse_at_idle", "leak_found"],
+    }).observations.map((o) => o.text);
+    expect(texts).toEqual(
+      expect.arrayContaining([
+        "Reported: A/C was serviced elsewhere recently.",
+        "Reported: cooling worse at idle than at road speed.",
+        "Checked: leak found.",
+      ]),
+    );
   });
 });

@@ -19,14 +19,21 @@ describe("worked cases", () => {
   });
 
   it("covers every cause twice, both refrigerants and both expansion devices", () => {
-    for (const cause of CAUSE_IDS) expect(WORKED_CASES.filter((c) => c.expectedLeader === cause).length, cause).toBeGreaterThanOrEqual(2);
-    for (const refrigerant of ["R-134a", "R-1234yf"]) expect(WORKED_CASES.some((c) => c.input.refrigerant === refrigerant)).toBe(true);
-    for (const device of ["orifice_tube", "txv"]) expect(WORKED_CASES.some((c) => c.input.expansionDevice === device)).toBe(true);
+    for (const cause of CAUSE_IDS)
+      expect(WORKED_CASES.filter((c) => c.expectedLeader === cause).length, cause).toBeGreaterThanOrEqual(2);
+    for (const refrigerant of ["R-134a", "R-1234yf"])
+      expect(WORKED_CASES.some((c) => c.input.refrigerant === refrigerant)).toBe(true);
+    for (const device of ["orifice_tube", "txv"])
+      expect(WORKED_CASES.some((c) => c.input.expansionDevice === device)).toBe(true);
   });
 
   it("has every side of each known confusion", () => {
     for (const [pair, causes] of Object.entries(PAIRS)) {
-      for (const cause of causes) expect(WORKED_CASES.some((c) => c.pair === pair && c.expectedLeader === cause), `${pair}: ${cause}`).toBe(true);
+      for (const cause of causes)
+        expect(
+          WORKED_CASES.some((c) => c.pair === pair && c.expectedLeader === cause),
+          `${pair}: ${cause}`,
+        ).toBe(true);
     }
   });
 

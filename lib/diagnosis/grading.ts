@@ -17,8 +17,14 @@ export const FALLBACK_EVAPORATING_C = { min: -4, max: 8 } as const;
 // Typical ranges, K (from memory; the vehicle maker's figures win): TXV systems subcool 3–9 K and hold
 // superheat 2–10 K; orifice-tube evaporators flood into the accumulator, so near-zero superheat is normal there
 // (nearZero null: not a separate grade).
-export const SUBCOOLING_K = { txv: { none: 1, low: 3, high: 9, veryHigh: 15 }, orifice_tube: { none: 0.5, low: 2, high: 8, veryHigh: 14 } } as const;
-export const SUPERHEAT_K = { txv: { nearZero: 2, high: 10, veryHigh: 20 }, orifice_tube: { nearZero: null, high: 4, veryHigh: 12 } } as const;
+export const SUBCOOLING_K = {
+  txv: { none: 1, low: 3, high: 9, veryHigh: 15 },
+  orifice_tube: { none: 0.5, low: 2, high: 8, veryHigh: 14 },
+} as const;
+export const SUPERHEAT_K = {
+  txv: { nearZero: 2, high: 10, veryHigh: 20 },
+  orifice_tube: { nearZero: null, high: 4, veryHigh: 12 },
+} as const;
 
 // A static reading under about 70 kPa gauge (10 psig), or under half the saturation pressure at
 // ambient, means next to no refrigerant is left (common practice).

@@ -39,12 +39,18 @@ describe("likelihood table", () => {
   });
 
   it("never lowers non-condensables as the static excess rises (Dalton's law: air adds its partial pressure)", () => {
-    const order = READING_GRADES.static.map((grade) => LIKELIHOOD_TABLE.find((r) => r.observation === `static:${grade}`)?.weights.non_condensables ?? 0);
+    const order = READING_GRADES.static.map(
+      (grade) =>
+        LIKELIHOOD_TABLE.find((r) => r.observation === `static:${grade}`)?.weights.non_condensables ?? 0,
+    );
     for (let i = 1; i < order.length; i++) expect(order[i]).toBeGreaterThanOrEqual(order[i - 1] ?? -Infinity);
   });
 
   it("orders the charge rows as weight demands: overcharge rises and undercharge falls with the recovered mass (TM 5-3805-291-23-1)", () => {
-    const column = (cause: "overcharge" | "undercharge") => READING_GRADES.charge.map((grade) => LIKELIHOOD_TABLE.find((r) => r.observation === `charge:${grade}`)?.weights[cause] ?? 0);
+    const column = (cause: "overcharge" | "undercharge") =>
+      READING_GRADES.charge.map(
+        (grade) => LIKELIHOOD_TABLE.find((r) => r.observation === `charge:${grade}`)?.weights[cause] ?? 0,
+      );
     const over = column("overcharge");
     const under = column("undercharge");
     for (let i = 1; i < over.length; i++) {

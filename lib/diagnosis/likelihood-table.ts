@@ -32,13 +32,20 @@ export interface RankingGate {
 }
 
 const PRIOR_SOURCE = "from memory: rough share of cooling complaints seen in a general repair shop";
-const PRESSURE_SIGNATURES = "Pressure-diagnosis signatures: Apex Tech Nation T-22/8 'Pressure Diagnosis — Reading the Gauge Set'; ASE A7 study flashcards (careeremployer.com); weights common practice";
-const BANDS = "Expected bands: US Army TM 5-3805-291-23-1 WP 0018 Table 1 quick-check pressures; weights common practice";
-const SC_SH = "Subcooling/superheat use: mobile A/C training handout 'A/C System Diagnosis Using Superheat & Sub-Cooling Measurements'; target ranges from memory; weights common practice";
-const STATIC_NCG = "Static P–T check (Dalton's law): SAE J1989/J2211 container NCG procedure as reproduced in TM 5-3810-307-24-1-2 ch. 9; weights common practice";
-const CHARGE = "Charge by weight is the only absolute charge check: TM 5-3805-291-23-1; recovery may leave 18–30 % behind: SAE J2762; weights common practice";
-const IDENTIFIER = "Identifier pass mark 98 %: SAE J2099 / J2912; NCG shown as weight %: SAE J2912; air-% grading from memory";
-const VENT = "Centre-vent 3–8 °C expected: NOLN 'Automotive maintenance' article 1420; warm threshold from memory";
+const PRESSURE_SIGNATURES =
+  "Pressure-diagnosis signatures: Apex Tech Nation T-22/8 'Pressure Diagnosis — Reading the Gauge Set'; ASE A7 study flashcards (careeremployer.com); weights common practice";
+const BANDS =
+  "Expected bands: US Army TM 5-3805-291-23-1 WP 0018 Table 1 quick-check pressures; weights common practice";
+const SC_SH =
+  "Subcooling/superheat use: mobile A/C training handout 'A/C System Diagnosis Using Superheat & Sub-Cooling Measurements'; target ranges from memory; weights common practice";
+const STATIC_NCG =
+  "Static P–T check (Dalton's law): SAE J1989/J2211 container NCG procedure as reproduced in TM 5-3810-307-24-1-2 ch. 9; weights common practice";
+const CHARGE =
+  "Charge by weight is the only absolute charge check: TM 5-3805-291-23-1; recovery may leave 18–30 % behind: SAE J2762; weights common practice";
+const IDENTIFIER =
+  "Identifier pass mark 98 %: SAE J2099 / J2912; NCG shown as weight %: SAE J2912; air-% grading from memory";
+const VENT =
+  "Centre-vent 3–8 °C expected: NOLN 'Automotive maintenance' article 1420; warm threshold from memory";
 
 export const CAUSE_PRIORS: Record<CauseId, CausePrior> = {
   undercharge: { logOdds: -0.6, source: PRIOR_SOURCE },
@@ -56,103 +63,784 @@ export const CAUSE_PRIORS: Record<CauseId, CausePrior> = {
   metering_stuck_open: { logOdds: -3.4, source: PRIOR_SOURCE },
 };
 
+// prettier-ignore -- one row per observation reads as a table in review
 export const LIKELIHOOD_TABLE: readonly LikelihoodRow[] = [
   // High side against the expected band for the ambient
-  { observation: "high_side:very_low", source: PRESSURE_SIGNATURES, weights: { undercharge: 1.5, weak_compressor: 1.3, metering_restriction: 0.8, metering_stuck_open: 0.3, evaporator_icing: 0.3, oil_loss: 0.3, overcharge: -2.0, non_condensables: -2.0, condenser_airflow: -2.0, high_side_restriction: -0.5, no_refrigerant_fault: -1.5 } },
-  { observation: "high_side:low", source: PRESSURE_SIGNATURES, weights: { undercharge: 1.0, weak_compressor: 0.9, metering_restriction: 0.5, metering_stuck_open: 0.4, evaporator_icing: 0.3, overcharge: -1.2, non_condensables: -1.2, condenser_airflow: -1.2, high_side_restriction: -0.3, no_refrigerant_fault: -0.6 } },
-  { observation: "high_side:normal", source: BANDS, weights: { no_refrigerant_fault: 0.8, moisture: 0.3, evaporator_icing: 0.2, metering_stuck_open: 0.2, overcharge: -0.8, non_condensables: -0.8, condenser_airflow: -0.8, undercharge: -0.5, weak_compressor: -0.6, high_side_restriction: -0.2 } },
-  { observation: "high_side:high", source: PRESSURE_SIGNATURES, weights: { overcharge: 1.0, non_condensables: 1.0, condenser_airflow: 1.0, high_side_restriction: 0.7, undercharge: -1.5, weak_compressor: -1.5, metering_stuck_open: -0.3, no_refrigerant_fault: -1.0 } },
-  { observation: "high_side:very_high", source: PRESSURE_SIGNATURES, weights: { overcharge: 1.5, non_condensables: 1.6, condenser_airflow: 1.6, high_side_restriction: 1.0, undercharge: -2.5, weak_compressor: -2.0, metering_stuck_open: -0.5, evaporator_icing: -1.0, moisture: -0.5, no_refrigerant_fault: -2.0 } },
+  {
+    observation: "high_side:very_low",
+    source: PRESSURE_SIGNATURES,
+    weights: {
+      undercharge: 1.5,
+      weak_compressor: 1.3,
+      metering_restriction: 0.8,
+      metering_stuck_open: 0.3,
+      evaporator_icing: 0.3,
+      oil_loss: 0.3,
+      overcharge: -2.0,
+      non_condensables: -2.0,
+      condenser_airflow: -2.0,
+      high_side_restriction: -0.5,
+      no_refrigerant_fault: -1.5,
+    },
+  },
+  {
+    observation: "high_side:low",
+    source: PRESSURE_SIGNATURES,
+    weights: {
+      undercharge: 1.0,
+      weak_compressor: 0.9,
+      metering_restriction: 0.5,
+      metering_stuck_open: 0.4,
+      evaporator_icing: 0.3,
+      overcharge: -1.2,
+      non_condensables: -1.2,
+      condenser_airflow: -1.2,
+      high_side_restriction: -0.3,
+      no_refrigerant_fault: -0.6,
+    },
+  },
+  {
+    observation: "high_side:normal",
+    source: BANDS,
+    weights: {
+      no_refrigerant_fault: 0.8,
+      moisture: 0.3,
+      evaporator_icing: 0.2,
+      metering_stuck_open: 0.2,
+      overcharge: -0.8,
+      non_condensables: -0.8,
+      condenser_airflow: -0.8,
+      undercharge: -0.5,
+      weak_compressor: -0.6,
+      high_side_restriction: -0.2,
+    },
+  },
+  {
+    observation: "high_side:high",
+    source: PRESSURE_SIGNATURES,
+    weights: {
+      overcharge: 1.0,
+      non_condensables: 1.0,
+      condenser_airflow: 1.0,
+      high_side_restriction: 0.7,
+      undercharge: -1.5,
+      weak_compressor: -1.5,
+      metering_stuck_open: -0.3,
+      no_refrigerant_fault: -1.0,
+    },
+  },
+  {
+    observation: "high_side:very_high",
+    source: PRESSURE_SIGNATURES,
+    weights: {
+      overcharge: 1.5,
+      non_condensables: 1.6,
+      condenser_airflow: 1.6,
+      high_side_restriction: 1.0,
+      undercharge: -2.5,
+      weak_compressor: -2.0,
+      metering_stuck_open: -0.5,
+      evaporator_icing: -1.0,
+      moisture: -0.5,
+      no_refrigerant_fault: -2.0,
+    },
+  },
 
   // Low side against the expected band
-  { observation: "low_side:vacuum", source: "Low side near vacuum → restriction: ASE A7 study flashcards (careeremployer.com); moisture freezing at the metering device pulls toward vacuum: 'Frozen Expansion Valve' study note; weights common practice", weights: { metering_restriction: 2.0, moisture: 1.2, high_side_restriction: 1.0, undercharge: 0.6, evaporator_icing: 0.3, overcharge: -2.0, non_condensables: -1.5, condenser_airflow: -1.5, weak_compressor: -2.0, metering_stuck_open: -2.5, no_refrigerant_fault: -2.5 } },
-  { observation: "low_side:very_low", source: PRESSURE_SIGNATURES, weights: { metering_restriction: 1.3, undercharge: 1.0, high_side_restriction: 0.8, evaporator_icing: 1.0, moisture: 0.6, overcharge: -1.5, non_condensables: -1.0, condenser_airflow: -1.0, weak_compressor: -1.5, metering_stuck_open: -2.0, no_refrigerant_fault: -1.5 } },
-  { observation: "low_side:low", source: PRESSURE_SIGNATURES, weights: { undercharge: 0.8, evaporator_icing: 0.6, metering_restriction: 0.5, high_side_restriction: 0.5, moisture: 0.3, overcharge: -1.0, non_condensables: -0.5, condenser_airflow: -0.5, weak_compressor: -1.0, metering_stuck_open: -1.5, no_refrigerant_fault: -0.5 } },
-  { observation: "low_side:normal", source: BANDS, weights: { no_refrigerant_fault: 0.8, non_condensables: 0.2, condenser_airflow: 0.1, moisture: 0.2, undercharge: -0.5, metering_restriction: -1.0, high_side_restriction: -0.5, metering_stuck_open: -0.8, weak_compressor: -0.8, evaporator_icing: -0.5 } },
-  { observation: "low_side:high", source: "Low side high: overcharge, weak compressor (Apex Tech Nation T-22/8); TXV stuck open 'low side high, high side normal' (mobile A/C training manual p. 915); weights common practice", weights: { overcharge: 1.0, metering_stuck_open: 1.4, weak_compressor: 1.2, non_condensables: 0.6, condenser_airflow: 0.7, undercharge: -2.0, metering_restriction: -2.0, high_side_restriction: -1.5, evaporator_icing: -1.5, moisture: -0.5, no_refrigerant_fault: -1.0 } },
+  {
+    observation: "low_side:vacuum",
+    source:
+      "Low side near vacuum → restriction: ASE A7 study flashcards (careeremployer.com); moisture freezing at the metering device pulls toward vacuum: 'Frozen Expansion Valve' study note; weights common practice",
+    weights: {
+      metering_restriction: 2.0,
+      moisture: 1.2,
+      high_side_restriction: 1.0,
+      undercharge: 0.6,
+      evaporator_icing: 0.3,
+      overcharge: -2.0,
+      non_condensables: -1.5,
+      condenser_airflow: -1.5,
+      weak_compressor: -2.0,
+      metering_stuck_open: -2.5,
+      no_refrigerant_fault: -2.5,
+    },
+  },
+  {
+    observation: "low_side:very_low",
+    source: PRESSURE_SIGNATURES,
+    weights: {
+      metering_restriction: 1.3,
+      undercharge: 1.0,
+      high_side_restriction: 0.8,
+      evaporator_icing: 1.0,
+      moisture: 0.6,
+      overcharge: -1.5,
+      non_condensables: -1.0,
+      condenser_airflow: -1.0,
+      weak_compressor: -1.5,
+      metering_stuck_open: -2.0,
+      no_refrigerant_fault: -1.5,
+    },
+  },
+  {
+    observation: "low_side:low",
+    source: PRESSURE_SIGNATURES,
+    weights: {
+      undercharge: 0.8,
+      evaporator_icing: 0.6,
+      metering_restriction: 0.5,
+      high_side_restriction: 0.5,
+      moisture: 0.3,
+      overcharge: -1.0,
+      non_condensables: -0.5,
+      condenser_airflow: -0.5,
+      weak_compressor: -1.0,
+      metering_stuck_open: -1.5,
+      no_refrigerant_fault: -0.5,
+    },
+  },
+  {
+    observation: "low_side:normal",
+    source: BANDS,
+    weights: {
+      no_refrigerant_fault: 0.8,
+      non_condensables: 0.2,
+      condenser_airflow: 0.1,
+      moisture: 0.2,
+      undercharge: -0.5,
+      metering_restriction: -1.0,
+      high_side_restriction: -0.5,
+      metering_stuck_open: -0.8,
+      weak_compressor: -0.8,
+      evaporator_icing: -0.5,
+    },
+  },
+  {
+    observation: "low_side:high",
+    source:
+      "Low side high: overcharge, weak compressor (Apex Tech Nation T-22/8); TXV stuck open 'low side high, high side normal' (mobile A/C training manual p. 915); weights common practice",
+    weights: {
+      overcharge: 1.0,
+      metering_stuck_open: 1.4,
+      weak_compressor: 1.2,
+      non_condensables: 0.6,
+      condenser_airflow: 0.7,
+      undercharge: -2.0,
+      metering_restriction: -2.0,
+      high_side_restriction: -1.5,
+      evaporator_icing: -1.5,
+      moisture: -0.5,
+      no_refrigerant_fault: -1.0,
+    },
+  },
 
   // Absolute compression ratio while running
-  { observation: "lift:close", source: "Weak compressor: high and low side close together (Apex Tech Nation T-22/8); ratio threshold from memory", weights: { weak_compressor: 1.5, metering_stuck_open: 0.3, overcharge: -0.3, undercharge: -0.3, no_refrigerant_fault: -1.0 } },
+  {
+    observation: "lift:close",
+    source:
+      "Weak compressor: high and low side close together (Apex Tech Nation T-22/8); ratio threshold from memory",
+    weights: {
+      weak_compressor: 1.5,
+      metering_stuck_open: 0.3,
+      overcharge: -0.3,
+      undercharge: -0.3,
+      no_refrigerant_fault: -1.0,
+    },
+  },
   { observation: "lift:normal", source: "common practice", weights: { weak_compressor: -0.6 } },
 
   // Subcooling at the condenser outlet
-  { observation: "subcooling:none", source: SC_SH, weights: { undercharge: 1.5, weak_compressor: 0.3, overcharge: -2.0, high_side_restriction: -1.5, metering_restriction: -1.5, non_condensables: -0.5, condenser_airflow: -0.3, no_refrigerant_fault: -1.0 } },
-  { observation: "subcooling:low", source: SC_SH, weights: { undercharge: 0.8, weak_compressor: 0.4, non_condensables: 0.3, condenser_airflow: 0.3, overcharge: -1.0, high_side_restriction: -1.0, metering_restriction: -1.0, no_refrigerant_fault: -0.3 } },
-  { observation: "subcooling:normal", source: SC_SH + "; air gives high head with normal subcooling (EPA 608 study quiz (jeopardylabs.com))", weights: { no_refrigerant_fault: 0.6, non_condensables: 0.4, condenser_airflow: 0.2, undercharge: -0.8, overcharge: -0.5, high_side_restriction: -0.6, metering_restriction: -0.6 } },
-  { observation: "subcooling:high", source: SC_SH, weights: { overcharge: 1.0, high_side_restriction: 1.0, metering_restriction: 1.0, undercharge: -1.5, non_condensables: -0.5, condenser_airflow: -0.2, no_refrigerant_fault: -0.8 } },
-  { observation: "subcooling:very_high", source: SC_SH, weights: { overcharge: 1.4, high_side_restriction: 1.5, metering_restriction: 1.4, undercharge: -2.5, non_condensables: -1.0, condenser_airflow: -0.5, weak_compressor: -0.5, no_refrigerant_fault: -1.5 } },
+  {
+    observation: "subcooling:none",
+    source: SC_SH,
+    weights: {
+      undercharge: 1.5,
+      weak_compressor: 0.3,
+      overcharge: -2.0,
+      high_side_restriction: -1.5,
+      metering_restriction: -1.5,
+      non_condensables: -0.5,
+      condenser_airflow: -0.3,
+      no_refrigerant_fault: -1.0,
+    },
+  },
+  {
+    observation: "subcooling:low",
+    source: SC_SH,
+    weights: {
+      undercharge: 0.8,
+      weak_compressor: 0.4,
+      non_condensables: 0.3,
+      condenser_airflow: 0.3,
+      overcharge: -1.0,
+      high_side_restriction: -1.0,
+      metering_restriction: -1.0,
+      no_refrigerant_fault: -0.3,
+    },
+  },
+  {
+    observation: "subcooling:normal",
+    source: SC_SH + "; air gives high head with normal subcooling (EPA 608 study quiz (jeopardylabs.com))",
+    weights: {
+      no_refrigerant_fault: 0.6,
+      non_condensables: 0.4,
+      condenser_airflow: 0.2,
+      undercharge: -0.8,
+      overcharge: -0.5,
+      high_side_restriction: -0.6,
+      metering_restriction: -0.6,
+    },
+  },
+  {
+    observation: "subcooling:high",
+    source: SC_SH,
+    weights: {
+      overcharge: 1.0,
+      high_side_restriction: 1.0,
+      metering_restriction: 1.0,
+      undercharge: -1.5,
+      non_condensables: -0.5,
+      condenser_airflow: -0.2,
+      no_refrigerant_fault: -0.8,
+    },
+  },
+  {
+    observation: "subcooling:very_high",
+    source: SC_SH,
+    weights: {
+      overcharge: 1.4,
+      high_side_restriction: 1.5,
+      metering_restriction: 1.4,
+      undercharge: -2.5,
+      non_condensables: -1.0,
+      condenser_airflow: -0.5,
+      weak_compressor: -0.5,
+      no_refrigerant_fault: -1.5,
+    },
+  },
 
   // Superheat at the evaporator outlet (grades already account for the expansion device)
-  { observation: "superheat:near_zero", source: "TXV flooding: superheat near zero, suction line cold (mobile A/C training manual p. 915); weights common practice", weights: { metering_stuck_open: 1.8, overcharge: 0.8, evaporator_icing: 0.3, undercharge: -1.5, metering_restriction: -1.5, high_side_restriction: -1.0, moisture: -0.5, no_refrigerant_fault: -0.5 } },
-  { observation: "superheat:normal", source: SC_SH, weights: { no_refrigerant_fault: 0.6, undercharge: -0.5, metering_restriction: -0.8, high_side_restriction: -0.5, metering_stuck_open: -0.8 } },
-  { observation: "superheat:high", source: SC_SH + "; orifice tube: accumulator outlet warmer than inlet suggests undercharge (TM 5-3805-291-23-1)", weights: { undercharge: 1.0, metering_restriction: 1.0, high_side_restriction: 0.8, moisture: 0.6, overcharge: -1.2, metering_stuck_open: -2.0, evaporator_icing: -0.3, no_refrigerant_fault: -0.8 } },
-  { observation: "superheat:very_high", source: SC_SH, weights: { undercharge: 1.4, metering_restriction: 1.6, high_side_restriction: 1.2, moisture: 0.8, overcharge: -2.0, metering_stuck_open: -2.5, evaporator_icing: -0.8, no_refrigerant_fault: -1.5 } },
+  {
+    observation: "superheat:near_zero",
+    source:
+      "TXV flooding: superheat near zero, suction line cold (mobile A/C training manual p. 915); weights common practice",
+    weights: {
+      metering_stuck_open: 1.8,
+      overcharge: 0.8,
+      evaporator_icing: 0.3,
+      undercharge: -1.5,
+      metering_restriction: -1.5,
+      high_side_restriction: -1.0,
+      moisture: -0.5,
+      no_refrigerant_fault: -0.5,
+    },
+  },
+  {
+    observation: "superheat:normal",
+    source: SC_SH,
+    weights: {
+      no_refrigerant_fault: 0.6,
+      undercharge: -0.5,
+      metering_restriction: -0.8,
+      high_side_restriction: -0.5,
+      metering_stuck_open: -0.8,
+    },
+  },
+  {
+    observation: "superheat:high",
+    source:
+      SC_SH +
+      "; orifice tube: accumulator outlet warmer than inlet suggests undercharge (TM 5-3805-291-23-1)",
+    weights: {
+      undercharge: 1.0,
+      metering_restriction: 1.0,
+      high_side_restriction: 0.8,
+      moisture: 0.6,
+      overcharge: -1.2,
+      metering_stuck_open: -2.0,
+      evaporator_icing: -0.3,
+      no_refrigerant_fault: -0.8,
+    },
+  },
+  {
+    observation: "superheat:very_high",
+    source: SC_SH,
+    weights: {
+      undercharge: 1.4,
+      metering_restriction: 1.6,
+      high_side_restriction: 1.2,
+      moisture: 0.8,
+      overcharge: -2.0,
+      metering_stuck_open: -2.5,
+      evaporator_icing: -0.8,
+      no_refrigerant_fault: -1.5,
+    },
+  },
 
   // Static pressure against saturation at ambient. Non-condensables must rise monotonically down this list.
-  { observation: "static:empty", source: "Static near 0 kPa gauge: no refrigerant, find the leak before running (common practice); EU F-gas rule: no refill before repair (Directive 2006/40/EC Art. 7)", weights: { undercharge: 3.0, oil_loss: 0.8, non_condensables: -2.0, overcharge: -3.0, metering_restriction: -1.5, high_side_restriction: -1.5, metering_stuck_open: -1.5, condenser_airflow: -1.5, weak_compressor: -1.5, evaporator_icing: -1.5, no_refrigerant_fault: -3.0 } },
-  { observation: "static:no_liquid", source: STATIC_NCG + "; below saturation means no liquid left (common practice)", weights: { undercharge: 2.0, oil_loss: 0.3, non_condensables: -1.5, overcharge: -2.5, metering_restriction: -0.8, high_side_restriction: -0.8, metering_stuck_open: -0.8, condenser_airflow: -0.5, evaporator_icing: -0.8, no_refrigerant_fault: -2.0 } },
-  { observation: "static:normal", source: STATIC_NCG, weights: { non_condensables: -1.5, contaminated_refrigerant: -0.8, undercharge: -0.3, no_refrigerant_fault: 0.3 } },
-  { observation: "static:slightly_high", source: STATIC_NCG, weights: { non_condensables: 0.9, contaminated_refrigerant: 0.4, undercharge: -0.3, no_refrigerant_fault: -0.3 } },
-  { observation: "static:high", source: STATIC_NCG, weights: { non_condensables: 2.0, contaminated_refrigerant: 0.8, undercharge: -0.3, no_refrigerant_fault: -1.0 } },
-  { observation: "static:very_high", source: STATIC_NCG, weights: { non_condensables: 2.6, contaminated_refrigerant: 1.2, undercharge: -0.3, no_refrigerant_fault: -1.5 } },
+  {
+    observation: "static:empty",
+    source:
+      "Static near 0 kPa gauge: no refrigerant, find the leak before running (common practice); EU F-gas rule: no refill before repair (Directive 2006/40/EC Art. 7)",
+    weights: {
+      undercharge: 3.0,
+      oil_loss: 0.8,
+      non_condensables: -2.0,
+      overcharge: -3.0,
+      metering_restriction: -1.5,
+      high_side_restriction: -1.5,
+      metering_stuck_open: -1.5,
+      condenser_airflow: -1.5,
+      weak_compressor: -1.5,
+      evaporator_icing: -1.5,
+      no_refrigerant_fault: -3.0,
+    },
+  },
+  {
+    observation: "static:no_liquid",
+    source: STATIC_NCG + "; below saturation means no liquid left (common practice)",
+    weights: {
+      undercharge: 2.0,
+      oil_loss: 0.3,
+      non_condensables: -1.5,
+      overcharge: -2.5,
+      metering_restriction: -0.8,
+      high_side_restriction: -0.8,
+      metering_stuck_open: -0.8,
+      condenser_airflow: -0.5,
+      evaporator_icing: -0.8,
+      no_refrigerant_fault: -2.0,
+    },
+  },
+  {
+    observation: "static:normal",
+    source: STATIC_NCG,
+    weights: {
+      non_condensables: -1.5,
+      contaminated_refrigerant: -0.8,
+      undercharge: -0.3,
+      no_refrigerant_fault: 0.3,
+    },
+  },
+  {
+    observation: "static:slightly_high",
+    source: STATIC_NCG,
+    weights: {
+      non_condensables: 0.9,
+      contaminated_refrigerant: 0.4,
+      undercharge: -0.3,
+      no_refrigerant_fault: -0.3,
+    },
+  },
+  {
+    observation: "static:high",
+    source: STATIC_NCG,
+    weights: {
+      non_condensables: 2.0,
+      contaminated_refrigerant: 0.8,
+      undercharge: -0.3,
+      no_refrigerant_fault: -1.0,
+    },
+  },
+  {
+    observation: "static:very_high",
+    source: STATIC_NCG,
+    weights: {
+      non_condensables: 2.6,
+      contaminated_refrigerant: 1.2,
+      undercharge: -0.3,
+      no_refrigerant_fault: -1.5,
+    },
+  },
 
   // Recovered mass against the label charge. Overcharge must rise and undercharge fall monotonically down this list.
-  { observation: "charge:empty", source: CHARGE, weights: { undercharge: 3.0, oil_loss: 0.8, overcharge: -3.5, non_condensables: -1.0, weak_compressor: -2.0, evaporator_icing: -1.5, condenser_airflow: -1.5, high_side_restriction: -1.0, metering_restriction: -1.0, metering_stuck_open: -1.0, no_refrigerant_fault: -3.0 } },
-  { observation: "charge:very_low", source: CHARGE + "; weigh the charge before condemning a compressor (Apex Tech Nation)", weights: { undercharge: 2.2, oil_loss: 0.5, overcharge: -3.0, weak_compressor: -1.5, non_condensables: -0.3, metering_restriction: -1.0, high_side_restriction: -1.0, metering_stuck_open: -1.0, evaporator_icing: -1.0, condenser_airflow: -0.8, no_refrigerant_fault: -2.0 } },
-  { observation: "charge:low", source: CHARGE, weights: { undercharge: 1.0, oil_loss: 0.2, overcharge: -2.5, weak_compressor: -0.3, metering_restriction: -0.3, no_refrigerant_fault: -0.8 } },
-  { observation: "charge:ok", source: CHARGE, weights: { no_refrigerant_fault: 0.8, weak_compressor: 0.8, metering_restriction: 0.5, high_side_restriction: 0.5, metering_stuck_open: 0.4, condenser_airflow: 0.4, evaporator_icing: 0.4, moisture: 0.3, non_condensables: 0.3, undercharge: -2.0, overcharge: -2.0 } },
-  { observation: "charge:high", source: CHARGE, weights: { overcharge: 1.3, undercharge: -2.5, no_refrigerant_fault: -0.8 } },
-  { observation: "charge:very_high", source: CHARGE + "; overcharge often follows a top-off (common practice)", weights: { overcharge: 2.5, undercharge: -3.0, no_refrigerant_fault: -1.5 } },
+  {
+    observation: "charge:empty",
+    source: CHARGE,
+    weights: {
+      undercharge: 3.0,
+      oil_loss: 0.8,
+      overcharge: -3.5,
+      non_condensables: -1.0,
+      weak_compressor: -2.0,
+      evaporator_icing: -1.5,
+      condenser_airflow: -1.5,
+      high_side_restriction: -1.0,
+      metering_restriction: -1.0,
+      metering_stuck_open: -1.0,
+      no_refrigerant_fault: -3.0,
+    },
+  },
+  {
+    observation: "charge:very_low",
+    source: CHARGE + "; weigh the charge before condemning a compressor (Apex Tech Nation)",
+    weights: {
+      undercharge: 2.2,
+      oil_loss: 0.5,
+      overcharge: -3.0,
+      weak_compressor: -1.5,
+      non_condensables: -0.3,
+      metering_restriction: -1.0,
+      high_side_restriction: -1.0,
+      metering_stuck_open: -1.0,
+      evaporator_icing: -1.0,
+      condenser_airflow: -0.8,
+      no_refrigerant_fault: -2.0,
+    },
+  },
+  {
+    observation: "charge:low",
+    source: CHARGE,
+    weights: {
+      undercharge: 1.0,
+      oil_loss: 0.2,
+      overcharge: -2.5,
+      weak_compressor: -0.3,
+      metering_restriction: -0.3,
+      no_refrigerant_fault: -0.8,
+    },
+  },
+  {
+    observation: "charge:ok",
+    source: CHARGE,
+    weights: {
+      no_refrigerant_fault: 0.8,
+      weak_compressor: 0.8,
+      metering_restriction: 0.5,
+      high_side_restriction: 0.5,
+      metering_stuck_open: 0.4,
+      condenser_airflow: 0.4,
+      evaporator_icing: 0.4,
+      moisture: 0.3,
+      non_condensables: 0.3,
+      undercharge: -2.0,
+      overcharge: -2.0,
+    },
+  },
+  {
+    observation: "charge:high",
+    source: CHARGE,
+    weights: { overcharge: 1.3, undercharge: -2.5, no_refrigerant_fault: -0.8 },
+  },
+  {
+    observation: "charge:very_high",
+    source: CHARGE + "; overcharge often follows a top-off (common practice)",
+    weights: { overcharge: 2.5, undercharge: -3.0, no_refrigerant_fault: -1.5 },
+  },
 
   // Refrigerant identifier
-  { observation: "purity:fail", source: IDENTIFIER + "; do not recover into shop equipment, use SAE J2851-type equipment", weights: { contaminated_refrigerant: 4.0, no_refrigerant_fault: -2.0 } },
+  {
+    observation: "purity:fail",
+    source: IDENTIFIER + "; do not recover into shop equipment, use SAE J2851-type equipment",
+    weights: { contaminated_refrigerant: 4.0, no_refrigerant_fault: -2.0 },
+  },
   { observation: "purity:pass", source: IDENTIFIER, weights: { contaminated_refrigerant: -2.5 } },
-  { observation: "air:none", source: IDENTIFIER, weights: { non_condensables: -3.5, contaminated_refrigerant: -0.3 } },
+  {
+    observation: "air:none",
+    source: IDENTIFIER,
+    weights: { non_condensables: -3.5, contaminated_refrigerant: -0.3 },
+  },
   { observation: "air:some", source: IDENTIFIER, weights: { non_condensables: 1.2 } },
-  { observation: "air:high", source: IDENTIFIER, weights: { non_condensables: 2.5, no_refrigerant_fault: -1.0 } },
+  {
+    observation: "air:high",
+    source: IDENTIFIER,
+    weights: { non_condensables: 2.5, no_refrigerant_fault: -1.0 },
+  },
 
   // Centre-vent temperature
-  { observation: "vent:freezing", source: VENT + "; below about 3 °C the evaporator can freeze (NOLN article 1420)", weights: { evaporator_icing: 1.2, moisture: 0.3, undercharge: -1.0, metering_stuck_open: -1.0, no_refrigerant_fault: -0.3 } },
-  { observation: "vent:cold", source: VENT, weights: { no_refrigerant_fault: 1.5, evaporator_icing: 0.2, undercharge: -1.0, metering_restriction: -1.0, high_side_restriction: -1.0, weak_compressor: -1.5, metering_stuck_open: -1.0, overcharge: -0.8, non_condensables: -0.8, condenser_airflow: -0.8, contaminated_refrigerant: -0.5, moisture: -0.3 } },
-  { observation: "vent:cool", source: VENT, weights: { undercharge: 0.3, overcharge: 0.2, condenser_airflow: 0.2, non_condensables: 0.2, moisture: 0.2, no_refrigerant_fault: -0.3 } },
-  { observation: "vent:warm", source: VENT, weights: { undercharge: 0.6, metering_restriction: 0.8, high_side_restriction: 0.6, weak_compressor: 0.8, metering_stuck_open: 0.5, overcharge: 0.4, non_condensables: 0.4, condenser_airflow: 0.4, contaminated_refrigerant: 0.3, no_refrigerant_fault: -2.0 } },
+  {
+    observation: "vent:freezing",
+    source: VENT + "; below about 3 °C the evaporator can freeze (NOLN article 1420)",
+    weights: {
+      evaporator_icing: 1.2,
+      moisture: 0.3,
+      undercharge: -1.0,
+      metering_stuck_open: -1.0,
+      no_refrigerant_fault: -0.3,
+    },
+  },
+  {
+    observation: "vent:cold",
+    source: VENT,
+    weights: {
+      no_refrigerant_fault: 1.5,
+      evaporator_icing: 0.2,
+      undercharge: -1.0,
+      metering_restriction: -1.0,
+      high_side_restriction: -1.0,
+      weak_compressor: -1.5,
+      metering_stuck_open: -1.0,
+      overcharge: -0.8,
+      non_condensables: -0.8,
+      condenser_airflow: -0.8,
+      contaminated_refrigerant: -0.5,
+      moisture: -0.3,
+    },
+  },
+  {
+    observation: "vent:cool",
+    source: VENT,
+    weights: {
+      undercharge: 0.3,
+      overcharge: 0.2,
+      condenser_airflow: 0.2,
+      non_condensables: 0.2,
+      moisture: 0.2,
+      no_refrigerant_fault: -0.3,
+    },
+  },
+  {
+    observation: "vent:warm",
+    source: VENT,
+    weights: {
+      undercharge: 0.6,
+      metering_restriction: 0.8,
+      high_side_restriction: 0.6,
+      weak_compressor: 0.8,
+      metering_stuck_open: 0.5,
+      overcharge: 0.4,
+      non_condensables: 0.4,
+      condenser_airflow: 0.4,
+      contaminated_refrigerant: 0.3,
+      no_refrigerant_fault: -2.0,
+    },
+  },
 
   // System design
-  { observation: "device:orifice_tube", source: "An orifice tube has no moving part to stick open; cycling-clutch orifice systems depend on the cycling switch to stop icing (common practice)", weights: { metering_stuck_open: -1.5, evaporator_icing: 0.3 } },
+  {
+    observation: "device:orifice_tube",
+    source:
+      "An orifice tube has no moving part to stick open; cycling-clutch orifice systems depend on the cycling switch to stop icing (common practice)",
+    weights: { metering_stuck_open: -1.5, evaporator_icing: 0.3 },
+  },
   { observation: "device:txv", source: "common practice", weights: { evaporator_icing: -0.2 } },
 
   // Behaviour reported at the interview
-  { observation: "symptom:high_pressure_cutout", source: PRESSURE_SIGNATURES + "; high-pressure cut-out on overcharge, air, airflow or restriction", weights: { overcharge: 1.0, non_condensables: 1.0, condenser_airflow: 1.2, high_side_restriction: 0.8, undercharge: -1.5, weak_compressor: -1.5, evaporator_icing: -0.5, metering_stuck_open: -0.5, no_refrigerant_fault: -1.5 } },
-  { observation: "symptom:clutch_rapid_cycling", source: "Orifice-tube undercharge: rapid short cycling (TM 5-3805-291-23-1; common practice)", weights: { undercharge: 1.3, metering_restriction: 0.5, high_side_restriction: 0.3, evaporator_icing: -1.0, overcharge: -0.5, no_refrigerant_fault: -0.5 } },
-  { observation: "symptom:clutch_not_cycling", source: "Evaporator icing: clutch fails to cycle off (Your A/C Authority 'Freeze Up')", weights: { evaporator_icing: 1.5, undercharge: -0.5 } },
-  { observation: "symptom:cooling_fades_then_returns", source: "Moisture: cools 5–15 min then warms, repeats ('Frozen Expansion Valve' study note); icing returns after melt (Your A/C Authority)", weights: { moisture: 1.8, evaporator_icing: 1.3, undercharge: 0.2, no_refrigerant_fault: -1.5 } },
-  { observation: "symptom:low_side_swings_to_vacuum", source: "Moisture freezing and thawing at the metering device ('Frozen Expansion Valve' study note)", weights: { moisture: 2.0, metering_restriction: 0.6, evaporator_icing: -0.3, no_refrigerant_fault: -2.0 } },
-  { observation: "symptom:worse_at_idle", source: "Weak cooling at idle, fine at speed → condenser airflow (ASE A7 study flashcards (careeremployer.com))", weights: { condenser_airflow: 1.5, overcharge: 0.5, non_condensables: 0.3, undercharge: 0.3, no_refrigerant_fault: -0.5 } },
-  { observation: "symptom:condenser_fan_not_running", source: "Fan not running → condenser airflow (Apex Tech Nation T-22/8)", weights: { condenser_airflow: 3.0, overcharge: -0.3, non_condensables: -0.3, no_refrigerant_fault: -2.0 } },
-  { observation: "symptom:frost_at_metering_device", source: "Frost at the metering device: restriction or moisture ice (ASE A7 study flashcards (careeremployer.com); 'Frozen Expansion Valve'); frost at evaporator inlet only with low charge (common practice)", weights: { metering_restriction: 1.3, moisture: 1.0, undercharge: 0.5, evaporator_icing: 0.3, high_side_restriction: 0.3, no_refrigerant_fault: -1.0 } },
-  { observation: "symptom:frost_on_liquid_line", source: "Frosted high-pressure liquid line at a restriction (Apex Tech Nation T-22/8)", weights: { high_side_restriction: 2.5, metering_restriction: 0.3, undercharge: -0.5, no_refrigerant_fault: -1.5 } },
-  { observation: "symptom:suction_line_frosted", source: "Flooding evaporator: suction line frosted back to the compressor (mobile A/C training manual p. 915); common practice", weights: { metering_stuck_open: 1.5, overcharge: 0.8, evaporator_icing: 0.8, undercharge: -1.5, metering_restriction: -1.0, no_refrigerant_fault: -0.5 } },
-  { observation: "symptom:gauge_needle_flutter", source: "High-side flutter with air; low-side flutter with compressor valve damage (common practice)", weights: { non_condensables: 0.8, weak_compressor: 1.0, moisture: 0.3, no_refrigerant_fault: -0.5 } },
-  { observation: "symptom:compressor_noise", source: "Compressor failures: about a third lubrication (compressor supplier failure analysis, compressor-intl.com 2005); liquid slugging when flooded (common practice)", weights: { weak_compressor: 1.2, oil_loss: 1.3, overcharge: 0.4, metering_stuck_open: 0.3, no_refrigerant_fault: -0.8 } },
-  { observation: "symptom:moisture_indicator_wet", source: "Moisture indicator colour on the receiver-drier (common practice)", weights: { moisture: 2.5, no_refrigerant_fault: -1.0 } },
-  { observation: "symptom:bubbles_in_sight_glass", source: "Sight glass streams of bubbles with low charge (TM 5-3805-291-23-1); occasional bubbles with air (common practice)", weights: { undercharge: 1.3, non_condensables: 0.5, overcharge: -1.0, no_refrigerant_fault: -0.8 } },
-  { observation: "symptom:oil_residue_at_fitting", source: "Oily residue or dye at the leak point (Apex Tech Nation; common practice)", weights: { undercharge: 1.2, oil_loss: 1.0, no_refrigerant_fault: -0.5 } },
-  { observation: "symptom:oil_pulled_during_recovery", source: "Oil removed at recovery must be added back (TM 5-3810-307-24-1-2 ch. 9); accumulator systems lose oil on fast recovery (common practice)", weights: { oil_loss: 2.0 } },
-  { observation: "symptom:recent_service_elsewhere", source: "Most repeat failures are installer-controllable (compressor supplier failure analysis, compressor-intl.com 2005); common practice", weights: { overcharge: 0.6, non_condensables: 0.6, contaminated_refrigerant: 0.8, moisture: 0.5, oil_loss: 0.4 } },
-  { observation: "symptom:evaporator_airflow_drops", source: "Icing: very cold at first, then airflow falls (Your A/C Authority 'Freeze Up')", weights: { evaporator_icing: 2.0, moisture: 0.8, no_refrigerant_fault: -1.0 } },
-  { observation: "symptom:pressures_equalise_fast", source: "Weak compressor: pressures equalise very fast at shut-off (common practice)", weights: { weak_compressor: 1.5 } },
-  { observation: "symptom:clutch_or_belt_slipping", source: "Slipping clutch or belt: compressor not pumping (Apex Tech Nation; common practice)", weights: { weak_compressor: 1.5, oil_loss: 0.5 } },
-  { observation: "symptom:identifier_flags_hydrocarbon", source: "Identifier must flag hydrocarbons (SAE J2912)", weights: { contaminated_refrigerant: 3.0 } },
-  { observation: "symptom:condenser_fan_running", source: "common practice", weights: { condenser_airflow: -1.0 } },
-  { observation: "symptom:water_spray_drops_head_pressure", source: "Water spray on the condenser drops an airflow-starved head sharply (common practice)", weights: { condenser_airflow: 2.0, overcharge: -0.3, high_side_restriction: -0.5 } },
-  { observation: "symptom:water_spray_no_change", source: "common practice", weights: { condenser_airflow: -2.0, overcharge: 0.5, non_condensables: 0.5, high_side_restriction: 0.8 } },
-  { observation: "symptom:low_side_steady", source: "Moisture makes the low side swing; icing keeps it steadily low ('Frozen Expansion Valve'; Your A/C Authority)", weights: { moisture: -2.0, evaporator_icing: 0.5 } },
-  { observation: "symptom:txv_bulb_test_responds", source: "TXV bulb warm/chill test (mobile A/C training manual p. 915)", weights: { metering_stuck_open: -2.0, metering_restriction: -1.5 } },
-  { observation: "symptom:txv_bulb_test_no_response", source: "TXV bulb warm/chill test (mobile A/C training manual p. 915)", weights: { metering_stuck_open: 1.5, metering_restriction: 1.5 } },
-  { observation: "symptom:liquid_line_temperature_drop", source: "Sharp temperature drop at a high-side restriction (Apex Tech Nation T-22/8; common practice)", weights: { high_side_restriction: 2.5, metering_restriction: -0.3, undercharge: -0.5 } },
-  { observation: "symptom:liquid_line_even_temperature", source: "common practice", weights: { high_side_restriction: -2.0 } },
-  { observation: "symptom:leak_found", source: "Leak detection per SAE J2791/J2913 (electronic), J2297 (dye), J2970 (tracer gas); air enters through low-side leaks in vacuum (common practice)", weights: { undercharge: 2.0, oil_loss: 0.5, non_condensables: 0.3, moisture: 0.3, no_refrigerant_fault: -1.5 } },
-  { observation: "symptom:no_leak_found", source: "Leak detection at 4 g/yr sensitivity (SAE J2791/J2913); common practice", weights: { undercharge: -1.0 } },
+  {
+    observation: "symptom:high_pressure_cutout",
+    source: PRESSURE_SIGNATURES + "; high-pressure cut-out on overcharge, air, airflow or restriction",
+    weights: {
+      overcharge: 1.0,
+      non_condensables: 1.0,
+      condenser_airflow: 1.2,
+      high_side_restriction: 0.8,
+      undercharge: -1.5,
+      weak_compressor: -1.5,
+      evaporator_icing: -0.5,
+      metering_stuck_open: -0.5,
+      no_refrigerant_fault: -1.5,
+    },
+  },
+  {
+    observation: "symptom:clutch_rapid_cycling",
+    source: "Orifice-tube undercharge: rapid short cycling (TM 5-3805-291-23-1; common practice)",
+    weights: {
+      undercharge: 1.3,
+      metering_restriction: 0.5,
+      high_side_restriction: 0.3,
+      evaporator_icing: -1.0,
+      overcharge: -0.5,
+      no_refrigerant_fault: -0.5,
+    },
+  },
+  {
+    observation: "symptom:clutch_not_cycling",
+    source: "Evaporator icing: clutch fails to cycle off (Your A/C Authority 'Freeze Up')",
+    weights: { evaporator_icing: 1.5, undercharge: -0.5 },
+  },
+  {
+    observation: "symptom:cooling_fades_then_returns",
+    source:
+      "Moisture: cools 5–15 min then warms, repeats ('Frozen Expansion Valve' study note); icing returns after melt (Your A/C Authority)",
+    weights: { moisture: 1.8, evaporator_icing: 1.3, undercharge: 0.2, no_refrigerant_fault: -1.5 },
+  },
+  {
+    observation: "symptom:low_side_swings_to_vacuum",
+    source: "Moisture freezing and thawing at the metering device ('Frozen Expansion Valve' study note)",
+    weights: { moisture: 2.0, metering_restriction: 0.6, evaporator_icing: -0.3, no_refrigerant_fault: -2.0 },
+  },
+  {
+    observation: "symptom:worse_at_idle",
+    source:
+      "Weak cooling at idle, fine at speed → condenser airflow (ASE A7 study flashcards (careeremployer.com))",
+    weights: {
+      condenser_airflow: 1.5,
+      overcharge: 0.5,
+      non_condensables: 0.3,
+      undercharge: 0.3,
+      no_refrigerant_fault: -0.5,
+    },
+  },
+  {
+    observation: "symptom:condenser_fan_not_running",
+    source: "Fan not running → condenser airflow (Apex Tech Nation T-22/8)",
+    weights: { condenser_airflow: 3.0, overcharge: -0.3, non_condensables: -0.3, no_refrigerant_fault: -2.0 },
+  },
+  {
+    observation: "symptom:frost_at_metering_device",
+    source:
+      "Frost at the metering device: restriction or moisture ice (ASE A7 study flashcards (careeremployer.com); 'Frozen Expansion Valve'); frost at evaporator inlet only with low charge (common practice)",
+    weights: {
+      metering_restriction: 1.3,
+      moisture: 1.0,
+      undercharge: 0.5,
+      evaporator_icing: 0.3,
+      high_side_restriction: 0.3,
+      no_refrigerant_fault: -1.0,
+    },
+  },
+  {
+    observation: "symptom:frost_on_liquid_line",
+    source: "Frosted high-pressure liquid line at a restriction (Apex Tech Nation T-22/8)",
+    weights: {
+      high_side_restriction: 2.5,
+      metering_restriction: 0.3,
+      undercharge: -0.5,
+      no_refrigerant_fault: -1.5,
+    },
+  },
+  {
+    observation: "symptom:suction_line_frosted",
+    source:
+      "Flooding evaporator: suction line frosted back to the compressor (mobile A/C training manual p. 915); common practice",
+    weights: {
+      metering_stuck_open: 1.5,
+      overcharge: 0.8,
+      evaporator_icing: 0.8,
+      undercharge: -1.5,
+      metering_restriction: -1.0,
+      no_refrigerant_fault: -0.5,
+    },
+  },
+  {
+    observation: "symptom:gauge_needle_flutter",
+    source: "High-side flutter with air; low-side flutter with compressor valve damage (common practice)",
+    weights: { non_condensables: 0.8, weak_compressor: 1.0, moisture: 0.3, no_refrigerant_fault: -0.5 },
+  },
+  {
+    observation: "symptom:compressor_noise",
+    source:
+      "Compressor failures: about a third lubrication (compressor supplier failure analysis, compressor-intl.com 2005); liquid slugging when flooded (common practice)",
+    weights: {
+      weak_compressor: 1.2,
+      oil_loss: 1.3,
+      overcharge: 0.4,
+      metering_stuck_open: 0.3,
+      no_refrigerant_fault: -0.8,
+    },
+  },
+  {
+    observation: "symptom:moisture_indicator_wet",
+    source: "Moisture indicator colour on the receiver-drier (common practice)",
+    weights: { moisture: 2.5, no_refrigerant_fault: -1.0 },
+  },
+  {
+    observation: "symptom:bubbles_in_sight_glass",
+    source:
+      "Sight glass streams of bubbles with low charge (TM 5-3805-291-23-1); occasional bubbles with air (common practice)",
+    weights: { undercharge: 1.3, non_condensables: 0.5, overcharge: -1.0, no_refrigerant_fault: -0.8 },
+  },
+  {
+    observation: "symptom:oil_residue_at_fitting",
+    source: "Oily residue or dye at the leak point (Apex Tech Nation; common practice)",
+    weights: { undercharge: 1.2, oil_loss: 1.0, no_refrigerant_fault: -0.5 },
+  },
+  {
+    observation: "symptom:oil_pulled_during_recovery",
+    source:
+      "Oil removed at recovery must be added back (TM 5-3810-307-24-1-2 ch. 9); accumulator systems lose oil on fast recovery (common practice)",
+    weights: { oil_loss: 2.0 },
+  },
+  {
+    observation: "symptom:recent_service_elsewhere",
+    source:
+      "Most repeat failures are installer-controllable (compressor supplier failure analysis, compressor-intl.com 2005); common practice",
+    weights: {
+      overcharge: 0.6,
+      non_condensables: 0.6,
+      contaminated_refrigerant: 0.8,
+      moisture: 0.5,
+      oil_loss: 0.4,
+    },
+  },
+  {
+    observation: "symptom:evaporator_airflow_drops",
+    source: "Icing: very cold at first, then airflow falls (Your A/C Authority 'Freeze Up')",
+    weights: { evaporator_icing: 2.0, moisture: 0.8, no_refrigerant_fault: -1.0 },
+  },
+  {
+    observation: "symptom:pressures_equalise_fast",
+    source: "Weak compressor: pressures equalise very fast at shut-off (common practice)",
+    weights: { weak_compressor: 1.5 },
+  },
+  {
+    observation: "symptom:clutch_or_belt_slipping",
+    source: "Slipping clutch or belt: compressor not pumping (Apex Tech Nation; common practice)",
+    weights: { weak_compressor: 1.5, oil_loss: 0.5 },
+  },
+  {
+    observation: "symptom:identifier_flags_hydrocarbon",
+    source: "Identifier must flag hydrocarbons (SAE J2912)",
+    weights: { contaminated_refrigerant: 3.0 },
+  },
+  {
+    observation: "symptom:condenser_fan_running",
+    source: "common practice",
+    weights: { condenser_airflow: -1.0 },
+  },
+  {
+    observation: "symptom:water_spray_drops_head_pressure",
+    source: "Water spray on the condenser drops an airflow-starved head sharply (common practice)",
+    weights: { condenser_airflow: 2.0, overcharge: -0.3, high_side_restriction: -0.5 },
+  },
+  {
+    observation: "symptom:water_spray_no_change",
+    source: "common practice",
+    weights: { condenser_airflow: -2.0, overcharge: 0.5, non_condensables: 0.5, high_side_restriction: 0.8 },
+  },
+  {
+    observation: "symptom:low_side_steady",
+    source:
+      "Moisture makes the low side swing; icing keeps it steadily low ('Frozen Expansion Valve'; Your A/C Authority)",
+    weights: { moisture: -2.0, evaporator_icing: 0.5 },
+  },
+  {
+    observation: "symptom:txv_bulb_test_responds",
+    source: "TXV bulb warm/chill test (mobile A/C training manual p. 915)",
+    weights: { metering_stuck_open: -2.0, metering_restriction: -1.5 },
+  },
+  {
+    observation: "symptom:txv_bulb_test_no_response",
+    source: "TXV bulb warm/chill test (mobile A/C training manual p. 915)",
+    weights: { metering_stuck_open: 1.5, metering_restriction: 1.5 },
+  },
+  {
+    observation: "symptom:liquid_line_temperature_drop",
+    source: "Sharp temperature drop at a high-side restriction (Apex Tech Nation T-22/8; common practice)",
+    weights: { high_side_restriction: 2.5, metering_restriction: -0.3, undercharge: -0.5 },
+  },
+  {
+    observation: "symptom:liquid_line_even_temperature",
+    source: "common practice",
+    weights: { high_side_restriction: -2.0 },
+  },
+  {
+    observation: "symptom:leak_found",
+    source:
+      "Leak detection per SAE J2791/J2913 (electronic), J2297 (dye), J2970 (tracer gas); air enters through low-side leaks in vacuum (common practice)",
+    weights: {
+      undercharge: 2.0,
+      oil_loss: 0.5,
+      non_condensables: 0.3,
+      moisture: 0.3,
+      no_refrigerant_fault: -1.5,
+    },
+  },
+  {
+    observation: "symptom:no_leak_found",
+    source: "Leak detection at 4 g/yr sensitivity (SAE J2791/J2913); common practice",
+    weights: { undercharge: -1.0 },
+  },
 ];
 
 export const RANKING_GATES: readonly RankingGate[] = [
@@ -160,14 +848,17 @@ export const RANKING_GATES: readonly RankingGate[] = [
     when: ["purity:fail", "symptom:identifier_flags_hydrocarbon"],
     leader: "contaminated_refrigerant",
     marginLogOdds: 0.5,
-    reason: "The refrigerant failed identification: it must be dealt with before any other repair, and pressure–temperature checks are not valid on a mix.",
-    source: "SAE J2099 (≥98 % pure to recycle), SAE J2912 identifiers; identify before recovery (SAE J2843 equipment rules)",
+    reason:
+      "The refrigerant failed identification: it must be dealt with before any other repair, and pressure–temperature checks are not valid on a mix.",
+    source:
+      "SAE J2099 (≥98 % pure to recycle), SAE J2912 identifiers; identify before recovery (SAE J2843 equipment rules)",
   },
   {
     when: ["static:empty", "charge:empty"],
     leader: "undercharge",
     marginLogOdds: 0.5,
     reason: "The system is empty: find and repair the leak before running any test.",
-    source: "common practice; EU: no refill after an abnormal leak until repaired (Directive 2006/40/EC Art. 7)",
+    source:
+      "common practice; EU: no refill after an abnormal leak until repaired (Directive 2006/40/EC Art. 7)",
   },
 ];

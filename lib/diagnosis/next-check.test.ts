@@ -6,20 +6,39 @@ import { expectedShift } from "./next-check";
 describe("expectedShift", () => {
   it("is zero for a check whose results weigh both suspects alike", () => {
     // static:normal and static:slightly_high move neither overcharge nor condenser airflow.
-    expect(expectedShift([["static:normal"], ["static:slightly_high"]], "overcharge", "condenser_airflow")).toBe(0);
+    expect(
+      expectedShift([["static:normal"], ["static:slightly_high"]], "overcharge", "condenser_airflow"),
+    ).toBe(0);
   });
 
   it("equals the chance-weighted gap for a two-result check, by hand", () => {
     // condenser_fan_not_running: airflow +3.0, overcharge −0.3; condenser_fan_running: airflow −1.0, overcharge 0.
-    const pAirflow = [Math.exp(3) / (Math.exp(3) + Math.exp(-1)), Math.exp(-1) / (Math.exp(3) + Math.exp(-1))];
+    const pAirflow = [
+      Math.exp(3) / (Math.exp(3) + Math.exp(-1)),
+      Math.exp(-1) / (Math.exp(3) + Math.exp(-1)),
+    ];
     const pOvercharge = [Math.exp(-0.3) / (Math.exp(-0.3) + 1), 1 / (Math.exp(-0.3) + 1)];
-    const expected = (0.5 * (pAirflow[0] ?? 0) + 0.5 * (pOvercharge[0] ?? 0)) * 3.3 + (0.5 * (pAirflow[1] ?? 0) + 0.5 * (pOvercharge[1] ?? 0)) * 1.0;
-    expect(expectedShift([["symptom:condenser_fan_not_running"], ["symptom:condenser_fan_running"]], "condenser_airflow", "overcharge")).toBeCloseTo(expected, 12);
+    const expected =
+      (0.5 * (pAirflow[0] ?? 0) + 0.5 * (pOvercharge[0] ?? 0)) * 3.3 +
+      (0.5 * (pAirflow[1] ?? 0) + 0.5 * (pOvercharge[1] ?? 0)) * 1.0;
+    expect(
+      expectedShift(
+        [["symptom:condenser_fan_not_running"], ["symptom:condenser_fan_running"]],
+        "condenser_airflow",
+        "overcharge",
+      ),
+    ).toBeCloseTo(expected, 12);
   });
 });
 
 describe("chooseNextCheck through diagnose", () => {
-  const highHead = { refrigerant: "R-134a", expansionDevice: "orifice_tube", ambientC: 30, highKpaGauge: 1900, lowKpaGauge: 320 } as const;
+  const highHead = {
+    refrigerant: "R-134a",
+    expansionDevice: "orifice_tube",
+    ambientC: 30,
+    highKpaGauge: 1900,
+    lowKpaGauge: 320,
+  } as const;
 
   it("never suggests a check whose result is already in the input", () => {
     const steps: DiagnosisInput[] = [
@@ -49,7 +68,15 @@ describe("chooseNextCheck through diagnose", () => {
       labelChargeG: 650,
       recoveredChargeG: 640,
       ventC: 14,
-      symptoms: ["suction_line_frosted", "condenser_fan_running", "water_spray_no_change", "low_side_steady", "txv_bulb_test_no_response", "liquid_line_even_temperature", "no_leak_found"],
+      symptoms: [
+        "suction_line_frosted",
+        "condenser_fan_running",
+        "water_spray_no_change",
+        "low_side_steady",
+        "txv_bulb_test_no_response",
+        "liquid_line_even_temperature",
+        "no_leak_found",
+      ],
     });
     expect(everything.suspects[0]?.cause).toBe("metering_stuck_open");
     expect(everything.nextCheck.check).toBe("confirm");

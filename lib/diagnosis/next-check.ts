@@ -19,27 +19,43 @@ const MIN_USEFUL_SHIFT = 0.05;
 
 /** What settles each cause once nothing cheaper is left (signature table "confirming test" column). */
 export const CONFIRMING_STEP: Record<CauseId, string> = {
-  overcharge: "Recover the charge, weigh it against the label, then evacuate and recharge by weight to the label charge.",
-  undercharge: "Repair the leak, replace the drier or accumulator if the system was open or wet, evacuate, prove a vacuum hold, then recharge by weight to the label charge.",
-  non_condensables: "Recover the charge (the machine purges the air), find where air entered, evacuate for at least 30 minutes and recharge by weight.",
-  moisture: "Recover, replace the receiver-drier or accumulator, evacuate deeply (repeat if needed), find where moisture entered, and recharge by weight.",
-  metering_restriction: "Recover and inspect the orifice tube or expansion valve and its screen; metal debris means compressor wear, so flush and replace parts to the supplier's conditions.",
-  high_side_restriction: "Inspect the condenser, drier and liquid line for damage or a blocked passage; recover, replace the restricted part and flush if there is debris.",
-  metering_stuck_open: "Check the expansion-valve bulb's clamp and insulation; if it is secure and the valve still floods, replace the valve and the receiver-drier.",
-  condenser_airflow: "Repair the fan circuit or clear the condenser face and air seals, then repeat the running test at idle.",
-  weak_compressor: "With the charge confirmed by weight, check the clutch air gap, belt and displacement control before condemning the compressor.",
-  evaporator_icing: "Check the cabin filter and blower speed, then confirm the cycling switch or evaporator sensor opens at the right point.",
-  contaminated_refrigerant: "Recover with dedicated contaminated-refrigerant equipment (SAE J2851 type) or into a separate labelled cylinder, then evacuate and recharge with new refrigerant by weight.",
-  oil_loss: "Recover, measure the oil removed and restore the system's oil to the maker's quantity and type; check the compressor for damage.",
-  no_refrigerant_fault: "Check the cabin side: blend-door and recirculation operation, blower speed, cabin filter and heater-valve shut-off.",
+  overcharge:
+    "Recover the charge, weigh it against the label, then evacuate and recharge by weight to the label charge.",
+  undercharge:
+    "Repair the leak, replace the drier or accumulator if the system was open or wet, evacuate, prove a vacuum hold, then recharge by weight to the label charge.",
+  non_condensables:
+    "Recover the charge (the machine purges the air), find where air entered, evacuate for at least 30 minutes and recharge by weight.",
+  moisture:
+    "Recover, replace the receiver-drier or accumulator, evacuate deeply (repeat if needed), find where moisture entered, and recharge by weight.",
+  metering_restriction:
+    "Recover and inspect the orifice tube or expansion valve and its screen; metal debris means compressor wear, so flush and replace parts to the supplier's conditions.",
+  high_side_restriction:
+    "Inspect the condenser, drier and liquid line for damage or a blocked passage; recover, replace the restricted part and flush if there is debris.",
+  metering_stuck_open:
+    "Check the expansion-valve bulb's clamp and insulation; if it is secure and the valve still floods, replace the valve and the receiver-drier.",
+  condenser_airflow:
+    "Repair the fan circuit or clear the condenser face and air seals, then repeat the running test at idle.",
+  weak_compressor:
+    "With the charge confirmed by weight, check the clutch air gap, belt and displacement control before condemning the compressor.",
+  evaporator_icing:
+    "Check the cabin filter and blower speed, then confirm the cycling switch or evaporator sensor opens at the right point.",
+  contaminated_refrigerant:
+    "Recover with dedicated contaminated-refrigerant equipment (SAE J2851 type) or into a separate labelled cylinder, then evacuate and recharge with new refrigerant by weight.",
+  oil_loss:
+    "Recover, measure the oil removed and restore the system's oil to the maker's quantity and type; check the compressor for damage.",
+  no_refrigerant_fault:
+    "Check the cabin side: blend-door and recirculation operation, blower speed, cabin filter and heater-valve shut-off.",
 };
-
 
 /**
  * Expected |change| in (log-odds A − log-odds B) over a check's outcomes. An outcome's chance under a
  * cause is taken ∝ exp(its weight) (a likelihood ratio against an even background), averaged over A and B.
  */
-export function expectedShift(outcomes: readonly (readonly ObservationId[])[], a: CauseId, b: CauseId): number {
+export function expectedShift(
+  outcomes: readonly (readonly ObservationId[])[],
+  a: CauseId,
+  b: CauseId,
+): number {
   const ia = causeIndex(a);
   const ib = causeIndex(b);
   let normA = 0;
@@ -58,26 +74,55 @@ export function expectedShift(outcomes: readonly (readonly ObservationId[])[], a
   return expected;
 }
 
-export function chooseNextCheck(ctx: CheckContext, leaders: readonly CauseId[], systemEmpty: boolean): NextCheck {
+export function chooseNextCheck(
+  ctx: CheckContext,
+  leaders: readonly CauseId[],
+  systemEmpty: boolean,
+): NextCheck {
   const [first, second] = leaders;
   if (first === undefined) throw new Error("chooseNextCheck needs at least one suspect");
   if (ctx.mixed) {
-    return { check: "confirm", instruction: CONFIRMING_STEP.contaminated_refrigerant, reason: "The refrigerant failed identification: deal with it before any further test.", separates: ["contaminated_refrigerant"], expectedShiftLogOdds: 0 };
+    return {
+      check: "confirm",
+      instruction: CONFIRMING_STEP.contaminated_refrigerant,
+      reason: "The refrigerant failed identification: deal with it before any further test.",
+      separates: ["contaminated_refrigerant"],
+      expectedShiftLogOdds: 0,
+    };
   }
   const leak = CHECKS.find((c) => c.id === "leak_test");
   if (systemEmpty && leak && leak.available(ctx)) {
-    return { check: "leak_test", instruction: leak.instruction, reason: "The system is empty: the leak must be found and repaired before any running test.", separates: [first], expectedShiftLogOdds: 0 };
+    return {
+      check: "leak_test",
+      instruction: leak.instruction,
+      reason: "The system is empty: the leak must be found and repaired before any running test.",
+      separates: [first],
+      expectedShiftLogOdds: 0,
+    };
   }
   if (second !== undefined) {
     let best: { id: CheckId; instruction: string; shift: number } | null = null;
     for (const check of CHECKS) {
       if (!check.available(ctx)) continue;
       const shift = expectedShift(check.outcomes(ctx), first, second);
-      if (shift > MIN_USEFUL_SHIFT && (best === null || shift > best.shift + 1e-9)) best = { id: check.id, instruction: check.instruction, shift };
+      if (shift > MIN_USEFUL_SHIFT && (best === null || shift > best.shift + 1e-9))
+        best = { id: check.id, instruction: check.instruction, shift };
     }
     if (best) {
-      return { check: best.id, instruction: best.instruction, reason: `Best separates ${CAUSE_SHORT_NAMES[first]} from ${CAUSE_SHORT_NAMES[second]}.`, separates: [first, second], expectedShiftLogOdds: best.shift };
+      return {
+        check: best.id,
+        instruction: best.instruction,
+        reason: `Best separates ${CAUSE_SHORT_NAMES[first]} from ${CAUSE_SHORT_NAMES[second]}.`,
+        separates: [first, second],
+        expectedShiftLogOdds: best.shift,
+      };
     }
   }
-  return { check: "confirm", instruction: CONFIRMING_STEP[first], reason: `No remaining check separates the leading suspects; confirm ${CAUSE_SHORT_NAMES[first]} directly.`, separates: [first], expectedShiftLogOdds: 0 };
+  return {
+    check: "confirm",
+    instruction: CONFIRMING_STEP[first],
+    reason: `No remaining check separates the leading suspects; confirm ${CAUSE_SHORT_NAMES[first]} directly.`,
+    separates: [first],
+    expectedShiftLogOdds: 0,
+  };
 }

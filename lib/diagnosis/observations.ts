@@ -41,6 +41,9 @@ export function groupOf(observation: ObservationId): string {
   return observation.slice(0, observation.indexOf(":"));
 }
 
-export function readingObservation<G extends ReadingGroup>(group: G, grade: (typeof READING_GRADES)[G][number]): ReadingObservationId {
+export function readingObservation<G extends ReadingGroup>(
+  group: G,
+  grade: (typeof READING_GRADES)[G][number],
+): ReadingObservationId {
   return `${group}:${grade}` as ReadingObservationId;
 }

@@ -18,7 +18,9 @@ describe("diagnosisInputSchema", () => {
   });
 
   it("rejects a gauge vacuum deeper than the local atmosphere at altitude (ASHRAE Fundamentals ch. 1 standard atmosphere: about 79.5 kPa at 2,000 m)", () => {
-    expect(messages({ ...base, altitudeM: 2000, lowKpaGauge: -90 }).join()).toMatch(/deeper than the local atmosphere/);
+    expect(messages({ ...base, altitudeM: 2000, lowKpaGauge: -90 }).join()).toMatch(
+      /deeper than the local atmosphere/,
+    );
     expect(diagnosisInputSchema.safeParse({ ...base, altitudeM: 2000, lowKpaGauge: -79 }).success).toBe(true);
   });
 
@@ -35,7 +37,9 @@ describe("diagnosisInputSchema", () => {
 
   it("rejects HFC pressures past the relief-valve range but allows R-744 high sides (from memory: CO2 high sides run to ~13 MPa)", () => {
     expect(messages({ ...base, highKpaGauge: 6000 })[0]).toMatch(/above what a R-134a system can hold/);
-    expect(diagnosisInputSchema.safeParse({ ...base, refrigerant: "R-744", highKpaGauge: 11000 }).success).toBe(true);
+    expect(
+      diagnosisInputSchema.safeParse({ ...base, refrigerant: "R-744", highKpaGauge: 11000 }).success,
+    ).toBe(true);
   });
 
   it("rejects a high side reading well below the low side (hoses swapped) and a recovered mass far above the label", () => {

@@ -25,23 +25,60 @@ const tempC = (what: string, minC: number, maxC: number) =>
 
 export const diagnosisInputSchema = z
   .object({
-    refrigerant: z.enum(["R-134a", "R-1234yf", "R-744"], { error: "refrigerant must be R-134a, R-1234yf or R-744" }),
-    expansionDevice: z.enum(["orifice_tube", "txv"], { error: "expansion device must be orifice_tube or txv" }),
+    refrigerant: z.enum(["R-134a", "R-1234yf", "R-744"], {
+      error: "refrigerant must be R-134a, R-1234yf or R-744",
+    }),
+    expansionDevice: z.enum(["orifice_tube", "txv"], {
+      error: "expansion device must be orifice_tube or txv",
+    }),
     ambientC: tempC("ambient temperature", -30, 60),
-    relativeHumidityPct: z.number().finite().min(0, { error: "relative humidity must be 0–100 %" }).max(100, { error: "relative humidity must be 0–100 %" }).optional(),
-    altitudeM: z.number().finite().min(-500, { error: "altitude below −500 m is not plausible" }).max(5000, { error: "altitude above 5,000 m is not plausible" }).optional(),
+    relativeHumidityPct: z
+      .number()
+      .finite()
+      .min(0, { error: "relative humidity must be 0–100 %" })
+      .max(100, { error: "relative humidity must be 0–100 %" })
+      .optional(),
+    altitudeM: z
+      .number()
+      .finite()
+      .min(-500, { error: "altitude below −500 m is not plausible" })
+      .max(5000, { error: "altitude above 5,000 m is not plausible" })
+      .optional(),
     staticKpaGauge: gaugeKpa("static pressure").optional(),
     highKpaGauge: gaugeKpa("high-side pressure").optional(),
     lowKpaGauge: gaugeKpa("low-side pressure").optional(),
     liquidLineC: tempC("liquid-line temperature", -40, 110).optional(),
     suctionLineC: tempC("suction-line temperature", -50, 80).optional(),
     ventC: tempC("vent temperature", -30, 60).optional(),
-    labelChargeG: z.number().finite().positive({ error: "label charge must be above 0 g" }).max(5000, { error: "label charge above 5,000 g is not a light-vehicle system" }).optional(),
-    recoveredChargeG: z.number().finite().min(0, { error: "recovered mass cannot be negative" }).max(6000, { error: "recovered mass above 6,000 g is not plausible" }).optional(),
-    identifierPurityPct: z.number().finite().min(0, { error: "purity must be 0–100 %" }).max(100, { error: "purity must be 0–100 %" }).optional(),
-    identifierAirPct: z.number().finite().min(0, { error: "air must be 0–100 %" }).max(100, { error: "air must be 0–100 %" }).optional(),
+    labelChargeG: z
+      .number()
+      .finite()
+      .positive({ error: "label charge must be above 0 g" })
+      .max(5000, { error: "label charge above 5,000 g is not a light-vehicle system" })
+      .optional(),
+    recoveredChargeG: z
+      .number()
+      .finite()
+      .min(0, { error: "recovered mass cannot be negative" })
+      .max(6000, { error: "recovered mass above 6,000 g is not plausible" })
+      .optional(),
+    identifierPurityPct: z
+      .number()
+      .finite()
+      .min(0, { error: "purity must be 0–100 %" })
+      .max(100, { error: "purity must be 0–100 %" })
+      .optional(),
+    identifierAirPct: z
+      .number()
+      .finite()
+      .min(0, { error: "air must be 0–100 %" })
+      .max(100, { error: "air must be 0–100 %" })
+      .optional(),
     electricCompressor: z.boolean().optional(),
-    symptoms: z.array(z.enum(SYMPTOM_IDS, { error: "unknown symptom id" })).max(SYMPTOM_IDS.length * 2).optional(),
+    symptoms: z
+      .array(z.enum(SYMPTOM_IDS, { error: "unknown symptom id" }))
+      .max(SYMPTOM_IDS.length * 2)
+      .optional(),
   })
   .superRefine((input, ctx) => {
     const maxKpa = MAX_GAUGE_KPA[input.refrigerant];
@@ -49,17 +86,42 @@ export const diagnosisInputSchema = z
     for (const key of ["staticKpaGauge", "highKpaGauge", "lowKpaGauge"] as const) {
       const value = input[key];
       if (value !== undefined && value < deepestGaugeKpa) {
-        ctx.addIssue({ code: "custom", path: [key], message: `${value} kPa gauge is deeper than the local atmosphere allows (${deepestGaugeKpa.toFixed(1)} kPa gauge at ${input.altitudeM ?? 0} m)` });
+        ctx.addIssue({
+          code: "custom",
+          path: [key],
+          message: `${value} kPa gauge is deeper than the local atmosphere allows (${deepestGaugeKpa.toFixed(1)} kPa gauge at ${input.altitudeM ?? 0} m)`,
+        });
       }
       if (value !== undefined && value > maxKpa) {
-        ctx.addIssue({ code: "custom", path: [key], message: `${value} kPa gauge is above what a ${input.refrigerant} system can hold (${maxKpa} kPa gauge)` });
+        ctx.addIssue({
+          code: "custom",
+          path: [key],
+          message: `${value} kPa gauge is above what a ${input.refrigerant} system can hold (${maxKpa} kPa gauge)`,
+        });
       }
     }
-    if (input.highKpaGauge !== undefined && input.lowKpaGauge !== undefined && input.highKpaGauge < input.lowKpaGauge - 50) {
-      ctx.addIssue({ code: "custom", path: ["highKpaGauge"], message: "high side reads below low side while running: check that the hoses are on the right ports" });
+    if (
+      input.highKpaGauge !== undefined &&
+      input.lowKpaGauge !== undefined &&
+      input.highKpaGauge < input.lowKpaGauge - 50
+    ) {
+      ctx.addIssue({
+        code: "custom",
+        path: ["highKpaGauge"],
+        message: "high side reads below low side while running: check that the hoses are on the right ports",
+      });
     }
-    if (input.recoveredChargeG !== undefined && input.labelChargeG !== undefined && input.recoveredChargeG > input.labelChargeG * 3) {
-      ctx.addIssue({ code: "custom", path: ["recoveredChargeG"], message: "recovered mass is more than three times the label charge: check the scale and the label value" });
+    if (
+      input.recoveredChargeG !== undefined &&
+      input.labelChargeG !== undefined &&
+      input.recoveredChargeG > input.labelChargeG * 3
+    ) {
+      ctx.addIssue({
+        code: "custom",
+        path: ["recoveredChargeG"],
+        message:
+          "recovered mass is more than three times the label charge: check the scale and the label value",
+      });
     }
   });
 

@@ -1,6 +1,12 @@
 import { CAUSE_IDS, type CauseId } from "./causes";
 import type { Observation } from "./evidence-types";
-import { CAUSE_PRIORS, LIKELIHOOD_TABLE, type LikelihoodRow, RANKING_GATES, type RankingGate } from "./likelihood-table";
+import {
+  CAUSE_PRIORS,
+  LIKELIHOOD_TABLE,
+  type LikelihoodRow,
+  RANKING_GATES,
+  type RankingGate,
+} from "./likelihood-table";
 import { groupOf, KEY_READING_GROUPS, type ObservationId, type ReadingGroup } from "./observations";
 
 export interface EvidenceItem {
@@ -19,7 +25,10 @@ export interface CauseScore {
 const CAUSE_INDEX = new Map<CauseId, number>(CAUSE_IDS.map((cause, i) => [cause, i]));
 /** The table as dense weight vectors in CAUSE_IDS order, for the hot loop. */
 const WEIGHT_VECTORS: ReadonlyMap<ObservationId, Float64Array> = new Map(
-  LIKELIHOOD_TABLE.map((row: LikelihoodRow) => [row.observation, Float64Array.from(CAUSE_IDS, (cause) => row.weights[cause] ?? 0)]),
+  LIKELIHOOD_TABLE.map((row: LikelihoodRow) => [
+    row.observation,
+    Float64Array.from(CAUSE_IDS, (cause) => row.weights[cause] ?? 0),
+  ]),
 );
 
 export function weightOf(observation: ObservationId, cause: CauseId): number {
@@ -80,8 +89,15 @@ export function readingCoverage(cause: CauseId, observedGroups: ReadonlySet<Read
 export const logistic = (logOdds: number) => 1 / (1 + Math.exp(-logOdds));
 
 /** Sum prior and weights per cause, then apply the ranking gates (last gate first, so the first gate ends on top). */
-export function scoreCauses(observations: readonly Observation[], gates: readonly RankingGate[] = RANKING_GATES): CauseScore[] {
-  const scores = CAUSE_IDS.map((cause): CauseScore => ({ cause, logOdds: CAUSE_PRIORS[cause].logOdds, items: [] }));
+export function scoreCauses(
+  observations: readonly Observation[],
+  gates: readonly RankingGate[] = RANKING_GATES,
+): CauseScore[] {
+  const scores = CAUSE_IDS.map((cause): CauseScore => ({
+    cause,
+    logOdds: CAUSE_PRIORS[cause].logOdds,
+    items: [],
+  }));
   for (const observation of observations) {
     const weights = WEIGHT_VECTORS.get(observation.id);
     if (!weights) continue;

@@ -67,7 +67,8 @@ export const SYMPTOM_LABELS: Record<SymptomId, string> = {
   water_spray_no_change: "Checked: water spray on the condenser barely changes the high side",
   low_side_steady: "Checked: low side steady over 15 minutes",
   txv_bulb_test_responds: "Checked: low side responds when the expansion-valve bulb is warmed or chilled",
-  txv_bulb_test_no_response: "Checked: low side does not respond to warming or chilling the expansion-valve bulb",
+  txv_bulb_test_no_response:
+    "Checked: low side does not respond to warming or chilling the expansion-valve bulb",
   liquid_line_temperature_drop: "Checked: sharp temperature drop along the liquid line",
   liquid_line_even_temperature: "Checked: liquid line temperature even from condenser to expansion device",
   leak_found: "Checked: leak found",

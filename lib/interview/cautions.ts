@@ -35,7 +35,8 @@ const byId = {
     level: "notice",
     title: "Certified hands, no venting",
     text: "Only a certified technician recovers or charges refrigerant, with approved equipment. Never vent it.",
-    basis: "40 CFR 82.34 (certified technicians, approved equipment); 40 CFR 82.154(a) (venting prohibition); EU Regulation 307/2008",
+    basis:
+      "40 CFR 82.34 (certified technicians, approved equipment); 40 CFR 82.154(a) (venting prohibition); EU Regulation 307/2008",
   },
   flammable: {
     id: "flammable_r1234yf",

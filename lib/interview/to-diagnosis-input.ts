@@ -59,6 +59,7 @@ function symptomsFrom(answers: InterviewAnswers): SymptomId[] | undefined {
   if (identification?.hydrocarbonFlagged) symptoms.push("identifier_flags_hydrocarbon");
   // "Not found yet" is a search still under way, not a clean result at the detector's most
   // sensitive setting (which is what the engine's no_leak_found means): it moves no score.
-  if (leakFinding?.whereFound !== undefined && leakFinding.whereFound !== "not_found_yet") symptoms.push("leak_found");
+  if (leakFinding?.whereFound !== undefined && leakFinding.whereFound !== "not_found_yet")
+    symptoms.push("leak_found");
   return symptoms;
 }

@@ -25,8 +25,7 @@ export async function apiFetch<T = unknown>(
     credentials: "same-origin",
   });
   const data = (await response.json().catch(() => null)) as
-    | (T & { error?: { code: string; message: string; fieldErrors?: FieldErrors } })
-    | null;
+    (T & { error?: { code: string; message: string; fieldErrors?: FieldErrors } }) | null;
   if (!response.ok) {
     throw new ApiError(
       data?.error?.message ?? `The server answered ${response.status}.`,
@@ -41,7 +40,9 @@ export async function apiFetch<T = unknown>(
 /** A failed save as a form shows it: the first message per field, and a line saying nothing typed was lost. */
 export function saveErrorOf(error: unknown): { fieldErrors: Record<string, string>; message: string } {
   if (error instanceof ApiError) {
-    const fieldErrors = Object.fromEntries(Object.entries(error.fieldErrors ?? {}).map(([field, messages]) => [field, messages[0] ?? ""]));
+    const fieldErrors = Object.fromEntries(
+      Object.entries(error.fieldErrors ?? {}).map(([field, messages]) => [field, messages[0] ?? ""]),
+    );
     return { fieldErrors, message: `${error.message} What you typed is kept.` };
   }
   return { fieldErrors: {}, message: "No answer from the server; what you typed is kept." };

@@ -14,17 +14,20 @@ export const ledgerKeys = {
 export const cylindersQuery = () =>
   queryOptions({
     queryKey: ledgerKeys.cylinders(),
-    queryFn: ({ signal }) => apiFetch<{ cylinders: CylinderDto[] }>("/api/cylinders", { signal }).then((r) => r.cylinders),
+    queryFn: ({ signal }) =>
+      apiFetch<{ cylinders: CylinderDto[] }>("/api/cylinders", { signal }).then((r) => r.cylinders),
   });
 
 export const movementsQuery = () =>
   queryOptions({
     queryKey: ledgerKeys.movements(),
-    queryFn: ({ signal }) => apiFetch<{ movements: MovementDto[] }>("/api/ledger/movements", { signal }).then((r) => r.movements),
+    queryFn: ({ signal }) =>
+      apiFetch<{ movements: MovementDto[] }>("/api/ledger/movements", { signal }).then((r) => r.movements),
   });
 
 export const ledgerReportQuery = () =>
   queryOptions({
     queryKey: ledgerKeys.report(),
-    queryFn: ({ signal }) => apiFetch<{ rows: LedgerReportRow[]; timeZone: string }>("/api/ledger/report", { signal }),
+    queryFn: ({ signal }) =>
+      apiFetch<{ rows: LedgerReportRow[]; timeZone: string }>("/api/ledger/report", { signal }),
   });

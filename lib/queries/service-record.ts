@@ -13,9 +13,16 @@ export const serviceRecordKeys = {
 export const serviceRecordQuery = (caseId: number) =>
   queryOptions({
     queryKey: serviceRecordKeys.forCase(caseId),
-    queryFn: ({ signal }) => apiFetch<{ case: ServiceCaseContext; record: ServiceRecordDto | null }>(`/api/cases/${caseId}/service`, { signal }),
+    queryFn: ({ signal }) =>
+      apiFetch<{ case: ServiceCaseContext; record: ServiceRecordDto | null }>(
+        `/api/cases/${caseId}/service`,
+        { signal },
+      ),
   });
 
 export function saveServiceRecord(caseId: number, body: ServiceRecordInput) {
-  return apiFetch<{ record: ServiceRecordDto; posted: number; warnings: string[] }>(`/api/cases/${caseId}/service`, { method: "PUT", body });
+  return apiFetch<{ record: ServiceRecordDto; posted: number; warnings: string[] }>(
+    `/api/cases/${caseId}/service`,
+    { method: "PUT", body },
+  );
 }

@@ -13,5 +13,7 @@ export const specMatchesQuery = (vehicleId: number) =>
   queryOptions({
     queryKey: [...specKeys.all, "matches", vehicleId] as const,
     queryFn: ({ signal }) =>
-      apiFetch<{ matches: SpecMatchDto[] }>(`/api/specs/matches?vehicleId=${vehicleId}`, { signal }).then((r) => r.matches),
+      apiFetch<{ matches: SpecMatchDto[] }>(`/api/specs/matches?vehicleId=${vehicleId}`, { signal }).then(
+        (r) => r.matches,
+      ),
   });

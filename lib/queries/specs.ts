@@ -13,6 +13,9 @@ export const specKeys = {
 export const specsQuery = (q: string) =>
   queryOptions({
     queryKey: specKeys.list(q),
-    queryFn: ({ signal }) => apiFetch<{ specs: SpecEntryDto[] }>(`/api/specs${q ? `?q=${encodeURIComponent(q)}` : ""}`, { signal }).then((r) => r.specs),
+    queryFn: ({ signal }) =>
+      apiFetch<{ specs: SpecEntryDto[] }>(`/api/specs${q ? `?q=${encodeURIComponent(q)}` : ""}`, {
+        signal,
+      }).then((r) => r.specs),
     placeholderData: (previous) => previous,
   });

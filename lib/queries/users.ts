@@ -18,5 +18,6 @@ export const userKeys = {
 export const usersQuery = () =>
   queryOptions({
     queryKey: userKeys.list(),
-    queryFn: ({ signal }) => apiFetch<{ users: ShopUserDto[] }>("/api/users", { signal }).then((r) => r.users),
+    queryFn: ({ signal }) =>
+      apiFetch<{ users: ShopUserDto[] }>("/api/users", { signal }).then((r) => r.users),
   });

@@ -21,6 +21,9 @@ export const vehicleChoicesQuery = (search: string) =>
   queryOptions({
     queryKey: vehicleKeys.choices(search),
     queryFn: ({ signal }) =>
-      apiFetch<{ vehicles: VehicleChoiceDto[] }>(`/api/vehicles${search ? `?q=${encodeURIComponent(search)}` : ""}`, { signal }).then((r) => r.vehicles),
+      apiFetch<{ vehicles: VehicleChoiceDto[] }>(
+        `/api/vehicles${search ? `?q=${encodeURIComponent(search)}` : ""}`,
+        { signal },
+      ).then((r) => r.vehicles),
     placeholderData: (previous) => previous,
   });

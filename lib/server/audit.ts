@@ -22,5 +22,8 @@ export async function recordAudit({
   transaction?: Transaction;
 }): Promise<void> {
   const { AuditEvent } = getModels();
-  await AuditEvent.create({ shopId, actorId, entity, entityId: String(entityId), action, detail: detail ?? null }, { transaction });
+  await AuditEvent.create(
+    { shopId, actorId, entity, entityId: String(entityId), action, detail: detail ?? null },
+    { transaction },
+  );
 }

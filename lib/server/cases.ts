@@ -28,7 +28,14 @@ export interface CaseDetail extends CaseListItem {
   signOffs: { verdict: string; comment: string | null; reviewer: string; createdAt: string }[];
 }
 
-type VehicleRow = { year: number; make: string; model: string; engine: string | null; refrigerant: string; expansionDevice: string } | null;
+type VehicleRow = {
+  year: number;
+  make: string;
+  model: string;
+  engine: string | null;
+  refrigerant: string;
+  expansionDevice: string;
+} | null;
 
 function describeVehicle(v: VehicleRow): string | null {
   return v ? `${v.year} ${v.make} ${v.model}${v.engine ? ` ${v.engine}` : ""}` : null;
@@ -43,7 +50,15 @@ function includes() {
   ];
 }
 
-export async function listCases({ shopId, status, limit = 50 }: { shopId: number; status?: CaseStatus; limit?: number }): Promise<CaseListItem[]> {
+export async function listCases({
+  shopId,
+  status,
+  limit = 50,
+}: {
+  shopId: number;
+  status?: CaseStatus;
+  limit?: number;
+}): Promise<CaseListItem[]> {
   const { Case } = getModels();
   const rows = await Case.findAll({
     where: { shopId, ...(status ? { status } : {}) },

@@ -41,11 +41,19 @@ type RouteContext = { params: Promise<Record<string, string | string[]>> };
  * with field errors) → the handler, which loads shop-scoped rows (404) and may refuse (403/409).
  * Unexpected errors are logged and answered with a generic 500 that never echoes internals.
  */
-export function handler<B extends Schema = undefined, Q extends Schema = undefined, P extends Schema = undefined>(
+export function handler<
+  B extends Schema = undefined,
+  Q extends Schema = undefined,
+  P extends Schema = undefined,
+>(
   config: HandlerConfig<B, Q, P> & { public: true },
   fn: (ctx: HandlerContext<B, Q, P, User | null>) => Promise<unknown>,
 ): (req: NextRequest, ctx: RouteContext) => Promise<Response>;
-export function handler<B extends Schema = undefined, Q extends Schema = undefined, P extends Schema = undefined>(
+export function handler<
+  B extends Schema = undefined,
+  Q extends Schema = undefined,
+  P extends Schema = undefined,
+>(
   config: HandlerConfig<B, Q, P> & { permission: Permission },
   fn: (ctx: HandlerContext<B, Q, P, User>) => Promise<unknown>,
 ): (req: NextRequest, ctx: RouteContext) => Promise<Response>;
@@ -61,12 +69,15 @@ export function handler<B extends Schema, Q extends Schema, P extends Schema>(
       const lucia = getLucia();
       const sessionId = req.cookies.get(lucia.sessionCookieName)?.value ?? null;
       const { user, session } = await validateSessionId(sessionId);
-      if (session?.fresh) responseHeaders.append("Set-Cookie", lucia.createSessionCookie(session.id).serialize());
-      if (!session && sessionId) responseHeaders.append("Set-Cookie", lucia.createBlankSessionCookie().serialize());
+      if (session?.fresh)
+        responseHeaders.append("Set-Cookie", lucia.createSessionCookie(session.id).serialize());
+      if (!session && sessionId)
+        responseHeaders.append("Set-Cookie", lucia.createBlankSessionCookie().serialize());
 
       if (!config.public) {
         if (!user) throw new AppError("unauthorized:session");
-        if (config.permission && !can(user.role, config.permission)) throw new AppError(`forbidden:${config.permission.split(":")[0]}`);
+        if (config.permission && !can(user.role, config.permission))
+          throw new AppError(`forbidden:${config.permission.split(":")[0]}`);
       }
 
       const params = parse(config.params, await routeCtx.params, "params");
@@ -74,7 +85,12 @@ export function handler<B extends Schema, Q extends Schema, P extends Schema>(
       const body = config.body ? parse(config.body, await readJson(req), "body") : undefined;
 
       // A public handler may see a null user; the overloads keep that visible to its author.
-      const result = await fn({ req, user, body, query, params, responseHeaders } as HandlerContext<B, Q, P, User>);
+      const result = await fn({ req, user, body, query, params, responseHeaders } as HandlerContext<
+        B,
+        Q,
+        P,
+        User
+      >);
       if (result instanceof Response) {
         responseHeaders.forEach((value, key) => result.headers.append(key, value));
         return result;
@@ -112,7 +128,9 @@ function parse<S extends Schema>(schema: S, value: unknown, where: string): Infe
   if (!schema) return undefined as Infer<S>;
   const result = schema.safeParse(value);
   if (!result.success) {
-    throw new AppError(`bad_request:${where}`, "Some values need attention.", { fieldErrors: fieldErrorsOf(result.error) });
+    throw new AppError(`bad_request:${where}`, "Some values need attention.", {
+      fieldErrors: fieldErrorsOf(result.error),
+    });
   }
   return result.data as Infer<S>;
 }
@@ -124,11 +142,19 @@ export function errorResponse(error: unknown, headers = new Headers()): Response
   }
   const name = (error as { name?: string } | null)?.name;
   if (name === "SequelizeUniqueConstraintError") {
-    return NextResponse.json(new AppError("conflict:unique", "That already exists.").toJSON(), { status: 409, headers });
+    return NextResponse.json(new AppError("conflict:unique", "That already exists.").toJSON(), {
+      status: 409,
+      headers,
+    });
   }
   console.error("Unhandled error in route handler", error);
   return NextResponse.json(
-    { error: { code: "internal", message: "Something went wrong on our side. Nothing you entered was lost; try again." } },
+    {
+      error: {
+        code: "internal",
+        message: "Something went wrong on our side. Nothing you entered was lost; try again.",
+      },
+    },
     { status: 500, headers },
   );
 }

@@ -19,23 +19,55 @@ async function editableCase({ user, caseId }: { user: User; caseId: number }) {
     throw new AppError("forbidden:case", "Only the case's technician or a senior can change this case.");
   }
   if (!caseIsEditable(row)) {
-    throw new AppError("conflict:case", "This case has been submitted; a senior must send it back before it can change.");
+    throw new AppError(
+      "conflict:case",
+      "This case has been submitted; a senior must send it back before it can change.",
+    );
   }
   return row;
 }
 
 /** Applies the change only at the version the client last saw; otherwise says plainly what happened. */
-async function updateIfVersion({ caseId, shopId, baseVersion, values }: { caseId: number; shopId: number; baseVersion: number; values: CaseChanges }) {
-  const version = await updateCaseAtVersion({ shopId, caseId, expectedVersion: baseVersion, changes: values });
+async function updateIfVersion({
+  caseId,
+  shopId,
+  baseVersion,
+  values,
+}: {
+  caseId: number;
+  shopId: number;
+  baseVersion: number;
+  values: CaseChanges;
+}) {
+  const version = await updateCaseAtVersion({
+    shopId,
+    caseId,
+    expectedVersion: baseVersion,
+    changes: values,
+  });
   if (version !== null) return version;
-  const current = await getModels().Case.findOne({ where: { id: caseId, shopId }, attributes: ["updatedAt"], raw: true });
+  const current = await getModels().Case.findOne({
+    where: { id: caseId, shopId },
+    attributes: ["updatedAt"],
+    raw: true,
+  });
   throw new AppError(
     "conflict:case",
     `This case was changed on another screen${current ? ` at ${current.updatedAt.toISOString().slice(11, 16)} UTC` : ""}. Reload to see those answers; what you typed here is kept on this device.`,
   );
 }
 
-export async function saveInterview({ user, caseId, input, shopAltitudeM }: { user: User; caseId: number; input: InterviewSaveInput; shopAltitudeM: number }) {
+export async function saveInterview({
+  user,
+  caseId,
+  input,
+  shopAltitudeM,
+}: {
+  user: User;
+  caseId: number;
+  input: InterviewSaveInput;
+  shopAltitudeM: number;
+}) {
   await editableCase({ user, caseId });
   // Nothing typed is lost: a group that fails validation is stored as a draft, not refused.
   const shop = { altitudeM: shopAltitudeM };
@@ -49,7 +81,12 @@ export async function saveInterview({ user, caseId, input, shopAltitudeM }: { us
     baseVersion: input.baseVersion,
     values: {
       interviewStep: input.step,
-      answers: { answers: sorted.answers, drafts, skipped: input.skipped, visited: input.visited } as unknown as JsonObject,
+      answers: {
+        answers: sorted.answers,
+        drafts,
+        skipped: input.skipped,
+        visited: input.visited,
+      } as unknown as JsonObject,
       symptomTags: sorted.answers.behaviour?.symptoms ?? [],
       computed,
     },
@@ -57,19 +94,37 @@ export async function saveInterview({ user, caseId, input, shopAltitudeM }: { us
   return { version, draftGroups: Object.keys(sorted.drafts) };
 }
 
-export async function submitCase({ user, caseId, input, shopAltitudeM }: { user: User; caseId: number; input: CaseSubmitInput; shopAltitudeM: number }) {
+export async function submitCase({
+  user,
+  caseId,
+  input,
+  shopAltitudeM,
+}: {
+  user: User;
+  caseId: number;
+  input: CaseSubmitInput;
+  shopAltitudeM: number;
+}) {
   const row = await editableCase({ user, caseId });
   if (input.engineVersion !== ENGINE_VERSION) {
-    throw new AppError("conflict:engine", "The findings were worked out by an older version of Chillwright. Reload the page and submit again.");
+    throw new AppError(
+      "conflict:engine",
+      "The findings were worked out by an older version of Chillwright. Reload the page and submit again.",
+    );
   }
   const record = row.answers as { answers?: unknown };
   const shop = { altitudeM: shopAltitudeM };
   const { answers } = sortSavedAnswers(record.answers, shop);
   // The same route-filtered input the findings screen used, so the stored snapshot is what was shown.
   const diagnosisInput = diagnosisInputFor(answers, shop);
-  if (!diagnosisInput) throw new AppError("bad_request:case", "Answer the system and conditions steps before submitting.");
+  if (!diagnosisInput)
+    throw new AppError("bad_request:case", "Answer the system and conditions steps before submitting.");
   const findings = diagnose(diagnosisInput);
-  const technician = await getModels().User.findOne({ where: { id: row.technicianId, shopId: user.shopId }, attributes: ["role"], raw: true });
+  const technician = await getModels().User.findOne({
+    where: { id: row.technicianId, shopId: user.shopId },
+    attributes: ["role"],
+    raw: true,
+  });
   const status = technician?.role === "apprentice" ? "awaiting_signoff" : "signed_off";
   const version = await updateIfVersion({
     caseId,
@@ -85,6 +140,13 @@ export async function submitCase({ user, caseId, input, shopAltitudeM }: { user:
       submittedAt: new Date(),
     },
   });
-  await recordAudit({ shopId: user.shopId, actorId: user.id, entity: "case", entityId: caseId, action: "submit", detail: { status, conclusionCause: input.conclusionCause, engineVersion: findings.engineVersion } });
+  await recordAudit({
+    shopId: user.shopId,
+    actorId: user.id,
+    entity: "case",
+    entityId: caseId,
+    action: "submit",
+    detail: { status, conclusionCause: input.conclusionCause, engineVersion: findings.engineVersion },
+  });
   return { version, status };
 }

@@ -3,7 +3,12 @@ import type { Transaction } from "sequelize";
 import { getModels, type CylinderKind } from "@/models";
 import { AppError } from "@/lib/errors";
 import type { RefrigerantId } from "@/lib/refrigerants";
-import { type Cylinder as LedgerCylinder, type CylinderMovement, type MovementType, applyMovements } from "@/lib/service/ledger";
+import {
+  type Cylinder as LedgerCylinder,
+  type CylinderMovement,
+  type MovementType,
+  applyMovements,
+} from "@/lib/service/ledger";
 import { monthlyReport, toCsv, type MonthlyReportRow } from "@/lib/service/ledger-report";
 import type { CreateCylinderInput } from "@/app/api/cylinders/schema";
 import type { ManualMovementInput } from "@/app/api/ledger/schema";
@@ -44,11 +49,41 @@ export interface MovementDto {
   note: string | null;
 }
 
-type CylinderRow = { id: number; label: string; serial: string | null; refrigerant: RefrigerantId; kind: CylinderKind; tareG: number; capacityG: number; initialNetG: number; retiredAt: Date | null };
-type MovementRow = { id: number; cylinderId: number; caseId: number | null; serviceRecordId: number | null; technicianId: string; type: MovementType; refrigerant: RefrigerantId; massG: number; occurredAt: Date; reversesId: number | null; destination: string | null; note: string | null };
+type CylinderRow = {
+  id: number;
+  label: string;
+  serial: string | null;
+  refrigerant: RefrigerantId;
+  kind: CylinderKind;
+  tareG: number;
+  capacityG: number;
+  initialNetG: number;
+  retiredAt: Date | null;
+};
+type MovementRow = {
+  id: number;
+  cylinderId: number;
+  caseId: number | null;
+  serviceRecordId: number | null;
+  technicianId: string;
+  type: MovementType;
+  refrigerant: RefrigerantId;
+  massG: number;
+  occurredAt: Date;
+  reversesId: number | null;
+  destination: string | null;
+  note: string | null;
+};
 
 export function toLedgerCylinder(c: CylinderRow): LedgerCylinder {
-  return { id: String(c.id), refrigerant: c.refrigerant, kind: c.kind === "recovery" ? "recovery" : "supply", capacityG: c.capacityG, tareG: c.tareG, initialNetG: c.initialNetG };
+  return {
+    id: String(c.id),
+    refrigerant: c.refrigerant,
+    kind: c.kind === "recovery" ? "recovery" : "supply",
+    capacityG: c.capacityG,
+    tareG: c.tareG,
+    initialNetG: c.initialNetG,
+  };
 }
 
 export function toLedgerMovement(m: MovementRow): CylinderMovement {
@@ -67,13 +102,34 @@ export function toLedgerMovement(m: MovementRow): CylinderMovement {
 }
 
 async function movementRows(shopId: number, transaction?: Transaction): Promise<MovementRow[]> {
-  const rows = await getModels().RefrigerantMovement.findAll({ where: { shopId }, order: [["occurredAt", "ASC"], ["id", "ASC"]], raw: true, transaction });
+  const rows = await getModels().RefrigerantMovement.findAll({
+    where: { shopId },
+    order: [
+      ["occurredAt", "ASC"],
+      ["id", "ASC"],
+    ],
+    raw: true,
+    transaction,
+  });
   return rows as unknown as MovementRow[];
 }
 
 /** Cylinders with their contents replayed from the ledger. */
-export async function listCylinders({ shopId, includeRetired = true, transaction }: { shopId: number; includeRetired?: boolean; transaction?: Transaction }): Promise<CylinderDto[]> {
-  const rows = (await getModels().Cylinder.findAll({ where: { shopId }, order: [["label", "ASC"]], raw: true, transaction })) as unknown as CylinderRow[];
+export async function listCylinders({
+  shopId,
+  includeRetired = true,
+  transaction,
+}: {
+  shopId: number;
+  includeRetired?: boolean;
+  transaction?: Transaction;
+}): Promise<CylinderDto[]> {
+  const rows = (await getModels().Cylinder.findAll({
+    where: { shopId },
+    order: [["label", "ASC"]],
+    raw: true,
+    transaction,
+  })) as unknown as CylinderRow[];
   const movements = (await movementRows(shopId, transaction)).map(toLedgerMovement);
   return rows
     .filter((c) => includeRetired || !c.retiredAt)
@@ -101,10 +157,18 @@ export async function listCylinders({ shopId, includeRetired = true, transaction
     });
 }
 
-export async function createCylinder({ shopId, input }: { shopId: number; input: CreateCylinderInput }): Promise<CylinderDto> {
+export async function createCylinder({
+  shopId,
+  input,
+}: {
+  shopId: number;
+  input: CreateCylinderInput;
+}): Promise<CylinderDto> {
   const { Cylinder } = getModels();
   if (await Cylinder.findOne({ where: { shopId, label: input.label }, attributes: ["id"] })) {
-    throw new AppError("conflict:cylinder", "Another cylinder already has this label.", { fieldErrors: { label: ["Already used by another cylinder."] } });
+    throw new AppError("conflict:cylinder", "Another cylinder already has this label.", {
+      fieldErrors: { label: ["Already used by another cylinder."] },
+    });
   }
   const row = await Cylinder.create({ ...input, serial: input.serial ?? null, shopId });
   const created = (await listCylinders({ shopId })).find((c) => c.id === row.id);
@@ -112,7 +176,15 @@ export async function createCylinder({ shopId, input }: { shopId: number; input:
   return created;
 }
 
-export async function setCylinderRetired({ shopId, id, retired }: { shopId: number; id: number; retired: boolean }): Promise<CylinderDto> {
+export async function setCylinderRetired({
+  shopId,
+  id,
+  retired,
+}: {
+  shopId: number;
+  id: number;
+  retired: boolean;
+}): Promise<CylinderDto> {
   const { Cylinder } = getModels();
   const row = await Cylinder.findOne({ where: { id, shopId } });
   if (!row) throw new AppError("not_found:cylinder", "No such cylinder in this shop.");
@@ -122,7 +194,15 @@ export async function setCylinderRetired({ shopId, id, retired }: { shopId: numb
   return updated;
 }
 
-export async function listMovements({ shopId, cylinderId, limit = 200 }: { shopId: number; cylinderId?: number; limit?: number }): Promise<MovementDto[]> {
+export async function listMovements({
+  shopId,
+  cylinderId,
+  limit = 200,
+}: {
+  shopId: number;
+  cylinderId?: number;
+  limit?: number;
+}): Promise<MovementDto[]> {
   const { RefrigerantMovement, Cylinder, User } = getModels();
   const rows = await RefrigerantMovement.findAll({
     where: { shopId, ...(cylinderId ? { cylinderId } : {}) },
@@ -130,12 +210,25 @@ export async function listMovements({ shopId, cylinderId, limit = 200 }: { shopI
       { model: Cylinder, attributes: ["label"] },
       { model: User, as: "technician", attributes: ["name"] },
     ],
-    order: [["occurredAt", "DESC"], ["id", "DESC"]],
+    order: [
+      ["occurredAt", "DESC"],
+      ["id", "DESC"],
+    ],
     limit,
   });
-  const plain = rows.map((r) => r.get({ plain: true }) as unknown as MovementRow & { Cylinder: { label: string }; technician: { name: string } });
+  const plain = rows.map(
+    (r) =>
+      r.get({ plain: true }) as unknown as MovementRow & {
+        Cylinder: { label: string };
+        technician: { name: string };
+      },
+  );
   const reversedBy = new Map<number, number>();
-  const reversals = await RefrigerantMovement.findAll({ where: { shopId }, attributes: ["id", "reversesId"], raw: true });
+  const reversals = await RefrigerantMovement.findAll({
+    where: { shopId },
+    attributes: ["id", "reversesId"],
+    raw: true,
+  });
   for (const r of reversals) if (r.reversesId) reversedBy.set(r.reversesId, r.id);
   return plain.map((m) => ({
     id: m.id,
@@ -156,11 +249,23 @@ export async function listMovements({ shopId, cylinderId, limit = 200 }: { shopI
   }));
 }
 
-export async function postManualMovement({ shopId, technicianId, input }: { shopId: number; technicianId: string; input: ManualMovementInput }): Promise<MovementDto> {
+export async function postManualMovement({
+  shopId,
+  technicianId,
+  input,
+}: {
+  shopId: number;
+  technicianId: string;
+  input: ManualMovementInput;
+}): Promise<MovementDto> {
   const { Cylinder, RefrigerantMovement } = getModels();
   const cylinder = await Cylinder.findOne({ where: { id: input.cylinderId, shopId }, raw: true });
-  if (!cylinder) throw new AppError("bad_request:movement", "Choose one of the shop's cylinders.", { fieldErrors: { cylinderId: ["Not a cylinder of this shop."] } });
-  if (cylinder.retiredAt) throw new AppError("conflict:cylinder", "This cylinder is retired; reactivate it before posting to it.");
+  if (!cylinder)
+    throw new AppError("bad_request:movement", "Choose one of the shop's cylinders.", {
+      fieldErrors: { cylinderId: ["Not a cylinder of this shop."] },
+    });
+  if (cylinder.retiredAt)
+    throw new AppError("conflict:cylinder", "This cylinder is retired; reactivate it before posting to it.");
   const row = await RefrigerantMovement.create({
     shopId,
     cylinderId: cylinder.id,
@@ -182,12 +287,20 @@ export interface LedgerReportRow extends MonthlyReportRow {
 }
 
 /** Recovered, recycled, charged and sent out per month × technician × refrigerant, in the shop's time zone. */
-export async function ledgerReport({ shopId }: { shopId: number }): Promise<{ rows: LedgerReportRow[]; csv: string; timeZone: string }> {
+export async function ledgerReport({
+  shopId,
+}: {
+  shopId: number;
+}): Promise<{ rows: LedgerReportRow[]; csv: string; timeZone: string }> {
   const { Shop, User } = getModels();
   const shop = await Shop.findOne({ where: { id: shopId }, attributes: ["timeZone"], raw: true });
   const timeZone = shop?.timeZone ?? "UTC";
   const users = await User.findAll({ where: { shopId }, attributes: ["id", "name"], raw: true });
   const names = Object.fromEntries(users.map((u) => [u.id, u.name]));
   const report = monthlyReport((await movementRows(shopId)).map(toLedgerMovement), { timeZone });
-  return { rows: report.map((r) => ({ ...r, technician: names[r.technicianId] ?? r.technicianId })), csv: toCsv(report, { technicianNames: names }), timeZone };
+  return {
+    rows: report.map((r) => ({ ...r, technician: names[r.technicianId] ?? r.technicianId })),
+    csv: toCsv(report, { technicianNames: names }),
+    timeZone,
+  };
 }

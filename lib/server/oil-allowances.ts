@@ -12,14 +12,24 @@ export async function getPartOilAllowances({ shopId }: { shopId: number }): Prom
   return out;
 }
 
-export async function setPartOilAllowances({ shopId, allowancesMl }: { shopId: number; allowancesMl: Partial<AllowancesMl> }): Promise<AllowancesMl> {
+export async function setPartOilAllowances({
+  shopId,
+  allowancesMl,
+}: {
+  shopId: number;
+  allowancesMl: Partial<AllowancesMl>;
+}): Promise<AllowancesMl> {
   const { PartOilAllowance, sequelize } = getModels();
   await sequelize.transaction(async (transaction) => {
     for (const part of REPLACED_PART_IDS) {
       const value = allowancesMl[part];
       if (value === undefined) continue;
       const allowanceMl = value === null ? null : Math.round(value);
-      const [row, created] = await PartOilAllowance.findOrCreate({ where: { shopId, part }, defaults: { shopId, part, allowanceMl }, transaction });
+      const [row, created] = await PartOilAllowance.findOrCreate({
+        where: { shopId, part },
+        defaults: { shopId, part, allowanceMl },
+        transaction,
+      });
       if (!created) await row.update({ allowanceMl }, { transaction });
     }
   });

@@ -12,7 +12,16 @@ export interface ShopSummary {
 
 export async function getShop({ shopId }: { shopId: number }): Promise<ShopSummary> {
   const { Shop } = getModels();
-  const shop = await Shop.findByPk(shopId, { attributes: ["id", "name", "units", "altitudeM", "timeZone"], raw: true });
+  const shop = await Shop.findByPk(shopId, {
+    attributes: ["id", "name", "units", "altitudeM", "timeZone"],
+    raw: true,
+  });
   if (!shop) throw new AppError("not_found:shop");
-  return { id: shop.id, name: shop.name, units: shop.units, altitudeM: shop.altitudeM, timeZone: shop.timeZone };
+  return {
+    id: shop.id,
+    name: shop.name,
+    units: shop.units,
+    altitudeM: shop.altitudeM,
+    timeZone: shop.timeZone,
+  };
 }

@@ -3,7 +3,15 @@ import { Op } from "sequelize";
 import { getModels } from "@/models";
 import { AppError } from "@/lib/errors";
 import { type MassUnit, type VolumeUnit } from "@/lib/units";
-import { type SpecMatch, type SpecRow, type SpecCsvParse, matchSpecRows, parseSpecCsv, specRowKey, specRowsToCsv } from "@/lib/specs";
+import {
+  type SpecMatch,
+  type SpecRow,
+  type SpecCsvParse,
+  matchSpecRows,
+  parseSpecCsv,
+  specRowKey,
+  specRowsToCsv,
+} from "@/lib/specs";
 import type { SpecInput } from "@/app/api/specs/schema";
 
 export interface SpecEntryDto extends SpecRow {
@@ -33,18 +41,37 @@ function toDto(r: SpecEntryRow): SpecEntryDto {
 const escapeLike = (t: string) => t.replace(/[%_\\]/g, (c) => `\\${c}`);
 
 /** The shop's spec table, optionally narrowed by words that must each appear in make, model or variant (or be a covered year). */
-export async function listSpecs({ shopId, q, limit = 1000 }: { shopId: number; q?: string; limit?: number }): Promise<SpecEntryDto[]> {
+export async function listSpecs({
+  shopId,
+  q,
+  limit = 1000,
+}: {
+  shopId: number;
+  q?: string;
+  limit?: number;
+}): Promise<SpecEntryDto[]> {
   const { SpecEntry } = getModels();
   const words = (q ?? "").split(/\s+/).filter(Boolean).slice(0, 6);
   const and = words.map((w) => {
     const like = `%${escapeLike(w)}%`;
-    const alternatives: object[] = [{ make: { [Op.like]: like } }, { model: { [Op.like]: like } }, { variant: { [Op.like]: like } }];
-    if (/^\d{4}$/.test(w)) alternatives.push({ yearFrom: { [Op.lte]: Number(w) }, yearTo: { [Op.gte]: Number(w) } });
+    const alternatives: object[] = [
+      { make: { [Op.like]: like } },
+      { model: { [Op.like]: like } },
+      { variant: { [Op.like]: like } },
+    ];
+    if (/^\d{4}$/.test(w))
+      alternatives.push({ yearFrom: { [Op.lte]: Number(w) }, yearTo: { [Op.gte]: Number(w) } });
     return { [Op.or]: alternatives };
   });
   const rows = await SpecEntry.findAll({
     where: { shopId, ...(and.length ? { [Op.and]: and } : {}) },
-    order: [["make", "ASC"], ["model", "ASC"], ["yearFrom", "ASC"], ["variant", "ASC"], ["rearAc", "ASC"]],
+    order: [
+      ["make", "ASC"],
+      ["model", "ASC"],
+      ["yearFrom", "ASC"],
+      ["variant", "ASC"],
+      ["rearAc", "ASC"],
+    ],
     limit,
     raw: true,
   });
@@ -59,19 +86,37 @@ async function refuseDuplicate(shopId: number, input: SpecInput, exceptId?: numb
   const key = specRowKey(input);
   const clash = (await allRows(shopId)).find((r) => r.id !== exceptId && specRowKey(r) === key);
   if (clash) {
-    throw new AppError("conflict:spec", "The spec table already has a row for this make, model, variant, years and rear A/C.", {
-      fieldErrors: { model: [`Already in the table (row ${clash.id}).`] },
-    });
+    throw new AppError(
+      "conflict:spec",
+      "The spec table already has a row for this make, model, variant, years and rear A/C.",
+      {
+        fieldErrors: { model: [`Already in the table (row ${clash.id}).`] },
+      },
+    );
   }
 }
 
-export async function createSpec({ shopId, input }: { shopId: number; input: SpecInput }): Promise<SpecEntryDto> {
+export async function createSpec({
+  shopId,
+  input,
+}: {
+  shopId: number;
+  input: SpecInput;
+}): Promise<SpecEntryDto> {
   await refuseDuplicate(shopId, input);
   const row = await getModels().SpecEntry.create({ ...input, shopId });
   return toDto(row.get({ plain: true }) as unknown as SpecEntryRow);
 }
 
-export async function updateSpec({ shopId, id, input }: { shopId: number; id: number; input: SpecInput }): Promise<SpecEntryDto> {
+export async function updateSpec({
+  shopId,
+  id,
+  input,
+}: {
+  shopId: number;
+  id: number;
+  input: SpecInput;
+}): Promise<SpecEntryDto> {
   const { SpecEntry } = getModels();
   const row = await SpecEntry.findOne({ where: { id, shopId } });
   if (!row) throw new AppError("not_found:spec", "No such spec row in this shop.");
@@ -85,27 +130,53 @@ export async function deleteSpec({ shopId, id }: { shopId: number; id: number })
   const row = await SpecEntry.findOne({ where: { id, shopId } });
   if (!row) throw new AppError("not_found:spec", "No such spec row in this shop.");
   const used = await ServiceRecord.count({ where: { shopId, specEntryId: id } });
-  if (used > 0) throw new AppError("conflict:spec", `${used} service record${used > 1 ? "s use" : " uses"} this row; correct it instead of deleting it.`);
+  if (used > 0)
+    throw new AppError(
+      "conflict:spec",
+      `${used} service record${used > 1 ? "s use" : " uses"} this row; correct it instead of deleting it.`,
+    );
   await row.destroy();
 }
 
 export type ImportUnits = { charge?: MassUnit; oil?: VolumeUnit };
 
 /** Read the CSV against what the table holds now; nothing is saved. */
-export async function previewSpecImport({ shopId, csv, units }: { shopId: number; csv: string; units?: ImportUnits }): Promise<SpecCsvParse> {
+export async function previewSpecImport({
+  shopId,
+  csv,
+  units,
+}: {
+  shopId: number;
+  csv: string;
+  units?: ImportUnits;
+}): Promise<SpecCsvParse> {
   return parseSpecCsv(csv, { units, existing: await allRows(shopId) });
 }
 
 /** Save the rows without problems, all or none, after reading the file again against the table as it is now. */
-export async function commitSpecImport({ shopId, csv, units }: { shopId: number; csv: string; units?: ImportUnits }) {
+export async function commitSpecImport({
+  shopId,
+  csv,
+  units,
+}: {
+  shopId: number;
+  csv: string;
+  units?: ImportUnits;
+}) {
   const { SpecEntry, sequelize } = getModels();
   return sequelize.transaction(async (transaction) => {
     const parsed = parseSpecCsv(csv, { units, existing: await allRows(shopId) });
     if (parsed.fileProblems.length > 0) {
-      throw new AppError("bad_request:import", parsed.fileProblems.join(" "), { fieldErrors: { csv: parsed.fileProblems } });
+      throw new AppError("bad_request:import", parsed.fileProblems.join(" "), {
+        fieldErrors: { csv: parsed.fileProblems },
+      });
     }
     const good = parsed.rows.filter((r) => r.values && r.problems.length === 0);
-    if (good.length === 0) throw new AppError("bad_request:import", "No row in the file can be saved; fix the problems shown and try again.");
+    if (good.length === 0)
+      throw new AppError(
+        "bad_request:import",
+        "No row in the file can be saved; fix the problems shown and try again.",
+      );
     await SpecEntry.bulkCreate(
       good.map((r) => ({ ...(r.values as SpecRow), shopId })),
       { transaction },
@@ -114,7 +185,13 @@ export async function commitSpecImport({ shopId, csv, units }: { shopId: number;
   });
 }
 
-export async function exportSpecsCsv({ shopId, units }: { shopId: number; units?: ImportUnits }): Promise<string> {
+export async function exportSpecsCsv({
+  shopId,
+  units,
+}: {
+  shopId: number;
+  units?: ImportUnits;
+}): Promise<string> {
   return specRowsToCsv(await allRows(shopId), { units });
 }
 
@@ -127,16 +204,40 @@ export interface SpecVehicle {
 }
 
 /** Spec rows that could apply to the vehicle, best first, for the technician to confirm one. */
-export async function listSpecMatches({ shopId, vehicle }: { shopId: number; vehicle: SpecVehicle }): Promise<SpecMatch<SpecEntryDto>[]> {
+export async function listSpecMatches({
+  shopId,
+  vehicle,
+}: {
+  shopId: number;
+  vehicle: SpecVehicle;
+}): Promise<SpecMatch<SpecEntryDto>[]> {
   // Spellings differ ("Mercedes-Benz", "mercedes benz"): matchSpecRows compares normalised names.
   return matchSpecRows(vehicle, await allRows(shopId));
 }
 
-export async function listSpecMatchesForVehicle({ shopId, vehicleId }: { shopId: number; vehicleId: number }) {
+export async function listSpecMatchesForVehicle({
+  shopId,
+  vehicleId,
+}: {
+  shopId: number;
+  vehicleId: number;
+}) {
   const vehicle = await getModels().Vehicle.findOne({ where: { id: vehicleId, shopId }, raw: true });
   if (!vehicle) throw new AppError("not_found:vehicle", "No such vehicle in this shop.");
-  const matches = await listSpecMatches({ shopId, vehicle: { year: vehicle.year, make: vehicle.make, model: vehicle.model, engine: vehicle.engine } });
-  return { vehicle: { id: vehicle.id, year: vehicle.year, make: vehicle.make, model: vehicle.model, engine: vehicle.engine }, matches };
+  const matches = await listSpecMatches({
+    shopId,
+    vehicle: { year: vehicle.year, make: vehicle.make, model: vehicle.model, engine: vehicle.engine },
+  });
+  return {
+    vehicle: {
+      id: vehicle.id,
+      year: vehicle.year,
+      make: vehicle.make,
+      model: vehicle.model,
+      engine: vehicle.engine,
+    },
+    matches,
+  };
 }
 
 export async function getSpec({ shopId, id }: { shopId: number; id: number }): Promise<SpecEntryDto | null> {

@@ -15,13 +15,24 @@ export interface ShopUser {
 
 const PUBLIC_ATTRIBUTES = ["id", "email", "name", "role", "active"] as const;
 
-function toShopUser(row: { id: string; email: string; name: string; role: Role; active: boolean | number }): ShopUser {
+function toShopUser(row: {
+  id: string;
+  email: string;
+  name: string;
+  role: Role;
+  active: boolean | number;
+}): ShopUser {
   return { id: row.id, email: row.email, name: row.name, role: row.role, active: Boolean(row.active) };
 }
 
 export async function listUsers({ shopId }: { shopId: number }): Promise<ShopUser[]> {
   const { User } = getModels();
-  const rows = await User.findAll({ where: { shopId }, attributes: [...PUBLIC_ATTRIBUTES], order: [["name", "ASC"]], raw: true });
+  const rows = await User.findAll({
+    where: { shopId },
+    attributes: [...PUBLIC_ATTRIBUTES],
+    order: [["name", "ASC"]],
+    raw: true,
+  });
   return rows.map(toShopUser);
 }
 

@@ -14,7 +14,15 @@ export interface VehicleChoice {
 }
 
 /** The shop's vehicles, most recently seen first, optionally filtered by customer, make, model or VIN. */
-export async function listVehicleChoices({ shopId, search, limit = 30 }: { shopId: number; search?: string; limit?: number }): Promise<VehicleChoice[]> {
+export async function listVehicleChoices({
+  shopId,
+  search,
+  limit = 30,
+}: {
+  shopId: number;
+  search?: string;
+  limit?: number;
+}): Promise<VehicleChoice[]> {
   const { Vehicle, Customer } = getModels();
   const term = search?.trim();
   const like = term ? `%${term.replace(/[%_\\]/g, (c) => `\\${c}`)}%` : undefined;
@@ -22,7 +30,14 @@ export async function listVehicleChoices({ shopId, search, limit = 30 }: { shopI
     where: {
       shopId,
       ...(like
-        ? { [Op.or]: [{ make: { [Op.like]: like } }, { model: { [Op.like]: like } }, { vin: { [Op.like]: like } }, { "$Customer.name$": { [Op.like]: like } }] }
+        ? {
+            [Op.or]: [
+              { make: { [Op.like]: like } },
+              { model: { [Op.like]: like } },
+              { vin: { [Op.like]: like } },
+              { "$Customer.name$": { [Op.like]: like } },
+            ],
+          }
         : {}),
     },
     include: [{ model: Customer, attributes: ["id", "name"] }],
@@ -31,8 +46,17 @@ export async function listVehicleChoices({ shopId, search, limit = 30 }: { shopI
   });
   return rows.map((row) => {
     const v = row.get({ plain: true }) as unknown as {
-      id: number; customerId: number; year: number; make: string; model: string; engine: string | null; refrigerant: string;
-      expansionDevice: "orifice_tube" | "txv"; electricCompressor: boolean | number; labelChargeG: number | null; Customer: { name: string };
+      id: number;
+      customerId: number;
+      year: number;
+      make: string;
+      model: string;
+      engine: string | null;
+      refrigerant: string;
+      expansionDevice: "orifice_tube" | "txv";
+      electricCompressor: boolean | number;
+      labelChargeG: number | null;
+      Customer: { name: string };
     };
     return {
       vehicleId: v.id,

@@ -13,8 +13,12 @@ describe("SERVICE_CAUTIONS", () => {
 
 describe("cautionsFor", () => {
   it("asks for slow recovery on an orifice-tube system only (common practice; SAE J2762)", () => {
-    expect(ids({ step: "recovery", refrigerant: "R-134a", expansionDevice: "orifice_tube" })).toContain("recover-slowly-accumulator");
-    expect(ids({ step: "recovery", refrigerant: "R-134a", expansionDevice: "txv" })).not.toContain("recover-slowly-accumulator");
+    expect(ids({ step: "recovery", refrigerant: "R-134a", expansionDevice: "orifice_tube" })).toContain(
+      "recover-slowly-accumulator",
+    );
+    expect(ids({ step: "recovery", refrigerant: "R-134a", expansionDevice: "txv" })).not.toContain(
+      "recover-slowly-accumulator",
+    );
   });
 
   it("brings R-1234yf equipment and flammability cautions only for R-1234yf (SAE J2843 / J3030)", () => {
@@ -30,7 +34,9 @@ describe("cautionsFor", () => {
   });
 
   it("shows high-voltage and dielectric-oil cautions only when the compressor is electric", () => {
-    expect(ids({ step: "oil", electricCompressor: true })).toEqual(expect.arrayContaining(["high-voltage-compressor", "dielectric-oil"]));
+    expect(ids({ step: "oil", electricCompressor: true })).toEqual(
+      expect.arrayContaining(["high-voltage-compressor", "dielectric-oil"]),
+    );
     expect(ids({ step: "oil", electricCompressor: false })).not.toContain("dielectric-oil");
     expect(ids({ step: "oil" })).not.toContain("high-voltage-compressor");
   });

@@ -26,7 +26,8 @@ export const SERVICE_CAUTIONS: readonly ServiceCaution[] = [
     steps: [],
     severity: "danger",
     text: "Wear safety glasses and gloves whenever a line or port is opened, even when the gauges read empty: liquid refrigerant freezes skin and eyes on contact. If it touches you, flush with lukewarm water for 15 minutes and get medical help.",
-    source: "EPA Section 609 technician training material; US Army TM 5-2420-230-24-1 warnings; 15-minute flush from memory",
+    source:
+      "EPA Section 609 technician training material; US Army TM 5-2420-230-24-1 warnings; 15-minute flush from memory",
   },
   {
     id: "identify-before-connecting",
@@ -40,7 +41,8 @@ export const SERVICE_CAUTIONS: readonly ServiceCaution[] = [
     steps: ["recovery"],
     severity: "warning",
     text: "Recover slowly from an orifice-tube system: a sudden pressure drop foams the oil in the accumulator and pulls liquid and oil into the machine. Expect recovery to take longer.",
-    source: "common practice; SAE J2762 notes accumulator systems hold more oil and refrigerant and recover more slowly",
+    source:
+      "common practice; SAE J2762 notes accumulator systems hold more oil and refrigerant and recover more slowly",
     appliesTo: { expansionDevices: ["orifice_tube"] },
   },
   {
@@ -55,7 +57,8 @@ export const SERVICE_CAUTIONS: readonly ServiceCaution[] = [
     steps: ["recovery", "evacuation", "recharge"],
     severity: "danger",
     text: "Never release refrigerant to the air. Recover it with certified equipment; releasing it knowingly is against the law.",
-    source: "US Clean Air Act §608(c), 40 CFR 82.154(a); EU F-gas Regulation (EU) 517/2014 Art. 3 (from memory; now Regulation (EU) 2024/573)",
+    source:
+      "US Clean Air Act §608(c), 40 CFR 82.154(a); EU F-gas Regulation (EU) 517/2014 Art. 3 (from memory; now Regulation (EU) 2024/573)",
     appliesTo: { refrigerants: HFC_HFO_CFC },
   },
   {
@@ -141,7 +144,8 @@ function applies(caution: ServiceCaution, ctx: CautionContext): boolean {
   // An unknown refrigerant or expansion device keeps its cautions on screen (better once too
   // often than missed); high-voltage cautions need the compressor marked electric.
   if (only.refrigerants && ctx.refrigerant && !only.refrigerants.includes(ctx.refrigerant)) return false;
-  if (only.expansionDevices && ctx.expansionDevice && !only.expansionDevices.includes(ctx.expansionDevice)) return false;
+  if (only.expansionDevices && ctx.expansionDevice && !only.expansionDevices.includes(ctx.expansionDevice))
+    return false;
   if (only.electricCompressor && ctx.electricCompressor !== true) return false;
   return true;
 }

@@ -49,22 +49,28 @@ describe("recoveredAgainstLabel", () => {
   it("rejects impossible masses", () => {
     expect(() => recoveredAgainstLabel({ labelChargeG: 0, recoveredChargeG: 100 })).toThrow(RangeError);
     expect(() => recoveredAgainstLabel({ labelChargeG: 500, recoveredChargeG: -1 })).toThrow(RangeError);
-    expect(() => recoveredAgainstLabel({ labelChargeG: Number.NaN, recoveredChargeG: 1 })).toThrow(RangeError);
+    expect(() => recoveredAgainstLabel({ labelChargeG: Number.NaN, recoveredChargeG: 1 })).toThrow(
+      RangeError,
+    );
   });
 
   it("property: the verdict follows the delta and the band, and deltaPct scales deltaG", () => {
     fc.assert(
-      fc.property(fc.integer({ min: 100, max: 3000 }), fc.integer({ min: 0, max: 4000 }), (labelChargeG, recoveredChargeG) => {
-        const r = recoveredAgainstLabel({ labelChargeG, recoveredChargeG });
-        expect(r.deltaG).toBe(recoveredChargeG - labelChargeG);
-        expect((r.deltaPct * labelChargeG) / 100).toBeCloseTo(r.deltaG, 6);
-        if (r.verdict === "over") expect(r.deltaG).toBeGreaterThan(15);
-        if (r.verdict === "under") expect(r.deltaG).toBeLessThan(-0.05 * labelChargeG);
-        if (r.verdict === "within") {
-          expect(r.deltaG).toBeLessThanOrEqual(15);
-          expect(r.deltaG).toBeGreaterThanOrEqual(-0.05 * labelChargeG - 1e-9);
-        }
-      }),
+      fc.property(
+        fc.integer({ min: 100, max: 3000 }),
+        fc.integer({ min: 0, max: 4000 }),
+        (labelChargeG, recoveredChargeG) => {
+          const r = recoveredAgainstLabel({ labelChargeG, recoveredChargeG });
+          expect(r.deltaG).toBe(recoveredChargeG - labelChargeG);
+          expect((r.deltaPct * labelChargeG) / 100).toBeCloseTo(r.deltaG, 6);
+          if (r.verdict === "over") expect(r.deltaG).toBeGreaterThan(15);
+          if (r.verdict === "under") expect(r.deltaG).toBeLessThan(-0.05 * labelChargeG);
+          if (r.verdict === "within") {
+            expect(r.deltaG).toBeLessThanOrEqual(15);
+            expect(r.deltaG).toBeGreaterThanOrEqual(-0.05 * labelChargeG - 1e-9);
+          }
+        },
+      ),
     );
   });
 });
@@ -100,14 +106,18 @@ describe("chargeWithinTolerance", () => {
     expect(over.within).toBe(false);
     expect(over.deltaG).toBe(20);
     expect(over.sentence).toContain("outside");
-    expect(chargeWithinTolerance({ targetG: 540, chargedG: 520, refrigerant: "R-1234yf" }).within).toBe(false);
+    expect(chargeWithinTolerance({ targetG: 540, chargedG: 520, refrigerant: "R-1234yf" }).within).toBe(
+      false,
+    );
   });
 
   it("a charge 10 g off target is inside tolerance (SAE J2788 ½ oz, from memory)", () => {
     const r = chargeWithinTolerance({ targetG: 680, chargedG: 670, refrigerant: "R-134a" });
     expect(r.within).toBe(true);
     expect(r.deltaG).toBe(-10);
-    expect(r.sentence).toBe("Charged 670 g against a 680 g target: 10 g under, inside the ±15 g a recharge machine must hold.");
+    expect(r.sentence).toBe(
+      "Charged 670 g against a 680 g target: 10 g under, inside the ±15 g a recharge machine must hold.",
+    );
     expect(chargeWithinTolerance({ targetG: 680, chargedG: 690, refrigerant: "R-134a" }).within).toBe(true);
   });
 

@@ -45,7 +45,9 @@ export function indefiniteArticle(formatted: string): "a" | "an" {
 
 function assertMass(name: string, valueG: number, allowZero: boolean): void {
   if (!Number.isFinite(valueG) || valueG < 0 || (!allowZero && valueG === 0)) {
-    throw new RangeError(`${name} must be a ${allowZero ? "non-negative" : "positive"} mass in grams, got ${valueG}`);
+    throw new RangeError(
+      `${name} must be a ${allowZero ? "non-negative" : "positive"} mass in grams, got ${valueG}`,
+    );
   }
 }
 
@@ -119,7 +121,8 @@ export function chargeWithinTolerance(input: {
   assertMass("chargedG", input.chargedG, true);
   const standard = chargeTolerance(input.refrigerant);
   const toleranceG = input.toleranceG ?? standard.toleranceG;
-  if (!Number.isFinite(toleranceG) || toleranceG < 0) throw new RangeError(`toleranceG must be ≥ 0, got ${toleranceG}`);
+  if (!Number.isFinite(toleranceG) || toleranceG < 0)
+    throw new RangeError(`toleranceG must be ≥ 0, got ${toleranceG}`);
   const deltaG = input.chargedG - input.targetG;
   const within = Math.abs(deltaG) <= toleranceG;
   const target = formatGrams(input.targetG);
@@ -127,7 +130,13 @@ export function chargeWithinTolerance(input: {
   const sentence = `Charged ${formatGrams(input.chargedG)} against ${indefiniteArticle(target)} ${target} target: ${off}, ${
     within ? "inside" : "outside"
   } the ±${formatGrams(toleranceG)} a recharge machine must hold.${within ? "" : " Recover and recharge by weight."}`;
-  return { within, deltaG, toleranceG, sentence, source: input.toleranceG === undefined ? standard.source : "shop setting" };
+  return {
+    within,
+    deltaG,
+    toleranceG,
+    sentence,
+    source: input.toleranceG === undefined ? standard.source : "shop setting",
+  };
 }
 
 export type TargetBasis = "revised" | "label" | "spec_table";
@@ -161,7 +170,9 @@ export function targetCharge(input: {
     );
   }
   if (revisedChargeG != null) {
-    warnings.push("Charging to the maker's revised figure instead of the label: note the bulletin on the record.");
+    warnings.push(
+      "Charging to the maker's revised figure instead of the label: note the bulletin on the record.",
+    );
     return { targetG: revisedChargeG, basis: "revised", warnings };
   }
   if (labelChargeG != null) return { targetG: labelChargeG, basis: "label", warnings };

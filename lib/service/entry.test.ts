@@ -1,5 +1,12 @@
 import { describe, expect, it } from "vitest";
-import { readGaugeKpa, readMassG, readPlainNumber, readTemperatureC, readVacuumKpaAbs, readVolumeMl } from "./entry";
+import {
+  readGaugeKpa,
+  readMassG,
+  readPlainNumber,
+  readTemperatureC,
+  readVacuumKpaAbs,
+  readVolumeMl,
+} from "./entry";
 
 describe("service record entries", () => {
   it("reads masses in g, kg, oz and lb (NIST SP 811 App. B: 1 oz = 28.349523125 g, 1 lb = 453.59237 g)", () => {

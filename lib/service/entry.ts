@@ -41,14 +41,22 @@ export function readVolumeMl(text: string, defaultUnit: VolumeUnit = "mL"): Entr
  * below the local atmosphere (so the shop's altitude matters); kPa, bar and psi are taken as
  * absolute, the way electronic vacuum gauges show them.
  */
-export function readVacuumKpaAbs(text: string, opts: { altitudeM?: number; defaultUnit?: PressureUnit } = {}): Entry {
+export function readVacuumKpaAbs(
+  text: string,
+  opts: { altitudeM?: number; defaultUnit?: PressureUnit } = {},
+): Entry {
   if (text.trim() === "") return EMPTY;
   const q = parseQuantity(text, "pressure", opts.defaultUnit ?? "inHg");
   if ("error" in q) return q;
-  if (q.reference === "gauge") return { error: "Give the vacuum in inHg below the atmosphere, or as an absolute pressure (kPa abs)." };
+  if (q.reference === "gauge")
+    return { error: "Give the vacuum in inHg below the atmosphere, or as an absolute pressure (kPa abs)." };
   const atmosphereKpa = barometricKpa({ altitudeM: opts.altitudeM ?? 0 });
-  const kpaAbs = q.unit === "inHg" ? vacuumInHgToKpaAbs(q.value, { barometricKpa: atmosphereKpa }) : pressureToKpa(q.value, q.unit as PressureUnit);
-  if (kpaAbs < 0) return { error: "That is deeper than a perfect vacuum here: check the reading and the shop's altitude." };
+  const kpaAbs =
+    q.unit === "inHg"
+      ? vacuumInHgToKpaAbs(q.value, { barometricKpa: atmosphereKpa })
+      : pressureToKpa(q.value, q.unit as PressureUnit);
+  if (kpaAbs < 0)
+    return { error: "That is deeper than a perfect vacuum here: check the reading and the shop's altitude." };
   if (kpaAbs > atmosphereKpa + 0.5) return { error: "That is above the atmosphere, not a vacuum." };
   return { value: Math.round(kpaAbs * 1000) / 1000 };
 }
@@ -71,7 +79,10 @@ export function readTemperatureC(text: string, defaultUnit: TemperatureUnit = "C
 
 /** A plain number with optional unit word dropped ("99.2", "99.2 %", "5 min"). */
 export function readPlainNumber(text: string, what: string): Entry {
-  const t = text.trim().replace(/\s*(%|min|minutes?)$/i, "").replace(",", ".");
+  const t = text
+    .trim()
+    .replace(/\s*(%|min|minutes?)$/i, "")
+    .replace(",", ".");
   if (t === "") return EMPTY;
   const n = Number(t);
   return Number.isFinite(n) ? { value: n } : { error: `Could not read “${text.trim()}” as ${what}.` };

@@ -12,8 +12,10 @@ export interface IdentifierCheck {
 /** The identifier's verdict before anything is connected to the shop's recovery machine. */
 export function identifierCheck(input: { purityPct: number; airPct?: number | null }): IdentifierCheck {
   const { purityPct, airPct } = input;
-  if (!Number.isFinite(purityPct) || purityPct < 0 || purityPct > 100) throw new RangeError(`purity must be 0–100 %, got ${purityPct}`);
-  if (airPct != null && (!Number.isFinite(airPct) || airPct < 0 || airPct > 100)) throw new RangeError(`air must be 0–100 %, got ${airPct}`);
+  if (!Number.isFinite(purityPct) || purityPct < 0 || purityPct > 100)
+    throw new RangeError(`purity must be 0–100 %, got ${purityPct}`);
+  if (airPct != null && (!Number.isFinite(airPct) || airPct < 0 || airPct > 100))
+    throw new RangeError(`air must be 0–100 %, got ${airPct}`);
   const pass = purityPct >= IDENTIFIER_PURITY_PASS_PCT;
   const air = airPct != null ? ` (air ${formatPercent(airPct)})` : "";
   const message = pass

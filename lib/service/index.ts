@@ -30,7 +30,13 @@ export {
   oilToAddBack,
   partOilAllowancesSchema,
 } from "./oil";
-export { type CompressorDrive, type OilFamily, type OilWarning, oilFamily, oilSuitsCompressor } from "./oil-type";
+export {
+  type CompressorDrive,
+  type OilFamily,
+  type OilWarning,
+  oilFamily,
+  oilSuitsCompressor,
+} from "./oil-type";
 export {
   type Altitude,
   DEFAULT_HOLD_LIMIT,
@@ -45,7 +51,14 @@ export {
   vacuumHoldTest,
 } from "./vacuum";
 export { waterSaturationKpaAbs } from "./water-boiling";
-export { type CautionContext, type ExpansionDevice, SERVICE_CAUTIONS, type ServiceCaution, type ServiceStep, cautionsFor } from "./cautions";
+export {
+  type CautionContext,
+  type ExpansionDevice,
+  SERVICE_CAUTIONS,
+  type ServiceCaution,
+  type ServiceStep,
+  cautionsFor,
+} from "./cautions";
 export {
   type Cylinder,
   type CylinderMovement,
@@ -60,7 +73,22 @@ export {
   movementEffectG,
   movementProblems,
 } from "./ledger";
-export { type PlannedMovement, postingsForRecordChange, postingsForServiceRecord } from "./ledger-corrections";
-export { MONTHLY_REPORT_CSV_COLUMNS, type MonthlyReportRow, monthInTimeZone, monthlyReport, toCsv } from "./ledger-report";
+export {
+  type PlannedMovement,
+  postingsForRecordChange,
+  postingsForServiceRecord,
+} from "./ledger-corrections";
+export {
+  MONTHLY_REPORT_CSV_COLUMNS,
+  type MonthlyReportRow,
+  monthInTimeZone,
+  monthlyReport,
+  toCsv,
+} from "./ledger-report";
 export { IDENTIFIER_PURITY_PASS_PCT, type IdentifierCheck, identifierCheck } from "./identifier";
-export { type ServiceRecordContext, type ServiceRecordSummary, type ServiceRecordValues, summariseServiceRecord } from "./record-summary";
+export {
+  type ServiceRecordContext,
+  type ServiceRecordSummary,
+  type ServiceRecordValues,
+  summariseServiceRecord,
+} from "./record-summary";

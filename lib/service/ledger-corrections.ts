@@ -1,10 +1,18 @@
 import type { CylinderMovement, MovementType } from "./ledger";
 
-export type PlannedMovement = Pick<CylinderMovement, "cylinderId" | "type" | "massG" | "refrigerant" | "technicianId"> &
+export type PlannedMovement = Pick<
+  CylinderMovement,
+  "cylinderId" | "type" | "massG" | "refrigerant" | "technicianId"
+> &
   Partial<Pick<CylinderMovement, "destination" | "note">>;
 
 function sameMovement(a: PlannedMovement, b: PlannedMovement): boolean {
-  return a.cylinderId === b.cylinderId && a.type === b.type && a.massG === b.massG && a.refrigerant === b.refrigerant;
+  return (
+    a.cylinderId === b.cylinderId &&
+    a.type === b.type &&
+    a.massG === b.massG &&
+    a.refrigerant === b.refrigerant
+  );
 }
 
 /**
@@ -58,7 +66,14 @@ export function postingsForServiceRecord(record: {
 }): PlannedMovement[] {
   const out: PlannedMovement[] = [];
   const add = (type: MovementType, leg: { cylinderId: string; massG: number } | null | undefined) => {
-    if (leg && leg.massG > 0) out.push({ cylinderId: leg.cylinderId, type, massG: leg.massG, refrigerant: record.refrigerant, technicianId: record.technicianId });
+    if (leg && leg.massG > 0)
+      out.push({
+        cylinderId: leg.cylinderId,
+        type,
+        massG: leg.massG,
+        refrigerant: record.refrigerant,
+        technicianId: record.technicianId,
+      });
   };
   add("recovered_into", record.recovery);
   add("charged_from", record.recharge);

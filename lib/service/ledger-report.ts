@@ -36,7 +36,8 @@ export function monthInTimeZone(atIso: string, timeZone: string): string {
   // UTC offsets stay within −12 h … +14 h, so from the 2nd to the 27th (UTC) the local
   // month is the UTC month; only instants near a month's end need the time-zone rules.
   const utcDay = instant.getUTCDate();
-  if (utcDay >= 2 && utcDay <= 27) return `${instant.getUTCFullYear()}-${String(instant.getUTCMonth() + 1).padStart(2, "0")}`;
+  if (utcDay >= 2 && utcDay <= 27)
+    return `${instant.getUTCFullYear()}-${String(instant.getUTCMonth() + 1).padStart(2, "0")}`;
   const parts = f.formatToParts(instant);
   const year = parts.find((p) => p.type === "year")?.value;
   const month = parts.find((p) => p.type === "month")?.value;
@@ -48,7 +49,10 @@ export function monthInTimeZone(atIso: string, timeZone: string): string {
  * A correction counts against the month, technician and refrigerant of the movement it
  * cancels, so a past month's figures show what really happened once corrected.
  */
-export function monthlyReport(movements: readonly CylinderMovement[], opts: { timeZone: string }): MonthlyReportRow[] {
+export function monthlyReport(
+  movements: readonly CylinderMovement[],
+  opts: { timeZone: string },
+): MonthlyReportRow[] {
   const byId = new Map(movements.map((m) => [m.id, m]));
   const rows = new Map<string, MonthlyReportRow>();
   for (const m of movements) {
@@ -57,14 +61,26 @@ export function monthlyReport(movements: readonly CylinderMovement[], opts: { ti
     const key = `${month}\u0000${original.technicianId}\u0000${original.refrigerant}`;
     let row = rows.get(key);
     if (!row) {
-      row = { month, technicianId: original.technicianId, refrigerant: original.refrigerant, recoveredG: 0, recycledG: 0, chargedG: 0, sentOutG: 0, adjustmentG: 0 };
+      row = {
+        month,
+        technicianId: original.technicianId,
+        refrigerant: original.refrigerant,
+        recoveredG: 0,
+        recycledG: 0,
+        chargedG: 0,
+        sentOutG: 0,
+        adjustmentG: 0,
+      };
       rows.set(key, row);
     }
     const column = COLUMN[original.type] as "recoveredG";
     row[column] += m.reverses ? -original.massG : m.massG;
   }
   return [...rows.values()].sort(
-    (a, b) => a.month.localeCompare(b.month) || a.technicianId.localeCompare(b.technicianId) || a.refrigerant.localeCompare(b.refrigerant),
+    (a, b) =>
+      a.month.localeCompare(b.month) ||
+      a.technicianId.localeCompare(b.technicianId) ||
+      a.refrigerant.localeCompare(b.refrigerant),
   );
 }
 
@@ -80,7 +96,10 @@ export const MONTHLY_REPORT_CSV_COLUMNS = [
 ] as const;
 
 /** CSV for the shop's records; names starting with = + - @ are defused so a spreadsheet will not run them. */
-export function toCsv(rows: readonly MonthlyReportRow[], opts: { technicianNames?: Readonly<Record<string, string>> } = {}): string {
+export function toCsv(
+  rows: readonly MonthlyReportRow[],
+  opts: { technicianNames?: Readonly<Record<string, string>> } = {},
+): string {
   const data = rows.map((r) => [
     r.month,
     opts.technicianNames?.[r.technicianId] ?? r.technicianId,
@@ -91,5 +110,8 @@ export function toCsv(rows: readonly MonthlyReportRow[], opts: { technicianNames
     r.sentOutG,
     r.adjustmentG,
   ]);
-  return Papa.unparse({ fields: [...MONTHLY_REPORT_CSV_COLUMNS], data }, { escapeFormulae: true, newline: "\r\n" });
+  return Papa.unparse(
+    { fields: [...MONTHLY_REPORT_CSV_COLUMNS], data },
+    { escapeFormulae: true, newline: "\r\n" },
+  );
 }

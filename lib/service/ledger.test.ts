@@ -1,11 +1,25 @@
 import fc from "fast-check";
 import Papa from "papaparse";
 import { describe, expect, it } from "vitest";
-import { type Cylinder, type CylinderMovement, activeMovements, applyMovements, fillLevelCheck, movementProblems } from "./ledger";
+import {
+  type Cylinder,
+  type CylinderMovement,
+  activeMovements,
+  applyMovements,
+  fillLevelCheck,
+  movementProblems,
+} from "./ledger";
 import { postingsForRecordChange, postingsForServiceRecord } from "./ledger-corrections";
 import { monthInTimeZone, monthlyReport, toCsv } from "./ledger-report";
 
-const tank: Cylinder = { id: "cyl-rec-1", refrigerant: "R-134a", kind: "recovery", capacityG: 20_000, tareG: 8_200, initialNetG: 1_500 };
+const tank: Cylinder = {
+  id: "cyl-rec-1",
+  refrigerant: "R-134a",
+  kind: "recovery",
+  capacityG: 20_000,
+  tareG: 8_200,
+  initialNetG: 1_500,
+};
 
 let seq = 0;
 const mv = (p: Partial<CylinderMovement> & Pick<CylinderMovement, "type" | "massG">): CylinderMovement => ({
@@ -34,7 +48,10 @@ describe("applyMovements", () => {
   });
 
   it("ignores other cylinders' movements and flags a refrigerant that does not belong", () => {
-    const s = applyMovements(tank, [mv({ type: "recovered_into", massG: 500, cylinderId: "other" }), mv({ type: "recovered_into", massG: 200, refrigerant: "R-1234yf" })]);
+    const s = applyMovements(tank, [
+      mv({ type: "recovered_into", massG: 500, cylinderId: "other" }),
+      mv({ type: "recovered_into", massG: 200, refrigerant: "R-1234yf" }),
+    ]);
     expect(s.netG).toBe(1_700);
     expect(s.problems.join(" ")).toContain("R-1234yf");
   });
@@ -63,22 +80,42 @@ describe("fillLevelCheck", () => {
 });
 
 describe("corrections", () => {
-  const record = { refrigerant: "R-134a" as const, technicianId: "tech-ines", recovery: { cylinderId: tank.id, massG: 740 }, recharge: null };
+  const record = {
+    refrigerant: "R-134a" as const,
+    technicianId: "tech-ines",
+    recovery: { cylinderId: tank.id, massG: 740 },
+    recharge: null,
+  };
   let n = 0;
   const newId = () => `c${++n}`;
 
   it("posts a service record's recovery and recharge", () => {
-    expect(postingsForServiceRecord({ ...record, recharge: { cylinderId: "cyl-supply-2", massG: 650 } }).map((p) => p.type)).toEqual([
-      "recovered_into",
-      "charged_from",
-    ]);
+    expect(
+      postingsForServiceRecord({ ...record, recharge: { cylinderId: "cyl-supply-2", massG: 650 } }).map(
+        (p) => p.type,
+      ),
+    ).toEqual(["recovered_into", "charged_from"]);
   });
 
   it("an edited record cancels its old posting and posts the new figure; the ledger follows", () => {
-    const first = postingsForRecordChange({ serviceRecordId: "sr1", posted: [], wanted: postingsForServiceRecord(record), at: "2026-11-10T15:00:00Z", technicianId: "tech-ines", newId });
+    const first = postingsForRecordChange({
+      serviceRecordId: "sr1",
+      posted: [],
+      wanted: postingsForServiceRecord(record),
+      at: "2026-11-10T15:00:00Z",
+      technicianId: "tech-ines",
+      newId,
+    });
     expect(first).toHaveLength(1);
     const edited = postingsForServiceRecord({ ...record, recovery: { cylinderId: tank.id, massG: 705 } });
-    const second = postingsForRecordChange({ serviceRecordId: "sr1", posted: activeMovements(first), wanted: edited, at: "2026-11-11T09:00:00Z", technicianId: "tech-ola", newId });
+    const second = postingsForRecordChange({
+      serviceRecordId: "sr1",
+      posted: activeMovements(first),
+      wanted: edited,
+      at: "2026-11-11T09:00:00Z",
+      technicianId: "tech-ola",
+      newId,
+    });
     expect(second.map((m) => [m.type, m.massG, Boolean(m.reverses)])).toEqual([
       ["recovered_into", 740, true],
       ["recovered_into", 705, false],
@@ -90,18 +127,53 @@ describe("corrections", () => {
   });
 
   it("re-saving an unchanged record posts nothing; deleting it cancels everything", () => {
-    const first = postingsForRecordChange({ serviceRecordId: "sr2", posted: [], wanted: postingsForServiceRecord(record), at: "2026-11-10T15:00:00Z", technicianId: "tech-ines", newId });
-    expect(postingsForRecordChange({ serviceRecordId: "sr2", posted: first, wanted: postingsForServiceRecord(record), at: "2026-11-12T09:00:00Z", technicianId: "tech-ines", newId })).toEqual([]);
-    const removal = postingsForRecordChange({ serviceRecordId: "sr2", posted: first, wanted: [], at: "2026-11-12T09:00:00Z", technicianId: "tech-ines", newId });
+    const first = postingsForRecordChange({
+      serviceRecordId: "sr2",
+      posted: [],
+      wanted: postingsForServiceRecord(record),
+      at: "2026-11-10T15:00:00Z",
+      technicianId: "tech-ines",
+      newId,
+    });
+    expect(
+      postingsForRecordChange({
+        serviceRecordId: "sr2",
+        posted: first,
+        wanted: postingsForServiceRecord(record),
+        at: "2026-11-12T09:00:00Z",
+        technicianId: "tech-ines",
+        newId,
+      }),
+    ).toEqual([]);
+    const removal = postingsForRecordChange({
+      serviceRecordId: "sr2",
+      posted: first,
+      wanted: [],
+      at: "2026-11-12T09:00:00Z",
+      technicianId: "tech-ines",
+      newId,
+    });
     expect(applyMovements(tank, [...first, ...removal]).netG).toBe(1_500);
   });
 
   it("refuses corrections that cancel twice, cancel nothing or do not match", () => {
     const a = mv({ type: "recovered_into", massG: 300 });
-    expect(movementProblems([a, mv({ type: "recovered_into", massG: 300, reverses: a.id }), mv({ type: "recovered_into", massG: 300, reverses: a.id })]).join(" ")).toContain("more than once");
-    expect(movementProblems([mv({ type: "charged_from", massG: 10, reverses: "ghost" })]).join(" ")).toContain("not in the ledger");
-    expect(movementProblems([a, mv({ type: "recovered_into", massG: 299, reverses: a.id })]).join(" ")).toContain("does not match");
-    expect(movementProblems([mv({ type: "sent_out", massG: 100 })]).join(" ")).toContain("where the refrigerant was sent");
+    expect(
+      movementProblems([
+        a,
+        mv({ type: "recovered_into", massG: 300, reverses: a.id }),
+        mv({ type: "recovered_into", massG: 300, reverses: a.id }),
+      ]).join(" "),
+    ).toContain("more than once");
+    expect(
+      movementProblems([mv({ type: "charged_from", massG: 10, reverses: "ghost" })]).join(" "),
+    ).toContain("not in the ledger");
+    expect(
+      movementProblems([a, mv({ type: "recovered_into", massG: 299, reverses: a.id })]).join(" "),
+    ).toContain("does not match");
+    expect(movementProblems([mv({ type: "sent_out", massG: 100 })]).join(" ")).toContain(
+      "where the refrigerant was sent",
+    );
   });
 });
 
@@ -113,13 +185,28 @@ describe("monthlyReport", () => {
   });
 
   it("property: the mid-month shortcut agrees with the IANA rules in far-off zones", () => {
-    const zones = ["Pacific/Kiritimati", "Etc/GMT+12", "Asia/Kathmandu", "America/St_Johns", "Australia/Lord_Howe", "America/Chicago"];
+    const zones = [
+      "Pacific/Kiritimati",
+      "Etc/GMT+12",
+      "Asia/Kathmandu",
+      "America/St_Johns",
+      "Australia/Lord_Howe",
+      "America/Chicago",
+    ];
     fc.assert(
-      fc.property(fc.integer({ min: Date.UTC(2000, 0, 1), max: Date.UTC(2040, 0, 1) }), fc.constantFrom(...zones), (ms, timeZone) => {
-        const parts = new Intl.DateTimeFormat("en-CA", { timeZone, year: "numeric", month: "2-digit" }).formatToParts(new Date(ms));
-        const expected = `${parts.find((p) => p.type === "year")?.value}-${parts.find((p) => p.type === "month")?.value}`;
-        expect(monthInTimeZone(new Date(ms).toISOString(), timeZone)).toBe(expected);
-      }),
+      fc.property(
+        fc.integer({ min: Date.UTC(2000, 0, 1), max: Date.UTC(2040, 0, 1) }),
+        fc.constantFrom(...zones),
+        (ms, timeZone) => {
+          const parts = new Intl.DateTimeFormat("en-CA", {
+            timeZone,
+            year: "numeric",
+            month: "2-digit",
+          }).formatToParts(new Date(ms));
+          const expected = `${parts.find((p) => p.type === "year")?.value}-${parts.find((p) => p.type === "month")?.value}`;
+          expect(monthInTimeZone(new Date(ms).toISOString(), timeZone)).toBe(expected);
+        },
+      ),
       { numRuns: 2000 },
     );
   });
@@ -131,10 +218,18 @@ describe("monthlyReport", () => {
       mv({ type: "charged_from", massG: 640, at: "2026-10-20T15:00:00Z" }),
       mv({ type: "recycled", massG: 1_350, at: "2026-10-28T15:00:00Z" }),
       mv({ type: "recovered_into", massG: 520, at: "2026-11-02T15:00:00Z", technicianId: "tech-ola" }),
-      mv({ type: "recovered_into", massG: 480, at: "2026-11-03T15:00:00Z", refrigerant: "R-1234yf", cylinderId: "yf-1" }),
+      mv({
+        type: "recovered_into",
+        massG: 480,
+        at: "2026-11-03T15:00:00Z",
+        refrigerant: "R-1234yf",
+        cylinderId: "yf-1",
+      }),
     ];
     const rows = monthlyReport(moves, { timeZone: "America/Chicago" });
-    expect(rows.map((r) => [r.month, r.technicianId, r.refrigerant, r.recoveredG, r.recycledG, r.chargedG])).toEqual([
+    expect(
+      rows.map((r) => [r.month, r.technicianId, r.refrigerant, r.recoveredG, r.recycledG, r.chargedG]),
+    ).toEqual([
       ["2026-10", "tech-ines", "R-134a", 1_350, 1_350, 640],
       ["2026-11", "tech-ines", "R-1234yf", 480, 0, 0],
       ["2026-11", "tech-ola", "R-134a", 520, 0, 0],
@@ -143,7 +238,13 @@ describe("monthlyReport", () => {
 
   it("counts a correction against the month of the movement it cancels", () => {
     const a = mv({ type: "recovered_into", massG: 900, at: "2026-10-30T14:00:00Z" });
-    const fix = mv({ type: "recovered_into", massG: 900, at: "2026-11-04T14:00:00Z", reverses: a.id, technicianId: "tech-ola" });
+    const fix = mv({
+      type: "recovered_into",
+      massG: 900,
+      at: "2026-11-04T14:00:00Z",
+      reverses: a.id,
+      technicianId: "tech-ola",
+    });
     const rows = monthlyReport([a, fix], { timeZone: "UTC" });
     expect(rows).toHaveLength(1);
     expect(rows[0]?.month).toBe("2026-10");
@@ -179,19 +280,31 @@ describe("monthlyReport", () => {
             destination: s.type === "sent_out" ? "Prairie Reclaim Co." : undefined,
           };
           moves.push(m);
-          if (s.cancel) moves.push({ ...m, id: `r${i}`, at: new Date(base + (s.day + 3) * 86_400_000).toISOString(), reverses: m.id });
+          if (s.cancel)
+            moves.push({
+              ...m,
+              id: `r${i}`,
+              at: new Date(base + (s.day + 3) * 86_400_000).toISOString(),
+              reverses: m.id,
+            });
         });
         const live = activeMovements(moves);
-        const sumOf = (t: (typeof types)[number]) => live.filter((m) => m.type === t).reduce((a, m) => a + m.massG, 0);
+        const sumOf = (t: (typeof types)[number]) =>
+          live.filter((m) => m.type === t).reduce((a, m) => a + m.massG, 0);
         const rows = monthlyReport(moves, { timeZone: "America/Denver" });
-        const total = (k: "recoveredG" | "recycledG" | "chargedG" | "sentOutG" | "adjustmentG") => rows.reduce((a, r) => a + r[k], 0);
+        const total = (k: "recoveredG" | "recycledG" | "chargedG" | "sentOutG" | "adjustmentG") =>
+          rows.reduce((a, r) => a + r[k], 0);
         expect(total("recoveredG")).toBe(sumOf("recovered_into"));
         expect(total("recycledG")).toBe(sumOf("recycled"));
         expect(total("chargedG")).toBe(sumOf("charged_from"));
         expect(total("sentOutG")).toBe(sumOf("sent_out"));
         expect(total("adjustmentG")).toBe(sumOf("adjustment"));
         expect(applyMovements(tank, moves).netG).toBe(
-          tank.initialNetG + sumOf("recovered_into") - sumOf("charged_from") - sumOf("sent_out") + sumOf("adjustment"),
+          tank.initialNetG +
+            sumOf("recovered_into") -
+            sumOf("charged_from") -
+            sumOf("sent_out") +
+            sumOf("adjustment"),
         );
         expect(movementProblems(moves)).toEqual([]);
       }),
@@ -201,14 +314,19 @@ describe("monthlyReport", () => {
 
 describe("toCsv", () => {
   const rows = monthlyReport(
-    [mv({ type: "recovered_into", massG: 700, at: "2026-10-05T14:00:00Z", technicianId: "t1" }), mv({ type: "charged_from", massG: 650, at: "2026-10-05T15:00:00Z", technicianId: "t2" })],
+    [
+      mv({ type: "recovered_into", massG: 700, at: "2026-10-05T14:00:00Z", technicianId: "t1" }),
+      mv({ type: "charged_from", massG: 650, at: "2026-10-05T15:00:00Z", technicianId: "t2" }),
+    ],
     { timeZone: "UTC" },
   );
 
   it("writes a header and quotes names with commas and quotes (RFC 4180)", () => {
     const csv = toCsv(rows, { technicianNames: { t1: 'Okafor, "Chi" N.', t2: "Lena Brandt" } });
     const lines = csv.split("\r\n");
-    expect(lines[0]).toBe("month,technician,refrigerant,recovered_g,recycled_g,charged_g,sent_out_g,adjustment_g");
+    expect(lines[0]).toBe(
+      "month,technician,refrigerant,recovered_g,recycled_g,charged_g,sent_out_g,adjustment_g",
+    );
     expect(lines[1]).toBe('2026-10,"Okafor, ""Chi"" N.",R-134a,700,0,0,0,0');
     const back = Papa.parse<string[]>(csv, { skipEmptyLines: true }).data;
     expect(back[1]?.[1]).toBe('Okafor, "Chi" N.');

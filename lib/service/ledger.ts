@@ -10,7 +10,13 @@ import { SERVICE_SOURCES } from "./sources";
  * sent_out: sent for reclaim or destruction; `destination` names the facility (−).
  * adjustment: a weighed correction, signed (±).
  */
-export const MOVEMENT_TYPES = ["recovered_into", "charged_from", "recycled", "sent_out", "adjustment"] as const;
+export const MOVEMENT_TYPES = [
+  "recovered_into",
+  "charged_from",
+  "recycled",
+  "sent_out",
+  "adjustment",
+] as const;
 export type MovementType = (typeof MOVEMENT_TYPES)[number];
 
 export interface CylinderMovement {
@@ -68,14 +74,17 @@ export function movementProblems(movements: readonly CylinderMovement[]): string
       problems.push(`Movement ${m.id}: the mass must be a positive number of grams.`);
     }
     if (Number.isNaN(Date.parse(m.at))) problems.push(`Movement ${m.id}: "${m.at}" is not a date and time.`);
-    if (m.type === "sent_out" && !m.destination?.trim()) problems.push(`Movement ${m.id}: say where the refrigerant was sent.`);
+    if (m.type === "sent_out" && !m.destination?.trim())
+      problems.push(`Movement ${m.id}: say where the refrigerant was sent.`);
   }
   for (const m of movements) {
     if (!m.reverses) continue;
     const original = byId.get(m.reverses);
     if (!original) problems.push(`Correction ${m.id} cancels ${m.reverses}, which is not in the ledger.`);
-    else if (original.reverses) problems.push(`Correction ${m.id} cancels another correction; post a new movement instead.`);
-    else if (reversedIds.has(original.id)) problems.push(`Movement ${original.id} is cancelled more than once.`);
+    else if (original.reverses)
+      problems.push(`Correction ${m.id} cancels another correction; post a new movement instead.`);
+    else if (reversedIds.has(original.id))
+      problems.push(`Movement ${original.id} is cancelled more than once.`);
     else if (original.type !== m.type || original.massG !== m.massG || original.cylinderId !== m.cylinderId) {
       problems.push(`Correction ${m.id} does not match the movement it cancels (${original.id}).`);
     }
@@ -135,12 +144,16 @@ export function applyMovements(cylinder: Cylinder, movements: readonly CylinderM
   let wentBelowEmpty = false;
   for (const m of own) {
     if (m.refrigerant !== cylinder.refrigerant) {
-      problems.push(`Movement ${m.id} is ${m.refrigerant} but cylinder ${cylinder.id} holds ${cylinder.refrigerant}.`);
+      problems.push(
+        `Movement ${m.id} is ${m.refrigerant} but cylinder ${cylinder.id} holds ${cylinder.refrigerant}.`,
+      );
     }
     netG += movementEffectG(m, m.reverses ? byId.get(m.reverses) : undefined);
     if (netG < -1e-9 && !wentBelowEmpty) {
       wentBelowEmpty = true;
-      problems.push(`After movement ${m.id} the cylinder would hold less than nothing: a movement is wrong or missing.`);
+      problems.push(
+        `After movement ${m.id} the cylinder would hold less than nothing: a movement is wrong or missing.`,
+      );
     }
   }
   const fill = fillLevelCheck(cylinder, netG);

@@ -24,7 +24,9 @@ describe("oilSuitsCompressor", () => {
   });
 
   it("accepts POE in an electric compressor that calls for it", () => {
-    expect(oilSuitsCompressor({ compressorDrive: "electric", oilAdded: "POE 80", specOilType: "POE" })).toEqual({ suits: true, warnings: [] });
+    expect(
+      oilSuitsCompressor({ compressorDrive: "electric", oilAdded: "POE 80", specOilType: "POE" }),
+    ).toEqual({ suits: true, warnings: [] });
   });
 
   it("asks to confirm an oil of unknown kind in an electric compressor", () => {
@@ -37,7 +39,9 @@ describe("oilSuitsCompressor", () => {
     const r = oilSuitsCompressor({ compressorDrive: "belt", oilAdded: "POE", specOilType: "PAG 46" });
     expect(r.suits).toBe(false);
     expect(r.warnings.map((w) => w.id)).toEqual(["differs_from_spec"]);
-    expect(oilSuitsCompressor({ compressorDrive: "belt", oilAdded: "PAG 46", specOilType: "PAG 46" }).warnings).toEqual([]);
+    expect(
+      oilSuitsCompressor({ compressorDrive: "belt", oilAdded: "PAG 46", specOilType: "PAG 46" }).warnings,
+    ).toEqual([]);
   });
 
   it("cautions against mineral oil with R-134a (from memory: not miscible)", () => {

@@ -47,7 +47,11 @@ export function oilSuitsCompressor(input: {
       });
     }
   }
-  if (input.specOilType && oilFamily(input.specOilType) !== "unknown" && oilFamily(input.specOilType) !== added) {
+  if (
+    input.specOilType &&
+    oilFamily(input.specOilType) !== "unknown" &&
+    oilFamily(input.specOilType) !== added
+  ) {
     warnings.push({
       id: "differs_from_spec",
       severity: "caution",

@@ -1,6 +1,11 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { DEFAULT_PART_OIL_ALLOWANCES_ML, estimateOilPulledMl, oilToAddBack, partOilAllowancesSchema } from "./oil";
+import {
+  DEFAULT_PART_OIL_ALLOWANCES_ML,
+  estimateOilPulledMl,
+  oilToAddBack,
+  partOilAllowancesSchema,
+} from "./oil";
 
 describe("oilToAddBack", () => {
   it("asks to add back exactly the oil removed during recovery (TM 5-3810-307-24-1-2 ch. 9)", () => {
@@ -21,7 +26,12 @@ describe("oilToAddBack", () => {
       (DEFAULT_PART_OIL_ALLOWANCES_ML.receiver_drier ?? Number.NaN) +
       2 * (DEFAULT_PART_OIL_ALLOWANCES_ML.hose ?? Number.NaN);
     expect(r.totalMl).toBe(expected);
-    expect(r.lines.map((l) => l.label)).toEqual(["Drained during recovery", "Condenser", "Receiver-drier", "Hose or line × 2"]);
+    expect(r.lines.map((l) => l.label)).toEqual([
+      "Drained during recovery",
+      "Condenser",
+      "Receiver-drier",
+      "Hose or line × 2",
+    ]);
     expect(r.lines[1]?.source).toContain("common practice");
   });
 
@@ -39,7 +49,10 @@ describe("oilToAddBack", () => {
     expect(open.complete).toBe(false);
     expect(open.totalMl).toBe(12);
     expect(open.warnings.join(" ")).toContain("measure");
-    const done = oilToAddBack({ drainedDuringRecoveryMl: 12, replacedParts: [{ part: "compressor", measuredMl: 70 }] });
+    const done = oilToAddBack({
+      drainedDuringRecoveryMl: 12,
+      replacedParts: [{ part: "compressor", measuredMl: 70 }],
+    });
     expect(done.complete).toBe(true);
     expect(done.totalMl).toBe(82);
   });
@@ -52,13 +65,19 @@ describe("oilToAddBack", () => {
   });
 
   it("warns when the add-back exceeds the system's total oil", () => {
-    const r = oilToAddBack({ drainedDuringRecoveryMl: 60, replacedParts: [{ part: "evaporator" }], totalSystemOilMl: 100 });
+    const r = oilToAddBack({
+      drainedDuringRecoveryMl: 60,
+      replacedParts: [{ part: "evaporator" }],
+      totalSystemOilMl: 100,
+    });
     expect(r.warnings.some((w) => w.includes("more than the system's total oil"))).toBe(true);
   });
 
   it("rejects negative volumes and part counts", () => {
     expect(() => oilToAddBack({ drainedDuringRecoveryMl: -1 })).toThrow(RangeError);
-    expect(() => oilToAddBack({ drainedDuringRecoveryMl: 1, replacedParts: [{ part: "hose", count: 0 }] })).toThrow(RangeError);
+    expect(() =>
+      oilToAddBack({ drainedDuringRecoveryMl: 1, replacedParts: [{ part: "hose", count: 0 }] }),
+    ).toThrow(RangeError);
   });
 
   it("property: with fixed allowances the total is the sum of its lines and never below what was drained", () => {
@@ -66,10 +85,15 @@ describe("oilToAddBack", () => {
     fc.assert(
       fc.property(
         fc.integer({ min: 0, max: 300 }),
-        fc.array(fc.record({ part: fc.constantFrom(...fixedParts), count: fc.integer({ min: 1, max: 3 }) }), { maxLength: 5 }),
+        fc.array(fc.record({ part: fc.constantFrom(...fixedParts), count: fc.integer({ min: 1, max: 3 }) }), {
+          maxLength: 5,
+        }),
         (drainedDuringRecoveryMl, replacedParts) => {
           const r = oilToAddBack({ drainedDuringRecoveryMl, replacedParts });
-          const manual = replacedParts.reduce((s, p) => s + (DEFAULT_PART_OIL_ALLOWANCES_ML[p.part] ?? 0) * p.count, drainedDuringRecoveryMl);
+          const manual = replacedParts.reduce(
+            (s, p) => s + (DEFAULT_PART_OIL_ALLOWANCES_ML[p.part] ?? 0) * p.count,
+            drainedDuringRecoveryMl,
+          );
           expect(r.totalMl).toBe(manual);
           expect(r.totalMl).toBeGreaterThanOrEqual(drainedDuringRecoveryMl);
         },
@@ -93,7 +117,9 @@ describe("estimateOilPulledMl", () => {
     expect(r.oilMassG).toBeCloseTo(36, 10);
     expect(r.oilMl).toBeCloseTo(36 / 0.99, 10);
     expect(r.sumpComparison).toBe("less_than_sump");
-    expect(r.sentence).toBe("About 36 mL of oil left with 900 g of liquid — less than a compressor sump holds (60–90 mL).");
+    expect(r.sentence).toBe(
+      "About 36 mL of oil left with 900 g of liquid — less than a compressor sump holds (60–90 mL).",
+    );
     expect(r.sources.join(" ")).toContain("common practice");
   });
 

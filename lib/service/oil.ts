@@ -2,7 +2,14 @@ import { z } from "zod";
 import { formatGrams, formatMillilitres } from "./format";
 import { SERVICE_SOURCES } from "./sources";
 
-export const REPLACED_PART_IDS = ["compressor", "condenser", "evaporator", "accumulator", "receiver_drier", "hose"] as const;
+export const REPLACED_PART_IDS = [
+  "compressor",
+  "condenser",
+  "evaporator",
+  "accumulator",
+  "receiver_drier",
+  "hose",
+] as const;
 export type ReplacedPartId = (typeof REPLACED_PART_IDS)[number];
 
 export const REPLACED_PART_LABELS: Readonly<Record<ReplacedPartId, string>> = {
@@ -65,7 +72,8 @@ export interface OilAddBack {
 }
 
 function assertVolume(name: string, volumeMl: number): void {
-  if (!Number.isFinite(volumeMl) || volumeMl < 0) throw new RangeError(`${name} must be a non-negative volume in mL, got ${volumeMl}`);
+  if (!Number.isFinite(volumeMl) || volumeMl < 0)
+    throw new RangeError(`${name} must be a non-negative volume in mL, got ${volumeMl}`);
 }
 
 /**
@@ -102,7 +110,8 @@ export function oilToAddBack(input: {
 
   let complete = true;
   for (const { part, count = 1, measuredMl } of input.replacedParts ?? []) {
-    if (!Number.isInteger(count) || count < 1) throw new RangeError(`count for ${part} must be a positive whole number`);
+    if (!Number.isInteger(count) || count < 1)
+      throw new RangeError(`count for ${part} must be a positive whole number`);
     const label = `${REPLACED_PART_LABELS[part]}${count > 1 ? ` × ${count}` : ""}`;
     if (measuredMl !== undefined) {
       assertVolume(`measuredMl for ${part}`, measuredMl);
@@ -112,8 +121,14 @@ export function oilToAddBack(input: {
     const allowanceMl = allowances[part] ?? null;
     if (allowanceMl === null) {
       complete = false;
-      lines.push({ label: `${label} (drain and measure)`, volumeMl: null, source: SERVICE_SOURCES.partOilAllowance });
-      warnings.push(`Drain the removed ${REPLACED_PART_LABELS[part].toLowerCase()} and measure its oil; the total is not final until then.`);
+      lines.push({
+        label: `${label} (drain and measure)`,
+        volumeMl: null,
+        source: SERVICE_SOURCES.partOilAllowance,
+      });
+      warnings.push(
+        `Drain the removed ${REPLACED_PART_LABELS[part].toLowerCase()} and measure its oil; the total is not final until then.`,
+      );
       continue;
     }
     lines.push({ label, volumeMl: allowanceMl * count, source: SERVICE_SOURCES.partOilAllowance });
@@ -156,7 +171,8 @@ export function estimateOilPulledMl(input: {
   const fractionPct = input.oilMassFractionPct ?? DEFAULT_OIL_MASS_FRACTION_PCT;
   const densityGPerMl = input.oilDensityGPerMl ?? DEFAULT_PAG_DENSITY_G_PER_ML;
   const sump = input.sumpMl ?? DEFAULT_SUMP_ML;
-  if (!(fractionPct >= 0 && fractionPct < 100)) throw new RangeError("oilMassFractionPct must be in [0, 100)");
+  if (!(fractionPct >= 0 && fractionPct < 100))
+    throw new RangeError("oilMassFractionPct must be in [0, 100)");
   if (!(densityGPerMl > 0)) throw new RangeError("oilDensityGPerMl must be positive");
   if (!(sump.minMl > 0 && sump.maxMl >= sump.minMl)) throw new RangeError("sumpMl must be a positive range");
 

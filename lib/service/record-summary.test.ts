@@ -30,12 +30,20 @@ describe("summariseServiceRecord", () => {
 
   it("uses the pulled-oil estimate when oil left with liquid (common practice: about 4 % oil in circulating refrigerant)", () => {
     const recoveredG = 1500;
-    const s = summariseServiceRecord({ refrigerant: "R-134a", recoveredG, oilPulled: true, oilDrainedMl: 20 });
+    const s = summariseServiceRecord({
+      refrigerant: "R-134a",
+      recoveredG,
+      oilPulled: true,
+      oilDrainedMl: 20,
+    });
     const expectedMl = (recoveredG * 0.04) / 0.99; // PAG about 0.99 g/mL, from memory
     expect(s.pulledOil?.oilMl).toBeCloseTo(expectedMl, 6);
     expect(s.pulledOil?.sumpComparison).toBe("about_a_sump"); // 60–90 mL sump, common practice
     expect(s.addBack?.totalMl).toBeCloseTo(expectedMl, 6);
-    expect(summariseServiceRecord({ refrigerant: "R-134a", recoveredG, oilPulled: false, oilDrainedMl: 20 }).pulledOil).toBeNull();
+    expect(
+      summariseServiceRecord({ refrigerant: "R-134a", recoveredG, oilPulled: false, oilDrainedMl: 20 })
+        .pulledOil,
+    ).toBeNull();
   });
 
   it("flags a charge 20 g off target as outside and 10 g off as inside the ½ oz SAE J2843 accuracy", () => {
@@ -55,8 +63,18 @@ describe("summariseServiceRecord", () => {
 
   it("fails a vacuum hold that loses more than 2 inHg in 5 minutes and passes one that loses 1 (US Army TM 5-2420-230-24-1 field practice)", () => {
     const startKpaAbs = 2.5;
-    const fail = summariseServiceRecord({ refrigerant: "R-134a", holdStartKpaAbs: startKpaAbs, holdEndKpaAbs: startKpaAbs + 2.5 * KPA_PER_INHG, holdMinutes: 5 });
-    const pass = summariseServiceRecord({ refrigerant: "R-134a", holdStartKpaAbs: startKpaAbs, holdEndKpaAbs: startKpaAbs + 1 * KPA_PER_INHG, holdMinutes: 5 });
+    const fail = summariseServiceRecord({
+      refrigerant: "R-134a",
+      holdStartKpaAbs: startKpaAbs,
+      holdEndKpaAbs: startKpaAbs + 2.5 * KPA_PER_INHG,
+      holdMinutes: 5,
+    });
+    const pass = summariseServiceRecord({
+      refrigerant: "R-134a",
+      holdStartKpaAbs: startKpaAbs,
+      holdEndKpaAbs: startKpaAbs + 1 * KPA_PER_INHG,
+      holdMinutes: 5,
+    });
     expect(fail.hold?.verdict).toBe("fail");
     expect(pass.hold?.verdict).toBe("pass");
   });
@@ -68,7 +86,13 @@ describe("summariseServiceRecord", () => {
   });
 
   it("turns an impossible value into a problem line instead of throwing", () => {
-    const s = summariseServiceRecord({ refrigerant: "R-134a", oilDrainedMl: -5, holdStartKpaAbs: 3, holdEndKpaAbs: 4, holdMinutes: 0 });
+    const s = summariseServiceRecord({
+      refrigerant: "R-134a",
+      oilDrainedMl: -5,
+      holdStartKpaAbs: 3,
+      holdEndKpaAbs: 4,
+      holdMinutes: 0,
+    });
     expect(s.addBack).toBeNull();
     expect(s.hold).toBeNull();
     expect(s.problems.length).toBe(2);
@@ -76,7 +100,14 @@ describe("summariseServiceRecord", () => {
 
   it("leaves every result empty on an empty record", () => {
     const s = summariseServiceRecord({ refrigerant: "R-1234yf" });
-    expect([s.recovered, s.addBack, s.charge, s.hold, s.evacuation, s.target]).toEqual([null, null, null, null, null, null]);
+    expect([s.recovered, s.addBack, s.charge, s.hold, s.evacuation, s.target]).toEqual([
+      null,
+      null,
+      null,
+      null,
+      null,
+      null,
+    ]);
     expect(s.problems).toEqual([]);
   });
 });

@@ -1,9 +1,29 @@
 import type { RefrigerantId } from "@/lib/refrigerants";
-import { type ChargeCheck, type RecoveredAgainstLabel, type TargetCharge, chargeWithinTolerance, recoveredAgainstLabel, targetCharge } from "./charge";
+import {
+  type ChargeCheck,
+  type RecoveredAgainstLabel,
+  type TargetCharge,
+  chargeWithinTolerance,
+  recoveredAgainstLabel,
+  targetCharge,
+} from "./charge";
 import { formatMillilitres } from "./format";
-import { type OilAddBack, type OilPulledEstimate, type PartOilAllowancesMl, type ReplacedPart, estimateOilPulledMl, oilToAddBack } from "./oil";
+import {
+  type OilAddBack,
+  type OilPulledEstimate,
+  type PartOilAllowancesMl,
+  type ReplacedPart,
+  estimateOilPulledMl,
+  oilToAddBack,
+} from "./oil";
 import { type CompressorDrive, type OilWarning, oilSuitsCompressor } from "./oil-type";
-import { type EvacuationCheck, type HoldLimit, type VacuumHoldResult, evaluateEvacuation, vacuumHoldTest } from "./vacuum";
+import {
+  type EvacuationCheck,
+  type HoldLimit,
+  type VacuumHoldResult,
+  evaluateEvacuation,
+  vacuumHoldTest,
+} from "./vacuum";
 
 /** What a service record holds so far; every field may still be empty while the work goes on. */
 export interface ServiceRecordValues {
@@ -49,14 +69,18 @@ export interface ServiceRecordSummary {
   problems: string[];
 }
 
-const has = (v: number | null | undefined): v is number => v !== null && v !== undefined && Number.isFinite(v);
+const has = (v: number | null | undefined): v is number =>
+  v !== null && v !== undefined && Number.isFinite(v);
 
 /**
  * Everything the service record works out from what has been typed so far. Never throws:
  * a value a computation refuses becomes a problem line, so the screen keeps working while
  * the technician is halfway through a number.
  */
-export function summariseServiceRecord(v: ServiceRecordValues, ctx: ServiceRecordContext = {}): ServiceRecordSummary {
+export function summariseServiceRecord(
+  v: ServiceRecordValues,
+  ctx: ServiceRecordContext = {},
+): ServiceRecordSummary {
   const problems: string[] = [];
   const attempt = <T>(fn: () => T): T | null => {
     try {
@@ -69,10 +93,19 @@ export function summariseServiceRecord(v: ServiceRecordValues, ctx: ServiceRecor
 
   const recovered =
     has(v.labelChargeG) && v.labelChargeG > 0 && has(v.recoveredG)
-      ? attempt(() => recoveredAgainstLabel({ labelChargeG: v.labelChargeG!, recoveredChargeG: v.recoveredG!, refrigerant: v.refrigerant }))
+      ? attempt(() =>
+          recoveredAgainstLabel({
+            labelChargeG: v.labelChargeG!,
+            recoveredChargeG: v.recoveredG!,
+            refrigerant: v.refrigerant,
+          }),
+        )
       : null;
 
-  const pulledOil = v.oilPulled && has(v.recoveredG) ? attempt(() => estimateOilPulledMl({ liquidRecoveredG: v.recoveredG! })) : null;
+  const pulledOil =
+    v.oilPulled && has(v.recoveredG)
+      ? attempt(() => estimateOilPulledMl({ liquidRecoveredG: v.recoveredG! }))
+      : null;
 
   const addBack = has(v.oilDrainedMl)
     ? attempt(() =>
@@ -106,16 +139,41 @@ export function summariseServiceRecord(v: ServiceRecordValues, ctx: ServiceRecor
       }).warnings
     : [];
 
-  const target = attempt(() => targetCharge({ labelChargeG: v.labelChargeG, specChargeG: v.specChargeG, refrigerant: v.refrigerant }));
+  const target = attempt(() =>
+    targetCharge({ labelChargeG: v.labelChargeG, specChargeG: v.specChargeG, refrigerant: v.refrigerant }),
+  );
   const targetG = has(v.targetG) && v.targetG > 0 ? v.targetG : (target?.targetG ?? null);
   const charge =
-    has(targetG) && has(v.chargedG) ? attempt(() => chargeWithinTolerance({ targetG, chargedG: v.chargedG!, refrigerant: v.refrigerant })) : null;
-
-  const evacuation = has(v.deepestKpaAbs) ? attempt(() => evaluateEvacuation({ deepestKpaAbs: v.deepestKpaAbs!, altitudeM: ctx.altitudeM })) : null;
-  const hold =
-    has(v.holdStartKpaAbs) && has(v.holdEndKpaAbs) && has(v.holdMinutes)
-      ? attempt(() => vacuumHoldTest({ startKpaAbs: v.holdStartKpaAbs!, endKpaAbs: v.holdEndKpaAbs!, minutes: v.holdMinutes!, limit: ctx.holdLimit }))
+    has(targetG) && has(v.chargedG)
+      ? attempt(() => chargeWithinTolerance({ targetG, chargedG: v.chargedG!, refrigerant: v.refrigerant }))
       : null;
 
-  return { recovered, pulledOil, addBack, oilAddedDeltaMl, oilAddedSentence, oilWarnings, target, charge, evacuation, hold, problems };
+  const evacuation = has(v.deepestKpaAbs)
+    ? attempt(() => evaluateEvacuation({ deepestKpaAbs: v.deepestKpaAbs!, altitudeM: ctx.altitudeM }))
+    : null;
+  const hold =
+    has(v.holdStartKpaAbs) && has(v.holdEndKpaAbs) && has(v.holdMinutes)
+      ? attempt(() =>
+          vacuumHoldTest({
+            startKpaAbs: v.holdStartKpaAbs!,
+            endKpaAbs: v.holdEndKpaAbs!,
+            minutes: v.holdMinutes!,
+            limit: ctx.holdLimit,
+          }),
+        )
+      : null;
+
+  return {
+    recovered,
+    pulledOil,
+    addBack,
+    oilAddedDeltaMl,
+    oilAddedSentence,
+    oilWarnings,
+    target,
+    charge,
+    evacuation,
+    hold,
+    problems,
+  };
 }

@@ -10,19 +10,23 @@ export const SERVICE_SOURCES = {
   j2843Recovery: "SAE J2843 recovery requirement: at least 95 % of the charge recovered",
   j2843ChargeAccuracy:
     "SAE J2843 recharge accuracy of ½ oz (about 15 g), as reported in trade press (MTD magazine, April 2017)",
-  j2788ChargeAccuracy: "SAE J2788 charge accuracy of ±15 g (½ oz) — from memory, not checked against the standard's text",
+  j2788ChargeAccuracy:
+    "SAE J2788 charge accuracy of ±15 g (½ oz) — from memory, not checked against the standard's text",
   noChargeStandard:
     "common practice — no SAE charge-accuracy figure on hand for this refrigerant; ½ oz (15 g) used by analogy with SAE J2788/J2843",
   oilCirculation: "common practice — circulating refrigerant carries roughly 4 % oil by mass",
   pagDensity: "from memory — PAG compressor oil density about 0.99 g/mL at room temperature",
   compressorSump: "common practice — a passenger-car compressor sump holds roughly 60–90 mL of oil",
-  partOilAllowance: "common practice, from memory — typical oil carried by a replaced part; the vehicle maker's figure governs",
-  oilAddBack: "US Army TM 5-3810-307-24-1-2 ch. 9: measure the oil the recovery machine drained and add that amount back",
+  partOilAllowance:
+    "common practice, from memory — typical oil carried by a replaced part; the vehicle maker's figure governs",
+  oilAddBack:
+    "US Army TM 5-3810-307-24-1-2 ch. 9: measure the oil the recovery machine drained and add that amount back",
   dielectricOil:
     "SAE J2788H (no oil injection for electric-compressor vehicles); ABRN 2014 'Readying your shop for hybrid A/C service': about 1 % PAG in the oil can compromise compressor insulation",
   vacuumTarget:
     "US Army TM 5-3805-296-23-4 WP 0248: 28–29 inHg vacuum at sea level, about 1 inHg less per 1000 ft of altitude",
-  standardAtmosphere: "ICAO/US Standard Atmosphere 1976 via ASHRAE Fundamentals (PsychroLib GetStandardAtmPressure)",
+  standardAtmosphere:
+    "ICAO/US Standard Atmosphere 1976 via ASHRAE Fundamentals (PsychroLib GetStandardAtmPressure)",
   waterBoiling:
     "ASHRAE Handbook—Fundamentals (2017) ch. 1 saturation pressure of water (PsychroLib GetSatVapPres); US Army TM 5-3805-296-23-4 WP 0248 table",
   vacuumHold:

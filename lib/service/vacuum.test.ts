@@ -2,7 +2,13 @@ import fc from "fast-check";
 import psychrolib from "psychrolib";
 import { describe, expect, it } from "vitest";
 import { kpaAbsToVacuumInHg, pressureToKpa } from "@/lib/units";
-import { DEFAULT_HOLD_LIMIT, evacuationTarget, evaluateEvacuation, vacuumHoldFromGauge, vacuumHoldTest } from "./vacuum";
+import {
+  DEFAULT_HOLD_LIMIT,
+  evacuationTarget,
+  evaluateEvacuation,
+  vacuumHoldFromGauge,
+  vacuumHoldTest,
+} from "./vacuum";
 import { waterSaturationKpaAbs } from "./water-boiling";
 
 const FT_TO_M = 0.3048; // NIST SP 811 App. B: 1 ft = 0.3048 m exactly
@@ -20,9 +26,14 @@ describe("evacuationTarget", () => {
     [2000, 26],
     [3000, 25],
     [5000, 23],
-  ])("at %i ft it is about 1 inHg less per 1000 ft (TM 5-3805-296-23-4 WP 0248), within 0.25 inHg", (feet, manualInHg) => {
-    expect(Math.abs(evacuationTarget({ altitudeM: feet * FT_TO_M }).minimumVacuumInHg - manualInHg)).toBeLessThan(0.25);
-  });
+  ])(
+    "at %i ft it is about 1 inHg less per 1000 ft (TM 5-3805-296-23-4 WP 0248), within 0.25 inHg",
+    (feet, manualInHg) => {
+      expect(
+        Math.abs(evacuationTarget({ altitudeM: feet * FT_TO_M }).minimumVacuumInHg - manualInHg),
+      ).toBeLessThan(0.25);
+    },
+  );
 
   it("at 1500 m uses the standard atmosphere of 84.556 kPa (ASHRAE Handbook—Fundamentals ch. 1 table 1)", () => {
     const t = evacuationTarget({ altitudeM: 1500 });
@@ -48,7 +59,9 @@ describe("waterSaturationKpaAbs", () => {
   it("agrees with PsychroLib's GetSatVapPres over 1–99 °C (ASHRAE Fundamentals 2017 ch. 1 eq. 6)", () => {
     psychrolib.SetUnitSystem(psychrolib.SI);
     for (let tempC = 1; tempC < 100; tempC += 7) {
-      expect(Math.abs(waterSaturationKpaAbs(tempC) / (psychrolib.GetSatVapPres(tempC) / 1000) - 1)).toBeLessThan(1e-6);
+      expect(
+        Math.abs(waterSaturationKpaAbs(tempC) / (psychrolib.GetSatVapPres(tempC) / 1000) - 1),
+      ).toBeLessThan(1e-6);
     }
   });
 
@@ -57,10 +70,15 @@ describe("waterSaturationKpaAbs", () => {
     [90, 28.5],
     [81, 28.8],
     [70, 29.2],
-  ])("water boils at %i °F under about %f inHg of vacuum at sea level (TM 5-3805-296-23-4 WP 0248 table), within 0.1 inHg", (tempF, inHg) => {
-    const tempC = ((tempF - 32) * 5) / 9;
-    expect(Math.abs(kpaAbsToVacuumInHg(waterSaturationKpaAbs(tempC), { altitudeM: 0 }) - inHg)).toBeLessThan(0.1);
-  });
+  ])(
+    "water boils at %i °F under about %f inHg of vacuum at sea level (TM 5-3805-296-23-4 WP 0248 table), within 0.1 inHg",
+    (tempF, inHg) => {
+      const tempC = ((tempF - 32) * 5) / 9;
+      expect(
+        Math.abs(kpaAbsToVacuumInHg(waterSaturationKpaAbs(tempC), { altitudeM: 0 }) - inHg),
+      ).toBeLessThan(0.1);
+    },
+  );
 
   it("refuses temperatures outside the equation's range", () => {
     expect(() => waterSaturationKpaAbs(-5)).toThrow(RangeError);
@@ -105,12 +123,16 @@ describe("vacuumHoldTest", () => {
     const rise = 3 * 3.386389;
     expect(vacuumHoldTest({ startKpaAbs: 3, endKpaAbs: 3 + rise, minutes: 10 }).verdict).toBe("pass");
     expect(vacuumHoldTest({ startKpaAbs: 3, endKpaAbs: 3 + rise, minutes: 5 }).verdict).toBe("fail");
-    expect(vacuumHoldTest({ startKpaAbs: 3, endKpaAbs: 3.5, minutes: 2 }).warnings[0]).toContain("less than 5 min");
+    expect(vacuumHoldTest({ startKpaAbs: 3, endKpaAbs: 3.5, minutes: 2 }).warnings[0]).toContain(
+      "less than 5 min",
+    );
   });
 
   it("applies the shop's own stricter limit", () => {
     const limit = { riseKpa: pressureToKpa(1, "inHg"), perMinutes: 5 };
-    expect(vacuumHoldTest({ startKpaAbs: 3, endKpaAbs: 3 + 1.5 * 3.386389, minutes: 5, limit }).verdict).toBe("fail");
+    expect(vacuumHoldTest({ startKpaAbs: 3, endKpaAbs: 3 + 1.5 * 3.386389, minutes: 5, limit }).verdict).toBe(
+      "fail",
+    );
   });
 
   it("notes a vacuum that deepened during the hold", () => {
@@ -133,7 +155,9 @@ describe("vacuumHoldFromGauge", () => {
   });
 
   it("says plainly when a reading is deeper than the local atmosphere allows", () => {
-    expect(() => vacuumHoldFromGauge({ startVacuumInHg: 29.5, endVacuumInHg: 29, minutes: 5, altitudeM: 1500 })).toThrow(/check the gauge/);
+    expect(() =>
+      vacuumHoldFromGauge({ startVacuumInHg: 29.5, endVacuumInHg: 29, minutes: 5, altitudeM: 1500 }),
+    ).toThrow(/check the gauge/);
   });
 
   it("property: the rise does not depend on the altitude the gauge was read at (same barometer for both readings)", () => {
@@ -144,7 +168,12 @@ describe("vacuumHoldFromGauge", () => {
         fc.double({ min: 0, max: 5, noNaN: true }),
         (altitudeM, depthFraction, lossInHg) => {
           const startVacuumInHg = kpaAbsToVacuumInHg(0.5 + depthFraction * 20, { altitudeM });
-          const r = vacuumHoldFromGauge({ startVacuumInHg, endVacuumInHg: startVacuumInHg - lossInHg, minutes: 5, altitudeM });
+          const r = vacuumHoldFromGauge({
+            startVacuumInHg,
+            endVacuumInHg: startVacuumInHg - lossInHg,
+            minutes: 5,
+            altitudeM,
+          });
           expect(r.riseKpa).toBeCloseTo(lossInHg * 3.386389, 6);
           if (Math.abs(lossInHg - 2) > 1e-6) expect(r.verdict).toBe(lossInHg < 2 ? "pass" : "fail");
         },

@@ -1,4 +1,10 @@
-import { type BarometricSource, barometricKpa, pressureFromKpa, pressureToKpa, vacuumInHgToKpaAbs } from "@/lib/units";
+import {
+  type BarometricSource,
+  barometricKpa,
+  pressureFromKpa,
+  pressureToKpa,
+  vacuumInHgToKpaAbs,
+} from "@/lib/units";
 import { formatNumber } from "./format";
 import { SERVICE_SOURCES } from "./sources";
 import { waterSaturationKpaAbs } from "./water-boiling";
@@ -36,7 +42,11 @@ export function evacuationTarget(at: Altitude = {}): EvacuationTarget {
     preferredKpaAbs,
     minimumVacuumInHg: pressureFromKpa(localKpa - maxKpaAbs, "inHg"),
     preferredVacuumInHg: pressureFromKpa(localKpa - preferredKpaAbs, "inHg"),
-    sources: [SERVICE_SOURCES.vacuumTarget, SERVICE_SOURCES.standardAtmosphere, SERVICE_SOURCES.inchOfMercury],
+    sources: [
+      SERVICE_SOURCES.vacuumTarget,
+      SERVICE_SOURCES.standardAtmosphere,
+      SERVICE_SOURCES.inchOfMercury,
+    ],
   };
 }
 
@@ -50,9 +60,12 @@ export interface EvacuationCheck {
 }
 
 /** Deepest vacuum reached against the target, and whether moisture can boil off at it. */
-export function evaluateEvacuation(input: { deepestKpaAbs: number; ambientC?: number } & Altitude): EvacuationCheck {
+export function evaluateEvacuation(
+  input: { deepestKpaAbs: number; ambientC?: number } & Altitude,
+): EvacuationCheck {
   const { deepestKpaAbs } = input;
-  if (!Number.isFinite(deepestKpaAbs) || deepestKpaAbs < 0) throw new RangeError("deepestKpaAbs must be a non-negative absolute pressure");
+  if (!Number.isFinite(deepestKpaAbs) || deepestKpaAbs < 0)
+    throw new RangeError("deepestKpaAbs must be a non-negative absolute pressure");
   const target = evacuationTarget(input);
   const reached = deepestKpaAbs <= target.maxKpaAbs;
   const messages: string[] = [];
@@ -105,9 +118,12 @@ export function vacuumHoldTest(input: {
 }): VacuumHoldResult {
   const { startKpaAbs, endKpaAbs, minutes } = input;
   const limit = input.limit ?? DEFAULT_HOLD_LIMIT;
-  if (![startKpaAbs, endKpaAbs].every((p) => Number.isFinite(p) && p >= 0)) throw new RangeError("hold pressures must be non-negative kPa absolute");
-  if (!(Number.isFinite(minutes) && minutes > 0)) throw new RangeError("the hold must last a positive number of minutes");
-  if (!(limit.riseKpa >= 0 && limit.perMinutes > 0)) throw new RangeError("the hold limit must be a non-negative rise over a positive time");
+  if (![startKpaAbs, endKpaAbs].every((p) => Number.isFinite(p) && p >= 0))
+    throw new RangeError("hold pressures must be non-negative kPa absolute");
+  if (!(Number.isFinite(minutes) && minutes > 0))
+    throw new RangeError("the hold must last a positive number of minutes");
+  if (!(limit.riseKpa >= 0 && limit.perMinutes > 0))
+    throw new RangeError("the hold limit must be a non-negative rise over a positive time");
 
   const riseKpa = endKpaAbs - startKpaAbs;
   const allowedRiseKpa = (limit.riseKpa * minutes) / limit.perMinutes;
@@ -119,8 +135,14 @@ export function vacuumHoldTest(input: {
       ? `Vacuum rose ${riseText}, within the shop's limit of ${limitText}: the system holds.`
       : `Vacuum rose ${riseText}, faster than the shop's limit of ${limitText}: a leak or moisture boiling off. Find the leak with a detector (a vacuum does not locate leaks) or evacuate longer if moisture is suspected, then repeat the hold.`;
   const warnings: string[] = [];
-  if (minutes < limit.perMinutes) warnings.push(`The hold lasted less than ${formatNumber(limit.perMinutes)} min; a short hold can hide a slow leak.`);
-  if (riseKpa < 0) warnings.push("The vacuum deepened during the hold: check that the pump was isolated and the gauge had settled.");
+  if (minutes < limit.perMinutes)
+    warnings.push(
+      `The hold lasted less than ${formatNumber(limit.perMinutes)} min; a short hold can hide a slow leak.`,
+    );
+  if (riseKpa < 0)
+    warnings.push(
+      "The vacuum deepened during the hold: check that the pump was isolated and the gauge had settled.",
+    );
   return {
     verdict,
     riseKpa,

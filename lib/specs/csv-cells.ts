@@ -18,7 +18,17 @@ export function parseYearRange(text: string): { from: number; to: number } | nul
   return m ? { from: Number(m[1]), to: Number(m[2]) } : null;
 }
 
-const TRUE_WORDS = new Set(["yes", "y", "true", "1", "rear", "front+rear", "front and rear", "front & rear", "dual"]);
+const TRUE_WORDS = new Set([
+  "yes",
+  "y",
+  "true",
+  "1",
+  "rear",
+  "front+rear",
+  "front and rear",
+  "front & rear",
+  "dual",
+]);
 const FALSE_WORDS = new Set(["no", "n", "false", "0", "front", "front only", "single", "none"]);
 
 export function parseRearAc(text: string): boolean | null {
@@ -34,9 +44,13 @@ const AMBIGUOUS_THOUSANDS = /^[1-9]\d{0,2}(,\d{3})+(\s*[^\d,.\s].*)?$/;
 
 export type Measured<U extends string> = { valueInBase: number; unit: U } | { problem: string };
 
-function declaredUnit<U extends string>(what: string, declared: (U | undefined)[]): U | undefined | { problem: string } {
+function declaredUnit<U extends string>(
+  what: string,
+  declared: (U | undefined)[],
+): U | undefined | { problem: string } {
   const set = [...new Set(declared.filter((u): u is U => u !== undefined))];
-  if (set.length > 1) return { problem: `${what}: the header and the unit column disagree (${set.join(" vs ")})` };
+  if (set.length > 1)
+    return { problem: `${what}: the header and the unit column disagree (${set.join(" vs ")})` };
   return set[0];
 }
 
@@ -47,11 +61,13 @@ export function parseChargeCell(
   fallback: MassUnit,
   decimalComma = false,
 ): Measured<MassUnit> {
-  if (!decimalComma && AMBIGUOUS_THOUSANDS.test(text)) return { problem: `label charge "${text}": write numbers without a thousands separator` };
+  if (!decimalComma && AMBIGUOUS_THOUSANDS.test(text))
+    return { problem: `label charge "${text}": write numbers without a thousands separator` };
   const unit = declaredUnit("label charge", declared);
   if (typeof unit === "object") return unit;
   const q = parseQuantity(text, "mass", unit ?? fallback);
-  if ("error" in q) return { problem: `label charge "${text}" is not a mass (for example 650, 1.4 kg or 23 oz)` };
+  if ("error" in q)
+    return { problem: `label charge "${text}" is not a mass (for example 650, 1.4 kg or 23 oz)` };
   if (/[a-z]/i.test(text) && unit && q.unit !== unit) {
     return { problem: `label charge "${text}" is in ${q.unit} but the column says ${unit}` };
   }
@@ -65,12 +81,14 @@ export function parseOilCell(
   fallback: VolumeUnit,
   decimalComma = false,
 ): Measured<VolumeUnit> {
-  if (!decimalComma && AMBIGUOUS_THOUSANDS.test(text)) return { problem: `total oil "${text}": write numbers without a thousands separator` };
+  if (!decimalComma && AMBIGUOUS_THOUSANDS.test(text))
+    return { problem: `total oil "${text}": write numbers without a thousands separator` };
   const unit = declaredUnit("total oil", declared);
   if (typeof unit === "object") return unit;
   const spelled = /fl/i.test(text) ? text : text.replace(/\boz\b/i, "fl oz");
   const q = parseQuantity(spelled, "volume", unit ?? fallback);
-  if ("error" in q) return { problem: `total oil "${text}" is not a volume (for example 120, 120 mL or 4 fl oz)` };
+  if ("error" in q)
+    return { problem: `total oil "${text}" is not a volume (for example 120, 120 mL or 4 fl oz)` };
   if (/[a-z]/i.test(text) && unit && q.unit !== unit) {
     return { problem: `total oil "${text}" is in ${q.unit} but the column says ${unit}` };
   }

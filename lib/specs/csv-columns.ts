@@ -75,8 +75,21 @@ const ALIASES: Readonly<Record<string, SpecField>> = {
   units: "units",
 };
 
-const MASS_SUFFIXES: Readonly<Record<string, MassUnit>> = { g: "g", grams: "g", kg: "kg", oz: "oz", lb: "lb", lbs: "lb" };
-const VOLUME_SUFFIXES: Readonly<Record<string, VolumeUnit>> = { ml: "mL", cc: "mL", floz: "floz", fl_oz: "floz", oz: "floz" };
+const MASS_SUFFIXES: Readonly<Record<string, MassUnit>> = {
+  g: "g",
+  grams: "g",
+  kg: "kg",
+  oz: "oz",
+  lb: "lb",
+  lbs: "lb",
+};
+const VOLUME_SUFFIXES: Readonly<Record<string, VolumeUnit>> = {
+  ml: "mL",
+  cc: "mL",
+  floz: "floz",
+  fl_oz: "floz",
+  oz: "floz",
+};
 
 export interface ColumnRole {
   field: SpecField;

@@ -27,7 +27,10 @@ export function findDuplicatesAndOverlaps(rows: RowLike[], existing: readonly Sp
     if (existingKeys.has(key)) r.problems.push("already in the spec table");
     const first = firstLineByKey.get(key);
     if (first) {
-      const differs = first.row.labelChargeG !== v.labelChargeG ? ` with a different charge (${first.row.labelChargeG} g there)` : "";
+      const differs =
+        first.row.labelChargeG !== v.labelChargeG
+          ? ` with a different charge (${first.row.labelChargeG} g there)`
+          : "";
       r.problems.push(`duplicate of line ${first.line}${differs}`);
       continue;
     }
@@ -36,7 +39,9 @@ export function findDuplicatesAndOverlaps(rows: RowLike[], existing: readonly Sp
     const siblings = byVariant.get(vk) ?? [];
     for (const s of siblings) {
       if (s.row.yearFrom <= v.yearTo && v.yearFrom <= s.row.yearTo) {
-        r.warnings.push(`years overlap line ${s.line} (${s.row.yearFrom}–${s.row.yearTo}) for the same variant`);
+        r.warnings.push(
+          `years overlap line ${s.line} (${s.row.yearFrom}–${s.row.yearTo}) for the same variant`,
+        );
       }
     }
     siblings.push({ line: r.line, row: v });

@@ -5,15 +5,39 @@ import { parseSpecCsv } from "./parse-csv";
 import type { SpecRow } from "./schema";
 
 const sample: SpecRow[] = [
-  { yearFrom: 2016, yearTo: 2019, make: "Ford", model: "Explorer", variant: "3.5L V6, tow", rearAc: true, refrigerant: "R-134a", labelChargeG: 1130, oilType: "PAG 46", totalOilMl: 270 },
-  { yearFrom: 2021, yearTo: 2024, make: "Toyota", model: "=Corolla", variant: "", rearAc: false, refrigerant: "R-1234yf", labelChargeG: 440, oilType: "PAG 46", totalOilMl: null },
+  {
+    yearFrom: 2016,
+    yearTo: 2019,
+    make: "Ford",
+    model: "Explorer",
+    variant: "3.5L V6, tow",
+    rearAc: true,
+    refrigerant: "R-134a",
+    labelChargeG: 1130,
+    oilType: "PAG 46",
+    totalOilMl: 270,
+  },
+  {
+    yearFrom: 2021,
+    yearTo: 2024,
+    make: "Toyota",
+    model: "=Corolla",
+    variant: "",
+    rearAc: false,
+    refrigerant: "R-1234yf",
+    labelChargeG: 440,
+    oilType: "PAG 46",
+    totalOilMl: null,
+  },
 ];
 
 describe("specRowsToCsv", () => {
   it("writes the canonical header, yes/no for rear A/C, quotes and defused formulas", () => {
     const csv = specRowsToCsv(sample);
     const lines = csv.split("\r\n");
-    expect(lines[0]).toBe("year_from,year_to,make,model,variant,rear_ac,refrigerant,label_charge_g,oil_type,total_oil_ml");
+    expect(lines[0]).toBe(
+      "year_from,year_to,make,model,variant,rear_ac,refrigerant,label_charge_g,oil_type,total_oil_ml",
+    );
     expect(lines[1]).toBe('2016,2019,Ford,Explorer,"3.5L V6, tow",yes,R-134a,1130,PAG 46,270');
     expect(lines[2]).toBe(`2021,2024,Toyota,"'=Corolla",,no,R-1234yf,440,PAG 46,`);
   });
@@ -30,7 +54,7 @@ describe("specRowsToCsv", () => {
   });
 
   const text = fc
-    .string({ unit: fc.constantFrom(..."abcXYZ019 ,;\"=-@é/".split("")), minLength: 1, maxLength: 12 })
+    .string({ unit: fc.constantFrom(...'abcXYZ019 ,;"=-@é/'.split("")), minLength: 1, maxLength: 12 })
     .map((s) => s.trim())
     .filter((s) => s.length > 0);
   const row: fc.Arbitrary<SpecRow> = fc
@@ -52,12 +76,15 @@ describe("specRowsToCsv", () => {
     ["g", "mL"],
     ["oz", "floz"],
     ["lb", "mL"],
-  ] as const)("property: export in %s / %s then import gives the same rows (whole grams and millilitres)", (charge, oil) => {
-    fc.assert(
-      fc.property(fc.array(row, { minLength: 1, maxLength: 6 }), (rows) => {
-        const back = parseSpecCsv(specRowsToCsv(rows, { units: { charge, oil } })).rows;
-        expect(back.map((r) => r.values)).toEqual(rows);
-      }),
-    );
-  });
+  ] as const)(
+    "property: export in %s / %s then import gives the same rows (whole grams and millilitres)",
+    (charge, oil) => {
+      fc.assert(
+        fc.property(fc.array(row, { minLength: 1, maxLength: 6 }), (rows) => {
+          const back = parseSpecCsv(specRowsToCsv(rows, { units: { charge, oil } })).rows;
+          expect(back.map((r) => r.values)).toEqual(rows);
+        }),
+      );
+    },
+  );
 });

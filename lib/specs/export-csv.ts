@@ -2,8 +2,22 @@ import Papa from "papaparse";
 import { type MassUnit, type VolumeUnit, massFromG, volumeFromMl } from "@/lib/units";
 import type { SpecRow } from "./schema";
 
-const DECIMALS: Readonly<Record<MassUnit | VolumeUnit, number>> = { g: 0, kg: 3, oz: 2, lb: 3, mL: 0, floz: 2 };
-const SUFFIX: Readonly<Record<MassUnit | VolumeUnit, string>> = { g: "g", kg: "kg", oz: "oz", lb: "lb", mL: "ml", floz: "floz" };
+const DECIMALS: Readonly<Record<MassUnit | VolumeUnit, number>> = {
+  g: 0,
+  kg: 3,
+  oz: 2,
+  lb: 3,
+  mL: 0,
+  floz: 2,
+};
+const SUFFIX: Readonly<Record<MassUnit | VolumeUnit, string>> = {
+  g: "g",
+  kg: "kg",
+  oz: "oz",
+  lb: "lb",
+  mL: "ml",
+  floz: "floz",
+};
 
 function rounded(value: number, unit: MassUnit | VolumeUnit): number {
   const f = 10 ** DECIMALS[unit];
@@ -11,7 +25,10 @@ function rounded(value: number, unit: MassUnit | VolumeUnit): number {
 }
 
 /** The spec table as CSV that parseSpecCsv reads back; the unit sits in the header (label_charge_oz). */
-export function specRowsToCsv(rows: readonly SpecRow[], opts: { units?: { charge?: MassUnit; oil?: VolumeUnit } } = {}): string {
+export function specRowsToCsv(
+  rows: readonly SpecRow[],
+  opts: { units?: { charge?: MassUnit; oil?: VolumeUnit } } = {},
+): string {
   const chargeUnit = opts.units?.charge ?? "g";
   const oilUnit = opts.units?.oil ?? "mL";
   const fields = [

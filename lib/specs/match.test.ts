@@ -21,9 +21,32 @@ const table: SpecRow[] = [
   row({ rearAc: true, labelChargeG: 1130 }),
   row({ yearFrom: 2020, yearTo: 2024, refrigerant: "R-1234yf", labelChargeG: 680 }),
   row({ make: "Chevrolet", model: "Silverado", yearFrom: 2014, yearTo: 2018, labelChargeG: 740 }),
-  row({ make: "Chevrolet", model: "Silverado 1500", variant: "5.3L V8", yearFrom: 2014, yearTo: 2018, labelChargeG: 710 }),
-  row({ make: "Toyota", model: "Camry", variant: "2.5L", yearFrom: 2018, yearTo: 2021, refrigerant: "R-1234yf", labelChargeG: 500 }),
-  row({ make: "Toyota", model: "Camry", variant: "2.5L Hybrid", yearFrom: 2018, yearTo: 2021, refrigerant: "R-1234yf", labelChargeG: 470 }),
+  row({
+    make: "Chevrolet",
+    model: "Silverado 1500",
+    variant: "5.3L V8",
+    yearFrom: 2014,
+    yearTo: 2018,
+    labelChargeG: 710,
+  }),
+  row({
+    make: "Toyota",
+    model: "Camry",
+    variant: "2.5L",
+    yearFrom: 2018,
+    yearTo: 2021,
+    refrigerant: "R-1234yf",
+    labelChargeG: 500,
+  }),
+  row({
+    make: "Toyota",
+    model: "Camry",
+    variant: "2.5L Hybrid",
+    yearFrom: 2018,
+    yearTo: 2021,
+    refrigerant: "R-1234yf",
+    labelChargeG: 470,
+  }),
 ];
 
 describe("matchSpecRows", () => {
@@ -40,14 +63,23 @@ describe("matchSpecRows", () => {
   });
 
   it("keeps to the year range", () => {
-    expect(matchSpecRows({ year: 2021, make: "Ford", model: "Explorer" }, table).map((x) => x.row.labelChargeG)).toEqual([680]);
+    expect(
+      matchSpecRows({ year: 2021, make: "Ford", model: "Explorer" }, table).map((x) => x.row.labelChargeG),
+    ).toEqual([680]);
     expect(matchSpecRows({ year: 2015, make: "Ford", model: "Explorer" }, table)).toEqual([]);
   });
 
   it("prefers the exact model to a shorter one that covers it", () => {
-    const m = matchSpecRows({ year: 2016, make: "Chevrolet", model: "Silverado 1500", engine: "5.3L V8" }, table);
+    const m = matchSpecRows(
+      { year: 2016, make: "Chevrolet", model: "Silverado 1500", engine: "5.3L V8" },
+      table,
+    );
     expect(m.map((x) => x.row.labelChargeG)).toEqual([710, 740]);
-    expect(matchSpecRows({ year: 2016, make: "Chevrolet", model: "Silverado" }, table).map((x) => x.row.labelChargeG)).toEqual([740]);
+    expect(
+      matchSpecRows({ year: 2016, make: "Chevrolet", model: "Silverado" }, table).map(
+        (x) => x.row.labelChargeG,
+      ),
+    ).toEqual([740]);
   });
 
   it("ranks the engine variant that matches the vehicle's engine first", () => {

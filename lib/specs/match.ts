@@ -32,7 +32,10 @@ function engineTokens(text: string): string[] {
  * candidate is offered: the technician confirms which one the label agrees with, because
  * the same model can carry different charges with and without rear A/C.
  */
-export function matchSpecRows<T extends SpecRow>(vehicle: VehicleForMatch, rows: readonly T[]): SpecMatch<T>[] {
+export function matchSpecRows<T extends SpecRow>(
+  vehicle: VehicleForMatch,
+  rows: readonly T[],
+): SpecMatch<T>[] {
   const make = compact(vehicle.make);
   const modelCompact = compact(vehicle.model);
   const modelTokens = tokens(vehicle.model);
@@ -68,10 +71,18 @@ export function matchSpecRows<T extends SpecRow>(vehicle: VehicleForMatch, rows:
         reasons.push(row.rearAc ? "front and rear A/C, as the vehicle" : "front A/C only, as the vehicle");
       } else {
         score -= 50;
-        reasons.push(row.rearAc ? "row is for front and rear A/C; the vehicle is front only" : "row is front only; the vehicle has rear A/C");
+        reasons.push(
+          row.rearAc
+            ? "row is for front and rear A/C; the vehicle is front only"
+            : "row is front only; the vehicle has rear A/C",
+        );
       }
     } else {
-      reasons.push(row.rearAc ? "front and rear A/C: check for a rear unit" : "front A/C only: check there is no rear unit");
+      reasons.push(
+        row.rearAc
+          ? "front and rear A/C: check for a rear unit"
+          : "front A/C only: check there is no rear unit",
+      );
     }
     matches.push({ row, score, reasons });
   }

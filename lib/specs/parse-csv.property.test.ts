@@ -3,27 +3,37 @@ import { describe, expect, it } from "vitest";
 import { matchSpecRows } from "./match";
 import { parseSpecCsv } from "./parse-csv";
 
-const HEADER = "year_from,year_to,make,model,variant,rear_ac,refrigerant,label_charge_g,oil_type,total_oil_ml";
-const messy = fc.string({ unit: fc.constantFrom(..."0123456789,;\"\n\r\t abcR-.=ézkglbozml".split("")), maxLength: 400 });
+const HEADER =
+  "year_from,year_to,make,model,variant,rear_ac,refrigerant,label_charge_g,oil_type,total_oil_ml";
+const messy = fc.string({
+  unit: fc.constantFrom(...'0123456789,;"\n\r\t abcR-.=ézkglbozml'.split("")),
+  maxLength: 400,
+});
 
 describe("parseSpecCsv on anything a user might upload", () => {
   it("property: never throws, and a row has values only when every cell was read and its lines increase", () => {
     fc.assert(
-      fc.property(fc.oneof(messy, messy.map((body) => `${HEADER}\n${body}`)), (text) => {
-        const r = parseSpecCsv(text);
-        let lastLine = 0;
-        for (const row of r.rows) {
-          expect(row.line).toBeGreaterThan(lastLine);
-          lastLine = row.line;
-          if (row.values) {
-            expect(row.values.labelChargeG).toBeGreaterThanOrEqual(100);
-            expect(row.values.labelChargeG).toBeLessThanOrEqual(3000);
-            expect(row.values.yearFrom).toBeLessThanOrEqual(row.values.yearTo);
-          } else {
-            expect(row.problems.length).toBeGreaterThan(0);
+      fc.property(
+        fc.oneof(
+          messy,
+          messy.map((body) => `${HEADER}\n${body}`),
+        ),
+        (text) => {
+          const r = parseSpecCsv(text);
+          let lastLine = 0;
+          for (const row of r.rows) {
+            expect(row.line).toBeGreaterThan(lastLine);
+            lastLine = row.line;
+            if (row.values) {
+              expect(row.values.labelChargeG).toBeGreaterThanOrEqual(100);
+              expect(row.values.labelChargeG).toBeLessThanOrEqual(3000);
+              expect(row.values.yearFrom).toBeLessThanOrEqual(row.values.yearTo);
+            } else {
+              expect(row.problems.length).toBeGreaterThan(0);
+            }
           }
-        }
-      }),
+        },
+      ),
       { numRuns: 500 },
     );
   });
@@ -38,12 +48,18 @@ describe("parseSpecCsv on anything a user might upload", () => {
       ].join("\n"),
     ).rows.flatMap((r) => (r.values ? [r.values] : []));
     fc.assert(
-      fc.property(fc.integer({ min: 1900, max: 2100 }), fc.string(), fc.string(), fc.option(fc.string()), (year, make, model, engine) => {
-        for (const m of matchSpecRows({ year, make, model, engine }, rows)) {
-          expect(m.row.yearFrom).toBeLessThanOrEqual(year);
-          expect(m.row.yearTo).toBeGreaterThanOrEqual(year);
-        }
-      }),
+      fc.property(
+        fc.integer({ min: 1900, max: 2100 }),
+        fc.string(),
+        fc.string(),
+        fc.option(fc.string()),
+        (year, make, model, engine) => {
+          for (const m of matchSpecRows({ year, make, model, engine }, rows)) {
+            expect(m.row.yearFrom).toBeLessThanOrEqual(year);
+            expect(m.row.yearTo).toBeGreaterThanOrEqual(year);
+          }
+        },
+      ),
     );
   });
 });

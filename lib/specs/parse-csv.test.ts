@@ -7,7 +7,8 @@ const G_PER_OZ = 28.349523125;
 const G_PER_LB = 453.59237;
 const ML_PER_FLOZ = 29.5735295625;
 
-const HEADER = "year_from,year_to,make,model,variant,rear_ac,refrigerant,label_charge_g,oil_type,total_oil_ml";
+const HEADER =
+  "year_from,year_to,make,model,variant,rear_ac,refrigerant,label_charge_g,oil_type,total_oil_ml";
 
 describe("parseSpecCsv: good rows", () => {
   it("reads every column of well-formed rows with their line numbers", () => {
@@ -39,7 +40,8 @@ describe("parseSpecCsv: good rows", () => {
   });
 
   it("converts a header unit suffix: label_charge_oz and total_oil_floz (NIST SP 811 factors)", () => {
-    const csv = "year_from,year_to,make,model,rear_ac,refrigerant,label_charge_oz,oil_type,total_oil_floz\n2012,2015,Honda,Civic,no,134a,21.5,PAG 46,4.5";
+    const csv =
+      "year_from,year_to,make,model,rear_ac,refrigerant,label_charge_oz,oil_type,total_oil_floz\n2012,2015,Honda,Civic,no,134a,21.5,PAG 46,4.5";
     const v = parseSpecCsv(csv).rows[0]?.values;
     expect(v?.labelChargeG).toBe(Math.round(21.5 * G_PER_OZ));
     expect(v?.totalOilMl).toBe(Math.round(4.5 * ML_PER_FLOZ));
@@ -63,7 +65,8 @@ describe("parseSpecCsv: good rows", () => {
   });
 
   it("uses the caller's default units for bare numbers", () => {
-    const csv = "years,make,model,rear_ac,refrigerant,label_charge,oil_type,total_oil\n2015-2018,Subaru,Outback,no,R-134a,19,PAG 46,4";
+    const csv =
+      "years,make,model,rear_ac,refrigerant,label_charge,oil_type,total_oil\n2015-2018,Subaru,Outback,no,R-134a,19,PAG 46,4";
     const v = parseSpecCsv(csv, { units: { charge: "oz", oil: "floz" } }).rows[0]?.values;
     expect(v?.labelChargeG).toBe(Math.round(19 * G_PER_OZ));
     expect(v?.yearFrom).toBe(2015);
@@ -71,7 +74,8 @@ describe("parseSpecCsv: good rows", () => {
   });
 
   it("reads semicolon files with decimal commas, a byte-order mark and CRLF line ends", () => {
-    const csv = "\uFEFFyear;make;model;rear_ac;refrigerant;label_charge_kg;oil_type\r\n2019;Škoda;Octavia;no;R-1234yf;0,525;PAG 46\r\n";
+    const csv =
+      "\uFEFFyear;make;model;rear_ac;refrigerant;label_charge_kg;oil_type\r\n2019;Škoda;Octavia;no;R-1234yf;0,525;PAG 46\r\n";
     const r = parseSpecCsv(csv);
     expect(r.delimiter).toBe(";");
     expect(r.rows[0]?.problems).toEqual([]);
@@ -93,7 +97,9 @@ describe("parseSpecCsv: good rows", () => {
   });
 
   it("lists columns it does not use", () => {
-    expect(parseSpecCsv(`${HEADER},notes\n2016,2019,Ford,Explorer,,no,R-134a,765,PAG 46,210,ok`).ignoredColumns).toEqual(["notes"]);
+    expect(
+      parseSpecCsv(`${HEADER},notes\n2016,2019,Ford,Explorer,,no,R-134a,765,PAG 46,210,ok`).ignoredColumns,
+    ).toEqual(["notes"]);
   });
 });
 
@@ -108,7 +114,7 @@ describe("parseSpecCsv: bad rows", () => {
     ["2016,2019,Ford,Explorer,,no,R-22,765,PAG 46,210", 'unknown refrigerant "R-22"'],
     ["2016,2019,Ford,Explorer,,no,R-134a,50,PAG 46,210", "label charge 50 g is outside 100–3000 g"],
     ["2016,2019,Ford,Explorer,,no,R-134a,3400,PAG 46,210", "label charge 3400 g is outside 100–3000 g"],
-    ["2016,2019,Ford,Explorer,,no,R-134a,\"1,250\",PAG 46,210", "without a thousands separator"],
+    ['2016,2019,Ford,Explorer,,no,R-134a,"1,250",PAG 46,210', "without a thousands separator"],
     ["2016,2019,Ford,Explorer,,maybe,R-134a,765,PAG 46,210", 'rear_ac "maybe"'],
     ["2016,2019,Ford,Explorer,,no,R-134a,765,,210", "oil_type is empty"],
     ["2016,2019,Ford,Explorer,,no,R-134a,765,PAG 46,5000", "total oil 5000 mL is outside"],
@@ -120,21 +126,28 @@ describe("parseSpecCsv: bad rows", () => {
   });
 
   it("reports a header without required columns on the file and on every row", () => {
-    const r = parseSpecCsv("year_from,year_to,make,model,rear_ac,refrigerant,label_charge_g\n2016,2019,Ford,Explorer,no,R-134a,765");
+    const r = parseSpecCsv(
+      "year_from,year_to,make,model,rear_ac,refrigerant,label_charge_g\n2016,2019,Ford,Explorer,no,R-134a,765",
+    );
     expect(r.fileProblems).toEqual(["Missing column: oil_type."]);
     expect(r.rows[0]?.problems[0]).toBe("missing column: oil_type");
     expect(r.rows[0]?.values).toBeUndefined();
   });
 
   it("reports a row cut short and a row with too many cells", () => {
-    const r = parseSpecCsv(`${HEADER}\n2016,2019,Ford,Explorer,,no,R-134a\n2016,2019,Ford,Explorer,,no,R-134a,765,PAG 46,210,extra`);
+    const r = parseSpecCsv(
+      `${HEADER}\n2016,2019,Ford,Explorer,,no,R-134a\n2016,2019,Ford,Explorer,,no,R-134a,765,PAG 46,210,extra`,
+    );
     expect(r.rows[0]?.problems.join(" ")).toContain("missing columns: label_charge, oil_type");
     expect(r.rows[1]?.problems.join(" ")).toContain("more cells than the header");
   });
 
   it("refuses a file with nothing in it, or too many rows", () => {
     expect(parseSpecCsv(" \n").fileProblems).toEqual(["The file is empty."]);
-    const many = [HEADER, ...Array.from({ length: 4 }, (_, i) => `2016,2019,Ford,Model ${i},,no,R-134a,765,PAG 46,210`)].join("\n");
+    const many = [
+      HEADER,
+      ...Array.from({ length: 4 }, (_, i) => `2016,2019,Ford,Model ${i},,no,R-134a,765,PAG 46,210`),
+    ].join("\n");
     const r = parseSpecCsv(many, { maxRows: 3 });
     expect(r.rows).toHaveLength(3);
     expect(r.fileProblems[0]).toContain("at most 3");
@@ -156,12 +169,20 @@ describe("parseSpecCsv: duplicates", () => {
   });
 
   it("does not treat front-only and front-and-rear of the same model as duplicates", () => {
-    const csv = [HEADER, "2016,2019,Ford,Explorer,,no,R-134a,765,PAG 46,210", "2016,2019,Ford,Explorer,,yes,R-134a,1130,PAG 46,270"].join("\n");
+    const csv = [
+      HEADER,
+      "2016,2019,Ford,Explorer,,no,R-134a,765,PAG 46,210",
+      "2016,2019,Ford,Explorer,,yes,R-134a,1130,PAG 46,270",
+    ].join("\n");
     expect(parseSpecCsv(csv).rows.map((r) => r.problems)).toEqual([[], []]);
   });
 
   it("warns about overlapping years for the same variant without blocking", () => {
-    const csv = [HEADER, "2016,2019,Ford,Explorer,,no,R-134a,765,PAG 46,210", "2018,2021,Ford,Explorer,,no,R-134a,740,PAG 46,210"].join("\n");
+    const csv = [
+      HEADER,
+      "2016,2019,Ford,Explorer,,no,R-134a,765,PAG 46,210",
+      "2018,2021,Ford,Explorer,,no,R-134a,740,PAG 46,210",
+    ].join("\n");
     const rows = parseSpecCsv(csv).rows;
     expect(rows[1]?.problems).toEqual([]);
     expect(rows[1]?.warnings[0]).toContain("years overlap line 2");
@@ -169,7 +190,18 @@ describe("parseSpecCsv: duplicates", () => {
 
   it("flags a row already in the shop's table", () => {
     const existing: SpecRow[] = [
-      { yearFrom: 2016, yearTo: 2019, make: "Ford", model: "Explorer", variant: "", rearAc: false, refrigerant: "R-134a", labelChargeG: 765, oilType: "PAG 46", totalOilMl: 210 },
+      {
+        yearFrom: 2016,
+        yearTo: 2019,
+        make: "Ford",
+        model: "Explorer",
+        variant: "",
+        rearAc: false,
+        refrigerant: "R-134a",
+        labelChargeG: 765,
+        oilType: "PAG 46",
+        totalOilMl: 210,
+      },
     ];
     const r = parseSpecCsv(`${HEADER}\n2016,2019,ford,EXPLORER,,no,R-134a,765,PAG 46,210`, { existing });
     expect(r.rows[0]?.problems).toEqual(["already in the spec table"]);

@@ -1,7 +1,22 @@
 import Papa from "papaparse";
 import type { MassUnit, VolumeUnit } from "@/lib/units";
-import { cleanCell, parseChargeCell, parseOilCell, parseRearAc, parseYear, parseYearRange } from "./csv-cells";
-import { type ColumnRole, FIELD_COLUMN_NAMES, type SpecField, columnRole, massUnitFromWord, unitsFromWord, volumeUnitFromWord } from "./csv-columns";
+import {
+  cleanCell,
+  parseChargeCell,
+  parseOilCell,
+  parseRearAc,
+  parseYear,
+  parseYearRange,
+} from "./csv-cells";
+import {
+  type ColumnRole,
+  FIELD_COLUMN_NAMES,
+  type SpecField,
+  columnRole,
+  massUnitFromWord,
+  unitsFromWord,
+  volumeUnitFromWord,
+} from "./csv-columns";
 import { parseRefrigerantName } from "./refrigerant-names";
 import { findDuplicatesAndOverlaps } from "./duplicates";
 import { LABEL_CHARGE_RANGE_G, TOTAL_OIL_RANGE_ML, type SpecRow, specRowSchema } from "./schema";
@@ -78,22 +93,33 @@ export function parseSpecCsv(text: string, options: SpecCsvOptions = {}): SpecCs
       if (name.trim()) ignoredColumns.push(name.trim());
       return;
     }
-    if (roles.has(role.field)) fileProblems.push(`Two columns give ${FIELD_COLUMN_NAMES[role.field]}: keep one.`);
+    if (roles.has(role.field))
+      fileProblems.push(`Two columns give ${FIELD_COLUMN_NAMES[role.field]}: keep one.`);
     else roles.set(role.field, { index, role });
   });
   const hasYears = (roles.has("yearFrom") && roles.has("yearTo")) || roles.has("year") || roles.has("years");
-  const missing = [...REQUIRED.filter((f) => !roles.has(f)).map((f) => FIELD_COLUMN_NAMES[f]), ...(hasYears ? [] : ["year_from and year_to"])];
-  if (missing.length > 0) fileProblems.push(`Missing column${missing.length > 1 ? "s" : ""}: ${missing.join(", ")}.`);
+  const missing = [
+    ...REQUIRED.filter((f) => !roles.has(f)).map((f) => FIELD_COLUMN_NAMES[f]),
+    ...(hasYears ? [] : ["year_from and year_to"]),
+  ];
+  if (missing.length > 0)
+    fileProblems.push(`Missing column${missing.length > 1 ? "s" : ""}: ${missing.join(", ")}.`);
 
   const maxRows = options.maxRows ?? 5000;
-  if (records.length > maxRows) fileProblems.push(`The file has ${records.length} rows; import at most ${maxRows} at a time.`);
+  if (records.length > maxRows)
+    fileProblems.push(`The file has ${records.length} rows; import at most ${maxRows} at a time.`);
 
   const rows = records.slice(0, maxRows).map(({ cells, line }) => {
     const problems: string[] = [];
-    if (missing.length > 0) problems.push(`missing column${missing.length > 1 ? "s" : ""}: ${missing.join(", ")}`);
-    if (cells.length > header.cells.length) problems.push("more cells than the header has columns (an unquoted comma?)");
-    const shortOf = [...roles.entries()].filter(([, c]) => c.index >= cells.length && REQUIRED.includes(c.role.field));
-    if (shortOf.length > 0) problems.push(`missing columns: ${shortOf.map(([f]) => FIELD_COLUMN_NAMES[f]).join(", ")}`);
+    if (missing.length > 0)
+      problems.push(`missing column${missing.length > 1 ? "s" : ""}: ${missing.join(", ")}`);
+    if (cells.length > header.cells.length)
+      problems.push("more cells than the header has columns (an unquoted comma?)");
+    const shortOf = [...roles.entries()].filter(
+      ([, c]) => c.index >= cells.length && REQUIRED.includes(c.role.field),
+    );
+    if (shortOf.length > 0)
+      problems.push(`missing columns: ${shortOf.map(([f]) => FIELD_COLUMN_NAMES[f]).join(", ")}`);
     const get = (f: SpecField) => {
       const c = roles.get(f);
       return c ? cleanCell(cells[c.index]) : "";
@@ -126,22 +152,29 @@ function readValues(
     const field = roles.has("years") ? "years" : "year";
     const range = parseYearRange(get(field));
     if (range) ({ from: yearFrom, to: yearTo } = range);
-    else problems.push(`${FIELD_COLUMN_NAMES[field]} "${get(field)}" is not a year or a range like 2015-2019`);
+    else
+      problems.push(`${FIELD_COLUMN_NAMES[field]} "${get(field)}" is not a year or a range like 2015-2019`);
   }
-  if (yearFrom !== null && yearTo !== null && yearFrom > yearTo) problems.push(`year range reversed (${yearFrom} to ${yearTo})`);
+  if (yearFrom !== null && yearTo !== null && yearFrom > yearTo)
+    problems.push(`year range reversed (${yearFrom} to ${yearTo})`);
 
-  for (const f of ["make", "model", "oilType"] as const) if (get(f) === "") problems.push(`${FIELD_COLUMN_NAMES[f]} is empty`);
+  for (const f of ["make", "model", "oilType"] as const)
+    if (get(f) === "") problems.push(`${FIELD_COLUMN_NAMES[f]} is empty`);
 
   const rearAc = parseRearAc(get("rearAc"));
-  if (rearAc === null) problems.push(`rear_ac "${get("rearAc")}" should be yes (front and rear A/C) or no (front only)`);
+  if (rearAc === null)
+    problems.push(`rear_ac "${get("rearAc")}" should be yes (front and rear A/C) or no (front only)`);
 
   const refrigerant = parseRefrigerantName(get("refrigerant"));
-  if (!refrigerant) problems.push(`unknown refrigerant "${get("refrigerant")}" (use R-134a, R-1234yf, R-744 or R-12)`);
+  if (!refrigerant)
+    problems.push(`unknown refrigerant "${get("refrigerant")}" (use R-134a, R-1234yf, R-744 or R-12)`);
 
   const rowUnits = get("units") ? unitsFromWord(get("units")) : null;
-  if (get("units") && !rowUnits) problems.push(`units "${get("units")}" should be metric, us, or a pair like oz/floz`);
+  if (get("units") && !rowUnits)
+    problems.push(`units "${get("units")}" should be metric, us, or a pair like oz/floz`);
   const rowChargeUnit = get("chargeUnit") ? massUnitFromWord(get("chargeUnit")) : null;
-  if (get("chargeUnit") && !rowChargeUnit) problems.push(`charge_unit "${get("chargeUnit")}" should be g, kg, oz or lb`);
+  if (get("chargeUnit") && !rowChargeUnit)
+    problems.push(`charge_unit "${get("chargeUnit")}" should be g, kg, oz or lb`);
   const rowOilUnit = get("oilUnit") ? volumeUnitFromWord(get("oilUnit")) : null;
   if (get("oilUnit") && !rowOilUnit) problems.push(`oil_unit "${get("oilUnit")}" should be mL or fl oz`);
 
@@ -149,12 +182,19 @@ function readValues(
   if (get("labelCharge") === "") problems.push("label charge is empty");
   else {
     const headerUnit = roles.get("labelCharge")?.role.unit as MassUnit | undefined;
-    const charge = parseChargeCell(get("labelCharge"), [headerUnit, rowChargeUnit ?? rowUnits?.charge], options.units?.charge ?? "g", decimalComma);
+    const charge = parseChargeCell(
+      get("labelCharge"),
+      [headerUnit, rowChargeUnit ?? rowUnits?.charge],
+      options.units?.charge ?? "g",
+      decimalComma,
+    );
     if ("problem" in charge) problems.push(charge.problem);
     else {
       labelChargeG = Math.round(charge.valueInBase);
       if (labelChargeG < LABEL_CHARGE_RANGE_G.min || labelChargeG > LABEL_CHARGE_RANGE_G.max) {
-        problems.push(`label charge ${labelChargeG} g is outside ${LABEL_CHARGE_RANGE_G.min}–${LABEL_CHARGE_RANGE_G.max} g: check the unit`);
+        problems.push(
+          `label charge ${labelChargeG} g is outside ${LABEL_CHARGE_RANGE_G.min}–${LABEL_CHARGE_RANGE_G.max} g: check the unit`,
+        );
       }
     }
   }
@@ -162,17 +202,31 @@ function readValues(
   let totalOilMl: number | null = null;
   if (get("totalOil") !== "") {
     const headerUnit = roles.get("totalOil")?.role.unit as VolumeUnit | undefined;
-    const oil = parseOilCell(get("totalOil"), [headerUnit, rowOilUnit ?? rowUnits?.oil], options.units?.oil ?? "mL", decimalComma);
+    const oil = parseOilCell(
+      get("totalOil"),
+      [headerUnit, rowOilUnit ?? rowUnits?.oil],
+      options.units?.oil ?? "mL",
+      decimalComma,
+    );
     if ("problem" in oil) problems.push(oil.problem);
     else {
       totalOilMl = Math.round(oil.valueInBase);
       if (totalOilMl < TOTAL_OIL_RANGE_ML.min || totalOilMl > TOTAL_OIL_RANGE_ML.max) {
-        problems.push(`total oil ${totalOilMl} mL is outside ${TOTAL_OIL_RANGE_ML.min}–${TOTAL_OIL_RANGE_ML.max} mL: check the unit`);
+        problems.push(
+          `total oil ${totalOilMl} mL is outside ${TOTAL_OIL_RANGE_ML.min}–${TOTAL_OIL_RANGE_ML.max} mL: check the unit`,
+        );
       }
     }
   }
 
-  if (problems.length > before || yearFrom === null || yearTo === null || rearAc === null || !refrigerant || labelChargeG === null) {
+  if (
+    problems.length > before ||
+    yearFrom === null ||
+    yearTo === null ||
+    rearAc === null ||
+    !refrigerant ||
+    labelChargeG === null
+  ) {
     return undefined;
   }
   const parsed = specRowSchema.safeParse({
@@ -188,9 +242,9 @@ function readValues(
     totalOilMl,
   });
   if (!parsed.success) {
-    for (const issue of parsed.error.issues) problems.push(`${issue.path.join(".") || "row"}: ${issue.message}`);
+    for (const issue of parsed.error.issues)
+      problems.push(`${issue.path.join(".") || "row"}: ${issue.message}`);
     return undefined;
   }
   return parsed.data;
 }
-

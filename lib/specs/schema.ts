@@ -47,6 +47,15 @@ function compactName(text: string): string {
 }
 
 /** Two rows with the same key describe the same vehicle variant. */
-export function specRowKey(r: Pick<SpecRow, "make" | "model" | "variant" | "yearFrom" | "yearTo" | "rearAc">): string {
-  return [compactName(r.make), compactName(r.model), compactName(r.variant), r.yearFrom, r.yearTo, r.rearAc ? "rear" : "front"].join("|");
+export function specRowKey(
+  r: Pick<SpecRow, "make" | "model" | "variant" | "yearFrom" | "yearTo" | "rearAc">,
+): string {
+  return [
+    compactName(r.make),
+    compactName(r.model),
+    compactName(r.variant),
+    r.yearFrom,
+    r.yearTo,
+    r.rearAc ? "rear" : "front",
+  ].join("|");
 }

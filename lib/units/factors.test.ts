@@ -4,8 +4,20 @@ import { factorsFromMathjs } from "./mathjs-factors";
 
 describe("unit conversion factors", () => {
   it("are exactly the numbers mathjs units give", () => {
-    const { KPA_PER_UNIT, GRAMS_PER_UNIT, MILLILITRES_PER_UNIT, TEMPERATURE_TO_C, KELVIN_PER_DIFFERENCE_UNIT } = constants;
-    expect({ KPA_PER_UNIT, GRAMS_PER_UNIT, MILLILITRES_PER_UNIT, TEMPERATURE_TO_C, KELVIN_PER_DIFFERENCE_UNIT }).toEqual(factorsFromMathjs());
+    const {
+      KPA_PER_UNIT,
+      GRAMS_PER_UNIT,
+      MILLILITRES_PER_UNIT,
+      TEMPERATURE_TO_C,
+      KELVIN_PER_DIFFERENCE_UNIT,
+    } = constants;
+    expect({
+      KPA_PER_UNIT,
+      GRAMS_PER_UNIT,
+      MILLILITRES_PER_UNIT,
+      TEMPERATURE_TO_C,
+      KELVIN_PER_DIFFERENCE_UNIT,
+    }).toEqual(factorsFromMathjs());
   });
 
   it("match the exact definitions in NIST SP 811 appendix B", () => {

@@ -8,13 +8,27 @@ import type { MassUnit, PressureUnit, TemperatureUnit, UnitFactors, VolumeUnit }
  */
 export function factorsFromMathjs(): UnitFactors {
   // A private mathjs instance, so defining inHg never touches anyone else's.
-  const math = create({ createUnitDependencies: createUnitDependencies!, unitDependencies: unitDependencies! });
+  const math = create({
+    createUnitDependencies: createUnitDependencies!,
+    unitDependencies: unitDependencies!,
+  });
   // Inch of mercury, conventional: 3.386389 kPa (NIST SP 811, appendix B.8).
   math.createUnit("inHg", "3.386389 kPa");
   const factor = (from: string, to: string) => math.unit(1, from).toNumber(to);
 
-  const pressure: Record<PressureUnit, number> = { kPa: 1, bar: factor("bar", "kPa"), MPa: factor("MPa", "kPa"), psi: factor("psi", "kPa"), inHg: factor("inHg", "kPa") };
-  const mass: Record<MassUnit, number> = { g: 1, kg: factor("kg", "g"), oz: factor("oz", "g"), lb: factor("lb", "g") };
+  const pressure: Record<PressureUnit, number> = {
+    kPa: 1,
+    bar: factor("bar", "kPa"),
+    MPa: factor("MPa", "kPa"),
+    psi: factor("psi", "kPa"),
+    inHg: factor("inHg", "kPa"),
+  };
+  const mass: Record<MassUnit, number> = {
+    g: 1,
+    kg: factor("kg", "g"),
+    oz: factor("oz", "g"),
+    lb: factor("lb", "g"),
+  };
   // US fluid ounce.
   const volume: Record<VolumeUnit, number> = { mL: 1, floz: factor("floz", "mL") };
   const mathjsTemperature: Record<TemperatureUnit, string> = { C: "degC", F: "degF", K: "K" };

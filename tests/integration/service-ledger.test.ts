@@ -17,19 +17,32 @@ async function netOf(shopId: number, cylinderId: number) {
 
 async function totals(shopId: number) {
   const { rows } = await ledgerReport({ shopId });
-  return { recoveredG: rows.reduce((s, r) => s + r.recoveredG, 0), chargedG: rows.reduce((s, r) => s + r.chargedG, 0) };
+  return {
+    recoveredG: rows.reduce((s, r) => s + r.recoveredG, 0),
+    chargedG: rows.reduce((s, r) => s + r.chargedG, 0),
+  };
 }
 
 async function recordSums(shopId: number) {
   const records = await getModels().ServiceRecord.findAll({ where: { shopId }, raw: true });
-  return { recoveredG: records.reduce((s, r) => s + (r.recoveredG ?? 0), 0), chargedG: records.reduce((s, r) => s + (r.chargedG ?? 0), 0) };
+  return {
+    recoveredG: records.reduce((s, r) => s + (r.recoveredG ?? 0), 0),
+    chargedG: records.reduce((s, r) => s + (r.chargedG ?? 0), 0),
+  };
 }
 
 describe("service record ↔ refrigerant ledger", () => {
   it("posts recovery and recharge, corrects them on edit, posts nothing on an unchanged save, and cancels them on delete", async () => {
     const models = getModels();
     const { shop, serviceCase, recovery, supply, user } = await createShopWithCylinders(models);
-    const input = recordInput({ recoveredG: 800, recoveryCylinderId: recovery.id, chargedG: 650, chargeCylinderId: supply.id, labelChargeG: 650, targetG: 650 });
+    const input = recordInput({
+      recoveredG: 800,
+      recoveryCylinderId: recovery.id,
+      chargedG: 650,
+      chargeCylinderId: supply.id,
+      labelChargeG: 650,
+      targetG: 650,
+    });
 
     const first = await saveServiceRecord({ user, caseId: serviceCase.id, input });
     expect(first.posted).toBe(2);
@@ -37,10 +50,18 @@ describe("service record ↔ refrigerant ledger", () => {
     expect(await netOf(shop.id, supply.id)).toBe(13_600 - 650);
     expect(await totals(shop.id)).toEqual(await recordSums(shop.id));
 
-    const same = await saveServiceRecord({ user, caseId: serviceCase.id, input: { ...input, baseVersion: first.record.version } });
+    const same = await saveServiceRecord({
+      user,
+      caseId: serviceCase.id,
+      input: { ...input, baseVersion: first.record.version },
+    });
     expect(same.posted).toBe(0);
 
-    const edited = await saveServiceRecord({ user, caseId: serviceCase.id, input: { ...input, recoveredG: 820, baseVersion: same.record.version } });
+    const edited = await saveServiceRecord({
+      user,
+      caseId: serviceCase.id,
+      input: { ...input, recoveredG: 820, baseVersion: same.record.version },
+    });
     expect(edited.posted).toBe(2); // one correction cancelling 800, one new posting of 820
     expect(await netOf(shop.id, recovery.id)).toBe(1000 + 820);
     expect(await totals(shop.id)).toEqual(await recordSums(shop.id));
@@ -59,12 +80,36 @@ describe("service record ↔ refrigerant ledger", () => {
 
   it("keeps the ledger totals equal to the sum of several records, as they are edited", async () => {
     const models = getModels();
-    const { shop, serviceCase, vehicle, customer, technician, recovery, supply, user } = await createShopWithCylinders(models);
+    const { shop, serviceCase, vehicle, customer, technician, recovery, supply, user } =
+      await createShopWithCylinders(models);
     const second = await addCase(models, shop.id, vehicle.id, customer.id, technician.id);
-    const a = await saveServiceRecord({ user, caseId: serviceCase.id, input: recordInput({ recoveredG: 410, recoveryCylinderId: recovery.id, chargedG: 500, chargeCylinderId: supply.id }) });
-    await saveServiceRecord({ user, caseId: second.id, input: recordInput({ recoveredG: 735, recoveryCylinderId: recovery.id }) });
+    const a = await saveServiceRecord({
+      user,
+      caseId: serviceCase.id,
+      input: recordInput({
+        recoveredG: 410,
+        recoveryCylinderId: recovery.id,
+        chargedG: 500,
+        chargeCylinderId: supply.id,
+      }),
+    });
+    await saveServiceRecord({
+      user,
+      caseId: second.id,
+      input: recordInput({ recoveredG: 735, recoveryCylinderId: recovery.id }),
+    });
     expect(await totals(shop.id)).toEqual(await recordSums(shop.id));
-    await saveServiceRecord({ user, caseId: serviceCase.id, input: recordInput({ baseVersion: a.record.version, recoveredG: 0, recoveryCylinderId: recovery.id, chargedG: 515, chargeCylinderId: supply.id }) });
+    await saveServiceRecord({
+      user,
+      caseId: serviceCase.id,
+      input: recordInput({
+        baseVersion: a.record.version,
+        recoveredG: 0,
+        recoveryCylinderId: recovery.id,
+        chargedG: 515,
+        chargeCylinderId: supply.id,
+      }),
+    });
     expect(await totals(shop.id)).toEqual(await recordSums(shop.id));
     expect(await totals(shop.id)).toEqual({ recoveredG: 735, chargedG: 515 });
   });
@@ -72,9 +117,29 @@ describe("service record ↔ refrigerant ledger", () => {
   it("refuses a stale version with 409 and leaves record and ledger as they were", async () => {
     const models = getModels();
     const { shop, serviceCase, recovery, user } = await createShopWithCylinders(models);
-    const first = await saveServiceRecord({ user, caseId: serviceCase.id, input: recordInput({ recoveredG: 300, recoveryCylinderId: recovery.id }) });
-    await saveServiceRecord({ user, caseId: serviceCase.id, input: recordInput({ baseVersion: first.record.version, recoveredG: 310, recoveryCylinderId: recovery.id }) });
-    const stale = saveServiceRecord({ user, caseId: serviceCase.id, input: recordInput({ baseVersion: first.record.version, recoveredG: 999, recoveryCylinderId: recovery.id }) });
+    const first = await saveServiceRecord({
+      user,
+      caseId: serviceCase.id,
+      input: recordInput({ recoveredG: 300, recoveryCylinderId: recovery.id }),
+    });
+    await saveServiceRecord({
+      user,
+      caseId: serviceCase.id,
+      input: recordInput({
+        baseVersion: first.record.version,
+        recoveredG: 310,
+        recoveryCylinderId: recovery.id,
+      }),
+    });
+    const stale = saveServiceRecord({
+      user,
+      caseId: serviceCase.id,
+      input: recordInput({
+        baseVersion: first.record.version,
+        recoveredG: 999,
+        recoveryCylinderId: recovery.id,
+      }),
+    });
     await expect(stale).rejects.toMatchObject({ status: 409 });
     expect((await getServiceRecord({ shopId: shop.id, caseId: serviceCase.id }))?.recoveredG).toBe(310);
     expect(await netOf(shop.id, recovery.id)).toBe(1000 + 310);
@@ -83,10 +148,28 @@ describe("service record ↔ refrigerant ledger", () => {
   it("refuses a cylinder of the wrong refrigerant or kind with a field message", async () => {
     const models = getModels();
     const { shop, serviceCase, supply, user } = await createShopWithCylinders(models);
-    const yf = await models.Cylinder.create({ shopId: shop.id, label: `YF-${shop.id}`, refrigerant: "R-1234yf", kind: "recovery", tareG: 7000, capacityG: 22_000 });
-    const wrongGas = saveServiceRecord({ user, caseId: serviceCase.id, input: recordInput({ recoveredG: 500, recoveryCylinderId: yf.id }) });
-    await expect(wrongGas).rejects.toMatchObject({ status: 400, fieldErrors: { recoveryCylinderId: [expect.stringMatching(/Never mix/)] } });
-    const wrongKind = saveServiceRecord({ user, caseId: serviceCase.id, input: recordInput({ recoveredG: 500, recoveryCylinderId: supply.id }) });
+    const yf = await models.Cylinder.create({
+      shopId: shop.id,
+      label: `YF-${shop.id}`,
+      refrigerant: "R-1234yf",
+      kind: "recovery",
+      tareG: 7000,
+      capacityG: 22_000,
+    });
+    const wrongGas = saveServiceRecord({
+      user,
+      caseId: serviceCase.id,
+      input: recordInput({ recoveredG: 500, recoveryCylinderId: yf.id }),
+    });
+    await expect(wrongGas).rejects.toMatchObject({
+      status: 400,
+      fieldErrors: { recoveryCylinderId: [expect.stringMatching(/Never mix/)] },
+    });
+    const wrongKind = saveServiceRecord({
+      user,
+      caseId: serviceCase.id,
+      input: recordInput({ recoveredG: 500, recoveryCylinderId: supply.id }),
+    });
     await expect(wrongKind).rejects.toMatchObject({ status: 400 });
     expect(await getServiceRecord({ shopId: shop.id, caseId: serviceCase.id })).toBeNull();
   });
@@ -97,10 +180,16 @@ describe("service record ↔ refrigerant ledger", () => {
     const b = await createShopWithCylinders(models);
     const foreignCase = saveServiceRecord({ user: a.user, caseId: b.serviceCase.id, input: recordInput() });
     await expect(foreignCase).rejects.toMatchObject({ status: 404 });
-    const foreignCylinder = saveServiceRecord({ user: a.user, caseId: a.serviceCase.id, input: recordInput({ recoveredG: 200, recoveryCylinderId: b.recovery.id }) });
+    const foreignCylinder = saveServiceRecord({
+      user: a.user,
+      caseId: a.serviceCase.id,
+      input: recordInput({ recoveredG: 200, recoveryCylinderId: b.recovery.id }),
+    });
     await expect(foreignCylinder).rejects.toBeInstanceOf(AppError);
     await expect(foreignCylinder).rejects.toMatchObject({ status: 400 });
-    await expect(deleteServiceRecord({ user: a.user, caseId: b.serviceCase.id, version: 1 })).rejects.toMatchObject({ status: 404 });
+    await expect(
+      deleteServiceRecord({ user: a.user, caseId: b.serviceCase.id, version: 1 }),
+    ).rejects.toMatchObject({ status: 404 });
     expect(await netOf(b.shop.id, b.recovery.id)).toBe(1000);
   });
 
@@ -110,10 +199,22 @@ describe("service record ↔ refrigerant ledger", () => {
     const saved = await saveServiceRecord({
       user,
       caseId: serviceCase.id,
-      input: recordInput({ step: "final", holdStartKpaAbs: 3, holdEndKpaAbs: 3 + 3 * 3.386389, holdMinutes: 5, finalAmbientC: 27, finalVentC: 6.5, finalHighKpaGauge: 1250, finalLowKpaGauge: 210 }),
+      input: recordInput({
+        step: "final",
+        holdStartKpaAbs: 3,
+        holdEndKpaAbs: 3 + 3 * 3.386389,
+        holdMinutes: 5,
+        finalAmbientC: 27,
+        finalVentC: 6.5,
+        finalHighKpaGauge: 1250,
+        finalLowKpaGauge: 210,
+      }),
     });
     expect(saved.record.holdPassed).toBe(false); // 3 inHg in 5 min > 2 inHg limit (TM 5-2420-230-24-1 field practice)
-    const reading = await models.ReadingSet.findOne({ where: { id: saved.record.finalReadingSetId! }, raw: true });
+    const reading = await models.ReadingSet.findOne({
+      where: { id: saved.record.finalReadingSetId! },
+      raw: true,
+    });
     expect(reading?.kind).toBe("final");
     expect(saved.record.finalVentC).toBe(6.5);
   });

@@ -1,7 +1,16 @@
 import { afterAll, describe, expect, it } from "vitest";
 import { closeSequelize } from "@/lib/db/sequelize";
 import { getModels } from "@/models";
-import { commitSpecImport, createSpec, deleteSpec, exportSpecsCsv, listSpecMatchesForVehicle, listSpecs, previewSpecImport, updateSpec } from "@/lib/server/specs";
+import {
+  commitSpecImport,
+  createSpec,
+  deleteSpec,
+  exportSpecsCsv,
+  listSpecMatchesForVehicle,
+  listSpecs,
+  previewSpecImport,
+  updateSpec,
+} from "@/lib/server/specs";
 import { createShopWithCase } from "./fixtures";
 import "./helpers";
 
@@ -37,7 +46,11 @@ describe("spec table CSV import", () => {
     const result = await commitSpecImport({ shopId: shop.id, csv: CSV });
     expect(result).toEqual({ created: 3, leftOut: 4 });
     const saved = await listSpecs({ shopId: shop.id });
-    expect(saved.map((s) => `${s.model}:${s.rearAc}:${s.labelChargeG}`).sort()).toEqual(["3:false:520", "Sienna:false:750", "Sienna:true:1100"]);
+    expect(saved.map((s) => `${s.model}:${s.rearAc}:${s.labelChargeG}`).sort()).toEqual([
+      "3:false:520",
+      "Sienna:false:750",
+      "Sienna:true:1100",
+    ]);
 
     const again = await previewSpecImport({ shopId: shop.id, csv: CSV });
     expect(again.rows.find((r) => r.line === 2)?.problems).toContain("already in the spec table");
@@ -50,30 +63,57 @@ describe("spec table CSV import", () => {
     await commitSpecImport({ shopId: shop.id, csv: CSV });
     const exported = await exportSpecsCsv({ shopId: shop.id });
     const other = await createShopWithCase(getModels());
-    expect(await commitSpecImport({ shopId: other.shop.id, csv: exported })).toEqual({ created: 3, leftOut: 0 });
-    const strip = (rows: Awaited<ReturnType<typeof listSpecs>>) => rows.map((r) => ({ ...r, id: 0, updatedAt: "" }));
-    expect(strip(await listSpecs({ shopId: other.shop.id }))).toEqual(strip(await listSpecs({ shopId: shop.id })));
+    expect(await commitSpecImport({ shopId: other.shop.id, csv: exported })).toEqual({
+      created: 3,
+      leftOut: 0,
+    });
+    const strip = (rows: Awaited<ReturnType<typeof listSpecs>>) =>
+      rows.map((r) => ({ ...r, id: 0, updatedAt: "" }));
+    expect(strip(await listSpecs({ shopId: other.shop.id }))).toEqual(
+      strip(await listSpecs({ shopId: shop.id })),
+    );
   });
 
   it("refuses a file without the required columns", async () => {
     const { shop } = await createShopWithCase(getModels());
-    await expect(commitSpecImport({ shopId: shop.id, csv: "make,model\nMazda,3" })).rejects.toMatchObject({ status: 400 });
+    await expect(commitSpecImport({ shopId: shop.id, csv: "make,model\nMazda,3" })).rejects.toMatchObject({
+      status: 400,
+    });
   });
 });
 
 describe("spec table scoping and edits", () => {
-  const row = { yearFrom: 2012, yearTo: 2016, make: "Mazda", model: "3", variant: "", rearAc: false, refrigerant: "R-134a" as const, labelChargeG: 500, oilType: "PAG 46", totalOilMl: 120 };
+  const row = {
+    yearFrom: 2012,
+    yearTo: 2016,
+    make: "Mazda",
+    model: "3",
+    variant: "",
+    rearAc: false,
+    refrigerant: "R-134a" as const,
+    labelChargeG: 500,
+    oilType: "PAG 46",
+    totalOilMl: 120,
+  };
 
   it("answers 404 for another shop's row and vehicle, 409 for a duplicate", async () => {
     const a = await createShopWithCase(getModels());
     const b = await createShopWithCase(getModels());
     const mine = await createSpec({ shopId: a.shop.id, input: row });
-    await expect(createSpec({ shopId: a.shop.id, input: { ...row, make: "MAZDA" } })).rejects.toMatchObject({ status: 409 });
-    await expect(updateSpec({ shopId: b.shop.id, id: mine.id, input: row })).rejects.toMatchObject({ status: 404 });
+    await expect(createSpec({ shopId: a.shop.id, input: { ...row, make: "MAZDA" } })).rejects.toMatchObject({
+      status: 409,
+    });
+    await expect(updateSpec({ shopId: b.shop.id, id: mine.id, input: row })).rejects.toMatchObject({
+      status: 404,
+    });
     await expect(deleteSpec({ shopId: b.shop.id, id: mine.id })).rejects.toMatchObject({ status: 404 });
-    await expect(listSpecMatchesForVehicle({ shopId: b.shop.id, vehicleId: a.vehicle.id })).rejects.toMatchObject({ status: 404 });
+    await expect(
+      listSpecMatchesForVehicle({ shopId: b.shop.id, vehicleId: a.vehicle.id }),
+    ).rejects.toMatchObject({ status: 404 });
     const found = await listSpecMatchesForVehicle({ shopId: a.shop.id, vehicleId: a.vehicle.id }); // a 2015 Mazda 3
     expect(found.matches.map((m) => m.row.id)).toEqual([mine.id]);
-    expect((await listSpecMatchesForVehicle({ shopId: b.shop.id, vehicleId: b.vehicle.id })).matches).toEqual([]);
+    expect((await listSpecMatchesForVehicle({ shopId: b.shop.id, vehicleId: b.vehicle.id })).matches).toEqual(
+      [],
+    );
   });
 });

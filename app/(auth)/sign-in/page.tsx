@@ -27,7 +27,8 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
         <SignInForm next={target} />
       </section>
       <p className="mt-6 text-sm text-ink-soft">
-        Refrigerant work is done by certified technicians, following the vehicle manufacturer&apos;s procedure and local codes.
+        Refrigerant work is done by certified technicians, following the vehicle manufacturer&apos;s procedure
+        and local codes.
       </p>
     </main>
   );

@@ -12,12 +12,22 @@ import { CautionsList } from "@/components/service/cautions-list";
 
 export const metadata: Metadata = { title: "Ledger" };
 
-const LEDGER_CAUTIONS = ["recovery-cylinder-fill", "never-vent", "r1234yf-equipment-only", "local-rules-prevail"];
+const LEDGER_CAUTIONS = [
+  "recovery-cylinder-fill",
+  "never-vent",
+  "r1234yf-equipment-only",
+  "local-rules-prevail",
+];
 
 export default async function LedgerPage() {
   const user = await requireUser("ledger:read");
   const shopId = user.shopId;
-  const [shop, cylinders, movements, report] = await Promise.all([getShop({ shopId }), listCylinders({ shopId }), listMovements({ shopId }), ledgerReport({ shopId })]);
+  const [shop, cylinders, movements, report] = await Promise.all([
+    getShop({ shopId }),
+    listCylinders({ shopId }),
+    listMovements({ shopId }),
+    ledgerReport({ shopId }),
+  ]);
   const queryClient = getQueryClient();
   queryClient.setQueryData(ledgerKeys.cylinders(), cylinders);
   queryClient.setQueryData(ledgerKeys.movements(), movements);
@@ -26,10 +36,16 @@ export default async function LedgerPage() {
     <>
       <h1 className="mb-4 text-2xl font-bold">Refrigerant ledger</h1>
       <HydrationBoundary state={dehydrate(queryClient)}>
-        <LedgerView massUnit={shop.units === "imperial" ? "lb" : "g"} canWrite={can(user.role, "ledger:write")} />
+        <LedgerView
+          massUnit={shop.units === "imperial" ? "lb" : "g"}
+          canWrite={can(user.role, "ledger:write")}
+        />
       </HydrationBoundary>
       <div className="card mt-6">
-        <CautionsList title="Cylinders and refrigerant" cautions={cautionsFor().filter((c) => LEDGER_CAUTIONS.includes(c.id))} />
+        <CautionsList
+          title="Cylinders and refrigerant"
+          cautions={cautionsFor().filter((c) => LEDGER_CAUTIONS.includes(c.id))}
+        />
       </div>
     </>
   );

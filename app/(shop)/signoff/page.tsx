@@ -11,7 +11,9 @@ export default async function SignOffQueuePage() {
   return (
     <>
       <h1 className="mb-1 text-2xl font-bold">Waiting for sign-off</h1>
-      <p className="mb-4 text-ink-soft">Apprentice diagnoses to check against the readings and the findings.</p>
+      <p className="mb-4 text-ink-soft">
+        Apprentice diagnoses to check against the readings and the findings.
+      </p>
       <CaseList cases={waiting} empty="Nothing is waiting for sign-off." />
     </>
   );

@@ -16,7 +16,11 @@ export const metadata: Metadata = { title: "Spec table" };
 
 export default async function SpecsPage() {
   const user = await requireUser("specs:read");
-  const [shop, specs, allowances] = await Promise.all([getShop({ shopId: user.shopId }), listSpecs({ shopId: user.shopId }), getPartOilAllowances({ shopId: user.shopId })]);
+  const [shop, specs, allowances] = await Promise.all([
+    getShop({ shopId: user.shopId }),
+    listSpecs({ shopId: user.shopId }),
+    getPartOilAllowances({ shopId: user.shopId }),
+  ]);
   const queryClient = getQueryClient();
   queryClient.setQueryData(specKeys.list(""), specs);
   const imperial = shop.units === "imperial";
@@ -25,13 +29,19 @@ export default async function SpecsPage() {
     <div className="space-y-6">
       <h1 className="text-2xl font-bold">Spec table</h1>
       <p className="text-ink-soft">
-        The shop&apos;s own figures for each vehicle variant. The under-hood label and the vehicle maker&apos;s service information come first; a row here is the fallback and a cross-check.
+        The shop&apos;s own figures for each vehicle variant. The under-hood label and the vehicle
+        maker&apos;s service information come first; a row here is the fallback and a cross-check.
       </p>
       <HydrationBoundary state={dehydrate(queryClient)}>
         <SpecTable canEdit={canEdit} mass={imperial ? "oz" : "g"} volume={imperial ? "floz" : "mL"} />
         {canEdit && <SpecImport />}
       </HydrationBoundary>
-      <OilAllowancesForm initial={allowances} volume={imperial ? "floz" : "mL"} canEdit={canEdit} source={SERVICE_SOURCES.partOilAllowance} />
+      <OilAllowancesForm
+        initial={allowances}
+        volume={imperial ? "floz" : "mL"}
+        canEdit={canEdit}
+        source={SERVICE_SOURCES.partOilAllowance}
+      />
     </div>
   );
 }

@@ -12,24 +12,35 @@ export const interviewSaveSchema = z
     answers: z.partialRecord(z.enum(groupIds), z.unknown()),
     drafts: z.partialRecord(z.enum(groupIds), z.unknown()).default({}),
     skipped: z.array(z.enum(groupIds)).max(groupIds.length).default([]),
-    visited: z.array(z.enum(stepIds)).max(stepIds.length * 4).default([]),
+    visited: z
+      .array(z.enum(stepIds))
+      .max(stepIds.length * 4)
+      .default([]),
   })
-  .refine((v) => JSON.stringify(v).length <= MAX_RECORD_CHARS, { message: "The interview record is too large to save." });
+  .refine((v) => JSON.stringify(v).length <= MAX_RECORD_CHARS, {
+    message: "The interview record is too large to save.",
+  });
 export type InterviewSaveInput = z.infer<typeof interviewSaveSchema>;
 
 export const caseSubmitSchema = z.object({
   baseVersion: z.number().int().positive(),
   engineVersion: z.string().min(1).max(64),
   conclusionCause: z.enum(CAUSE_IDS, { message: "Choose the cause you concluded." }),
-  conclusionNotes: z.string().trim().min(1, "Say in a sentence or two why you concluded this.").max(4000, "Keep it under 4000 characters."),
+  conclusionNotes: z
+    .string()
+    .trim()
+    .min(1, "Say in a sentence or two why you concluded this.")
+    .max(4000, "Keep it under 4000 characters."),
 });
 export type CaseSubmitInput = z.infer<typeof caseSubmitSchema>;
 
-export const signOffSchema = z.object({
-  verdict: z.enum(["signed_off", "sent_back"], { message: "Sign off or send back." }),
-  comment: z.string().trim().max(4000, "Keep the comment under 4000 characters.").optional(),
-}).refine((v) => v.verdict === "signed_off" || (v.comment?.length ?? 0) > 0, {
-  message: "Say what to look at again when you send a case back.",
-  path: ["comment"],
-});
+export const signOffSchema = z
+  .object({
+    verdict: z.enum(["signed_off", "sent_back"], { message: "Sign off or send back." }),
+    comment: z.string().trim().max(4000, "Keep the comment under 4000 characters.").optional(),
+  })
+  .refine((v) => v.verdict === "signed_off" || (v.comment?.length ?? 0) > 0, {
+    message: "Say what to look at again when you send a case back.",
+    path: ["comment"],
+  });
 export type SignOffInput = z.infer<typeof signOffSchema>;

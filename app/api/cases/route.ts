@@ -3,9 +3,12 @@ import { listCases } from "@/lib/server/cases";
 import { createCase } from "@/lib/server/case-create";
 import { caseListQuerySchema, createCaseSchema } from "./schema";
 
-export const GET = handler({ permission: "cases:read", query: caseListQuerySchema }, async ({ user, query }) => {
-  return { cases: await listCases({ shopId: user.shopId, status: query.status }) };
-});
+export const GET = handler(
+  { permission: "cases:read", query: caseListQuerySchema },
+  async ({ user, query }) => {
+    return { cases: await listCases({ shopId: user.shopId, status: query.status }) };
+  },
+);
 
 export const POST = handler({ permission: "cases:write", body: createCaseSchema }, async ({ user, body }) => {
   const created = await createCase({ shopId: user.shopId, technicianId: user.id, input: body });

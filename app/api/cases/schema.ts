@@ -7,7 +7,10 @@ export const caseListQuerySchema = z.object({
 });
 
 export const caseParamsSchema = z.object({
-  id: z.coerce.number({ message: "A case id is a number." }).int("A case id is a whole number.").positive("A case id is positive."),
+  id: z.coerce
+    .number({ message: "A case id is a number." })
+    .int("A case id is a whole number.")
+    .positive("A case id is positive."),
 });
 
 const REFRIGERANTS = ["R-134a", "R-1234yf", "R-744", "R-12"] as const;
@@ -16,25 +19,54 @@ const thisYear = new Date().getUTCFullYear();
 
 export const newCustomerSchema = z.object({
   name: z.string().trim().min(1, "Enter the customer's name.").max(120),
-  phone: z.string().trim().max(40).optional().or(z.literal("").transform(() => undefined)),
-  email: z.string().trim().toLowerCase().email("Enter a valid e-mail address or leave it blank.").max(255).optional().or(z.literal("").transform(() => undefined)),
+  phone: z
+    .string()
+    .trim()
+    .max(40)
+    .optional()
+    .or(z.literal("").transform(() => undefined)),
+  email: z
+    .string()
+    .trim()
+    .toLowerCase()
+    .email("Enter a valid e-mail address or leave it blank.")
+    .max(255)
+    .optional()
+    .or(z.literal("").transform(() => undefined)),
 });
 
 export const newVehicleSchema = z.object({
-  year: z.coerce.number({ message: "Enter the model year." }).int("The model year is a whole number.").min(1980, "From 1980 on.").max(thisYear + 1, `Up to ${thisYear + 1}.`),
+  year: z.coerce
+    .number({ message: "Enter the model year." })
+    .int("The model year is a whole number.")
+    .min(1980, "From 1980 on.")
+    .max(thisYear + 1, `Up to ${thisYear + 1}.`),
   make: z.string().trim().min(1, "Enter the make.").max(60),
   model: z.string().trim().min(1, "Enter the model.").max(80),
-  engine: z.string().trim().max(80).optional().or(z.literal("").transform(() => undefined)),
+  engine: z
+    .string()
+    .trim()
+    .max(80)
+    .optional()
+    .or(z.literal("").transform(() => undefined)),
   vin: z
     .string()
     .transform((v) => v.replace(/[\s-]/g, "").toUpperCase())
-    .refine((v) => v === "" || /^[A-HJ-NPR-Z0-9]{17}$/.test(v), "A VIN has 17 letters and digits, never I, O or Q.")
+    .refine(
+      (v) => v === "" || /^[A-HJ-NPR-Z0-9]{17}$/.test(v),
+      "A VIN has 17 letters and digits, never I, O or Q.",
+    )
     .optional()
     .transform((v) => (v ? v : undefined)),
   refrigerant: z.enum(REFRIGERANTS, { message: "Choose the refrigerant on the under-hood label." }),
   expansionDevice: z.enum(DEVICES, { message: "Choose orifice tube or TXV." }),
   electricCompressor: z.boolean().default(false),
-  labelChargeG: z.number().int().min(50, "Under 50 g is not a vehicle charge.").max(5000, "Over 5 kg is not a light-vehicle charge.").optional(),
+  labelChargeG: z
+    .number()
+    .int()
+    .min(50, "Under 50 g is not a vehicle charge.")
+    .max(5000, "Over 5 kg is not a light-vehicle charge.")
+    .optional(),
 });
 
 export const createCaseSchema = z
@@ -43,9 +75,16 @@ export const createCaseSchema = z
     newCustomer: newCustomerSchema.optional(),
     vehicleId: z.number().int().positive().optional(),
     newVehicle: newVehicleSchema.optional(),
-    complaint: z.string().trim().min(1, "Write down the complaint in the owner's words.").max(2000, "Keep it under 2000 characters."),
+    complaint: z
+      .string()
+      .trim()
+      .min(1, "Write down the complaint in the owner's words.")
+      .max(2000, "Keep it under 2000 characters."),
   })
-  .refine((v) => v.vehicleId !== undefined || v.newVehicle !== undefined, { message: "Pick a vehicle or add one.", path: ["vehicleId"] })
+  .refine((v) => v.vehicleId !== undefined || v.newVehicle !== undefined, {
+    message: "Pick a vehicle or add one.",
+    path: ["vehicleId"],
+  })
   .refine((v) => v.vehicleId !== undefined || v.customerId !== undefined || v.newCustomer !== undefined, {
     message: "Pick the customer or add one.",
     path: ["customerId"],

@@ -3,12 +3,26 @@ import { createCylinder, listCylinders } from "@/lib/server/ledger";
 import { recordAudit } from "@/lib/server/audit";
 import { createCylinderSchema, cylinderListQuerySchema } from "./schema";
 
-export const GET = handler({ permission: "ledger:read", query: cylinderListQuerySchema }, async ({ user, query }) => {
-  return { cylinders: await listCylinders({ shopId: user.shopId, includeRetired: query.retired !== "exclude" }) };
-});
+export const GET = handler(
+  { permission: "ledger:read", query: cylinderListQuerySchema },
+  async ({ user, query }) => {
+    return {
+      cylinders: await listCylinders({ shopId: user.shopId, includeRetired: query.retired !== "exclude" }),
+    };
+  },
+);
 
-export const POST = handler({ permission: "ledger:write", body: createCylinderSchema }, async ({ user, body }) => {
-  const cylinder = await createCylinder({ shopId: user.shopId, input: body });
-  await recordAudit({ shopId: user.shopId, actorId: user.id, entity: "cylinder", entityId: cylinder.id, action: "created" });
-  return Response.json({ cylinder }, { status: 201 });
-});
+export const POST = handler(
+  { permission: "ledger:write", body: createCylinderSchema },
+  async ({ user, body }) => {
+    const cylinder = await createCylinder({ shopId: user.shopId, input: body });
+    await recordAudit({
+      shopId: user.shopId,
+      actorId: user.id,
+      entity: "cylinder",
+      entityId: cylinder.id,
+      action: "created",
+    });
+    return Response.json({ cylinder }, { status: 201 });
+  },
+);

@@ -8,7 +8,11 @@ export async function GET() {
   const started = performance.now();
   try {
     await getSequelize().query("SELECT 1", { type: QueryTypes.SELECT });
-    return NextResponse.json({ status: "ok", database: "ok", latencyMs: Math.round(performance.now() - started) });
+    return NextResponse.json({
+      status: "ok",
+      database: "ok",
+      latencyMs: Math.round(performance.now() - started),
+    });
   } catch (error) {
     console.error("Health check: database did not answer", error);
     return NextResponse.json({ status: "degraded", database: "unreachable" }, { status: 503 });

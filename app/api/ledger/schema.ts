@@ -2,7 +2,12 @@ import { z } from "zod";
 
 export const movementListQuerySchema = z.object({
   cylinderId: z.coerce.number({ message: "cylinderId is a number." }).int().positive().optional(),
-  limit: z.coerce.number({ message: "limit is a number." }).int().min(1).max(500, "At most 500 at a time.").optional(),
+  limit: z.coerce
+    .number({ message: "limit is a number." })
+    .int()
+    .min(1)
+    .max(500, "At most 500 at a time.")
+    .optional(),
 });
 
 export const reportQuerySchema = z.object({
@@ -13,14 +18,25 @@ export const reportQuerySchema = z.object({
 export const manualMovementSchema = z
   .object({
     cylinderId: z.number({ message: "Choose a cylinder." }).int().positive(),
-    type: z.enum(["recycled", "sent_out", "adjustment"], { message: "Choose recycled, sent out or a weighed adjustment." }),
+    type: z.enum(["recycled", "sent_out", "adjustment"], {
+      message: "Choose recycled, sent out or a weighed adjustment.",
+    }),
     massG: z.number({ message: "Enter the mass." }).int("Whole grams.").min(-120_000).max(120_000),
     occurredAt: z.iso.datetime({ offset: true, message: "Give the date and time." }).optional(),
     destination: z.string().trim().max(120).optional(),
     note: z.string().trim().max(255).optional(),
   })
   .strict()
-  .refine((m) => m.type === "adjustment" ? m.massG !== 0 : m.massG > 0, { message: "Enter a positive mass (an adjustment may be negative, never zero).", path: ["massG"] })
-  .refine((m) => m.type !== "sent_out" || (m.destination ?? "") !== "", { message: "Say where the refrigerant was sent.", path: ["destination"] })
-  .refine((m) => m.type !== "adjustment" || (m.note ?? "") !== "", { message: "Say why the weighed mass differs.", path: ["note"] });
+  .refine((m) => (m.type === "adjustment" ? m.massG !== 0 : m.massG > 0), {
+    message: "Enter a positive mass (an adjustment may be negative, never zero).",
+    path: ["massG"],
+  })
+  .refine((m) => m.type !== "sent_out" || (m.destination ?? "") !== "", {
+    message: "Say where the refrigerant was sent.",
+    path: ["destination"],
+  })
+  .refine((m) => m.type !== "adjustment" || (m.note ?? "") !== "", {
+    message: "Say why the weighed mass differs.",
+    path: ["note"],
+  });
 export type ManualMovementInput = z.infer<typeof manualMovementSchema>;

@@ -7,7 +7,8 @@ import { signInSchema } from "./schema";
 /** Sign in: creates a Lucia session and sets its cookie. */
 export const POST = handler({ public: true, body: signInSchema }, async ({ req, body, responseHeaders }) => {
   // Without a trusted proxy the client address is unknown; the per-e-mail limit still applies.
-  const ip = env().TRUST_PROXY === "1" ? (req.headers.get("x-forwarded-for")?.split(",")[0]?.trim() ?? null) : null;
+  const ip =
+    env().TRUST_PROXY === "1" ? (req.headers.get("x-forwarded-for")?.split(",")[0]?.trim() ?? null) : null;
   const { userId } = await signInWithPassword({ email: body.email, password: body.password, ip });
   const lucia = getLucia();
   const session = await lucia.createSession(userId, {});

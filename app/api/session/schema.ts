@@ -1,7 +1,12 @@
 import { z } from "zod";
 
 export const signInSchema = z.object({
-  email: z.string().trim().min(1, "Enter your e-mail address.").email("Enter a valid e-mail address.").max(255),
+  email: z
+    .string()
+    .trim()
+    .min(1, "Enter your e-mail address.")
+    .email("Enter a valid e-mail address.")
+    .max(255),
   password: z.string().min(1, "Enter your password.").max(200, "That password is too long."),
 });
 export type SignInInput = z.infer<typeof signInSchema>;

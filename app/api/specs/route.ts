@@ -3,12 +3,21 @@ import { createSpec, listSpecs } from "@/lib/server/specs";
 import { recordAudit } from "@/lib/server/audit";
 import { specInputSchema, specListQuerySchema } from "./schema";
 
-export const GET = handler({ permission: "specs:read", query: specListQuerySchema }, async ({ user, query }) => {
-  return { specs: await listSpecs({ shopId: user.shopId, q: query.q }) };
-});
+export const GET = handler(
+  { permission: "specs:read", query: specListQuerySchema },
+  async ({ user, query }) => {
+    return { specs: await listSpecs({ shopId: user.shopId, q: query.q }) };
+  },
+);
 
 export const POST = handler({ permission: "specs:edit", body: specInputSchema }, async ({ user, body }) => {
   const spec = await createSpec({ shopId: user.shopId, input: body });
-  await recordAudit({ shopId: user.shopId, actorId: user.id, entity: "spec_entry", entityId: spec.id, action: "created" });
+  await recordAudit({
+    shopId: user.shopId,
+    actorId: user.id,
+    entity: "spec_entry",
+    entityId: spec.id,
+    action: "created",
+  });
   return Response.json({ spec }, { status: 201 });
 });

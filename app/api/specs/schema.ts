@@ -3,7 +3,10 @@ import { specRowSchema } from "@/lib/specs";
 import { partOilAllowancesSchema } from "@/lib/service/oil";
 
 export const specParamsSchema = z.object({
-  id: z.coerce.number({ message: "A spec row id is a number." }).int("A spec row id is a whole number.").positive("A spec row id is positive."),
+  id: z.coerce
+    .number({ message: "A spec row id is a number." })
+    .int("A spec row id is a whole number.")
+    .positive("A spec row id is positive."),
 });
 
 export const specListQuerySchema = z.object({
@@ -23,7 +26,10 @@ const unitsSchema = z
 
 export const specImportSchema = z
   .object({
-    csv: z.string().min(1, "Choose a CSV file or paste its text.").max(900_000, "Import at most about 900 kB at a time."),
+    csv: z
+      .string()
+      .min(1, "Choose a CSV file or paste its text.")
+      .max(900_000, "Import at most about 900 kB at a time."),
     units: unitsSchema.optional(),
   })
   .strict();
@@ -35,7 +41,10 @@ export const specExportQuerySchema = z.object({
 });
 
 export const specMatchQuerySchema = z.object({
-  vehicleId: z.coerce.number({ message: "vehicleId is a number." }).int("vehicleId is a whole number.").positive("vehicleId is positive."),
+  vehicleId: z.coerce
+    .number({ message: "vehicleId is a number." })
+    .int("vehicleId is a whole number.")
+    .positive("vehicleId is positive."),
 });
 
 export const oilAllowancesInputSchema = z.object({ allowancesMl: partOilAllowancesSchema }).strict();

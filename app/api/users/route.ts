@@ -7,8 +7,18 @@ export const GET = handler({ permission: "users:manage" }, async ({ user }) => {
   return { users: await listUsers({ shopId: user.shopId }) };
 });
 
-export const POST = handler({ permission: "users:manage", body: createUserSchema }, async ({ user, body }) => {
-  const created = await createUser({ shopId: user.shopId, ...body });
-  await recordAudit({ shopId: user.shopId, actorId: user.id, entity: "user", entityId: created.id, action: "create", detail: { role: created.role } });
-  return Response.json({ user: created }, { status: 201 });
-});
+export const POST = handler(
+  { permission: "users:manage", body: createUserSchema },
+  async ({ user, body }) => {
+    const created = await createUser({ shopId: user.shopId, ...body });
+    await recordAudit({
+      shopId: user.shopId,
+      actorId: user.id,
+      entity: "user",
+      entityId: created.id,
+      action: "create",
+      detail: { role: created.role },
+    });
+    return Response.json({ user: created }, { status: 201 });
+  },
+);

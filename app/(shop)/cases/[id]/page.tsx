@@ -24,7 +24,10 @@ export default async function CasePage({ params }: { params: Promise<{ id: strin
   const record = (detail.answers ?? {}) as { answers?: Record<string, never> };
   const editable = caseIsEditable(detail);
   const mayEdit = mayChangeCase(user, detail);
-  const mayReview = detail.status === "awaiting_signoff" && can(user.role, "signoff:review") && detail.technicianId !== user.id;
+  const mayReview =
+    detail.status === "awaiting_signoff" &&
+    can(user.role, "signoff:review") &&
+    detail.technicianId !== user.id;
   const findings = detail.findings as Parameters<typeof FindingsSnapshot>[0]["findings"] | null;
   return (
     <article className="space-y-4">
@@ -47,7 +50,8 @@ export default async function CasePage({ params }: { params: Promise<{ id: strin
           <ul className="mt-2 space-y-2">
             {detail.signOffs.map((s, i) => (
               <li key={i}>
-                <span className="font-bold">{s.verdict === "signed_off" ? "Signed off" : "Sent back"}</span> by {s.reviewer}
+                <span className="font-bold">{s.verdict === "signed_off" ? "Signed off" : "Sent back"}</span>{" "}
+                by {s.reviewer}
                 {s.comment ? `: “${s.comment}”` : ""}
               </li>
             ))}
@@ -66,12 +70,22 @@ export default async function CasePage({ params }: { params: Promise<{ id: strin
           <dt className="font-bold">Refrigerant</dt>
           <dd>{detail.refrigerant ?? "—"}</dd>
           <dt className="font-bold">Expansion device</dt>
-          <dd>{detail.expansionDevice === "txv" ? "TXV with receiver-drier" : detail.expansionDevice === "orifice_tube" ? "Orifice tube with accumulator" : "—"}</dd>
+          <dd>
+            {detail.expansionDevice === "txv"
+              ? "TXV with receiver-drier"
+              : detail.expansionDevice === "orifice_tube"
+                ? "Orifice tube with accumulator"
+                : "—"}
+          </dd>
         </dl>
       </section>
       <CaseReadings answers={record.answers ?? {}} />
       {findings && Array.isArray(findings.suspects) ? (
-        <FindingsSnapshot findings={findings} conclusionCause={detail.conclusionCause} conclusionNotes={detail.conclusionNotes} />
+        <FindingsSnapshot
+          findings={findings}
+          conclusionCause={detail.conclusionCause}
+          conclusionNotes={detail.conclusionNotes}
+        />
       ) : (
         detail.conclusionNotes && (
           <section className="card">
@@ -82,7 +96,10 @@ export default async function CasePage({ params }: { params: Promise<{ id: strin
       )}
       <section className="card">
         <h2 className="text-lg font-bold">Service record</h2>
-        <p className="mt-1">Recovery, evacuation and hold, oil and the recharge by weight; each step posts to the refrigerant ledger.</p>
+        <p className="mt-1">
+          Recovery, evacuation and hold, oil and the recharge by weight; each step posts to the refrigerant
+          ledger.
+        </p>
         <Link href={`/cases/${detail.id}/service`} className="btn-quiet mt-2">
           Open the service record
         </Link>

@@ -2,6 +2,9 @@ import { handler } from "@/lib/server/handler";
 import { getCase } from "@/lib/server/cases";
 import { caseParamsSchema } from "../schema";
 
-export const GET = handler({ permission: "cases:read", params: caseParamsSchema }, async ({ user, params }) => {
-  return { case: await getCase({ shopId: user.shopId, caseId: params.id }) };
-});
+export const GET = handler(
+  { permission: "cases:read", params: caseParamsSchema },
+  async ({ user, params }) => {
+    return { case: await getCase({ shopId: user.shopId, caseId: params.id }) };
+  },
+);

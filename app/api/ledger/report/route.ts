@@ -2,12 +2,18 @@ import { handler } from "@/lib/server/handler";
 import { ledgerReport } from "@/lib/server/ledger";
 import { reportQuerySchema } from "../schema";
 
-export const GET = handler({ permission: "ledger:read", query: reportQuerySchema }, async ({ user, query }) => {
-  const report = await ledgerReport({ shopId: user.shopId });
-  if (query.format === "csv") {
-    return new Response(`\uFEFF${report.csv}\r\n`, {
-      headers: { "content-type": "text/csv; charset=utf-8", "content-disposition": 'attachment; filename="refrigerant-ledger.csv"' },
-    });
-  }
-  return { rows: report.rows, timeZone: report.timeZone };
-});
+export const GET = handler(
+  { permission: "ledger:read", query: reportQuerySchema },
+  async ({ user, query }) => {
+    const report = await ledgerReport({ shopId: user.shopId });
+    if (query.format === "csv") {
+      return new Response(`\uFEFF${report.csv}\r\n`, {
+        headers: {
+          "content-type": "text/csv; charset=utf-8",
+          "content-disposition": 'attachment; filename="refrigerant-ledger.csv"',
+        },
+      });
+    }
+    return { rows: report.rows, timeZone: report.timeZone };
+  },
+);

@@ -12,9 +12,17 @@ const importQuerySchema = z.object({
 export const POST = handler(
   { permission: "specs:edit", query: importQuerySchema, body: specImportSchema },
   async ({ user, query, body }) => {
-    if (query.step === "preview") return { preview: await previewSpecImport({ shopId: user.shopId, csv: body.csv, units: body.units }) };
+    if (query.step === "preview")
+      return { preview: await previewSpecImport({ shopId: user.shopId, csv: body.csv, units: body.units }) };
     const result = await commitSpecImport({ shopId: user.shopId, csv: body.csv, units: body.units });
-    await recordAudit({ shopId: user.shopId, actorId: user.id, entity: "spec_entry", entityId: "import", action: "imported", detail: result });
+    await recordAudit({
+      shopId: user.shopId,
+      actorId: user.id,
+      entity: "spec_entry",
+      entityId: "import",
+      action: "imported",
+      detail: result,
+    });
     return result;
   },
 );

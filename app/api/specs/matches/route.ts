@@ -2,6 +2,9 @@ import { handler } from "@/lib/server/handler";
 import { listSpecMatchesForVehicle } from "@/lib/server/specs";
 import { specMatchQuerySchema } from "../schema";
 
-export const GET = handler({ permission: "specs:read", query: specMatchQuerySchema }, async ({ user, query }) => {
-  return listSpecMatchesForVehicle({ shopId: user.shopId, vehicleId: query.vehicleId });
-});
+export const GET = handler(
+  { permission: "specs:read", query: specMatchQuerySchema },
+  async ({ user, query }) => {
+    return listSpecMatchesForVehicle({ shopId: user.shopId, vehicleId: query.vehicleId });
+  },
+);

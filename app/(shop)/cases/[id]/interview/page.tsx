@@ -26,7 +26,10 @@ export default async function InterviewPage({ params }: { params: Promise<{ id: 
   if (!editable || !mayEdit) redirect(`/cases/${caseId}`);
 
   const saved = (detail.answers ?? {}) as Partial<SavedInterview>;
-  const record: Partial<SavedInterview> = { ...saved, step: (detail.interviewStep ?? saved.step) as SavedInterview["step"] };
+  const record: Partial<SavedInterview> = {
+    ...saved,
+    step: (detail.interviewStep ?? saved.step) as SavedInterview["step"],
+  };
   return (
     <InterviewBoot
       caseId={caseId}

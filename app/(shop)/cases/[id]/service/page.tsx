@@ -30,7 +30,15 @@ export default async function ServiceRecordPage({ params }: { params: Promise<{ 
   ]);
   const matches =
     serviceCase.make && serviceCase.model && serviceCase.year
-      ? await listSpecMatches({ shopId, vehicle: { year: serviceCase.year, make: serviceCase.make, model: serviceCase.model, engine: serviceCase.engine } })
+      ? await listSpecMatches({
+          shopId,
+          vehicle: {
+            year: serviceCase.year,
+            make: serviceCase.make,
+            model: serviceCase.model,
+            engine: serviceCase.engine,
+          },
+        })
       : [];
   const imperial = shop.units === "imperial";
   const readOnlyReason = !can(user.role, "service:write")
@@ -50,9 +58,16 @@ export default async function ServiceRecordPage({ params }: { params: Promise<{ 
             ← Case {caseId}
           </Link>
         </p>
-        <h1 className="text-2xl font-bold">Service record: {serviceCase.vehicle ?? "vehicle not recorded"}</h1>
+        <h1 className="text-2xl font-bold">
+          Service record: {serviceCase.vehicle ?? "vehicle not recorded"}
+        </h1>
         <p className="text-ink-soft">
-          {serviceCase.refrigerant ?? "Refrigerant not recorded"} · {serviceCase.expansionDevice === "orifice_tube" ? "orifice tube and accumulator" : serviceCase.expansionDevice === "txv" ? "TXV and receiver-drier" : "expansion device not recorded"}
+          {serviceCase.refrigerant ?? "Refrigerant not recorded"} ·{" "}
+          {serviceCase.expansionDevice === "orifice_tube"
+            ? "orifice tube and accumulator"
+            : serviceCase.expansionDevice === "txv"
+              ? "TXV and receiver-drier"
+              : "expansion device not recorded"}
           {serviceCase.electricCompressor ? " · electric compressor" : ""}
           {record ? ` · entered by ${record.technician}` : ""}
         </p>
@@ -73,7 +88,13 @@ export default async function ServiceRecordPage({ params }: { params: Promise<{ 
           reasons: m.reasons,
         }))}
         allowancesMl={allowancesMl}
-        units={{ mass: imperial ? "oz" : "g", volume: imperial ? "floz" : "mL", gauge: imperial ? "psi" : "kPa", temperature: imperial ? "F" : "C", altitudeM: shop.altitudeM }}
+        units={{
+          mass: imperial ? "oz" : "g",
+          volume: imperial ? "floz" : "mL",
+          gauge: imperial ? "psi" : "kPa",
+          temperature: imperial ? "F" : "C",
+          altitudeM: shop.altitudeM,
+        }}
         readOnlyReason={readOnlyReason}
       />
     </article>

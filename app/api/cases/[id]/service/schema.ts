@@ -12,15 +12,30 @@ const num = (label: string, min: number, max: number, unit: string) =>
     .nullable()
     .optional();
 const whole = (label: string, min: number, max: number, unit: string) =>
-  z.number({ message: `${label} is a number.` }).int(`${label} is in whole ${unit}.`).min(min, `${label} cannot be below ${min} ${unit}.`).max(max, `${label} cannot be above ${max} ${unit}.`).nullable().optional();
-const id = (label: string) => z.number({ message: `${label}: choose one from the list.` }).int().positive().nullable().optional();
+  z
+    .number({ message: `${label} is a number.` })
+    .int(`${label} is in whole ${unit}.`)
+    .min(min, `${label} cannot be below ${min} ${unit}.`)
+    .max(max, `${label} cannot be above ${max} ${unit}.`)
+    .nullable()
+    .optional();
+const id = (label: string) =>
+  z
+    .number({ message: `${label}: choose one from the list.` })
+    .int()
+    .positive()
+    .nullable()
+    .optional();
 const instant = z.iso.datetime({ offset: true, message: "Give a date and time." }).nullable().optional();
 const text = (max: number) => z.string().trim().max(max, `At most ${max} characters.`).nullable().optional();
 
 /** A save of the service record: every value in internal units (g, mL, kPa absolute, °C); empty fields are null. */
 export const serviceRecordInputSchema = z
   .object({
-    baseVersion: z.number({ message: "baseVersion is the version you last loaded (0 for a new record)." }).int().min(0),
+    baseVersion: z
+      .number({ message: "baseVersion is the version you last loaded (0 for a new record)." })
+      .int()
+      .min(0),
     step: z.enum(SERVICE_STEPS, { message: "Unknown step." }),
     specEntryId: id("Spec row"),
     labelChargeG: whole("Label charge", 50, 5000, "g"),
@@ -59,10 +74,16 @@ export const serviceRecordInputSchema = z
     notes: text(4000),
   })
   .strict()
-  .refine((r) => !r.recoveryStartedAt || !r.recoveryEndedAt || Date.parse(r.recoveryEndedAt) >= Date.parse(r.recoveryStartedAt), {
-    message: "Recovery cannot end before it started.",
-    path: ["recoveryEndedAt"],
-  })
+  .refine(
+    (r) =>
+      !r.recoveryStartedAt ||
+      !r.recoveryEndedAt ||
+      Date.parse(r.recoveryEndedAt) >= Date.parse(r.recoveryStartedAt),
+    {
+      message: "Recovery cannot end before it started.",
+      path: ["recoveryEndedAt"],
+    },
+  )
   .refine((r) => !(r.recoveredG && r.recoveredG > 0) || r.recoveryCylinderId, {
     message: "Choose the recovery cylinder the refrigerant went into: the ledger needs it.",
     path: ["recoveryCylinderId"],
