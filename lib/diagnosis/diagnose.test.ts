@@ -79,7 +79,7 @@ describe("separating the known confusions", () => {
     lowKpaGauge: 120,
     suctionLineC: 15,
   } as const;
-  it("uses subcooling to split undercharge (low) from a metering restriction (high) (superheat/subcooling training handout)", () => {
+  it("uses subcooling to split undercharge (low) from a metering restriction (high) (common practice)", () => {
     expect(diagnose({ ...lowSides, liquidLineC: 41 }).suspects[0]?.cause).toBe("undercharge");
     expect(
       diagnose({ ...lowSides, liquidLineC: 28, symptoms: ["frost_at_metering_device"] }).suspects[0]?.cause,
@@ -93,7 +93,7 @@ describe("separating the known confusions", () => {
     highKpaGauge: 1900,
     lowKpaGauge: 320,
   } as const;
-  it("splits overcharge, air and condenser airflow by static check, identifier and fan (SAE J2912; Apex Tech Nation T-22/8)", () => {
+  it("splits overcharge, air and condenser airflow by static check, identifier and fan (SAE J2912; common practice)", () => {
     expect(
       diagnose({ ...highHead, staticKpaGauge: 800, identifierPurityPct: 99.5, identifierAirPct: 4 })
         .suspects[0]?.cause,
@@ -108,7 +108,7 @@ describe("separating the known confusions", () => {
     ).toBe("condenser_airflow");
   });
 
-  it("asks for the charge by weight before condemning a compressor, and follows the weight (Apex Tech Nation)", () => {
+  it("asks for the charge by weight before condemning a compressor, and follows the weight (common practice)", () => {
     const close = {
       refrigerant: "R-134a",
       expansionDevice: "orifice_tube",
@@ -126,7 +126,7 @@ describe("separating the known confusions", () => {
     );
   });
 
-  it("splits moisture (swinging low side) from icing (steady low side, clutch not cycling) ('Frozen Expansion Valve'; 'Freeze Up')", () => {
+  it("splits moisture (swinging low side) from icing (steady low side, clutch not cycling) (common practice)", () => {
     const fading = {
       refrigerant: "R-134a",
       expansionDevice: "orifice_tube",

@@ -138,7 +138,7 @@ describe("identifier, charge and vent", () => {
     );
   });
 
-  it("grades the centre vent against 3–8 °C (NOLN article 1420), allowing more at very hot ambient (from memory)", () => {
+  it("grades the centre vent against 3–8 °C (common practice), allowing more at very hot ambient (from memory)", () => {
     expect(ids({ ...r134aOrifice, ventC: 6 })).toContain("vent:cold");
     expect(ids({ ...r134aOrifice, ventC: 18 })).toContain("vent:warm");
     expect(ids({ ...r134aOrifice, ambientC: 42, ventC: 10 })).toContain("vent:cold");

@@ -41,7 +41,7 @@ export const PURITY_PASS_PCT = 98;
 export const AIR_PCT = { some: 1, high: 3 } as const;
 // Charge deviation grading, % of label (common practice; recovery can leave some behind, SAE J2762).
 export const CHARGE_PCT = { empty: -85, veryLow: -35, low: -12, high: 8, veryHigh: 18 } as const;
-// Centre-vent grading, °C (NOLN article 1420: 3–8 °C expected); allowed to rise 0.3 K per K above 32 °C ambient (from memory).
+// Centre-vent grading, °C (3–8 °C expected: common practice); allowed to rise 0.3 K per K above 32 °C ambient (from memory).
 export const VENT_C = { freezing: 2, cold: 8, warm: 15, hotAmbientC: 32, riseKPerK: 0.3 } as const;
 
 export const GRADING = {

@@ -33,19 +33,18 @@ export interface RankingGate {
 
 const PRIOR_SOURCE = "from memory: rough share of cooling complaints seen in a general repair shop";
 const PRESSURE_SIGNATURES =
-  "Pressure-diagnosis signatures: Apex Tech Nation T-22/8 'Pressure Diagnosis — Reading the Gauge Set'; ASE A7 study flashcards (careeremployer.com); weights common practice";
+  "Pressure signatures: the trade's four gauge patterns (both low: undercharge; both high: airflow, overcharge or air; low side high with high side low: compressor; low side low with high side high: high-side restriction) (common practice); weights common practice";
 const BANDS =
   "Expected bands: US Army TM 5-3805-291-23-1 WP 0018 Table 1 quick-check pressures; weights common practice";
 const SC_SH =
-  "Subcooling/superheat use: mobile A/C training handout 'A/C System Diagnosis Using Superheat & Sub-Cooling Measurements'; target ranges from memory; weights common practice";
+  "Subcooling and superheat as defined in a refrigeration textbook; their use to split charge from restriction (common practice); mobile target ranges from memory; weights common practice";
 const STATIC_NCG =
-  "Static P–T check (Dalton's law): SAE J1989/J2211 container NCG procedure as reproduced in TM 5-3810-307-24-1-2 ch. 9; weights common practice";
+  "Static P–T check: Dalton's law of partial pressures (a thermodynamics textbook); container non-condensable check in TM 5-3810-307-24-1-2 ch. 9; in-vehicle use common practice; weights common practice";
 const CHARGE =
   "Charge by weight is the only absolute charge check: TM 5-3805-291-23-1; recovery may leave 18–30 % behind: SAE J2762; weights common practice";
 const IDENTIFIER =
   "Identifier pass mark 98 %: SAE J2099 / J2912; NCG shown as weight %: SAE J2912; air-% grading from memory";
-const VENT =
-  "Centre-vent 3–8 °C expected: NOLN 'Automotive maintenance' article 1420; warm threshold from memory";
+const VENT = "Centre-vent 3–8 °C expected (common practice); warm threshold from memory";
 
 export const CAUSE_PRIORS: Record<CauseId, CausePrior> = {
   undercharge: { logOdds: -0.6, source: PRIOR_SOURCE },
@@ -150,7 +149,7 @@ export const LIKELIHOOD_TABLE: readonly LikelihoodRow[] = [
   {
     observation: "low_side:vacuum",
     source:
-      "Low side near vacuum → restriction: ASE A7 study flashcards (careeremployer.com); moisture freezing at the metering device pulls toward vacuum: 'Frozen Expansion Valve' study note; weights common practice",
+      "Low side near vacuum → metering restriction; moisture freezing at the metering device pulls it toward vacuum (common practice); weights common practice",
     weights: {
       metering_restriction: 2.0,
       moisture: 1.2,
@@ -218,7 +217,7 @@ export const LIKELIHOOD_TABLE: readonly LikelihoodRow[] = [
   {
     observation: "low_side:high",
     source:
-      "Low side high: overcharge, weak compressor (Apex Tech Nation T-22/8); TXV stuck open 'low side high, high side normal' (mobile A/C training manual p. 915); weights common practice",
+      "Low side high with overcharge, a weak compressor, or an expansion valve stuck open with the high side near normal (common practice); weights common practice",
     weights: {
       overcharge: 1.0,
       metering_stuck_open: 1.4,
@@ -237,8 +236,7 @@ export const LIKELIHOOD_TABLE: readonly LikelihoodRow[] = [
   // Absolute compression ratio while running
   {
     observation: "lift:close",
-    source:
-      "Weak compressor: high and low side close together (Apex Tech Nation T-22/8); ratio threshold from memory",
+    source: "Weak compressor: high and low side close together (common practice); threshold from memory",
     weights: {
       weak_compressor: 1.5,
       metering_stuck_open: 0.3,
@@ -280,7 +278,7 @@ export const LIKELIHOOD_TABLE: readonly LikelihoodRow[] = [
   },
   {
     observation: "subcooling:normal",
-    source: SC_SH + "; air gives high head with normal subcooling (EPA 608 study quiz (jeopardylabs.com))",
+    source: SC_SH + "; air gives a high head with subcooling not raised to match (common practice)",
     weights: {
       no_refrigerant_fault: 0.6,
       non_condensables: 0.4,
@@ -323,7 +321,7 @@ export const LIKELIHOOD_TABLE: readonly LikelihoodRow[] = [
   {
     observation: "superheat:near_zero",
     source:
-      "TXV flooding: superheat near zero, suction line cold (mobile A/C training manual p. 915); weights common practice",
+      "Expansion valve flooding: superheat near zero, suction line cold (common practice); weights common practice",
     weights: {
       metering_stuck_open: 1.8,
       overcharge: 0.8,
@@ -473,7 +471,7 @@ export const LIKELIHOOD_TABLE: readonly LikelihoodRow[] = [
   },
   {
     observation: "charge:very_low",
-    source: CHARGE + "; weigh the charge before condemning a compressor (Apex Tech Nation)",
+    source: CHARGE + "; weigh the charge before condemning a compressor (common practice)",
     weights: {
       undercharge: 2.2,
       oil_loss: 0.5,
@@ -550,7 +548,7 @@ export const LIKELIHOOD_TABLE: readonly LikelihoodRow[] = [
   // Centre-vent temperature
   {
     observation: "vent:freezing",
-    source: VENT + "; below about 3 °C the evaporator can freeze (NOLN article 1420)",
+    source: VENT + "; below about 3 °C the evaporator can freeze (common practice)",
     weights: {
       evaporator_icing: 1.2,
       moisture: 0.3,
@@ -645,24 +643,23 @@ export const LIKELIHOOD_TABLE: readonly LikelihoodRow[] = [
   },
   {
     observation: "symptom:clutch_not_cycling",
-    source: "Evaporator icing: clutch fails to cycle off (Your A/C Authority 'Freeze Up')",
+    source: "Evaporator icing: the clutch fails to cycle off (common practice)",
     weights: { evaporator_icing: 1.5, undercharge: -0.5 },
   },
   {
     observation: "symptom:cooling_fades_then_returns",
     source:
-      "Moisture: cools 5–15 min then warms, repeats ('Frozen Expansion Valve' study note); icing returns after melt (Your A/C Authority)",
+      "Moisture: cools for 5–15 min, then warms, and repeats; icing cools again after a melt (common practice)",
     weights: { moisture: 1.8, evaporator_icing: 1.3, undercharge: 0.2, no_refrigerant_fault: -1.5 },
   },
   {
     observation: "symptom:low_side_swings_to_vacuum",
-    source: "Moisture freezing and thawing at the metering device ('Frozen Expansion Valve' study note)",
+    source: "Moisture freezing and thawing at the metering device (common practice)",
     weights: { moisture: 2.0, metering_restriction: 0.6, evaporator_icing: -0.3, no_refrigerant_fault: -2.0 },
   },
   {
     observation: "symptom:worse_at_idle",
-    source:
-      "Weak cooling at idle, fine at speed → condenser airflow (ASE A7 study flashcards (careeremployer.com))",
+    source: "Weak cooling at idle, better at road speed → condenser airflow (common practice)",
     weights: {
       condenser_airflow: 1.5,
       overcharge: 0.5,
@@ -673,13 +670,13 @@ export const LIKELIHOOD_TABLE: readonly LikelihoodRow[] = [
   },
   {
     observation: "symptom:condenser_fan_not_running",
-    source: "Fan not running → condenser airflow (Apex Tech Nation T-22/8)",
+    source: "Fan not running → condenser airflow (common practice)",
     weights: { condenser_airflow: 3.0, overcharge: -0.3, non_condensables: -0.3, no_refrigerant_fault: -2.0 },
   },
   {
     observation: "symptom:frost_at_metering_device",
     source:
-      "Frost at the metering device: restriction or moisture ice (ASE A7 study flashcards (careeremployer.com); 'Frozen Expansion Valve'); frost at evaporator inlet only with low charge (common practice)",
+      "Frost at the metering device: a restriction or moisture ice; frost at the evaporator inlet only with a low charge (common practice)",
     weights: {
       metering_restriction: 1.3,
       moisture: 1.0,
@@ -691,7 +688,7 @@ export const LIKELIHOOD_TABLE: readonly LikelihoodRow[] = [
   },
   {
     observation: "symptom:frost_on_liquid_line",
-    source: "Frosted high-pressure liquid line at a restriction (Apex Tech Nation T-22/8)",
+    source: "Frosted high-pressure liquid line at a restriction (common practice)",
     weights: {
       high_side_restriction: 2.5,
       metering_restriction: 0.3,
@@ -701,8 +698,7 @@ export const LIKELIHOOD_TABLE: readonly LikelihoodRow[] = [
   },
   {
     observation: "symptom:suction_line_frosted",
-    source:
-      "Flooding evaporator: suction line frosted back to the compressor (mobile A/C training manual p. 915); common practice",
+    source: "Flooding evaporator: suction line frosted back toward the compressor (common practice)",
     weights: {
       metering_stuck_open: 1.5,
       overcharge: 0.8,
@@ -720,7 +716,7 @@ export const LIKELIHOOD_TABLE: readonly LikelihoodRow[] = [
   {
     observation: "symptom:compressor_noise",
     source:
-      "Compressor failures: about a third lubrication (compressor supplier failure analysis, compressor-intl.com 2005); liquid slugging when flooded (common practice)",
+      "About a third of compressor failures are lubrication failures (from memory); liquid slugging when flooded (common practice)",
     weights: {
       weak_compressor: 1.2,
       oil_loss: 1.3,
@@ -742,7 +738,7 @@ export const LIKELIHOOD_TABLE: readonly LikelihoodRow[] = [
   },
   {
     observation: "symptom:oil_residue_at_fitting",
-    source: "Oily residue or dye at the leak point (Apex Tech Nation; common practice)",
+    source: "Oily residue or dye at the leak point (common practice)",
     weights: { undercharge: 1.2, oil_loss: 1.0, no_refrigerant_fault: -0.5 },
   },
   {
@@ -753,8 +749,7 @@ export const LIKELIHOOD_TABLE: readonly LikelihoodRow[] = [
   },
   {
     observation: "symptom:recent_service_elsewhere",
-    source:
-      "Most repeat failures are installer-controllable (compressor supplier failure analysis, compressor-intl.com 2005); common practice",
+    source: "Most repeat failures are installer-controllable (from memory); common practice",
     weights: {
       overcharge: 0.6,
       non_condensables: 0.6,
@@ -765,7 +760,7 @@ export const LIKELIHOOD_TABLE: readonly LikelihoodRow[] = [
   },
   {
     observation: "symptom:evaporator_airflow_drops",
-    source: "Icing: very cold at first, then airflow falls (Your A/C Authority 'Freeze Up')",
+    source: "Icing: very cold at first, then the airflow falls (common practice)",
     weights: { evaporator_icing: 2.0, moisture: 0.8, no_refrigerant_fault: -1.0 },
   },
   {
@@ -775,7 +770,7 @@ export const LIKELIHOOD_TABLE: readonly LikelihoodRow[] = [
   },
   {
     observation: "symptom:clutch_or_belt_slipping",
-    source: "Slipping clutch or belt: compressor not pumping (Apex Tech Nation; common practice)",
+    source: "Slipping clutch or belt: compressor not pumping (common practice)",
     weights: { weak_compressor: 1.5, oil_loss: 0.5 },
   },
   {
@@ -800,23 +795,22 @@ export const LIKELIHOOD_TABLE: readonly LikelihoodRow[] = [
   },
   {
     observation: "symptom:low_side_steady",
-    source:
-      "Moisture makes the low side swing; icing keeps it steadily low ('Frozen Expansion Valve'; Your A/C Authority)",
+    source: "Moisture makes the low side swing; icing keeps it steadily low (common practice)",
     weights: { moisture: -2.0, evaporator_icing: 0.5 },
   },
   {
     observation: "symptom:txv_bulb_test_responds",
-    source: "TXV bulb warm/chill test (mobile A/C training manual p. 915)",
+    source: "Expansion-valve bulb warm/chill test (common practice)",
     weights: { metering_stuck_open: -2.0, metering_restriction: -1.5 },
   },
   {
     observation: "symptom:txv_bulb_test_no_response",
-    source: "TXV bulb warm/chill test (mobile A/C training manual p. 915)",
+    source: "Expansion-valve bulb warm/chill test (common practice)",
     weights: { metering_stuck_open: 1.5, metering_restriction: 1.5 },
   },
   {
     observation: "symptom:liquid_line_temperature_drop",
-    source: "Sharp temperature drop at a high-side restriction (Apex Tech Nation T-22/8; common practice)",
+    source: "Sharp temperature drop at a high-side restriction (common practice)",
     weights: { high_side_restriction: 2.5, metering_restriction: -0.3, undercharge: -0.5 },
   },
   {
