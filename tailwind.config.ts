@@ -12,6 +12,7 @@ const config: Config = {
         glacier: {
           50: "#e6f4fb",
           100: "#c6e6f6",
+          300: "#6cc0ea",
           500: "#0a6fa6",
           600: "#075b89",
           700: "#05476b",

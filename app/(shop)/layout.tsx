@@ -22,8 +22,10 @@ export default async function ShopLayout({ children }: { children: React.ReactNo
       <header className="bg-glacier-900 text-white">
         <div className="mx-auto flex max-w-5xl flex-wrap items-center gap-x-4 gap-y-2 px-3 py-2">
           <Link href="/cases" className="flex min-h-touch items-center gap-2 font-bold">
-            <BrandMark className="h-8 w-8 text-glacier-500" />
-            <span className="text-lg">Chillwright</span>
+            <BrandMark className="h-8 w-8" tone="onDark" label="Chillwright" />
+            <span className="text-lg" aria-hidden="true">
+              Chillwright
+            </span>
           </Link>
           <span className="text-sm text-glacier-100">{shop.name}</span>
           <div className="ml-auto flex items-center gap-2">

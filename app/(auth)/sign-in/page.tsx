@@ -14,7 +14,7 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
   return (
     <main className="mx-auto flex min-h-dvh max-w-md flex-col justify-center p-4">
       <div className="mb-6 flex items-center gap-3 text-glacier-700">
-        <BrandMark className="h-12 w-12" />
+        <BrandMark className="h-12 w-12" tone="onLight" />
         <div>
           <p className="text-3xl font-bold tracking-tight">Chillwright</p>
           <p className="text-ink-soft">A/C diagnostic casebook</p>
