@@ -2,7 +2,8 @@ import { expect, test, type APIRequestContext } from "@playwright/test";
 import { apiClient, BASE_URL, signedInClient } from "./pages/api-client";
 import { DEMO_USERS, type DemoRole } from "./pages/sign-in-page";
 
-// The role × route table: for each API route, each role, no session and another shop's owner.
+// The role × route table: for each API route (and the public files Next.js serves from app/), each role,
+// no session and another shop's owner.
 type Who = DemoRole | "anonymous" | "otherShopOwner";
 const WHO: Who[] = ["anonymous", "owner", "senior", "technician", "apprentice", "otherShopOwner"];
 
@@ -42,6 +43,54 @@ const table: {
   call: (c: APIRequestContext) => Promise<{ status(): number }>;
   expect: Expectation;
 }[] = [
+  {
+    name: "GET /manifest.webmanifest (public, no redirect)",
+    call: (c) => c.get("/manifest.webmanifest", { maxRedirects: 0 }),
+    expect: {
+      anonymous: 200,
+      owner: 200,
+      senior: 200,
+      technician: 200,
+      apprentice: 200,
+      otherShopOwner: 200,
+    },
+  },
+  {
+    name: "GET /icon.svg (public, no redirect)",
+    call: (c) => c.get("/icon.svg", { maxRedirects: 0 }),
+    expect: {
+      anonymous: 200,
+      owner: 200,
+      senior: 200,
+      technician: 200,
+      apprentice: 200,
+      otherShopOwner: 200,
+    },
+  },
+  {
+    name: "GET /apple-icon.png (public, no redirect)",
+    call: (c) => c.get("/apple-icon.png", { maxRedirects: 0 }),
+    expect: {
+      anonymous: 200,
+      owner: 200,
+      senior: 200,
+      technician: 200,
+      apprentice: 200,
+      otherShopOwner: 200,
+    },
+  },
+  {
+    name: "GET /favicon.ico (public, no redirect)",
+    call: (c) => c.get("/favicon.ico", { maxRedirects: 0 }),
+    expect: {
+      anonymous: 200,
+      owner: 200,
+      senior: 200,
+      technician: 200,
+      apprentice: 200,
+      otherShopOwner: 200,
+    },
+  },
   {
     name: "GET /api/health",
     call: (c) => c.get("/api/health"),
