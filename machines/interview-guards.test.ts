@@ -55,7 +55,7 @@ describe("interview guards, each on both sides", () => {
     expect(pressureLeft(context(emptySystemAnswers))).toBe(false);
   });
 
-  it("refrigerantContaminated: purity below 98 % (SAE J2912) is; 99.6 % is not", () => {
+  it("refrigerantContaminated: purity below 98 % (SAE J2099) is; 99.6 % is not", () => {
     expect(refrigerantContaminated(context(contaminatedAnswers))).toBe(true);
     expect(refrigerantContaminated(context(exampleAnswers))).toBe(false);
   });

@@ -62,7 +62,7 @@ describe("interview paths", () => {
     ]);
   });
 
-  it("holds recovery when purity is below 98 % (SAE J2912) and warns to keep the charge out of the shop's machine", () => {
+  it("holds recovery when purity is below 98 % (SAE J2099) and warns to keep the charge out of the shop's machine", () => {
     const actor = startInterview();
     expect(walk(actor, contaminatedAnswers)).toEqual([
       "complaint",

@@ -33,7 +33,7 @@ export const VAPOUR_PRESSURE_EQUATIONS: readonly VapourPressureEquation[] = [
     t: [1, 1.5, 1.9, 4.25],
     equation: WAGNER,
     source:
-      "Vapour-pressure ancillary equation fitted to the reference equation of state of Tillner-Roth, R. & Baehr, H. D. (1994), J. Phys. Chem. Ref. Data 23, 657, as distributed with the NIST REFPROP fluid file (Lemmon, Huber & McLinden), with that file's critical point 374.21 K / 4.05928 MPa.",
+      "Vapour-pressure ancillary equation for the reference equation of state of Tillner-Roth, R. & Baehr, H. D. (1994), J. Phys. Chem. Ref. Data 23, 657, with the critical point 374.21 K / 4.05928 MPa. Coefficients from memory: believed to be those of the NIST REFPROP fluid file, not confirmed against it; checked against the equation of state as stated under deviation.",
     deviation:
       "Measured against saturation pressures solved from the Tillner-Roth & Baehr 1994 equation of state on a 10 K grid from -40 to 100 °C: largest deviation 0.0044 % (at 30 °C); within 0.005 % of that paper's Table 8.",
   },
@@ -47,7 +47,7 @@ export const VAPOUR_PRESSURE_EQUATIONS: readonly VapourPressureEquation[] = [
     t: [1, 1.5, 1.8, 3.8],
     equation: WAGNER,
     source:
-      "Vapour-pressure ancillary equation fitted to the reference equation of state of Richter, M., McLinden, M. O. & Lemmon, E. W. (2011), J. Chem. Eng. Data 56, 3254, as distributed with the NIST REFPROP fluid file, critical point 367.85 K / 3.3822 MPa.",
+      "Vapour-pressure ancillary equation for the reference equation of state of Richter, M., McLinden, M. O. & Lemmon, E. W. (2011), J. Chem. Eng. Data 56, 3254, critical point 367.85 K / 3.3822 MPa. Coefficients from memory: believed to be those of the NIST REFPROP fluid file, not confirmed against it; checked against the equation of state as stated under deviation.",
     deviation:
       "Measured against saturation pressures solved from the Richter, McLinden & Lemmon 2011 equation of state on a 10 K grid from -40 to 90 °C: largest deviation 0.0055 % (at 90 °C).",
   },
@@ -75,7 +75,7 @@ export const VAPOUR_PRESSURE_EQUATIONS: readonly VapourPressureEquation[] = [
     t: [1, 1.5, 1.67, 4.14, 10],
     equation: WAGNER,
     source:
-      "Vapour-pressure ancillary equation fitted to the reference equation of state of Marx, V., Pruß, A. & Wagner, W. (1992), VDI Fortschr.-Ber. 19/57, as distributed with the NIST REFPROP fluid file, critical point 385.12 K / 4.1361 MPa.",
+      "Vapour-pressure ancillary equation for the reference equation of state of Marx, V., Pruß, A. & Wagner, W. (1992), VDI Fortschr.-Ber. 19/57, critical point 385.12 K / 4.1361 MPa. Coefficients from memory: believed to be those of the NIST REFPROP fluid file, not confirmed against it; checked against the equation of state as stated under deviation.",
     deviation:
       "Measured against saturation pressures solved from the Marx, Pruß & Wagner 1992 equation of state on a 10 K grid from -40 to 100 °C: largest deviation 0.018 % (at 100 °C).",
   },

@@ -84,7 +84,7 @@ describe("pressureLeft", () => {
 });
 
 describe("purityFailed and refrigerantContaminated", () => {
-  it("fail below 98 % purity (SAE J2912 identifier threshold) and pass at 98 %", () => {
+  it("fail below 98 % purity (SAE J2099 identifier threshold) and pass at 98 %", () => {
     expect(PURITY_MIN_PCT).toBe(98);
     expect(purityFailed({ identification: { purityPct: 97.9 } })).toBe(true);
     expect(purityFailed({ identification: { purityPct: 98 } })).toBe(false);

@@ -13,8 +13,9 @@ export interface ShopSettings {
 export const EMPTY_STATIC_MAX_KPA_GAUGE = 7;
 
 /*
- * Identifiers built to SAE J2912 (and J2927) report refrigerant at 98 % or better as pure, and SAE J2099
- * recycling applies only to refrigerant identified at ≥ 98 %; the same line for R-134a and R-744 is common practice.
+ * Identifiers meeting the SAE specification report refrigerant at 98 % or better as pure, and recycling applies
+ * only to refrigerant identified at ≥ 98 % (SAE J2099, which covers R-134a and R-1234yf); the same line for
+ * R-744 and R-12 is common practice.
  */
 export const PURITY_MIN_PCT = 98;
 

@@ -67,7 +67,7 @@ describe("cautionsFor", () => {
     expect(ids(emptySystemAnswers, { step: "running" })).not.toContain("engine_running");
   });
 
-  it("keeps a charge under 98 % purity (SAE J2912) out of the shop's recovery machine", () => {
+  it("keeps a charge under 98 % purity (SAE J2099) out of the shop's recovery machine", () => {
     expect(ids(contaminatedAnswers)).toContain("contaminated_do_not_recover");
     expect(ids(exampleAnswers)).not.toContain("contaminated_do_not_recover");
   });

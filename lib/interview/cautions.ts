@@ -18,7 +18,7 @@ const first: Caution = {
   level: "warning",
   title: "Glasses and gloves on",
   text: "Liquid refrigerant freezes skin and eyes on contact. Wear safety glasses and gloves whenever you connect hoses or open a line, even when the gauges read empty.",
-  basis: "EPA Clean Air Act §609 technician training material; common practice",
+  basis: "US Army TM 5-2420-230-24-1 warnings; common practice",
 };
 
 const last: Caution = {
@@ -65,7 +65,8 @@ const byId = {
     level: "warning",
     title: "Non-conductive oil only",
     text: "Electric compressors need the maker's non-conductive (dielectric) oil. A small amount of ordinary PAG oil can break down the motor's insulation and make the case live. Use equipment that injects no oil, or flush it first.",
-    basis: "ABRN, 'Readying your shop for hybrid A/C service', 2014; the vehicle maker's oil specification",
+    basis:
+      "from memory (about 1 % PAG contamination can compromise the insulation); the vehicle maker's oil specification",
   },
   recoverSlowly: {
     id: "recover_slowly_accumulator",
@@ -115,7 +116,7 @@ const byId = {
     level: "warning",
     title: "Identify before recovering",
     text: "Run the refrigerant identifier before connecting any recovery machine, so a contaminated charge does not spoil the shop's refrigerant.",
-    basis: "SAE J2843 (identifier required); common practice",
+    basis: "common practice; SAE J2843 machines require an identifier (from memory)",
   },
   movingParts: {
     id: "engine_running",

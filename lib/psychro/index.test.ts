@@ -6,7 +6,7 @@ import { dewPointC, wetBulbC } from "./index";
 // Saturation vapour pressure of water, ASHRAE Handbook—Fundamentals 2017, ch. 1, table 3 (over ice below 0 °C).
 const WATER_SATURATION_PA = { "-5": 401.74, "5": 872.6, "25": 3169.7 } as const;
 
-describe("dew point (ASHRAE Handbook—Fundamentals 2017 ch. 1, through PsychroLib)", () => {
+describe("dew point (ASHRAE Handbook—Fundamentals 2017 ch. 1)", () => {
   it("25 °C air holding the vapour of 5 °C saturated air has a 5 °C dew point (table 3)", () => {
     const relativeHumidityPct = (100 * WATER_SATURATION_PA["5"]) / WATER_SATURATION_PA["25"];
     expect(Math.abs(dewPointC({ dryBulbC: 25, relativeHumidityPct }) - 5)).toBeLessThan(0.05);
@@ -29,7 +29,7 @@ describe("dew point (ASHRAE Handbook—Fundamentals 2017 ch. 1, through PsychroL
   });
 });
 
-describe("wet bulb (ASHRAE Handbook—Fundamentals 2017 ch. 1, through PsychroLib)", () => {
+describe("wet bulb (ASHRAE Handbook—Fundamentals 2017 ch. 1)", () => {
   it("ASHRAE example 1: 40 °C dry bulb at 14 % relative humidity, 101.325 kPa, has a 20 °C wet bulb (ch. 1, example 1)", () => {
     expect(Math.abs(wetBulbC({ dryBulbC: 40, relativeHumidityPct: 14 }) - 20)).toBeLessThan(0.5);
   });

@@ -22,13 +22,13 @@ function checked(a: AirState): { tempC: number; relHum: number; pressurePa: numb
   return { tempC: a.dryBulbC, relHum: a.relativeHumidityPct / 100, pressurePa: pressureKpa * 1000 };
 }
 
-/** Dew point, °C (ASHRAE Handbook—Fundamentals ch. 1, via PsychroLib). Air at the vents below it sheds water; fins below 0 °C ice. */
+/** Dew point, °C (ASHRAE Handbook—Fundamentals 2017 ch. 1). Air at the vents below it sheds water; fins below 0 °C ice. */
 export function dewPointC(a: AirState): number {
   const { tempC, relHum } = checked(a);
   return outsideEquations(() => psychrolibSi().GetTDewPointFromRelHum(tempC, relHum));
 }
 
-/** Thermodynamic wet-bulb temperature, °C (ASHRAE Handbook—Fundamentals ch. 1, via PsychroLib). */
+/** Thermodynamic wet-bulb temperature, °C (ASHRAE Handbook—Fundamentals 2017 ch. 1). */
 export function wetBulbC(a: AirState): number {
   const { tempC, relHum, pressurePa } = checked(a);
   return outsideEquations(() => psychrolibSi().GetTWetBulbFromRelHum(tempC, relHum, pressurePa));

@@ -8,7 +8,7 @@ const EQUATION_FIDELITY = 0.0002;
 
 // Saturation pressures, kPa absolute, evaluated with each refrigerant's reference Helmholtz equation of
 // state (phase equilibrium solved with the published coefficients; NIST REFPROP and the ASHRAE tables
-// use the same equations).
+// use the same equations, from memory).
 const REFERENCE_EOS: Record<
   "R-134a" | "R-1234yf" | "R-744" | "R-12",
   { source: string; points: [number, number][] }

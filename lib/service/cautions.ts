@@ -26,15 +26,15 @@ export const SERVICE_CAUTIONS: readonly ServiceCaution[] = [
     steps: [],
     severity: "danger",
     text: "Wear safety glasses and gloves whenever a line or port is opened, even when the gauges read empty: liquid refrigerant freezes skin and eyes on contact. If it touches you, flush with lukewarm water for 15 minutes and get medical help.",
-    source:
-      "EPA Section 609 technician training material; US Army TM 5-2420-230-24-1 warnings; 15-minute flush from memory",
+    source: "US Army TM 5-2420-230-24-1 warnings; 15-minute flush common practice",
   },
   {
     id: "identify-before-connecting",
     steps: ["identify", "recovery"],
     severity: "warning",
     text: "Identify the refrigerant before connecting a recovery machine. Below 98 % purity it must not go into the shop's machine: use dedicated equipment or a separate, labelled cylinder.",
-    source: "SAE J2099 and SAE J2912 (98 % purity threshold); SAE J2843 requires identification",
+    source:
+      "SAE J2099 (98 % purity threshold); SAE J2912 identifiers; SAE J2843 requires identification (from memory)",
   },
   {
     id: "recover-slowly-accumulator",
@@ -74,7 +74,8 @@ export const SERVICE_CAUTIONS: readonly ServiceCaution[] = [
     steps: ["recovery", "evacuation", "recharge"],
     severity: "danger",
     text: "R-1234yf is mildly flammable (A2L). Use only equipment certified for R-1234yf, keep flames and sparks away, ventilate the work area, and never put R-1234yf and R-134a through the same hoses unless the machine is certified for both.",
-    source: "SAE J2843 and SAE J3030 (required by US EPA rule of January 2021); ASHRAE 34 class A2L",
+    source:
+      "SAE J2843 and SAE J3030 (required by a US EPA rule of January 2021, from memory); ASHRAE 34 class A2L",
     appliesTo: { refrigerants: ["R-1234yf"] },
   },
   {
@@ -82,7 +83,7 @@ export const SERVICE_CAUTIONS: readonly ServiceCaution[] = [
     steps: [],
     severity: "danger",
     text: "Electric compressor: orange cables carry high voltage. Make the high-voltage system safe by the maker's procedure before any work, and only if you are trained and equipped to do so.",
-    source: "ABRN 2014 'Readying your shop for hybrid A/C service'; vehicle maker's high-voltage procedure",
+    source: "common practice; vehicle maker's high-voltage procedure",
     appliesTo: { electricCompressor: true },
   },
   {
@@ -90,7 +91,7 @@ export const SERVICE_CAUTIONS: readonly ServiceCaution[] = [
     steps: ["recovery", "oil", "recharge"],
     severity: "danger",
     text: "Electric compressor: use only the dielectric oil the maker specifies, through equipment that does not inject oil. A little PAG oil can break down the insulation and leave the compressor case live.",
-    source: "SAE J2788H; ABRN 2014 (about 1 % PAG contamination compromises insulation)",
+    source: "SAE J2788H (from memory); about 1 % PAG contamination compromises insulation (from memory)",
     appliesTo: { electricCompressor: true },
   },
   {
@@ -98,7 +99,7 @@ export const SERVICE_CAUTIONS: readonly ServiceCaution[] = [
     steps: ["recovery"],
     severity: "warning",
     text: "Fill a recovery cylinder to no more than 80 % of its capacity: liquid expands as it warms and an overfilled cylinder can burst.",
-    source: "common practice; EPA Section 608 technician training",
+    source: "common practice",
   },
   {
     id: "no-air-pressure-test",

@@ -7,7 +7,7 @@ export type ChargeVerdict = "over" | "under" | "within";
 export interface ChargeTolerance {
   toleranceG: number;
   source: string;
-  /** true when the figure rests on a standard's text as reported, false when recalled or borrowed */
+  /** true when the figure was checked against the standard's text, false when recalled or borrowed */
   checked: boolean;
 }
 
@@ -15,7 +15,7 @@ export interface ChargeTolerance {
 export function chargeTolerance(refrigerant: RefrigerantId): ChargeTolerance {
   switch (refrigerant) {
     case "R-1234yf":
-      return { toleranceG: 15, source: SERVICE_SOURCES.j2843ChargeAccuracy, checked: true };
+      return { toleranceG: 15, source: SERVICE_SOURCES.j2843ChargeAccuracy, checked: false };
     case "R-134a":
       return { toleranceG: 15, source: SERVICE_SOURCES.j2788ChargeAccuracy, checked: false };
     default:
@@ -23,7 +23,7 @@ export function chargeTolerance(refrigerant: RefrigerantId): ChargeTolerance {
   }
 }
 
-/** Recovery machines leave some refrigerant behind: SAE J2788/J2843 only require 95 % out. */
+/** Recovery machines leave some refrigerant behind: SAE J2788 (and J2843, from memory) only require 95 % out. */
 export const DEFAULT_RECOVERY_SHORTFALL_PCT = 5;
 
 export interface RecoveredAgainstLabel {

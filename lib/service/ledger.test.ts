@@ -61,7 +61,7 @@ describe("applyMovements", () => {
     expect(s.problems.join(" ")).toContain("less than nothing");
   });
 
-  it("flags a recovery cylinder filled past 80 % (common practice; EPA Section 608 training)", () => {
+  it("flags a recovery cylinder filled past 80 % (common practice)", () => {
     expect(applyMovements(tank, [mv({ type: "recovered_into", massG: 14_500 })]).fill.verdict).toBe("ok"); // exactly 16,000 g = 80 %
     const over = applyMovements(tank, [mv({ type: "recovered_into", massG: 14_501 })]);
     expect(over.fill.verdict).toBe("over_limit");

@@ -16,7 +16,7 @@ describe("oilFamily", () => {
 });
 
 describe("oilSuitsCompressor", () => {
-  it("flags PAG in an electric compressor as a danger (SAE J2788H; ABRN 2014: ~1 % PAG compromises insulation)", () => {
+  it("flags PAG in an electric compressor as a danger (SAE J2788H; ~1 % PAG compromises insulation — both from memory)", () => {
     const r = oilSuitsCompressor({ compressorDrive: "electric", oilAdded: "PAG 46" });
     expect(r.suits).toBe(false);
     expect(r.warnings[0]?.id).toBe("pag_in_electric");

@@ -5,7 +5,7 @@ import { summariseServiceRecord } from "./record-summary";
 const KPA_PER_INHG = 3.386389;
 
 describe("summariseServiceRecord", () => {
-  it("reports a recovered mass a quarter over the label as an overcharge of that size (SAE J2788/J2843 95 % recovery; ±15 g accuracy)", () => {
+  it("reports a recovered mass a quarter over the label as an overcharge of that size (SAE J2788 95 % recovery; ±15 g accuracy, from memory)", () => {
     const s = summariseServiceRecord({ refrigerant: "R-134a", labelChargeG: 800, recoveredG: 1000 });
     expect(s.recovered?.verdict).toBe("over");
     expect(s.recovered?.deltaG).toBe(1000 - 800);
@@ -46,7 +46,7 @@ describe("summariseServiceRecord", () => {
     ).toBeNull();
   });
 
-  it("flags a charge 20 g off target as outside and 10 g off as inside the ½ oz SAE J2843 accuracy", () => {
+  it("flags a charge 20 g off target as outside and 10 g off as inside the ½ oz SAE J2843 accuracy (from memory)", () => {
     const off20 = summariseServiceRecord({ refrigerant: "R-1234yf", targetG: 650, chargedG: 670 });
     const off10 = summariseServiceRecord({ refrigerant: "R-1234yf", targetG: 650, chargedG: 640 });
     expect(off20.charge?.within).toBe(false);

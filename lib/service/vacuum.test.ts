@@ -56,7 +56,7 @@ describe("waterSaturationKpaAbs", () => {
     expect(Math.abs(waterSaturationKpaAbs(tempC) / kpa - 1)).toBeLessThan(0.001);
   });
 
-  it("agrees with PsychroLib's GetSatVapPres over 1–99 °C (ASHRAE Fundamentals 2017 ch. 1 eq. 6)", () => {
+  it("agrees with the psychrolib package's GetSatVapPres over 1–99 °C (both ASHRAE Handbook—Fundamentals 2017 ch. 1 eq. 6)", () => {
     psychrolib.SetUnitSystem(psychrolib.SI);
     for (let tempC = 1; tempC < 100; tempC += 7) {
       expect(

@@ -29,8 +29,8 @@ export interface EvacuationTarget {
 
 /**
  * The sea-level target is an absolute pressure in disguise: 28 inHg below 29.92 inHg.
- * Keeping that absolute pressure at altitude reproduces the manual's "about 1 inHg less
- * per 1000 ft" from the standard atmosphere instead of a fixed rule.
+ * Keeping that absolute pressure at altitude reproduces the manual's allowance of roughly one
+ * inch of mercury for every 1000 ft of altitude from the standard atmosphere, not a fixed rule.
  */
 export function evacuationTarget(at: Altitude = {}): EvacuationTarget {
   const localKpa = barometricKpa(at);

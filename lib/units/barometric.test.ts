@@ -9,7 +9,7 @@ import {
   vacuumInHgToKpaAbs,
 } from "./index";
 
-describe("standard atmosphere (ASHRAE Handbook—Fundamentals 2017, ch. 1, table 1, via PsychroLib)", () => {
+describe("standard atmosphere (US Standard Atmosphere 1976; ASHRAE Handbook—Fundamentals 2017, ch. 1, table 1)", () => {
   it.each([
     [-500, 107.478],
     [0, 101.325],

@@ -10,7 +10,7 @@ export interface BarometricSource {
 // The standard-atmosphere formula is meant for the troposphere; shops sit well inside these bounds.
 const ALTITUDE_RANGE_M = { min: -500, max: 9000 } as const;
 
-/** Standard-atmosphere barometric pressure, kPa (ASHRAE Handbook—Fundamentals ch. 1 eq. 3, via PsychroLib). */
+/** Standard-atmosphere barometric pressure, kPa (US Standard Atmosphere 1976; ASHRAE Handbook—Fundamentals 2017 ch. 1 eq. 3). */
 export function standardBarometricKpa(altitudeM: number): number {
   if (!(altitudeM >= ALTITUDE_RANGE_M.min && altitudeM <= ALTITUDE_RANGE_M.max)) {
     throw new RangeError(`Altitude must be between ${ALTITUDE_RANGE_M.min} and ${ALTITUDE_RANGE_M.max} m.`);

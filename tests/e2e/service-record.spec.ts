@@ -57,7 +57,7 @@ test("a technician completes a service record on the phone and the ledger shows 
   await record.fill({ "Oil added": "10 mL" });
   await record.saveAndExpect("oil");
 
-  // 5. Recharge: 20 g over the 480 g target is outside ±15 g (SAE J2843), 6 g is inside.
+  // 5. Recharge: 20 g over the 480 g target is outside ±15 g (SAE J2843 ½ oz, from memory), 6 g is inside.
   await record.fill({ "Charged mass (machine display)": "500 g" });
   await expect(record.result("charge-check")).toContainText("outside");
   await record.fill({ "Charged mass (machine display)": "486 g" });
