@@ -2,7 +2,7 @@ import { NextResponse, type NextRequest } from "next/server";
 
 // Cheap checks only: the real session check happens in every page, handler and action.
 const SESSION_COOKIE = "cw_session";
-const PUBLIC_PAGES = ["/sign-in", "/s/"];
+const PUBLIC_PAGES = ["/sign-in", "/s/", "/credits"];
 
 export function proxy(req: NextRequest) {
   const { pathname } = req.nextUrl;

@@ -40,6 +40,11 @@ export default async function ShopLayout({ children }: { children: React.ReactNo
       <main id="main" className="mx-auto max-w-5xl px-3 py-4">
         {children}
       </main>
+      <footer className="mx-auto max-w-5xl px-3 pb-6 text-sm">
+        <Link href="/credits" className="inline-flex min-h-touch items-center text-ink-soft underline">
+          Credits and licences
+        </Link>
+      </footer>
     </div>
   );
 }

@@ -104,6 +104,19 @@ const table: {
     },
   },
   {
+    // A page, not an API route: public, so no role is sent to the sign-in page.
+    name: "GET /credits (page)",
+    call: (c) => c.get("/credits", { maxRedirects: 0 }),
+    expect: {
+      anonymous: 200,
+      owner: 200,
+      senior: 200,
+      technician: 200,
+      apprentice: 200,
+      otherShopOwner: 200,
+    },
+  },
+  {
     name: "GET /api/me",
     call: (c) => c.get("/api/me"),
     expect: {

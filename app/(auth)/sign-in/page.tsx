@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import Link from "next/link";
 import { redirect } from "next/navigation";
 import { validateRequest } from "@/lib/auth/session";
 import { SignInForm } from "@/components/auth/sign-in-form";
@@ -30,6 +31,12 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
         Refrigerant work is done by certified technicians, following the vehicle manufacturer&apos;s procedure
         and local codes.
       </p>
+      <Link
+        href="/credits"
+        className="mt-2 inline-flex min-h-touch items-center text-sm text-ink-soft underline"
+      >
+        Credits and licences
+      </Link>
     </main>
   );
 }
