@@ -1,10 +1,13 @@
 "use client";
 
-import { useMemo, useState } from "react";
+import { useEffect, useMemo, useRef, useState } from "react";
+import Link from "next/link";
 import { useRouter } from "next/navigation";
+import { useMutation } from "@tanstack/react-query";
 import { CAUSE_IDS, CAUSE_LABELS, diagnose, type CauseId, type DiagnosisInput } from "@/lib/diagnosis";
 import type { Caution as InterviewCaution } from "@/lib/interview/cautions";
-import { apiFetch, ApiError } from "@/lib/queries/api-fetch";
+import { ApiError } from "@/lib/queries/api-fetch";
+import { submitCase, type CaseSubmitResult } from "@/lib/queries/case-submit";
 import { CautionsList, type CautionItem } from "./cautions-list";
 import { SuspectCard } from "./suspect-card";
 import type { SaveStatus } from "./use-autosave";
@@ -29,11 +32,33 @@ export function FindingsStep({
   onBack,
 }: Props) {
   const router = useRouter();
-  const findings = useMemo(() => (input ? diagnose(input) : null), [input]);
+  const onScreen = useMemo(() => (input ? diagnose(input) : null), [input]);
   const [cause, setCause] = useState<CauseId | "">("");
   const [notes, setNotes] = useState("");
   const [error, setError] = useState<string | null>(null);
-  const [pending, setPending] = useState(false);
+  // Set when the server's findings differ from these (the app was updated while the interview was open).
+  const [stored, setStored] = useState<Extract<CaseSubmitResult, { findingsChanged: true }> | null>(null);
+  const noteRef = useRef<HTMLDivElement>(null);
+  useEffect(() => {
+    if (stored) noteRef.current?.focus();
+  }, [stored]);
+  const mutation = useMutation({
+    mutationFn: (body: Parameters<typeof submitCase>[1]) => submitCase(caseId, body),
+    onSuccess: (result, sent) => {
+      // Pin the conclusion that was sent: the default follows the leader, which the new findings may move.
+      setCause(sent.conclusionCause);
+      if (result.findingsChanged) return setStored(result);
+      router.push(`/cases/${caseId}`);
+      router.refresh();
+    },
+    onError: (e) =>
+      setError(
+        e instanceof ApiError
+          ? (Object.values(e.fieldErrors ?? {})[0]?.[0] ?? e.message)
+          : "No answer from the server; nothing is lost. Try again.",
+      ),
+  });
+  const findings = stored?.findings ?? onScreen;
 
   if (!findings) {
     return (
@@ -54,37 +79,43 @@ export function FindingsStep({
   for (const c of findings.cautions)
     if (!cautions.some((x) => x.id === c.id)) cautions.push({ id: c.id, text: c.text, level: "notice" });
 
-  async function submit(event: React.FormEvent) {
+  function submit(event: React.FormEvent) {
     event.preventDefault();
     setError(null);
     if (saveStatus.kind !== "saved")
       return setError("Some answers are still waiting to be saved. Submit once they are.");
-    if (!findings) return;
-    setPending(true);
-    try {
-      await apiFetch(`/api/cases/${caseId}/submit`, {
-        method: "POST",
-        body: {
-          baseVersion: currentVersion(),
-          engineVersion: findings.engineVersion,
-          conclusionCause: chosen,
-          conclusionNotes: notes,
-        },
-      });
-      router.push(`/cases/${caseId}`);
-      router.refresh();
-    } catch (e) {
-      setError(
-        e instanceof ApiError
-          ? (Object.values(e.fieldErrors ?? {})[0]?.[0] ?? e.message)
-          : "No answer from the server; nothing is lost. Try again.",
-      );
-      setPending(false);
-    }
+    if (!findings || !chosen) return;
+    mutation.mutate({
+      baseVersion: currentVersion(),
+      engineVersion: findings.engineVersion,
+      conclusionCause: chosen,
+      conclusionNotes: notes,
+    });
   }
 
   return (
     <div className="space-y-5">
+      {stored && (
+        <div
+          ref={noteRef}
+          tabIndex={-1}
+          role="status"
+          className="space-y-2 rounded-card border-2 border-glacier-600 bg-glacier-50 p-4"
+          data-testid="findings-updated"
+        >
+          <p className="font-bold">
+            {stored.status === "awaiting_signoff" ? "Sent to a senior for sign-off." : "Diagnosis submitted."}
+          </p>
+          <p>
+            Chillwright was updated while this interview was open, so the findings were worked out again with
+            the current version. The findings below are the ones stored with the case. Your conclusion is kept
+            as you chose it.
+          </p>
+          <Link href={`/cases/${caseId}`} className="btn-primary">
+            Open the case
+          </Link>
+        </div>
+      )}
       <section aria-labelledby="suspects-heading">
         <h2 id="suspects-heading" className="text-xl font-bold">
           Likely causes
@@ -135,52 +166,68 @@ export function FindingsStep({
 
       <CautionsList cautions={cautions} />
 
-      <form onSubmit={submit} noValidate className="space-y-3 rounded-card border-2 border-ink-muted p-4">
-        <h2 className="text-xl font-bold">Your conclusion</h2>
-        <div>
-          <label htmlFor="conclusion-cause" className="field-label">
-            The cause you conclude
-          </label>
-          <select
-            id="conclusion-cause"
-            className="field-input"
-            value={chosen}
-            onChange={(e) => setCause(e.target.value as CauseId)}
-          >
-            {CAUSE_IDS.map((id) => (
-              <option key={id} value={id}>
-                {CAUSE_LABELS[id]}
-              </option>
-            ))}
-          </select>
-        </div>
-        <div>
-          <label htmlFor="conclusion-notes" className="field-label">
-            Why, in a sentence or two
-          </label>
-          <textarea
-            id="conclusion-notes"
-            rows={3}
-            className="field-input py-2"
-            value={notes}
-            onChange={(e) => setNotes(e.target.value)}
-          />
-        </div>
-        {error && (
-          <p role="alert" className="field-error">
-            {error}
+      {stored ? (
+        <section
+          aria-labelledby="conclusion-heading"
+          className="space-y-2 rounded-card border-2 border-ink-muted p-4"
+        >
+          <h2 id="conclusion-heading" className="text-xl font-bold">
+            Your conclusion
+          </h2>
+          <p className="font-bold" data-testid="kept-conclusion">
+            {CAUSE_LABELS[chosen as CauseId]}
           </p>
-        )}
-        <div className="flex gap-2">
-          <button type="button" className="btn-quiet" onClick={onBack}>
-            Back
-          </button>
-          <button type="submit" className="btn-primary ml-auto flex-1" disabled={pending}>
-            {isApprentice ? "Send to a senior for sign-off" : "Submit the diagnosis"}
-          </button>
-        </div>
-        <p className="text-sm text-ink-soft">Findings engine {findings.engineVersion}</p>
-      </form>
+          <p className="whitespace-pre-line">{notes}</p>
+          <p className="text-sm text-ink-soft">Findings engine {findings.engineVersion}</p>
+        </section>
+      ) : (
+        <form onSubmit={submit} noValidate className="space-y-3 rounded-card border-2 border-ink-muted p-4">
+          <h2 className="text-xl font-bold">Your conclusion</h2>
+          <div>
+            <label htmlFor="conclusion-cause" className="field-label">
+              The cause you conclude
+            </label>
+            <select
+              id="conclusion-cause"
+              className="field-input"
+              value={chosen}
+              onChange={(e) => setCause(e.target.value as CauseId)}
+            >
+              {CAUSE_IDS.map((id) => (
+                <option key={id} value={id}>
+                  {CAUSE_LABELS[id]}
+                </option>
+              ))}
+            </select>
+          </div>
+          <div>
+            <label htmlFor="conclusion-notes" className="field-label">
+              Why, in a sentence or two
+            </label>
+            <textarea
+              id="conclusion-notes"
+              rows={3}
+              className="field-input py-2"
+              value={notes}
+              onChange={(e) => setNotes(e.target.value)}
+            />
+          </div>
+          {error && (
+            <p role="alert" className="field-error">
+              {error}
+            </p>
+          )}
+          <div className="flex gap-2">
+            <button type="button" className="btn-quiet" onClick={onBack}>
+              Back
+            </button>
+            <button type="submit" className="btn-primary ml-auto flex-1" disabled={mutation.isPending}>
+              {isApprentice ? "Send to a senior for sign-off" : "Submit the diagnosis"}
+            </button>
+          </div>
+          <p className="text-sm text-ink-soft">Findings engine {findings.engineVersion}</p>
+        </form>
+      )}
     </div>
   );
 }

@@ -4,7 +4,8 @@ import { getModels, type JsonObject, type JsonValue } from "@/models";
 import { AppError } from "@/lib/errors";
 import { sortSavedAnswers } from "@/lib/interview/validate";
 import { diagnosisInputFor } from "@/lib/interview/to-diagnosis-input";
-import { diagnose, ENGINE_VERSION } from "@/lib/diagnosis";
+import { diagnose } from "@/lib/diagnosis";
+import type { CaseSubmitResult } from "@/lib/contracts/case-submit";
 import type { CaseSubmitInput, InterviewSaveInput } from "@/app/api/cases/interview-schema";
 import { recordAudit } from "./audit";
 import { caseIsEditable, mayChangeCase } from "@/lib/auth/case-access";
@@ -104,22 +105,20 @@ export async function submitCase({
   caseId: number;
   input: CaseSubmitInput;
   shopAltitudeM: number;
-}) {
+}): Promise<CaseSubmitResult> {
   const row = await editableCase({ user, caseId });
-  if (input.engineVersion !== ENGINE_VERSION) {
-    throw new AppError(
-      "conflict:engine",
-      "The findings were worked out by an older version of Chillwright. Reload the page and submit again.",
-    );
-  }
   const record = row.answers as { answers?: unknown };
   const shop = { altitudeM: shopAltitudeM };
   const { answers } = sortSavedAnswers(record.answers, shop);
-  // The same route-filtered input the findings screen used, so the stored snapshot is what was shown.
+  // The same route-filtered input the findings screen used, so the stored snapshot matches what was shown
+  // whenever both ran the same engine.
   const diagnosisInput = diagnosisInputFor(answers, shop);
   if (!diagnosisInput)
     throw new AppError("bad_request:case", "Answer the system and conditions steps before submitting.");
+  // Always the server's engine: a screen left open across an update may hold findings from an older one.
+  // The technician's conclusion stands either way; the response says when the findings differ.
   const findings = diagnose(diagnosisInput);
+  const findingsChanged = input.engineVersion !== findings.engineVersion;
   const technician = await getModels().User.findOne({
     where: { id: row.technicianId, shopId: user.shopId },
     attributes: ["role"],
@@ -146,7 +145,14 @@ export async function submitCase({
     entity: "case",
     entityId: caseId,
     action: "submit",
-    detail: { status, conclusionCause: input.conclusionCause, engineVersion: findings.engineVersion },
+    detail: {
+      status,
+      conclusionCause: input.conclusionCause,
+      engineVersion: findings.engineVersion,
+      ...(findingsChanged ? { screenEngineVersion: input.engineVersion } : {}),
+    },
   });
-  return { version, status };
+  return findingsChanged
+    ? { version, status, findingsChanged: true, findings }
+    : { version, status, findingsChanged: false };
 }

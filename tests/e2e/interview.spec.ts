@@ -369,3 +369,57 @@ test("the system step offers the spec-table rows for the vehicle and the technic
     oilType: "pag",
   });
 });
+
+test("an interview left open across an update still submits: the server's findings and a plain note, the chosen conclusion kept", async ({
+  page,
+}) => {
+  const interview = new InterviewPage(page);
+  await openCase(
+    interview,
+    /Silverado/,
+    "Blows warm since the weekend; a hiss from under the hood on Friday.",
+  );
+  await interview.next();
+  await interview.expectStep("Conditions");
+  await interview.digits("24");
+  await interview.press("Enter");
+  await interview.expectStep("Engine-off pressure");
+  await interview.digits("0");
+  await interview.press("Enter");
+  await interview.expectStep("Leak search");
+  await interview.choose("Electronic detector");
+  await interview.choose("Condenser");
+  await interview.next();
+  await interview.expectStep("Findings");
+  await interview.waitUntilSaved();
+  const caseId = interview.caseIdFromUrl();
+
+  // This screen's findings engine is made to look older than the server's, as after a deploy.
+  await page.route(`**/api/cases/${caseId}/submit`, async (route) => {
+    const body = JSON.parse(route.request().postData() ?? "{}");
+    await route.continue({ postData: JSON.stringify({ ...body, engineVersion: "0.9.0+00000000" }) });
+  });
+  await page.getByLabel("The cause you conclude").selectOption("oil_loss");
+  await page
+    .getByLabel("Why, in a sentence or two")
+    .fill("Hose split at the crimp; oil sprayed over the condenser.");
+  await page.getByRole("button", { name: "Submit the diagnosis" }).click();
+
+  const note = page.getByTestId("findings-updated");
+  await expect(note).toContainText("updated while this interview was open");
+  await expect(note).toContainText("Your conclusion is kept as you chose it");
+  await expect(page.getByRole("alert").filter({ hasText: /version|Reload|submit again/ })).toHaveCount(0);
+  await expect(page.getByTestId("kept-conclusion")).toHaveText("Low or wrong compressor oil");
+  await expect(interview.suspects().first()).toContainText("Not enough refrigerant");
+  await expectNoSeriousA11yIssues(page, "findings after an update");
+  await page.screenshot({ path: test.info().outputPath("findings-updated-phone.png") });
+
+  const saved = await readCase(caseId);
+  expect(saved.status).toBe("signed_off");
+  expect(saved.conclusion_cause).toBe("oil_loss");
+  expect(saved.engine_version).toBe(saved.findings?.engineVersion);
+  expect(saved.engine_version).not.toBe("0.9.0+00000000");
+
+  await page.getByRole("link", { name: "Open the case" }).click();
+  await expect(page).toHaveURL(new RegExp(`/cases/${caseId}$`));
+});
