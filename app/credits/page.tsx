@@ -17,7 +17,7 @@ export default function CreditsPage() {
     <div className="min-h-dvh">
       <header className="bg-glacier-900 text-white">
         <div className="mx-auto flex max-w-3xl items-center gap-3 px-3 py-2">
-          <BrandMark className="h-8 w-8 text-glacier-500" />
+          <BrandMark className="h-8 w-8" tone="onDark" />
           <span className="text-lg font-bold">Chillwright</span>
           <Link
             href="/"
