@@ -60,7 +60,9 @@ initialise_data_dir() {
   chmod 700 "$DB_DIR"
   [[ -d "$DB_DIR/data/mysql" ]] && return 0
   say "initialising $DB_DIR/data"
-  mariadb-install-db --no-defaults --datadir="$DB_DIR/data" --auth-root-authentication-method=normal \
+  # Its own tmpdir: several private servers on one machine must not share temporary files in /tmp.
+  mkdir -p "$DB_DIR/tmp"
+  mariadb-install-db --no-defaults --datadir="$DB_DIR/data" --tmpdir="$DB_DIR/tmp" --auth-root-authentication-method=normal \
     --skip-test-db >"$DB_DIR/install.log" 2>&1 || { tail -n 30 "$DB_DIR/install.log" >&2; die "mariadb-install-db failed"; }
 }
 
@@ -68,7 +70,8 @@ start_server() {
   rm -f "$PID_FILE" "$SOCK"
   # setsid + nohup: the server outlives this script and holds none of the caller's pipes.
   # skip-name-resolve: root@localhost then matches only the socket, never a TCP client.
-  setsid nohup mariadbd --no-defaults --datadir="$DB_DIR/data" --socket="$SOCK" --port="$DB_PORT" \
+  mkdir -p "$DB_DIR/tmp"
+  setsid nohup mariadbd --no-defaults --datadir="$DB_DIR/data" --tmpdir="$DB_DIR/tmp" --socket="$SOCK" --port="$DB_PORT" \
     --bind-address=127.0.0.1 --user=root --pid-file="$PID_FILE" --skip-name-resolve \
     --character-set-server=utf8mb4 --collation-server=utf8mb4_unicode_ci \
     >>"$LOG" 2>&1 </dev/null &
