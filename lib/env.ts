@@ -12,6 +12,20 @@ const envSchema = z.object({
   SIGN_IN_WINDOW_MINUTES: z.coerce.number().int().positive().default(15),
   // Only behind a reverse proxy that sets X-Forwarded-For may the client address be trusted.
   TRUST_PROXY: z.enum(["0", "1"]).default("0"),
+  // Outgoing mail: a local SMTP catcher in development and tests, a real provider only through .env.
+  SMTP_URL: z
+    .string()
+    .regex(/^smtps?:\/\//, "SMTP_URL must start with smtp:// or smtps://")
+    .default("smtp://127.0.0.1:2525"),
+  MAIL_FROM: z.string().min(3).default("Chillwright <no-reply@chillwright.test>"),
+  // Photos: any S3-compatible store; the scripts start a local fake on loopback.
+  // Empty means the provider's own endpoint (AWS); the default is the local fake.
+  S3_ENDPOINT: z.union([z.string().url(), z.literal("")]).default("http://127.0.0.1:4569"),
+  S3_REGION: z.string().min(1).default("us-east-1"),
+  S3_BUCKET: z.string().min(3).default("chillwright-photos"),
+  S3_ACCESS_KEY_ID: z.string().min(1).default("S3RVER"),
+  S3_SECRET_ACCESS_KEY: z.string().min(1).default("S3RVER"),
+  S3_FORCE_PATH_STYLE: z.enum(["0", "1"]).default("1"),
 });
 
 export type Env = z.infer<typeof envSchema>;

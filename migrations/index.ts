@@ -5,6 +5,7 @@ import * as m0002 from "./20261202-0002-create-customers-and-vehicles";
 import * as m0003 from "./20261202-0003-create-cases-and-reading-sets";
 import * as m0004 from "./20261202-0004-create-sign-offs-and-audit-events";
 import * as m0005 from "./20261202-0005-create-spec-table-and-ledger";
+import * as m1001 from "./20261203-1001-create-owner-summary-tables";
 
 // Listed by hand, not globbed, so the same list works under tsx, vitest and a Next bundle.
 // A new migration file goes here too; an integration test fails when one is missing.
@@ -14,4 +15,5 @@ export const migrations: RunnableMigration<QueryInterface>[] = [
   { name: "20261202-0003-create-cases-and-reading-sets", ...m0003 },
   { name: "20261202-0004-create-sign-offs-and-audit-events", ...m0004 },
   { name: "20261202-0005-create-spec-table-and-ledger", ...m0005 },
+  { name: "20261203-1001-create-owner-summary-tables", ...m1001 },
 ];

@@ -15,9 +15,14 @@ import { PartOilAllowance } from "./part-oil-allowance";
 import { RefrigerantMovement } from "./refrigerant-movement";
 import { ServiceRecord } from "./service-record";
 import { SpecEntry } from "./spec-entry";
+import { Attachment } from "./attachment";
+import { OutboundEmail } from "./outbound-email";
+import { RepairProposal } from "./repair-proposal";
+import { ShareLink } from "./share-link";
 
 export { AuditEvent, Case, Customer, ReadingSet, Session, Shop, SignInAttempt, SignOff, User, Vehicle };
 export { Cylinder, PartOilAllowance, RefrigerantMovement, ServiceRecord, SpecEntry };
+export { Attachment, OutboundEmail, RepairProposal, ShareLink };
 export type { CylinderKind } from "./cylinder";
 export type { PartReplacedJson } from "./service-record";
 export type { CaseStatus, JsonObject, JsonValue } from "./case";
@@ -44,6 +49,10 @@ const MODELS = {
   Cylinder,
   ServiceRecord,
   RefrigerantMovement,
+  ShareLink,
+  RepairProposal,
+  Attachment,
+  OutboundEmail,
 };
 
 function initModels(sequelize: Sequelize) {
@@ -114,6 +123,29 @@ function initModels(sequelize: Sequelize) {
     foreignKey: { name: "technicianId", allowNull: false },
     as: "technician",
   });
+
+  // The owner summary: links, proposals, photos and the e-mail that carries them.
+  Shop.hasMany(ShareLink, shopScoped);
+  ShareLink.belongsTo(Shop, shopScoped);
+  Shop.hasMany(RepairProposal, shopScoped);
+  RepairProposal.belongsTo(Shop, shopScoped);
+  Shop.hasMany(Attachment, shopScoped);
+  Attachment.belongsTo(Shop, shopScoped);
+  Shop.hasMany(OutboundEmail, shopScoped);
+  OutboundEmail.belongsTo(Shop, shopScoped);
+  Case.hasMany(ShareLink, { foreignKey: { name: "caseId", allowNull: false }, as: "shareLinks" });
+  ShareLink.belongsTo(Case, { foreignKey: { name: "caseId", allowNull: false } });
+  ShareLink.belongsTo(User, { foreignKey: { name: "createdBy", allowNull: false }, as: "creator" });
+  Case.hasMany(RepairProposal, { foreignKey: { name: "caseId", allowNull: false }, as: "proposals" });
+  RepairProposal.belongsTo(Case, { foreignKey: { name: "caseId", allowNull: false } });
+  RepairProposal.belongsTo(User, { foreignKey: { name: "proposedBy", allowNull: false }, as: "proposer" });
+  RepairProposal.belongsTo(ShareLink, { foreignKey: "answeredViaLinkId", as: "answeredVia" });
+  Case.hasMany(Attachment, { foreignKey: { name: "caseId", allowNull: false }, as: "attachments" });
+  Attachment.belongsTo(Case, { foreignKey: { name: "caseId", allowNull: false } });
+  Attachment.belongsTo(User, { foreignKey: { name: "uploadedBy", allowNull: false }, as: "uploader" });
+  Case.hasMany(OutboundEmail, { foreignKey: "caseId", as: "emails" });
+  OutboundEmail.belongsTo(Case, { foreignKey: "caseId" });
+  OutboundEmail.belongsTo(ShareLink, { foreignKey: "shareLinkId" });
 
   return { sequelize, ...MODELS };
 }

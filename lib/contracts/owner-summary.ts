@@ -125,3 +125,19 @@ export interface ShopProposalView extends OwnerProposalView {
   proposedBy: string;
   answeredViaLinkId: number | null;
 }
+
+/** Public routes take any token string; the server answers "no longer valid" for one not shaped like ours. */
+export const rawTokenParamsSchema = z.object({ token: z.string() });
+export const rawTokenPhotoParamsSchema = z.object({
+  token: z.string(),
+  photoId: z.coerce.number({ message: "A photo id is a number." }).int().positive("A photo id is positive."),
+});
+
+/** A photo the owner page shows (marked shareable by the shop). */
+export interface SharedPhoto {
+  id: number;
+  caption: string;
+  kind: string;
+  widthPx: number;
+  heightPx: number;
+}

@@ -10,6 +10,10 @@ import { StatusBadge } from "@/components/cases/status-badge";
 import { CaseReadings } from "@/components/cases/case-readings";
 import { FindingsSnapshot } from "@/components/cases/findings-snapshot";
 import { SignOffForm } from "@/components/cases/sign-off-form";
+import { ownerPanelData } from "@/lib/server/owner-panel";
+import { OwnerSummaryPanel } from "@/components/owner/owner-summary-panel";
+import { ProposalPanel } from "@/components/owner/proposal-panel";
+import { CasePhotos } from "@/components/photos/case-photos";
 
 export const metadata: Metadata = { title: "Case" };
 
@@ -28,6 +32,7 @@ export default async function CasePage({ params }: { params: Promise<{ id: strin
     detail.status === "awaiting_signoff" &&
     can(user.role, "signoff:review") &&
     detail.technicianId !== user.id;
+  const owner = await ownerPanelData({ user, caseId: detail.id });
   const findings = detail.findings as Parameters<typeof FindingsSnapshot>[0]["findings"] | null;
   return (
     <article className="space-y-4">
@@ -94,6 +99,14 @@ export default async function CasePage({ params }: { params: Promise<{ id: strin
           </section>
         )
       )}
+      <CasePhotos caseId={detail.id} mayAct={owner.mayAct} attachments={owner.attachments} />
+      <ProposalPanel
+        caseId={detail.id}
+        mayAct={owner.mayAct}
+        proposal={owner.proposal}
+        suggested={owner.suggestedRepairs}
+      />
+      <OwnerSummaryPanel {...owner} />
       <section className="card">
         <h2 className="text-lg font-bold">Service record</h2>
         <p className="mt-1">

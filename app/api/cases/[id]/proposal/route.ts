@@ -1,0 +1,17 @@
+import { caseIdParamsSchema, repairProposalSchema } from "@/lib/contracts/owner-summary";
+import { handler } from "@/lib/server/handler";
+import { loadCaseForOwner } from "@/lib/server/owner-case";
+import { currentProposalForShop, proposeRepair } from "@/lib/server/repair-proposals";
+
+export const GET = handler(
+  { permission: "cases:read", params: caseIdParamsSchema },
+  async ({ user, params }) => {
+    await loadCaseForOwner({ user, caseId: params.id });
+    return { proposal: await currentProposalForShop({ shopId: user.shopId, caseId: params.id }) };
+  },
+);
+
+export const POST = handler(
+  { permission: "cases:write", params: caseIdParamsSchema, body: repairProposalSchema },
+  async ({ user, params, body }) => proposeRepair({ user, caseId: params.id, input: body }),
+);
