@@ -4,6 +4,7 @@ import { createMigrator } from "@/lib/db/migrator";
 import { closeSequelize } from "@/lib/db/sequelize";
 import { demoPassword } from "@/lib/demo/people";
 import { seedAllDemo } from "@/lib/demo/seed-all";
+import { env } from "@/lib/env";
 import { getModels } from "@/models";
 
 async function main() {
@@ -14,7 +15,7 @@ async function main() {
   }
   // argon2 is slow on purpose: hash once and share it across the demo accounts.
   const passwordHash = await hashPassword(demoPassword);
-  for (const line of await seedAllDemo({ models, passwordHash })) console.log(line);
+  for (const line of await seedAllDemo({ models, passwordHash, origin: env().APP_ORIGIN })) console.log(line);
 }
 
 main()

@@ -78,4 +78,11 @@ export const demoCustomers: DemoCustomer[] = [
     phone: "+1 303 555 0127",
     email: "arne.b@example.test",
   },
+  {
+    key: "okafor",
+    shopKey: "harbourline",
+    name: "Adaeze Okafor-Lindgren",
+    phone: "+1 902 555 0191",
+    email: "adaeze.ol@example.test",
+  },
 ];

@@ -1,5 +1,6 @@
 import type { Models } from "@/models";
 import { seedDemo } from "./seed-demo";
+import { seedOwnerDemo } from "./owner-demo";
 import { seedServiceDemo } from "./service-demo";
 
 /**
@@ -10,14 +11,18 @@ import { seedServiceDemo } from "./service-demo";
 export async function seedAllDemo({
   models,
   passwordHash,
+  origin = "http://127.0.0.1:3000",
 }: {
   models: Models;
   passwordHash: string;
+  /** Where the app serves, for the demo owner-page link the seed prints. */
+  origin?: string;
 }): Promise<string[]> {
   const { created, skipped } = await seedDemo({ models, passwordHash });
   return [
     ...created.map((name) => `seeded   ${name}`),
     ...skipped.map((name) => `present  ${name} (left as it is)`),
     ...(await seedServiceDemo({ models })).map((name) => `seeded   ${name}`),
+    ...(await seedOwnerDemo({ models, origin })).map((name) => `seeded   ${name}`),
   ];
 }

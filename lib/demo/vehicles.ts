@@ -83,4 +83,17 @@ export const demoVehicles: DemoVehicle[] = [
     labelChargeG: 630,
     oilType: "PAG 46",
   },
+  {
+    key: "cx5",
+    customerKey: "okafor",
+    year: 2017,
+    make: "Mazda",
+    model: "CX-5",
+    engine: "2.5 L I4",
+    refrigerant: "R-134a",
+    expansionDevice: "txv",
+    electricCompressor: false,
+    labelChargeG: 450,
+    oilType: "PAG 46",
+  },
 ];

@@ -13,6 +13,9 @@ declare module "vitest" {
     schemaDatabaseUrl: string;
     dbDir: string;
     dbPort: number;
+    smtpUrl: string;
+    mailDir: string;
+    s3Endpoint: string;
   }
 }
 
@@ -42,13 +45,23 @@ function runDbScript(command: string, env: Record<string, string>): string {
 
 export default async function setup(project: TestProject) {
   const dbDir = mkdtempSync("/tmp/cw-itest-");
+  // The mail catcher and S3 fake of this run: free loopback ports, folders beside the database's.
+  const { startMailCatcher } = await import("../../scripts/fakes/mail-catcher");
+  const { startS3Fake } = await import("../../scripts/fakes/s3-fake");
+  const mail = await startMailCatcher({ dir: `${dbDir}-mail` });
+  const s3 = await startS3Fake({ dir: `${dbDir}-s3`, bucket: "chillwright-photos" });
+  process.env.SMTP_URL = `smtp://127.0.0.1:${mail.smtpPort}`;
+  process.env.S3_ENDPOINT = s3.endpoint;
   const dbPort = await freePort();
   const env = { DB_DIR: dbDir, DB_PORT: String(dbPort) };
-  const teardown = () => {
+  const teardown = async () => {
     try {
       runDbScript("down", env);
     } finally {
       rmSync(dbDir, { recursive: true, force: true });
+      await Promise.allSettled([mail.close(), s3.close()]);
+      rmSync(`${dbDir}-mail`, { recursive: true, force: true });
+      rmSync(`${dbDir}-s3`, { recursive: true, force: true });
     }
   };
 
@@ -74,8 +87,11 @@ export default async function setup(project: TestProject) {
     project.provide("schemaDatabaseUrl", schemaDatabaseUrl);
     project.provide("dbDir", dbDir);
     project.provide("dbPort", dbPort);
+    project.provide("smtpUrl", process.env.SMTP_URL);
+    project.provide("mailDir", mail.dir);
+    project.provide("s3Endpoint", s3.endpoint);
   } catch (error) {
-    teardown();
+    await teardown();
     throw error;
   }
   return teardown;

@@ -5,6 +5,8 @@ import { inject } from "vitest";
 
 // Point lib/env at the throwaway database before anything reads it (env() caches on first use).
 process.env.DATABASE_URL = inject("databaseUrl");
+process.env.SMTP_URL = inject("smtpUrl");
+process.env.S3_ENDPOINT = inject("s3Endpoint");
 
 const execFileAsync = promisify(execFile);
 export const repoRoot = path.resolve(__dirname, "../..");
