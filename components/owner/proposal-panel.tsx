@@ -85,7 +85,7 @@ export function ProposalPanel({
                   <label className="flex min-h-touch items-center gap-2">
                     <input
                       type="checkbox"
-                      className="h-6 w-6"
+                      className="h-6 w-6 shrink-0"
                       checked={chosen.has(r.id)}
                       onChange={(e) =>
                         setChosen((prev) => {

@@ -101,7 +101,7 @@ export function CasePhotos({
           <label className="flex min-h-touch items-center gap-2">
             <input
               type="checkbox"
-              className="h-6 w-6"
+              className="h-6 w-6 shrink-0"
               checked={shareable}
               onChange={(e) => setShareable(e.target.checked)}
             />
@@ -140,7 +140,7 @@ export function CasePhotos({
                   <label className="flex min-h-touch items-center gap-2 text-sm">
                     <input
                       type="checkbox"
-                      className="h-6 w-6"
+                      className="h-6 w-6 shrink-0"
                       checked={a.shareable}
                       disabled={share.isPending}
                       onChange={(e) => share.mutate({ id: a.id, shareable: e.target.checked })}

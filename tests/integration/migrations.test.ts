@@ -9,14 +9,18 @@ import { integrationDb, repoRoot, settingsFromUrl } from "./helpers";
 
 // Runs against its own database (chillwright_schema) so the seeded one stays intact.
 const appTables = [
+  "attachment",
   "audit_event",
   "customer",
   "cylinder",
+  "outbound_email",
   "part_oil_allowance",
   "reading_set",
   "refrigerant_movement",
+  "repair_proposal",
   "service_case",
   "service_record",
+  "share_link",
   "shop",
   "sign_in_attempt",
   "sign_off",
