@@ -1,6 +1,7 @@
 import { expect, test, type APIRequestContext } from "@playwright/test";
 import { apiClient, BASE_URL, signedInClient } from "./pages/api-client";
 import { DEMO_USERS, type DemoRole } from "./pages/sign-in-page";
+import { caseIdByVehicle, markSignedOff, phonePhoto, tokenOf } from "./pages/owner-fixtures";
 
 // The role × route table: for each API route (and the public files Next.js serves from app/), each role,
 // no session and another shop's owner.
@@ -13,6 +14,13 @@ let ridgebackUserId = "";
 let harbourlineTechId = "";
 let harbourlineVehicleId = 0;
 let harbourlineCylinderId = 0;
+// The owner summary: a live Harbourline link and photo, and a live link to a Ridgeback case.
+let sharedCaseId = 0;
+let harbourlineToken = "";
+let harbourlinePhotoId = 0;
+let harbourlineProposalId = 0;
+let ridgebackToken = "";
+const MALFORMED_TOKEN = "not-a-token";
 
 test.beforeAll(async () => {
   clients.set("anonymous", await apiClient());
@@ -31,6 +39,28 @@ test.beforeAll(async () => {
   harbourlineVehicleId = vehicles.vehicles[0].vehicleId;
   const cylinders = await (await clients.get("owner")!.get("/api/cylinders")).json();
   harbourlineCylinderId = cylinders.cylinders.find((c: { retired: boolean }) => !c.retired).id;
+
+  const tech = clients.get("technician")!;
+  sharedCaseId = await caseIdByVehicle(tech, "CX-5");
+  const made = await (await tech.post(`/api/cases/${sharedCaseId}/share-links`, { data: {} })).json();
+  harbourlineToken = tokenOf(made.link.url);
+  const upload = await tech.post(`/api/cases/${sharedCaseId}/attachments`, {
+    multipart: {
+      file: { name: "gauges.jpg", mimeType: "image/jpeg", buffer: await phonePhoto() },
+      shareable: "true",
+      caption: "Access-table photo",
+    },
+  });
+  harbourlinePhotoId = (await upload.json()).attachment.id;
+  const proposal = await (await tech.get(`/api/cases/${sharedCaseId}/proposal`)).json();
+  harbourlineProposalId = proposal.proposal.id;
+  const ridgeback = clients.get("otherShopOwner")!;
+  const ridgebackCaseId = (await (await ridgeback.get("/api/cases")).json()).cases[0].id;
+  await markSignedOff(ridgebackCaseId);
+  const ridgebackLink = await (
+    await ridgeback.post(`/api/cases/${ridgebackCaseId}/share-links`, { data: {} })
+  ).json();
+  ridgebackToken = tokenOf(ridgebackLink.link.url);
 });
 
 test.afterAll(async () => {
@@ -444,6 +474,150 @@ const table: {
     },
   },
 ];
+
+const everyone = (status: number): Expectation => ({
+  anonymous: status,
+  owner: status,
+  senior: status,
+  technician: status,
+  apprentice: status,
+  otherShopOwner: status,
+});
+// Shop routes on the demo CX-5 case (the technician's own): the apprentice may read but not change it.
+const onSharedCase = (harbourline: number, apprentice: number): Expectation => ({
+  anonymous: 401,
+  owner: harbourline,
+  senior: harbourline,
+  technician: harbourline,
+  apprentice,
+  otherShopOwner: 404,
+});
+const ownerRoutes: typeof table = [
+  {
+    name: "GET /api/cases/:id/share-links",
+    call: (c) => c.get(`/api/cases/${sharedCaseId}/share-links`),
+    expect: onSharedCase(200, 200),
+  },
+  {
+    name: "POST /api/cases/:id/share-links",
+    call: (c) => c.post(`/api/cases/${sharedCaseId}/share-links`, { data: { expiresInDays: 7 } }),
+    expect: onSharedCase(200, 403),
+  },
+  {
+    name: "POST /api/cases/:id/share-links (malformed)",
+    call: (c) => c.post(`/api/cases/${sharedCaseId}/share-links`, { data: { expiresInDays: 0 } }),
+    expect: { ...everyone(400), anonymous: 401 },
+  },
+  {
+    name: "DELETE /api/cases/:id/share-links/:linkId (no such link)",
+    call: (c) => c.delete(`/api/cases/${sharedCaseId}/share-links/999999999`),
+    expect: onSharedCase(404, 403),
+  },
+  {
+    name: "GET /api/cases/:id/proposal",
+    call: (c) => c.get(`/api/cases/${sharedCaseId}/proposal`),
+    expect: onSharedCase(200, 200),
+  },
+  {
+    name: "POST /api/cases/:id/proposal (malformed)",
+    call: (c) =>
+      c.post(`/api/cases/${sharedCaseId}/proposal`, { data: { repairIds: ["teleport"], priceMinor: -1 } }),
+    expect: { ...everyone(400), anonymous: 401 },
+  },
+  {
+    name: "GET /api/cases/:id/emails",
+    call: (c) => c.get(`/api/cases/${sharedCaseId}/emails`),
+    expect: onSharedCase(200, 200),
+  },
+  {
+    name: "POST /api/cases/:id/emails (malformed)",
+    call: (c) => c.post(`/api/cases/${sharedCaseId}/emails`, { data: { to: "nope" } }),
+    expect: { ...everyone(400), anonymous: 401 },
+  },
+  {
+    name: "POST /api/cases/:id/emails/:emailId/retry (no such e-mail)",
+    call: (c) => c.post(`/api/cases/${sharedCaseId}/emails/999999999/retry`),
+    expect: onSharedCase(404, 403),
+  },
+  {
+    name: "GET /api/cases/:id/attachments",
+    call: (c) => c.get(`/api/cases/${sharedCaseId}/attachments`),
+    expect: onSharedCase(200, 200),
+  },
+  {
+    name: "POST /api/cases/:id/attachments (JSON, not a photo)",
+    call: (c) => c.post(`/api/cases/${sharedCaseId}/attachments`, { data: { file: "x" } }),
+    expect: onSharedCase(415, 403),
+  },
+  {
+    name: "GET /api/cases/:id/attachments/:attachmentId (a Harbourline photo)",
+    call: (c) => c.get(`/api/cases/${sharedCaseId}/attachments/${harbourlinePhotoId}?size=thumb`),
+    expect: onSharedCase(200, 200),
+  },
+  {
+    name: "PATCH /api/cases/:id/attachments/:attachmentId (malformed)",
+    call: (c) => c.patch(`/api/cases/${sharedCaseId}/attachments/${harbourlinePhotoId}`, { data: {} }),
+    expect: { ...everyone(400), anonymous: 401 },
+  },
+  {
+    name: "DELETE /api/cases/:id/attachments/:attachmentId (no such photo)",
+    call: (c) => c.delete(`/api/cases/${sharedCaseId}/attachments/999999999`),
+    expect: onSharedCase(404, 403),
+  },
+  {
+    name: "GET /s/:token (public owner page, no session needed)",
+    call: (c) => c.get(`/s/${harbourlineToken}`),
+    expect: everyone(200),
+  },
+  {
+    name: "GET /s/:token (a token of another shop's case shows only that case)",
+    call: async (c) => {
+      const response = await c.get(`/s/${ridgebackToken}`);
+      expect(await response.text()).toContain("Ridgeback Cooling Works");
+      return response;
+    },
+    expect: everyone(200),
+  },
+  {
+    name: "GET /s/:token (malformed)",
+    call: (c) => c.get(`/s/${MALFORMED_TOKEN}`),
+    expect: everyone(404),
+  },
+  {
+    name: "GET /api/s/:token/photos/:photoId (a shared photo)",
+    call: (c) => c.get(`/api/s/${harbourlineToken}/photos/${harbourlinePhotoId}`),
+    expect: everyone(200),
+  },
+  {
+    name: "GET /api/s/:token/photos/:photoId (another shop's token)",
+    call: (c) => c.get(`/api/s/${ridgebackToken}/photos/${harbourlinePhotoId}`),
+    expect: everyone(404),
+  },
+  {
+    name: "GET /api/s/:token/pdf",
+    call: (c) => c.get(`/api/s/${harbourlineToken}/pdf`),
+    expect: everyone(200),
+  },
+  {
+    name: "GET /api/s/:token/pdf (malformed token)",
+    call: (c) => c.get(`/api/s/${MALFORMED_TOKEN}/pdf`),
+    expect: everyone(404),
+  },
+  {
+    name: "POST /api/s/:token/answer (malformed)",
+    call: (c) => c.post(`/api/s/${harbourlineToken}/answer`, { data: { proposalId: 1, answer: "maybe" } }),
+    expect: everyone(400),
+  },
+  {
+    name: "POST /api/s/:token/answer (another shop's token, a Harbourline proposal)",
+    call: (c) =>
+      c.post(`/api/s/${ridgebackToken}/answer`, {
+        data: { proposalId: harbourlineProposalId, answer: "approved" },
+      }),
+    expect: everyone(409),
+  },
+];
+table.push(...ownerRoutes);
 
 for (const row of table) {
   test(`role × route: ${row.name}`, async () => {
