@@ -72,13 +72,31 @@ function readJson<T>(path: string): T | null {
   }
 }
 
-function licenceOf(pkg: PackageJson | null, lock: LockEntry | undefined): string {
+/** A licence file that opens with a well-known licence's name ("MIT License"), for packages whose package.json names none. */
+function licenceFromFile(dir: string): string {
+  for (const file of ["LICENSE", "LICENSE.md", "LICENSE.txt", "LICENCE"]) {
+    try {
+      const first = readFileSync(join(dir, file), "utf8").trimStart().split("\n")[0]?.trim() ?? "";
+      const match =
+        first.match(/^(MIT|ISC|BSD-[23]-Clause|Apache-2\.0)\b/i) ?? first.match(/^The (MIT|ISC) License/i);
+      if (match?.[1])
+        return match[1].toUpperCase() === "MIT" || match[1].toUpperCase() === "ISC"
+          ? match[1].toUpperCase()
+          : match[1];
+    } catch {
+      // no such file
+    }
+  }
+  return "";
+}
+
+function licenceOf(pkg: PackageJson | null, lock: LockEntry | undefined, dir = ""): string {
   const field = pkg?.license;
   if (typeof field === "string" && field.trim()) return field.trim();
   if (field && typeof field === "object" && field.type) return field.type;
   const legacy = (pkg?.licenses ?? []).map((l) => l.type).filter(Boolean);
   if (legacy.length > 0) return legacy.join(" OR ");
-  return lock?.license?.trim() ?? "";
+  return lock?.license?.trim() || (dir ? licenceFromFile(dir) : "");
 }
 
 /** "Jane Doe <e-mail> (web page)" → "Jane Doe"; an author given only as a web address gives nothing. */
@@ -113,7 +131,7 @@ export function buildCredits(rootDir: string): CreditsFile {
     const credited: CreditedPackage = {
       name,
       version: pkg?.version ?? entry.version ?? "",
-      licence: licenceOf(pkg, entry),
+      licence: licenceOf(pkg, entry, join(rootDir, path)),
     };
     const author = authorName(pkg?.author);
     if (author) credited.author = author;
