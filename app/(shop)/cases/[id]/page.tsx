@@ -106,7 +106,14 @@ export default async function CasePage({ params }: { params: Promise<{ id: strin
         proposal={owner.proposal}
         suggested={owner.suggestedRepairs}
       />
-      <OwnerSummaryPanel {...owner} />
+      <OwnerSummaryPanel
+        caseId={detail.id}
+        available={owner.available}
+        mayAct={owner.mayAct}
+        customerEmail={owner.customerEmail}
+        links={owner.links}
+        emails={owner.emails}
+      />
       <section className="card">
         <h2 className="text-lg font-bold">Service record</h2>
         <p className="mt-1">
