@@ -1,5 +1,5 @@
 import Link from "next/link";
-import type { CaseListItem } from "@/lib/server/cases";
+import type { CaseListItem } from "@/lib/contracts/cases";
 import { StatusBadge } from "./status-badge";
 
 export function CaseList({ cases, empty }: { cases: CaseListItem[]; empty: string }) {

@@ -5,7 +5,7 @@ import { useRouter } from "next/navigation";
 import { useMutation, useQuery } from "@tanstack/react-query";
 import { clsx } from "clsx";
 import { Check } from "lucide-react";
-import type { CreateCaseInput, NewVehicleInput } from "@/app/api/cases/schema";
+import type { CreateCaseInput, CreateCaseResponse, NewVehicleInput } from "@/lib/contracts/cases";
 import { apiFetch, ApiError } from "@/lib/queries/api-fetch";
 import { vehicleChoicesQuery } from "@/lib/queries/vehicles";
 import { NewVehicleFields, type NewVehicleDraft } from "./new-vehicle-fields";
@@ -23,7 +23,7 @@ export function NewCaseForm() {
 
   const create = useMutation({
     mutationFn: (body: CreateCaseInput) =>
-      apiFetch<{ case: { id: number } }>("/api/cases", { method: "POST", body }),
+      apiFetch<CreateCaseResponse>("/api/cases", { method: "POST", body }),
     onSuccess: ({ case: c }) => router.push(`/cases/${c.id}/interview`),
     onError: (error) =>
       setErrors(

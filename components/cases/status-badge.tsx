@@ -1,5 +1,5 @@
 import { clsx } from "clsx";
-import type { CaseStatus } from "@/models";
+import type { CaseStatus } from "@/lib/contracts/cases";
 
 export const STATUS_LABELS: Record<CaseStatus, string> = {
   draft: "In progress",

@@ -1,6 +1,7 @@
 "use client";
 
 import { useCallback, useEffect, useRef, useState } from "react";
+import type { InterviewSaveResponse } from "@/lib/contracts/interview";
 import type { SavedInterview } from "@/machines/interview-view";
 import { apiFetch, ApiError } from "@/lib/queries/api-fetch";
 import { clearOutbox, writeOutbox } from "@/lib/queries/interview-outbox";
@@ -43,7 +44,7 @@ export function useAutosave({ caseId, initialVersion }: { caseId: number; initia
     inFlight.current = true;
     setStatus({ kind: "saving", pending: item.pending });
     try {
-      const result = await apiFetch<{ version: number }>(`/api/cases/${caseId}/interview`, {
+      const result = await apiFetch<InterviewSaveResponse>(`/api/cases/${caseId}/interview`, {
         method: "PUT",
         body: { ...item.record, baseVersion: version.current },
       });

@@ -1,4 +1,4 @@
-import type { CaseSubmitInput } from "@/app/api/cases/interview-schema";
+import type { CaseSubmitInput } from "@/lib/contracts/interview";
 import type { CaseSubmitResult } from "@/lib/contracts/case-submit";
 import { apiFetch } from "./api-fetch";
 

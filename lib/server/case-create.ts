@@ -2,7 +2,7 @@ import "server-only";
 import { getModels, type JsonObject, type Vehicle as VehicleModel } from "@/models";
 import type { InferAttributes } from "sequelize";
 import { AppError } from "@/lib/errors";
-import type { CreateCaseInput } from "@/app/api/cases/schema";
+import type { CreateCaseInput } from "@/lib/contracts/cases";
 import { recordAudit } from "./audit";
 
 /**

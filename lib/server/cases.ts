@@ -1,32 +1,7 @@
 import "server-only";
-import { getModels, type CaseStatus } from "@/models";
+import { getModels } from "@/models";
+import type { CaseDetail, CaseListItem, CaseStatus } from "@/lib/contracts/cases";
 import { AppError } from "@/lib/errors";
-
-export interface CaseListItem {
-  id: number;
-  status: CaseStatus;
-  complaint: string;
-  vehicle: string | null;
-  customer: string | null;
-  technician: string;
-  updatedAt: string;
-}
-
-export interface CaseDetail extends CaseListItem {
-  technicianId: string;
-  vehicleId: number | null;
-  refrigerant: string | null;
-  expansionDevice: string | null;
-  interviewStep: string | null;
-  answers: unknown;
-  findings: unknown;
-  engineVersion: string | null;
-  conclusionCause: string | null;
-  conclusionNotes: string | null;
-  confirmedRepair: string | null;
-  version: number;
-  signOffs: { verdict: string; comment: string | null; reviewer: string; createdAt: string }[];
-}
 
 type VehicleRow = {
   year: number;

@@ -6,7 +6,7 @@ import { sortSavedAnswers } from "@/lib/interview/validate";
 import { diagnosisInputFor } from "@/lib/interview/to-diagnosis-input";
 import { diagnose } from "@/lib/diagnosis";
 import type { CaseSubmitResult } from "@/lib/contracts/case-submit";
-import type { CaseSubmitInput, InterviewSaveInput } from "@/app/api/cases/interview-schema";
+import type { CaseSubmitInput, InterviewSaveInput, InterviewSaveResponse } from "@/lib/contracts/interview";
 import { recordAudit } from "./audit";
 import { caseIsEditable, mayChangeCase } from "@/lib/auth/case-access";
 import { updateCaseAtVersion, type CaseChanges } from "@/lib/db/versioned-update";
@@ -68,7 +68,7 @@ export async function saveInterview({
   caseId: number;
   input: InterviewSaveInput;
   shopAltitudeM: number;
-}) {
+}): Promise<InterviewSaveResponse> {
   await editableCase({ user, caseId });
   // Nothing typed is lost: a group that fails validation is stored as a draft, not refused.
   const shop = { altitudeM: shopAltitudeM };

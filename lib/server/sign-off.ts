@@ -2,6 +2,7 @@ import "server-only";
 import type { User } from "lucia";
 import { getModels } from "@/models";
 import { AppError } from "@/lib/errors";
+import type { SignOffInput, SignOffResponse } from "@/lib/contracts/cases";
 import { recordAudit } from "./audit";
 
 /** A senior's verdict on an apprentice's diagnosis: appended, never edited. */
@@ -13,9 +14,9 @@ export async function recordSignOff({
 }: {
   user: User;
   caseId: number;
-  verdict: "signed_off" | "sent_back";
+  verdict: SignOffInput["verdict"];
   comment?: string;
-}) {
+}): Promise<SignOffResponse> {
   const { sequelize, Case, SignOff } = getModels();
   return sequelize.transaction(async (transaction) => {
     const row = await Case.findOne({

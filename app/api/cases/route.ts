@@ -1,7 +1,7 @@
 import { handler } from "@/lib/server/handler";
 import { listCases } from "@/lib/server/cases";
 import { createCase } from "@/lib/server/case-create";
-import { caseListQuerySchema, createCaseSchema } from "./schema";
+import { caseListQuerySchema, createCaseSchema } from "@/lib/contracts/cases";
 
 export const GET = handler(
   { permission: "cases:read", query: caseListQuerySchema },

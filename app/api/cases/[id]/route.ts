@@ -1,6 +1,6 @@
 import { handler } from "@/lib/server/handler";
 import { getCase } from "@/lib/server/cases";
-import { caseParamsSchema } from "../schema";
+import { caseParamsSchema } from "@/lib/contracts/cases";
 
 export const GET = handler(
   { permission: "cases:read", params: caseParamsSchema },

@@ -1,8 +1,8 @@
 import { handler } from "@/lib/server/handler";
 import { saveInterview } from "@/lib/server/interview";
 import { getShop } from "@/lib/server/shops";
-import { caseParamsSchema } from "../../schema";
-import { interviewSaveSchema } from "../../interview-schema";
+import { caseParamsSchema } from "@/lib/contracts/cases";
+import { interviewSaveSchema } from "@/lib/contracts/interview";
 
 /** Autosave: the whole interview record, guarded by the version the client last saw. */
 export const PUT = handler(

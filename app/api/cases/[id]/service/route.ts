@@ -6,7 +6,7 @@ import {
   getServiceRecord,
   saveServiceRecord,
 } from "@/lib/server/service-records";
-import { caseParamsSchema } from "../../schema";
+import { caseParamsSchema } from "@/lib/contracts/cases";
 import { serviceRecordDeleteQuerySchema, serviceRecordInputSchema } from "./schema";
 
 export const GET = handler(

@@ -1,7 +1,6 @@
 import { handler } from "@/lib/server/handler";
 import { recordSignOff } from "@/lib/server/sign-off";
-import { caseParamsSchema } from "../../schema";
-import { signOffSchema } from "../../interview-schema";
+import { caseParamsSchema, signOffSchema } from "@/lib/contracts/cases";
 
 export const POST = handler(
   { permission: "signoff:review", params: caseParamsSchema, body: signOffSchema },

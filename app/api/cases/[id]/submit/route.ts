@@ -1,8 +1,8 @@
 import { handler } from "@/lib/server/handler";
 import { submitCase } from "@/lib/server/interview";
 import { getShop } from "@/lib/server/shops";
-import { caseParamsSchema } from "../../schema";
-import { caseSubmitSchema } from "../../interview-schema";
+import { caseParamsSchema } from "@/lib/contracts/cases";
+import { caseSubmitSchema } from "@/lib/contracts/interview";
 
 /** The technician's conclusion; the server recomputes and stores the findings snapshot. */
 export const POST = handler(

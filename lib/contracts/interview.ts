@@ -22,6 +22,12 @@ export const interviewSaveSchema = z
   });
 export type InterviewSaveInput = z.infer<typeof interviewSaveSchema>;
 
+/** PUT /api/cases/[id]/interview: the case's new version and the groups kept as drafts. */
+export interface InterviewSaveResponse {
+  version: number;
+  draftGroups: string[];
+}
+
 export const caseSubmitSchema = z.object({
   baseVersion: z.number().int().positive(),
   engineVersion: z.string().min(1).max(64),
@@ -33,14 +39,3 @@ export const caseSubmitSchema = z.object({
     .max(4000, "Keep it under 4000 characters."),
 });
 export type CaseSubmitInput = z.infer<typeof caseSubmitSchema>;
-
-export const signOffSchema = z
-  .object({
-    verdict: z.enum(["signed_off", "sent_back"], { message: "Sign off or send back." }),
-    comment: z.string().trim().max(4000, "Keep the comment under 4000 characters.").optional(),
-  })
-  .refine((v) => v.verdict === "signed_off" || (v.comment?.length ?? 0) > 0, {
-    message: "Say what to look at again when you send a case back.",
-    path: ["comment"],
-  });
-export type SignOffInput = z.infer<typeof signOffSchema>;

@@ -1,6 +1,7 @@
 import { z } from "zod";
 
 export const CASE_STATUSES = ["draft", "awaiting_signoff", "signed_off", "sent_back", "closed"] as const;
+export type CaseStatus = (typeof CASE_STATUSES)[number];
 
 export const caseListQuerySchema = z.object({
   status: z.enum(CASE_STATUSES, { message: "Unknown case status." }).optional(),
@@ -91,3 +92,53 @@ export const createCaseSchema = z
   });
 export type CreateCaseInput = z.infer<typeof createCaseSchema>;
 export type NewVehicleInput = z.infer<typeof newVehicleSchema>;
+
+/** POST /api/cases answers 201 with the new case's id. */
+export interface CreateCaseResponse {
+  case: { id: number };
+}
+
+/** One row of the case list (GET /api/cases). */
+export interface CaseListItem {
+  id: number;
+  status: CaseStatus;
+  complaint: string;
+  vehicle: string | null;
+  customer: string | null;
+  technician: string;
+  updatedAt: string;
+}
+
+/** One case with its interview record, findings and sign-offs (GET /api/cases/[id]). */
+export interface CaseDetail extends CaseListItem {
+  technicianId: string;
+  vehicleId: number | null;
+  refrigerant: string | null;
+  expansionDevice: string | null;
+  interviewStep: string | null;
+  answers: unknown;
+  findings: unknown;
+  engineVersion: string | null;
+  conclusionCause: string | null;
+  conclusionNotes: string | null;
+  confirmedRepair: string | null;
+  version: number;
+  signOffs: { verdict: string; comment: string | null; reviewer: string; createdAt: string }[];
+}
+
+export const signOffSchema = z
+  .object({
+    verdict: z.enum(["signed_off", "sent_back"], { message: "Sign off or send back." }),
+    comment: z.string().trim().max(4000, "Keep the comment under 4000 characters.").optional(),
+  })
+  .refine((v) => v.verdict === "signed_off" || (v.comment?.length ?? 0) > 0, {
+    message: "Say what to look at again when you send a case back.",
+    path: ["comment"],
+  });
+export type SignOffInput = z.infer<typeof signOffSchema>;
+
+/** POST /api/cases/[id]/signoff: the case's new status and version. */
+export interface SignOffResponse {
+  status: "signed_off" | "sent_back";
+  version: number;
+}
