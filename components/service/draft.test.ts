@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import type { ServiceRecordDto } from "@/lib/server/service-records";
+import type { ServiceRecordDto } from "@/lib/contracts/service-records";
 import { draftFromRecord, inputFromDraft, readDraft, type ShopUnitsPrefs } from "./draft";
 
 const metric: ShopUnitsPrefs = { mass: "g", volume: "mL", gauge: "kPa", temperature: "C", altitudeM: 12 };

@@ -1,5 +1,4 @@
-import type { ServiceRecordInput, ServiceStepId } from "@/app/api/cases/[id]/service/schema";
-import type { ServiceRecordDto } from "@/lib/server/service-records";
+import type { ServiceRecordDto, ServiceRecordInput, ServiceStepId } from "@/lib/contracts/service-records";
 import type { ReplacedPartId } from "@/lib/service/oil";
 import {
   type Entry,

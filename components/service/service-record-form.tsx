@@ -3,14 +3,14 @@
 import { useMemo, useState } from "react";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { clsx } from "clsx";
-import { SERVICE_STEPS, type ServiceStepId } from "@/app/api/cases/[id]/service/schema";
-import { ApiError } from "@/lib/queries/api-fetch";
 import {
+  SERVICE_STEPS,
   type ServiceCaseContext,
   type ServiceRecordDto,
-  saveServiceRecord,
-  serviceRecordKeys,
-} from "@/lib/queries/service-record";
+  type ServiceStepId,
+} from "@/lib/contracts/service-records";
+import { ApiError } from "@/lib/queries/api-fetch";
+import { saveServiceRecord, serviceRecordKeys } from "@/lib/queries/service-record";
 import { ledgerKeys } from "@/lib/queries/ledger";
 import { cautionsFor } from "@/lib/service/cautions";
 import { summariseServiceRecord } from "@/lib/service/record-summary";

@@ -1,7 +1,7 @@
 "use client";
 
 import type { Dispatch, SetStateAction } from "react";
-import type { ServiceStepId } from "@/app/api/cases/[id]/service/schema";
+import type { ServiceStepId } from "@/lib/contracts/service-records";
 import type { ServiceRecordSummary } from "@/lib/service/record-summary";
 import { REPLACED_PART_IDS, REPLACED_PART_LABELS } from "@/lib/service/oil";
 import { formatMass, formatVolume } from "@/lib/units";

@@ -1,9 +1,10 @@
 import { queryOptions } from "@tanstack/react-query";
-import type { ServiceRecordInput } from "@/app/api/cases/[id]/service/schema";
-import type { ServiceCaseContext, ServiceRecordDto } from "@/lib/server/service-records";
+import type {
+  ServiceRecordInput,
+  ServiceRecordResponse,
+  ServiceRecordSaveResponse,
+} from "@/lib/contracts/service-records";
 import { apiFetch } from "./api-fetch";
-
-export type { ServiceCaseContext, ServiceRecordDto };
 
 export const serviceRecordKeys = {
   all: ["service-record"] as const,
@@ -13,16 +14,9 @@ export const serviceRecordKeys = {
 export const serviceRecordQuery = (caseId: number) =>
   queryOptions({
     queryKey: serviceRecordKeys.forCase(caseId),
-    queryFn: ({ signal }) =>
-      apiFetch<{ case: ServiceCaseContext; record: ServiceRecordDto | null }>(
-        `/api/cases/${caseId}/service`,
-        { signal },
-      ),
+    queryFn: ({ signal }) => apiFetch<ServiceRecordResponse>(`/api/cases/${caseId}/service`, { signal }),
   });
 
 export function saveServiceRecord(caseId: number, body: ServiceRecordInput) {
-  return apiFetch<{ record: ServiceRecordDto; posted: number; warnings: string[] }>(
-    `/api/cases/${caseId}/service`,
-    { method: "PUT", body },
-  );
+  return apiFetch<ServiceRecordSaveResponse>(`/api/cases/${caseId}/service`, { method: "PUT", body });
 }

@@ -7,36 +7,14 @@ import type { RefrigerantId } from "@/lib/refrigerants";
 import { activeMovements } from "@/lib/service/ledger";
 import { postingsForRecordChange, postingsForServiceRecord } from "@/lib/service/ledger-corrections";
 import { vacuumHoldTest } from "@/lib/service/vacuum";
-import type { ServiceRecordInput } from "@/app/api/cases/[id]/service/schema";
+import type {
+  ServiceCaseContext,
+  ServiceRecordDeleteResponse,
+  ServiceRecordDto,
+  ServiceRecordInput,
+  ServiceRecordSaveResponse,
+} from "@/lib/contracts/service-records";
 import { listCylinders, toLedgerMovement } from "./ledger";
-
-export interface ServiceCaseContext {
-  id: number;
-  status: string;
-  technicianId: string;
-  vehicleId: number | null;
-  vehicle: string | null;
-  make: string | null;
-  model: string | null;
-  year: number | null;
-  engine: string | null;
-  refrigerant: RefrigerantId | null;
-  expansionDevice: "orifice_tube" | "txv" | null;
-  electricCompressor: boolean;
-  labelChargeG: number | null;
-  oilType: string | null;
-}
-
-export type ServiceRecordDto = Omit<ServiceRecordInput, "baseVersion"> & {
-  id: number;
-  version: number;
-  technicianId: string;
-  technician: string;
-  refrigerant: RefrigerantId;
-  holdPassed: boolean | null;
-  finalReadingSetId: number | null;
-  updatedAt: string;
-};
 
 const RECORD_FIELDS = [
   "specEntryId",
@@ -223,7 +201,7 @@ export async function saveServiceRecord({
   user: User;
   caseId: number;
   input: ServiceRecordInput;
-}) {
+}): Promise<ServiceRecordSaveResponse> {
   const { sequelize, ServiceRecord, ReadingSet, SpecEntry } = getModels();
   const shopId = user.shopId;
   try {
@@ -454,7 +432,7 @@ export async function deleteServiceRecord({
   user: User;
   caseId: number;
   version: number;
-}) {
+}): Promise<ServiceRecordDeleteResponse> {
   const { sequelize, ServiceRecord } = getModels();
   const shopId = user.shopId;
   return sequelize.transaction(async (transaction) => {

@@ -1,6 +1,6 @@
 import type { User } from "lucia";
 import type { Models } from "@/models";
-import type { ServiceRecordInput } from "@/app/api/cases/[id]/service/schema";
+import type { ServiceRecordInput } from "@/lib/contracts/service-records";
 import { createShopWithCase } from "./fixtures";
 import { uniqueName } from "./helpers";
 

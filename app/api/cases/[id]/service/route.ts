@@ -7,7 +7,7 @@ import {
   saveServiceRecord,
 } from "@/lib/server/service-records";
 import { caseParamsSchema } from "@/lib/contracts/cases";
-import { serviceRecordDeleteQuerySchema, serviceRecordInputSchema } from "./schema";
+import { serviceRecordDeleteQuerySchema, serviceRecordInputSchema } from "@/lib/contracts/service-records";
 
 export const GET = handler(
   { permission: "cases:read", params: caseParamsSchema },

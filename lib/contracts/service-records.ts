@@ -1,4 +1,5 @@
 import { z } from "zod";
+import type { RefrigerantId } from "@/lib/refrigerants";
 import { REPLACED_PART_IDS } from "@/lib/service/oil";
 
 export const SERVICE_STEPS = ["identify", "recovery", "evacuation", "oil", "recharge", "final"] as const;
@@ -98,3 +99,49 @@ export type ServiceRecordDraft = z.input<typeof serviceRecordInputSchema>;
 export const serviceRecordDeleteQuerySchema = z.object({
   version: z.coerce.number({ message: "version is the version you last loaded." }).int().positive(),
 });
+
+/** The case as the service record sees it: its vehicle and what the label says. */
+export interface ServiceCaseContext {
+  id: number;
+  status: string;
+  technicianId: string;
+  vehicleId: number | null;
+  vehicle: string | null;
+  make: string | null;
+  model: string | null;
+  year: number | null;
+  engine: string | null;
+  refrigerant: RefrigerantId | null;
+  expansionDevice: "orifice_tube" | "txv" | null;
+  electricCompressor: boolean;
+  labelChargeG: number | null;
+  oilType: string | null;
+}
+
+/** A saved service record as the server returns it. */
+export type ServiceRecordDto = Omit<ServiceRecordInput, "baseVersion"> & {
+  id: number;
+  version: number;
+  technicianId: string;
+  technician: string;
+  refrigerant: RefrigerantId;
+  holdPassed: boolean | null;
+  finalReadingSetId: number | null;
+  updatedAt: string;
+};
+
+/** GET /api/cases/[id]/service. */
+export interface ServiceRecordResponse {
+  case: ServiceCaseContext;
+  record: ServiceRecordDto | null;
+}
+
+/** PUT /api/cases/[id]/service: the saved record, how many ledger rows it posted, and what to look at. */
+export interface ServiceRecordSaveResponse {
+  record: ServiceRecordDto;
+  posted: number;
+  warnings: string[];
+}
+
+/** DELETE /api/cases/[id]/service: how many correction rows cancelled the record's postings. */
+export type ServiceRecordDeleteResponse = { corrections: number };
