@@ -2,7 +2,7 @@
 
 import { useState } from "react";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import type { CreateCylinderInput } from "@/app/api/cylinders/schema";
+import type { CreateCylinderInput } from "@/lib/contracts/cylinders";
 import { apiFetch, ApiError, saveErrorOf } from "@/lib/queries/api-fetch";
 import { ledgerKeys } from "@/lib/queries/ledger";
 import { readMassG } from "@/lib/service/entry";

@@ -2,9 +2,10 @@
 
 import { useState } from "react";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import type { ManualMovementInput } from "@/app/api/ledger/schema";
+import type { CylinderDto } from "@/lib/contracts/cylinders";
+import type { ManualMovementInput } from "@/lib/contracts/ledger";
 import { apiFetch, saveErrorOf } from "@/lib/queries/api-fetch";
-import { type CylinderDto, ledgerKeys } from "@/lib/queries/ledger";
+import { ledgerKeys } from "@/lib/queries/ledger";
 import { readMassG } from "@/lib/service/entry";
 import type { MassUnit } from "@/lib/units";
 import { EntryInput } from "@/components/service/entry-input";

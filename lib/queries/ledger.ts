@@ -1,8 +1,7 @@
 import { queryOptions } from "@tanstack/react-query";
-import type { CylinderDto, LedgerReportRow, MovementDto } from "@/lib/server/ledger";
+import type { CylinderListResponse } from "@/lib/contracts/cylinders";
+import type { LedgerReportResponse, MovementListResponse } from "@/lib/contracts/ledger";
 import { apiFetch } from "./api-fetch";
-
-export type { CylinderDto, LedgerReportRow, MovementDto };
 
 export const ledgerKeys = {
   all: ["ledger"] as const,
@@ -15,19 +14,18 @@ export const cylindersQuery = () =>
   queryOptions({
     queryKey: ledgerKeys.cylinders(),
     queryFn: ({ signal }) =>
-      apiFetch<{ cylinders: CylinderDto[] }>("/api/cylinders", { signal }).then((r) => r.cylinders),
+      apiFetch<CylinderListResponse>("/api/cylinders", { signal }).then((r) => r.cylinders),
   });
 
 export const movementsQuery = () =>
   queryOptions({
     queryKey: ledgerKeys.movements(),
     queryFn: ({ signal }) =>
-      apiFetch<{ movements: MovementDto[] }>("/api/ledger/movements", { signal }).then((r) => r.movements),
+      apiFetch<MovementListResponse>("/api/ledger/movements", { signal }).then((r) => r.movements),
   });
 
 export const ledgerReportQuery = () =>
   queryOptions({
     queryKey: ledgerKeys.report(),
-    queryFn: ({ signal }) =>
-      apiFetch<{ rows: LedgerReportRow[]; timeZone: string }>("/api/ledger/report", { signal }),
+    queryFn: ({ signal }) => apiFetch<LedgerReportResponse>("/api/ledger/report", { signal }),
   });

@@ -9,45 +9,9 @@ import {
   type MovementType,
   applyMovements,
 } from "@/lib/service/ledger";
-import { monthlyReport, toCsv, type MonthlyReportRow } from "@/lib/service/ledger-report";
-import type { CreateCylinderInput } from "@/app/api/cylinders/schema";
-import type { ManualMovementInput } from "@/app/api/ledger/schema";
-
-export interface CylinderDto {
-  id: number;
-  label: string;
-  serial: string | null;
-  refrigerant: RefrigerantId;
-  kind: CylinderKind;
-  tareG: number;
-  capacityG: number;
-  initialNetG: number;
-  retired: boolean;
-  netG: number;
-  grossG: number;
-  fillPct: number;
-  limitPct: number;
-  fillMessage: string;
-  problems: string[];
-}
-
-export interface MovementDto {
-  id: number;
-  cylinderId: number;
-  cylinderLabel: string;
-  caseId: number | null;
-  serviceRecordId: number | null;
-  technicianId: string;
-  technician: string;
-  type: MovementType;
-  refrigerant: RefrigerantId;
-  massG: number;
-  occurredAt: string;
-  reversesId: number | null;
-  reversedById: number | null;
-  destination: string | null;
-  note: string | null;
-}
+import { monthlyReport, toCsv } from "@/lib/service/ledger-report";
+import type { CreateCylinderInput, CylinderDto } from "@/lib/contracts/cylinders";
+import type { LedgerReportResponse, ManualMovementInput, MovementDto } from "@/lib/contracts/ledger";
 
 type CylinderRow = {
   id: number;
@@ -282,16 +246,12 @@ export async function postManualMovement({
   return posted;
 }
 
-export interface LedgerReportRow extends MonthlyReportRow {
-  technician: string;
-}
-
 /** Recovered, recycled, charged and sent out per month × technician × refrigerant, in the shop's time zone. */
 export async function ledgerReport({
   shopId,
 }: {
   shopId: number;
-}): Promise<{ rows: LedgerReportRow[]; csv: string; timeZone: string }> {
+}): Promise<LedgerReportResponse & { csv: string }> {
   const { Shop, User } = getModels();
   const shop = await Shop.findOne({ where: { id: shopId }, attributes: ["timeZone"], raw: true });
   const timeZone = shop?.timeZone ?? "UTC";

@@ -1,7 +1,7 @@
 import { handler } from "@/lib/server/handler";
 import { createCylinder, listCylinders } from "@/lib/server/ledger";
 import { recordAudit } from "@/lib/server/audit";
-import { createCylinderSchema, cylinderListQuerySchema } from "./schema";
+import { createCylinderSchema, cylinderListQuerySchema } from "@/lib/contracts/cylinders";
 
 export const GET = handler(
   { permission: "ledger:read", query: cylinderListQuerySchema },

@@ -1,7 +1,7 @@
 import { handler } from "@/lib/server/handler";
 import { setCylinderRetired } from "@/lib/server/ledger";
 import { recordAudit } from "@/lib/server/audit";
-import { cylinderParamsSchema, updateCylinderSchema } from "../schema";
+import { cylinderParamsSchema, updateCylinderSchema } from "@/lib/contracts/cylinders";
 
 export const PATCH = handler(
   { permission: "ledger:write", params: cylinderParamsSchema, body: updateCylinderSchema },

@@ -1,6 +1,6 @@
 import { handler } from "@/lib/server/handler";
 import { listMovements, postManualMovement } from "@/lib/server/ledger";
-import { manualMovementSchema, movementListQuerySchema } from "../schema";
+import { manualMovementSchema, movementListQuerySchema } from "@/lib/contracts/ledger";
 
 export const GET = handler(
   { permission: "ledger:read", query: movementListQuerySchema },

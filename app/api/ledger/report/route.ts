@@ -1,6 +1,6 @@
 import { handler } from "@/lib/server/handler";
 import { ledgerReport } from "@/lib/server/ledger";
-import { reportQuerySchema } from "../schema";
+import { reportQuerySchema } from "@/lib/contracts/ledger";
 
 export const GET = handler(
   { permission: "ledger:read", query: reportQuerySchema },

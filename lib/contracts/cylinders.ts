@@ -1,6 +1,9 @@
 import { z } from "zod";
+import type { RefrigerantId } from "@/lib/refrigerants";
 
 const REFRIGERANTS = ["R-134a", "R-1234yf", "R-744", "R-12"] as const;
+export const CYLINDER_KINDS = ["recovery", "virgin", "recycled"] as const;
+export type CylinderKind = (typeof CYLINDER_KINDS)[number];
 
 export const cylinderParamsSchema = z.object({
   id: z.coerce
@@ -23,7 +26,7 @@ export const createCylinderSchema = z
       .optional()
       .or(z.literal("").transform(() => undefined)),
     refrigerant: z.enum(REFRIGERANTS, { message: "Choose the refrigerant this cylinder holds." }),
-    kind: z.enum(["recovery", "virgin", "recycled"], { message: "Choose recovery, virgin or recycled." }),
+    kind: z.enum(CYLINDER_KINDS, { message: "Choose recovery, virgin or recycled." }),
     tareG: z
       .number({ message: "Enter the tare weight stamped on the cylinder." })
       .int("Whole grams.")
@@ -54,3 +57,27 @@ export const updateCylinderSchema = z
 export const cylinderListQuerySchema = z.object({
   retired: z.enum(["include", "exclude"], { message: "retired is include or exclude." }).optional(),
 });
+
+/** A cylinder with its contents replayed from the ledger, and what its fill means. */
+export interface CylinderDto {
+  id: number;
+  label: string;
+  serial: string | null;
+  refrigerant: RefrigerantId;
+  kind: CylinderKind;
+  tareG: number;
+  capacityG: number;
+  initialNetG: number;
+  retired: boolean;
+  netG: number;
+  grossG: number;
+  fillPct: number;
+  limitPct: number;
+  fillMessage: string;
+  problems: string[];
+}
+
+/** GET /api/cylinders. */
+export interface CylinderListResponse {
+  cylinders: CylinderDto[];
+}

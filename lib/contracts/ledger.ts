@@ -1,4 +1,7 @@
 import { z } from "zod";
+import type { RefrigerantId } from "@/lib/refrigerants";
+import type { MovementType } from "@/lib/service/ledger";
+import type { MonthlyReportRow } from "@/lib/service/ledger-report";
 
 export const movementListQuerySchema = z.object({
   cylinderId: z.coerce.number({ message: "cylinderId is a number." }).int().positive().optional(),
@@ -40,3 +43,37 @@ export const manualMovementSchema = z
     path: ["note"],
   });
 export type ManualMovementInput = z.infer<typeof manualMovementSchema>;
+
+/** One ledger row as the client shows it. */
+export interface MovementDto {
+  id: number;
+  cylinderId: number;
+  cylinderLabel: string;
+  caseId: number | null;
+  serviceRecordId: number | null;
+  technicianId: string;
+  technician: string;
+  type: MovementType;
+  refrigerant: RefrigerantId;
+  massG: number;
+  occurredAt: string;
+  reversesId: number | null;
+  reversedById: number | null;
+  destination: string | null;
+  note: string | null;
+}
+
+/** GET /api/ledger/movements. */
+export interface MovementListResponse {
+  movements: MovementDto[];
+}
+
+export interface LedgerReportRow extends MonthlyReportRow {
+  technician: string;
+}
+
+/** GET /api/ledger/report (JSON): the rows and the shop's time zone the months are counted in. */
+export interface LedgerReportResponse {
+  rows: LedgerReportRow[];
+  timeZone: string;
+}
