@@ -3,7 +3,8 @@
 import { useState } from "react";
 import { useQuery } from "@tanstack/react-query";
 import { clsx } from "clsx";
-import { specMatchesQuery, type SpecMatchDto } from "@/lib/queries/spec-matches";
+import type { SpecMatchDto } from "@/lib/contracts/specs";
+import { specMatchesQuery } from "@/lib/queries/spec-matches";
 
 export interface SpecPick {
   refrigerant?: string;

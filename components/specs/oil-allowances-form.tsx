@@ -4,11 +4,10 @@ import { useState } from "react";
 import { useMutation } from "@tanstack/react-query";
 import { apiFetch, saveErrorOf } from "@/lib/queries/api-fetch";
 import { readVolumeMl } from "@/lib/service/entry";
+import type { AllowancesMl, OilAllowancesResponse } from "@/lib/contracts/specs";
 import { REPLACED_PART_IDS, REPLACED_PART_LABELS, type ReplacedPartId } from "@/lib/service/oil";
 import { type VolumeUnit, formatVolume } from "@/lib/units";
 import { EntryInput } from "@/components/service/entry-input";
-
-type Allowances = Record<ReplacedPartId, number | null>;
 
 /** The shop's figures for the oil each replaced part carries out; empty means "drain and measure". */
 export function OilAllowancesForm({
@@ -17,7 +16,7 @@ export function OilAllowancesForm({
   canEdit,
   source,
 }: {
-  initial: Allowances;
+  initial: AllowancesMl;
   volume: VolumeUnit;
   canEdit: boolean;
   source: string;
@@ -31,8 +30,8 @@ export function OilAllowancesForm({
   const [errors, setErrors] = useState<Partial<Record<ReplacedPartId, string>>>({});
   const [status, setStatus] = useState<string | null>(null);
   const save = useMutation({
-    mutationFn: (allowancesMl: Allowances) =>
-      apiFetch<{ allowancesMl: Allowances }>("/api/specs/oil-allowances", {
+    mutationFn: (allowancesMl: AllowancesMl) =>
+      apiFetch<OilAllowancesResponse>("/api/specs/oil-allowances", {
         method: "PUT",
         body: { allowancesMl },
       }),
@@ -43,7 +42,7 @@ export function OilAllowancesForm({
   function submit(e: React.FormEvent) {
     e.preventDefault();
     const next: Partial<Record<ReplacedPartId, string>> = {};
-    const values = {} as Allowances;
+    const values = {} as AllowancesMl;
     for (const p of REPLACED_PART_IDS) {
       const r = readVolumeMl(text[p], volume);
       if ("error" in r) next[p] = r.error;

@@ -2,9 +2,9 @@
 
 import { useState } from "react";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import type { SpecInput } from "@/app/api/specs/schema";
+import type { SpecEntryDto, SpecInput } from "@/lib/contracts/specs";
 import { apiFetch, saveErrorOf } from "@/lib/queries/api-fetch";
-import { type SpecEntryDto, specKeys } from "@/lib/queries/specs";
+import { specKeys } from "@/lib/queries/specs";
 import { readMassG, readVolumeMl } from "@/lib/service/entry";
 import { type MassUnit, type VolumeUnit, formatMass, formatVolume } from "@/lib/units";
 import { EntryInput } from "@/components/service/entry-input";

@@ -3,6 +3,7 @@
 import { useState } from "react";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { clsx } from "clsx";
+import type { SpecImportCommitResponse, SpecImportPreviewResponse } from "@/lib/contracts/specs";
 import type { SpecCsvParse } from "@/lib/specs";
 import { apiFetch, ApiError } from "@/lib/queries/api-fetch";
 import { specKeys } from "@/lib/queries/specs";
@@ -21,7 +22,7 @@ export function SpecImport() {
     );
   const check = useMutation({
     mutationFn: () =>
-      apiFetch<{ preview: SpecCsvParse }>("/api/specs/import?step=preview", {
+      apiFetch<SpecImportPreviewResponse>("/api/specs/import?step=preview", {
         method: "POST",
         body: { csv },
       }),
@@ -33,7 +34,7 @@ export function SpecImport() {
   });
   const commit = useMutation({
     mutationFn: () =>
-      apiFetch<{ created: number; leftOut: number }>("/api/specs/import?step=commit", {
+      apiFetch<SpecImportCommitResponse>("/api/specs/import?step=commit", {
         method: "POST",
         body: { csv },
       }),

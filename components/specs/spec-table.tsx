@@ -3,7 +3,8 @@
 import { useState } from "react";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { apiFetch, ApiError } from "@/lib/queries/api-fetch";
-import { type SpecEntryDto, specKeys, specsQuery } from "@/lib/queries/specs";
+import type { SpecEntryDto } from "@/lib/contracts/specs";
+import { specKeys, specsQuery } from "@/lib/queries/specs";
 import { type MassUnit, type VolumeUnit, formatMass, formatVolume } from "@/lib/units";
 import { SpecForm } from "./spec-form";
 

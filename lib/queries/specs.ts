@@ -1,8 +1,6 @@
 import { queryOptions } from "@tanstack/react-query";
-import type { SpecEntryDto } from "@/lib/server/specs";
+import type { SpecListResponse } from "@/lib/contracts/specs";
 import { apiFetch } from "./api-fetch";
-
-export type { SpecEntryDto };
 
 export const specKeys = {
   all: ["specs"] as const,
@@ -14,7 +12,7 @@ export const specsQuery = (q: string) =>
   queryOptions({
     queryKey: specKeys.list(q),
     queryFn: ({ signal }) =>
-      apiFetch<{ specs: SpecEntryDto[] }>(`/api/specs${q ? `?q=${encodeURIComponent(q)}` : ""}`, {
+      apiFetch<SpecListResponse>(`/api/specs${q ? `?q=${encodeURIComponent(q)}` : ""}`, {
         signal,
       }).then((r) => r.specs),
     placeholderData: (previous) => previous,

@@ -1,8 +1,7 @@
 import "server-only";
 import { getModels } from "@/models";
-import { DEFAULT_PART_OIL_ALLOWANCES_ML, REPLACED_PART_IDS, type ReplacedPartId } from "@/lib/service/oil";
-
-export type AllowancesMl = Record<ReplacedPartId, number | null>;
+import { DEFAULT_PART_OIL_ALLOWANCES_ML, REPLACED_PART_IDS } from "@/lib/service/oil";
+import type { AllowancesMl } from "@/lib/contracts/specs";
 
 /** The shop's figures where it set them, the defaults from lib/service elsewhere. */
 export async function getPartOilAllowances({ shopId }: { shopId: number }): Promise<AllowancesMl> {

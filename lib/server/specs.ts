@@ -4,7 +4,6 @@ import { getModels } from "@/models";
 import { AppError } from "@/lib/errors";
 import { type MassUnit, type VolumeUnit } from "@/lib/units";
 import {
-  type SpecMatch,
   type SpecRow,
   type SpecCsvParse,
   matchSpecRows,
@@ -12,12 +11,13 @@ import {
   specRowKey,
   specRowsToCsv,
 } from "@/lib/specs";
-import type { SpecInput } from "@/app/api/specs/schema";
-
-export interface SpecEntryDto extends SpecRow {
-  id: number;
-  updatedAt: string;
-}
+import type {
+  SpecEntryDto,
+  SpecImportCommitResponse,
+  SpecInput,
+  SpecMatchDto,
+  SpecMatchesResponse,
+} from "@/lib/contracts/specs";
 
 type SpecEntryRow = SpecRow & { id: number; updatedAt: Date };
 
@@ -162,7 +162,7 @@ export async function commitSpecImport({
   shopId: number;
   csv: string;
   units?: ImportUnits;
-}) {
+}): Promise<SpecImportCommitResponse> {
   const { SpecEntry, sequelize } = getModels();
   return sequelize.transaction(async (transaction) => {
     const parsed = parseSpecCsv(csv, { units, existing: await allRows(shopId) });
@@ -210,7 +210,7 @@ export async function listSpecMatches({
 }: {
   shopId: number;
   vehicle: SpecVehicle;
-}): Promise<SpecMatch<SpecEntryDto>[]> {
+}): Promise<SpecMatchDto[]> {
   // Spellings differ ("Mercedes-Benz", "mercedes benz"): matchSpecRows compares normalised names.
   return matchSpecRows(vehicle, await allRows(shopId));
 }
@@ -221,7 +221,7 @@ export async function listSpecMatchesForVehicle({
 }: {
   shopId: number;
   vehicleId: number;
-}) {
+}): Promise<SpecMatchesResponse> {
   const vehicle = await getModels().Vehicle.findOne({ where: { id: vehicleId, shopId }, raw: true });
   if (!vehicle) throw new AppError("not_found:vehicle", "No such vehicle in this shop.");
   const matches = await listSpecMatches({

@@ -1,7 +1,7 @@
 import { handler } from "@/lib/server/handler";
 import { createSpec, listSpecs } from "@/lib/server/specs";
 import { recordAudit } from "@/lib/server/audit";
-import { specInputSchema, specListQuerySchema } from "./schema";
+import { specInputSchema, specListQuerySchema } from "@/lib/contracts/specs";
 
 export const GET = handler(
   { permission: "specs:read", query: specListQuerySchema },

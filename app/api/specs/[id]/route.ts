@@ -1,7 +1,7 @@
 import { handler } from "@/lib/server/handler";
 import { deleteSpec, updateSpec } from "@/lib/server/specs";
 import { recordAudit } from "@/lib/server/audit";
-import { specInputSchema, specParamsSchema } from "../schema";
+import { specInputSchema, specParamsSchema } from "@/lib/contracts/specs";
 
 export const PUT = handler(
   { permission: "specs:edit", params: specParamsSchema, body: specInputSchema },

@@ -1,6 +1,6 @@
 import { handler } from "@/lib/server/handler";
 import { exportSpecsCsv } from "@/lib/server/specs";
-import { specExportQuerySchema } from "../schema";
+import { specExportQuerySchema } from "@/lib/contracts/specs";
 
 export const GET = handler(
   { permission: "specs:read", query: specExportQuerySchema },

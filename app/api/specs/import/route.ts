@@ -1,16 +1,11 @@
-import { z } from "zod";
 import { handler } from "@/lib/server/handler";
 import { commitSpecImport, previewSpecImport } from "@/lib/server/specs";
 import { recordAudit } from "@/lib/server/audit";
-import { specImportSchema } from "../schema";
-
-const importQuerySchema = z.object({
-  step: z.enum(["preview", "commit"], { message: "step is preview or commit." }),
-});
+import { specImportQuerySchema, specImportSchema } from "@/lib/contracts/specs";
 
 /** ?step=preview reads the file and reports each row's problems; ?step=commit saves the rows without problems. */
 export const POST = handler(
-  { permission: "specs:edit", query: importQuerySchema, body: specImportSchema },
+  { permission: "specs:edit", query: specImportQuerySchema, body: specImportSchema },
   async ({ user, query, body }) => {
     if (query.step === "preview")
       return { preview: await previewSpecImport({ shopId: user.shopId, csv: body.csv, units: body.units }) };

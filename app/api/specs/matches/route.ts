@@ -1,6 +1,6 @@
 import { handler } from "@/lib/server/handler";
 import { listSpecMatchesForVehicle } from "@/lib/server/specs";
-import { specMatchQuerySchema } from "../schema";
+import { specMatchQuerySchema } from "@/lib/contracts/specs";
 
 export const GET = handler(
   { permission: "specs:read", query: specMatchQuerySchema },

@@ -1,7 +1,7 @@
 import { handler } from "@/lib/server/handler";
 import { getPartOilAllowances, setPartOilAllowances } from "@/lib/server/oil-allowances";
 import { recordAudit } from "@/lib/server/audit";
-import { oilAllowancesInputSchema } from "../schema";
+import { oilAllowancesInputSchema } from "@/lib/contracts/specs";
 
 export const GET = handler({ permission: "specs:read" }, async ({ user }) => {
   return { allowancesMl: await getPartOilAllowances({ shopId: user.shopId }) };

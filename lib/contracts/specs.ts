@@ -1,6 +1,6 @@
 import { z } from "zod";
-import { specRowSchema } from "@/lib/specs";
-import { partOilAllowancesSchema } from "@/lib/service/oil";
+import { specRowSchema, type SpecCsvParse, type SpecMatch, type SpecRow } from "@/lib/specs";
+import { partOilAllowancesSchema, type ReplacedPartId } from "@/lib/service/oil";
 
 export const specParamsSchema = z.object({
   id: z.coerce
@@ -35,6 +35,10 @@ export const specImportSchema = z
   .strict();
 export type SpecImportInput = z.infer<typeof specImportSchema>;
 
+export const specImportQuerySchema = z.object({
+  step: z.enum(["preview", "commit"], { message: "step is preview or commit." }),
+});
+
 export const specExportQuerySchema = z.object({
   charge: z.enum(["g", "kg", "oz", "lb"], { message: "Charge unit is g, kg, oz or lb." }).optional(),
   oil: z.enum(["mL", "floz"], { message: "Oil unit is mL or floz." }).optional(),
@@ -48,3 +52,43 @@ export const specMatchQuerySchema = z.object({
 });
 
 export const oilAllowancesInputSchema = z.object({ allowancesMl: partOilAllowancesSchema }).strict();
+
+/** A row of the shop's spec table as the server returns it. */
+export interface SpecEntryDto extends SpecRow {
+  id: number;
+  updatedAt: string;
+}
+
+/** GET /api/specs. */
+export interface SpecListResponse {
+  specs: SpecEntryDto[];
+}
+
+/** POST /api/specs and PUT /api/specs/[id]. */
+export interface SpecSaveResponse {
+  spec: SpecEntryDto;
+}
+
+/** POST /api/specs/import?step=preview: every row's values and problems; nothing saved. */
+export interface SpecImportPreviewResponse {
+  preview: SpecCsvParse;
+}
+
+/** POST /api/specs/import?step=commit: rows saved and rows left out for their problems. */
+export type SpecImportCommitResponse = { created: number; leftOut: number };
+
+export type SpecMatchDto = SpecMatch<SpecEntryDto>;
+
+/** GET /api/specs/matches: the vehicle and the rows that could apply to it, best first. */
+export interface SpecMatchesResponse {
+  vehicle: { id: number; year: number; make: string; model: string; engine: string | null };
+  matches: SpecMatchDto[];
+}
+
+/** The oil each replaced part carries out, per part; null means "drain and measure". */
+export type AllowancesMl = Record<ReplacedPartId, number | null>;
+
+/** GET and PUT /api/specs/oil-allowances. */
+export interface OilAllowancesResponse {
+  allowancesMl: AllowancesMl;
+}
