@@ -4,7 +4,7 @@ import { useState } from "react";
 import { useRouter } from "next/navigation";
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
-import { signInSchema, type SignInInput } from "@/app/api/session/schema";
+import { signInSchema, type SignInInput } from "@/lib/contracts/session";
 import { apiFetch, ApiError } from "@/lib/queries/api-fetch";
 
 export function SignInForm({ next }: { next: string }) {

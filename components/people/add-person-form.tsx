@@ -4,7 +4,7 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
-import { createUserSchema, type CreateUserInput } from "@/app/api/users/schema";
+import { createUserSchema, type CreateUserInput } from "@/lib/contracts/users";
 import { ROLE_LABELS, ROLES } from "@/lib/auth/roles";
 import { apiFetch, ApiError } from "@/lib/queries/api-fetch";
 import { userKeys } from "@/lib/queries/users";

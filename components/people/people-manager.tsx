@@ -4,7 +4,8 @@ import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
 import { ROLE_LABELS, ROLES, type Role } from "@/lib/auth/roles";
 import { apiFetch, ApiError } from "@/lib/queries/api-fetch";
-import { userKeys, usersQuery, type ShopUserDto } from "@/lib/queries/users";
+import type { UpdateUserInput, UserResponse } from "@/lib/contracts/users";
+import { userKeys, usersQuery } from "@/lib/queries/users";
 import { AddPersonForm } from "./add-person-form";
 
 export function PeopleManager({ currentUserId }: { currentUserId: string }) {
@@ -12,8 +13,8 @@ export function PeopleManager({ currentUserId }: { currentUserId: string }) {
   const queryClient = useQueryClient();
   const [message, setMessage] = useState<string | null>(null);
   const update = useMutation({
-    mutationFn: ({ id, ...body }: { id: string; role?: Role; active?: boolean }) =>
-      apiFetch<{ user: ShopUserDto }>(`/api/users/${id}`, { method: "PATCH", body }),
+    mutationFn: ({ id, ...body }: { id: string } & UpdateUserInput) =>
+      apiFetch<UserResponse>(`/api/users/${id}`, { method: "PATCH", body }),
     onSuccess: ({ user }) => {
       setMessage(
         `${user.name} is now ${ROLE_LABELS[user.role].toLowerCase()}${user.active ? "" : " (inactive)"}.`,

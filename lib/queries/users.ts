@@ -1,14 +1,6 @@
 import { queryOptions } from "@tanstack/react-query";
-import type { Role } from "@/lib/auth/roles";
+import type { UserListResponse } from "@/lib/contracts/users";
 import { apiFetch } from "./api-fetch";
-
-export interface ShopUserDto {
-  id: string;
-  email: string;
-  name: string;
-  role: Role;
-  active: boolean;
-}
 
 export const userKeys = {
   all: ["users"] as const,
@@ -18,6 +10,5 @@ export const userKeys = {
 export const usersQuery = () =>
   queryOptions({
     queryKey: userKeys.list(),
-    queryFn: ({ signal }) =>
-      apiFetch<{ users: ShopUserDto[] }>("/api/users", { signal }).then((r) => r.users),
+    queryFn: ({ signal }) => apiFetch<UserListResponse>("/api/users", { signal }).then((r) => r.users),
   });

@@ -1,16 +1,6 @@
 import { queryOptions } from "@tanstack/react-query";
+import type { VehicleChoiceListResponse } from "@/lib/contracts/vehicles";
 import { apiFetch } from "./api-fetch";
-
-export interface VehicleChoiceDto {
-  vehicleId: number;
-  customerId: number;
-  customer: string;
-  description: string;
-  refrigerant: string;
-  expansionDevice: "orifice_tube" | "txv";
-  electricCompressor: boolean;
-  labelChargeG: number | null;
-}
 
 export const vehicleKeys = {
   all: ["vehicles"] as const,
@@ -21,9 +11,11 @@ export const vehicleChoicesQuery = (search: string) =>
   queryOptions({
     queryKey: vehicleKeys.choices(search),
     queryFn: ({ signal }) =>
-      apiFetch<{ vehicles: VehicleChoiceDto[] }>(
+      apiFetch<VehicleChoiceListResponse>(
         `/api/vehicles${search ? `?q=${encodeURIComponent(search)}` : ""}`,
-        { signal },
+        {
+          signal,
+        },
       ).then((r) => r.vehicles),
     placeholderData: (previous) => previous,
   });

@@ -4,14 +4,7 @@ import { getModels } from "@/models";
 import { hashPassword } from "@/lib/auth/password";
 import { AppError } from "@/lib/errors";
 import type { Role } from "@/lib/auth/roles";
-
-export interface ShopUser {
-  id: string;
-  email: string;
-  name: string;
-  role: Role;
-  active: boolean;
-}
+import type { ShopUser } from "@/lib/contracts/users";
 
 const PUBLIC_ATTRIBUTES = ["id", "email", "name", "role", "active"] as const;
 

@@ -1,17 +1,7 @@
 import "server-only";
 import { Op } from "sequelize";
 import { getModels } from "@/models";
-
-export interface VehicleChoice {
-  vehicleId: number;
-  customerId: number;
-  customer: string;
-  description: string;
-  refrigerant: string;
-  expansionDevice: "orifice_tube" | "txv";
-  electricCompressor: boolean;
-  labelChargeG: number | null;
-}
+import type { VehicleChoice } from "@/lib/contracts/vehicles";
 
 /** The shop's vehicles, most recently seen first, optionally filtered by customer, make, model or VIN. */
 export async function listVehicleChoices({

@@ -2,7 +2,7 @@ import { getLucia } from "@/lib/auth/lucia";
 import { env } from "@/lib/env";
 import { handler } from "@/lib/server/handler";
 import { signInWithPassword } from "@/lib/server/sign-in";
-import { signInSchema } from "./schema";
+import { signInSchema } from "@/lib/contracts/session";
 
 /** Sign in: creates a Lucia session and sets its cookie. */
 export const POST = handler({ public: true, body: signInSchema }, async ({ req, body, responseHeaders }) => {

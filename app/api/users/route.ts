@@ -1,7 +1,7 @@
 import { handler } from "@/lib/server/handler";
 import { createUser, listUsers } from "@/lib/server/users";
 import { recordAudit } from "@/lib/server/audit";
-import { createUserSchema } from "./schema";
+import { createUserSchema } from "@/lib/contracts/users";
 
 export const GET = handler({ permission: "users:manage" }, async ({ user }) => {
   return { users: await listUsers({ shopId: user.shopId }) };

@@ -1,7 +1,7 @@
 import { handler } from "@/lib/server/handler";
 import { updateUser } from "@/lib/server/users";
 import { recordAudit } from "@/lib/server/audit";
-import { updateUserSchema, userParamsSchema } from "../schema";
+import { updateUserSchema, userParamsSchema } from "@/lib/contracts/users";
 
 export const PATCH = handler(
   { permission: "users:manage", params: userParamsSchema, body: updateUserSchema },

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { ROLES } from "@/lib/auth/roles";
+import { ROLES, type Role } from "@/lib/auth/roles";
 
 export const createUserSchema = z.object({
   email: z.string().trim().toLowerCase().email("Enter a valid e-mail address.").max(255),
@@ -15,5 +15,25 @@ export const updateUserSchema = z
     active: z.boolean().optional(),
   })
   .refine((v) => v.role !== undefined || v.active !== undefined, { message: "Nothing to change." });
+export type UpdateUserInput = z.infer<typeof updateUserSchema>;
 
 export const userParamsSchema = z.object({ id: z.string().regex(/^[a-z0-9]{8,40}$/, "Not a user id.") });
+
+/** A person of the shop as the people screen shows them; never the password hash. */
+export interface ShopUser {
+  id: string;
+  email: string;
+  name: string;
+  role: Role;
+  active: boolean;
+}
+
+/** GET /api/users. */
+export interface UserListResponse {
+  users: ShopUser[];
+}
+
+/** POST /api/users and PATCH /api/users/[id]. */
+export interface UserResponse {
+  user: ShopUser;
+}

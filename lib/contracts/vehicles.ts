@@ -1,0 +1,22 @@
+import { z } from "zod";
+
+export const vehicleListQuerySchema = z.object({
+  q: z.string().max(80, "Search with fewer than 80 characters.").optional(),
+});
+
+/** A vehicle the shop has seen, offered when a new case is opened. */
+export interface VehicleChoice {
+  vehicleId: number;
+  customerId: number;
+  customer: string;
+  description: string;
+  refrigerant: string;
+  expansionDevice: "orifice_tube" | "txv";
+  electricCompressor: boolean;
+  labelChargeG: number | null;
+}
+
+/** GET /api/vehicles. */
+export interface VehicleChoiceListResponse {
+  vehicles: VehicleChoice[];
+}
