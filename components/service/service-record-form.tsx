@@ -3,12 +3,7 @@
 import { useMemo, useState } from "react";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { clsx } from "clsx";
-import {
-  SERVICE_STEPS,
-  type ServiceCaseContext,
-  type ServiceRecordDto,
-  type ServiceStepId,
-} from "@/lib/contracts/service-records";
+import { SERVICE_STEPS, type ServiceStepId } from "@/lib/contracts/service-records";
 import { ApiError } from "@/lib/queries/api-fetch";
 import { saveServiceRecord, serviceRecordKeys } from "@/lib/queries/service-record";
 import { ledgerKeys } from "@/lib/queries/ledger";
@@ -17,15 +12,9 @@ import { summariseServiceRecord } from "@/lib/service/record-summary";
 import type { ReplacedPartId } from "@/lib/service/oil";
 import { readVolumeMl } from "@/lib/service/entry";
 import { CautionsList } from "./cautions-list";
-import {
-  type Draft,
-  type ShopUnitsPrefs,
-  type TextField,
-  draftFromRecord,
-  inputFromDraft,
-  readDraft,
-} from "./draft";
-import { StepFields, type CylinderChoice, type SpecChoice } from "./step-fields";
+import { type Draft, type TextField, draftFromRecord, inputFromDraft, readDraft } from "./draft";
+import type { ServiceRecordFormProps } from "./form-props";
+import { StepFields } from "./step-fields";
 
 export const STEP_TITLES: Record<ServiceStepId, string> = {
   identify: "Identify",
@@ -55,18 +44,6 @@ const SERVER_FIELD: Record<string, string> = {
   finalLowKpaGauge: "finalLow",
   finalVentC: "finalVent",
 };
-
-export interface ServiceRecordFormProps {
-  caseId: number;
-  serviceCase: ServiceCaseContext;
-  record: ServiceRecordDto | null;
-  cylinders: CylinderChoice[];
-  specChoices: SpecChoice[];
-  allowancesMl: Partial<Record<ReplacedPartId, number | null>>;
-  units: ShopUnitsPrefs;
-  /** null when this user may save; otherwise why not, shown instead of the save button */
-  readOnlyReason: string | null;
-}
 
 export function ServiceRecordForm(props: ServiceRecordFormProps) {
   const { caseId, serviceCase, units } = props;

@@ -8,24 +8,7 @@ import { formatMass, formatVolume } from "@/lib/units";
 import type { Draft, TextField } from "./draft";
 import { EntryInput } from "./entry-input";
 import { ResultLine } from "./result-line";
-import type { ServiceRecordFormProps } from "./service-record-form";
-
-export interface CylinderChoice {
-  id: number;
-  label: string;
-  kind: "recovery" | "virgin" | "recycled";
-  netG: number;
-  fillMessage: string;
-}
-
-export interface SpecChoice {
-  id: number;
-  description: string;
-  labelChargeG: number;
-  oilType: string;
-  totalOilMl: number | null;
-  reasons: string[];
-}
+import type { CylinderChoice, ServiceRecordFormProps } from "./form-props";
 
 interface Props {
   step: ServiceStepId;

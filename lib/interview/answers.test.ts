@@ -4,13 +4,13 @@ import {
   chargeAuditAnswersSchema,
   complaintAnswersSchema,
   conditionsAnswersSchema,
-  interviewAnswersSchema,
   runningAnswersSchema,
   staticAnswersSchema,
   systemAnswersSchema,
   behaviourAnswersSchema,
   leakFindingAnswersSchema,
 } from "./answers";
+import { interviewAnswersSchema } from "./checked-answers";
 import type { InterviewAnswers } from "./answers";
 import { crossCheck } from "./cross-checks";
 import { exampleAnswers } from "./example-answers";

@@ -7,7 +7,6 @@ import {
   oilTypeChoices,
   refrigerantChoices,
 } from "./choices";
-import { crossCheck } from "./cross-checks";
 
 /*
  * One zod schema per question group, in internal units: gauge readings in kPa gauge,
@@ -169,24 +168,18 @@ export const answerSchemas = {
   leakFinding: leakFindingAnswersSchema,
 } as const;
 
-export const interviewAnswersSchema = z
-  .object({
-    complaint: complaintAnswersSchema.optional(),
-    system: systemAnswersSchema.optional(),
-    conditions: conditionsAnswersSchema.optional(),
-    static: staticAnswersSchema.optional(),
-    running: runningAnswersSchema.optional(),
-    behaviour: behaviourAnswersSchema.optional(),
-    identification: identificationAnswersSchema.optional(),
-    chargeAudit: chargeAuditAnswersSchema.optional(),
-    leakFinding: leakFindingAnswersSchema.optional(),
-  })
-  .superRefine((answers, ctx) => {
-    for (const [group, issues] of Object.entries(crossCheck(answers))) {
-      for (const issue of issues)
-        ctx.addIssue({ code: "custom", path: [group, issue.field], message: issue.message });
-    }
-  });
+/** Every group at once, each group checked on its own; interviewAnswersSchema (checked-answers.ts) adds the cross-checks. */
+export const interviewAnswersObjectSchema = z.object({
+  complaint: complaintAnswersSchema.optional(),
+  system: systemAnswersSchema.optional(),
+  conditions: conditionsAnswersSchema.optional(),
+  static: staticAnswersSchema.optional(),
+  running: runningAnswersSchema.optional(),
+  behaviour: behaviourAnswersSchema.optional(),
+  identification: identificationAnswersSchema.optional(),
+  chargeAudit: chargeAuditAnswersSchema.optional(),
+  leakFinding: leakFindingAnswersSchema.optional(),
+});
 
-export type InterviewAnswers = z.infer<typeof interviewAnswersSchema>;
+export type InterviewAnswers = z.infer<typeof interviewAnswersObjectSchema>;
 export type AnswersFor<G extends keyof typeof answerSchemas> = z.infer<(typeof answerSchemas)[G]>;

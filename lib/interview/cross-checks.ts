@@ -2,7 +2,7 @@ import { standardBarometricKpa } from "@/lib/units";
 import type { InterviewAnswers } from "./answers";
 import { altitudeFor, type ShopSettings } from "./branches";
 import type { GroupId } from "./steps";
-import type { AnswerIssue } from "./validate";
+import type { AnswerIssue } from "./issues";
 
 /*
  * Above these an HFC system is past its high-side relief valve (SAE J639 systems relieve at about

@@ -1,6 +1,7 @@
 export * from "./answers";
 export * from "./branches";
 export * from "./cautions";
+export * from "./checked-answers";
 export * from "./choices";
 export * from "./cross-checks";
 export * from "./progress";

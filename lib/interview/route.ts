@@ -1,7 +1,7 @@
 import type { InterviewAnswers } from "./answers";
 import { pressureLeft, refrigerantContaminated, systemLooksEmpty, type ShopSettings } from "./branches";
 import { groupForStep, type GroupId, type StepId } from "./steps";
-import type { AnswerIssue } from "./validate";
+import type { AnswerIssue } from "./issues";
 
 /** What routing needs to know about an interview in progress. */
 export interface InterviewRecord {

@@ -1,5 +1,6 @@
 import { z } from "zod";
-import { interviewAnswersSchema, type InterviewAnswers } from "./answers";
+import type { InterviewAnswers } from "./answers";
+import { interviewAnswersSchema } from "./checked-answers";
 import { groupIds, stepIds, type GroupId, type StepId } from "./steps";
 
 /** What autosave stores with the case; passed back as the machine's input, it resumes the interview where it was left. */

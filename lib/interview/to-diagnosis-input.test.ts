@@ -1,7 +1,8 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { diagnosisInputSchema } from "@/lib/diagnosis";
-import { interviewAnswersSchema, type InterviewAnswers } from "./answers";
+import type { InterviewAnswers } from "./answers";
+import { interviewAnswersSchema } from "./checked-answers";
 import { behaviourSymptomIds, leakPlaceChoices } from "./choices";
 import { crossCheck } from "./cross-checks";
 import { emptySystemAnswers, exampleAnswers } from "./example-answers";

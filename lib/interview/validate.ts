@@ -2,13 +2,10 @@ import type { z } from "zod";
 import { answerSchemas, type InterviewAnswers } from "./answers";
 import type { ShopSettings } from "./branches";
 import { crossCheck } from "./cross-checks";
+import type { AnswerIssue } from "./issues";
 import { groupIds, type GroupId } from "./steps";
 
-/** One plain message tied to a field of a question group ("" for the group as a whole). */
-export interface AnswerIssue {
-  field: string;
-  message: string;
-}
+export type { AnswerIssue };
 
 export type GroupCheck =
   { ok: true; value: NonNullable<InterviewAnswers[GroupId]> } | { ok: false; issues: AnswerIssue[] };
