@@ -18,6 +18,7 @@ export default defineConfig({
             "data/**/*.test.ts",
             "tests/unit/**/*.test.ts",
             "components/**/*.test.ts",
+            "scripts/**/*.test.ts",
           ],
           environment: "node",
         },

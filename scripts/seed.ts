@@ -2,8 +2,8 @@
 import { hashPassword } from "@/lib/auth/password";
 import { createMigrator } from "@/lib/db/migrator";
 import { closeSequelize } from "@/lib/db/sequelize";
-import { demoPassword } from "@/lib/demo/people";
-import { seedAllDemo } from "@/lib/demo/seed-all";
+import { demoPassword } from "./demo/people";
+import { seedAllDemo } from "./demo/seed-all";
 import { env } from "@/lib/env";
 import { getModels } from "@/models";
 

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { CAUSE_IDS } from "@/lib/diagnosis/causes";
-import { demoCases } from "@/lib/demo/cases";
-import { interviewColumns } from "@/lib/demo/seed-demo";
+import { demoCases } from "@/scripts/demo/cases";
+import { interviewColumns } from "@/scripts/demo/seed-demo";
 import { REPAIRS } from "@/lib/repairs/catalog";
 import { fleschKincaidGrade } from "@/tests/support/reading-grade";
 import { OWNER_CAUSES } from "./causes";

@@ -1,5 +1,5 @@
 import type { Models } from "@/models";
-import { newUserId } from "@/lib/demo/seed-demo";
+import { newUserId } from "@/scripts/demo/seed-demo";
 import { uniqueName } from "./helpers";
 
 /** A shop of its own with one technician, one customer, one vehicle and one draft case. */

@@ -1,8 +1,8 @@
 import { hashPassword } from "@/lib/auth/password";
 import { createMigrator } from "@/lib/db/migrator";
 import { closeSequelize } from "@/lib/db/sequelize";
-import { demoPassword } from "@/lib/demo/people";
-import { seedAllDemo } from "@/lib/demo/seed-all";
+import { demoPassword } from "@/scripts/demo/people";
+import { seedAllDemo } from "@/scripts/demo/seed-all";
 import { getModels } from "@/models";
 
 /** What `migrate.ts up` and `seed.ts` do, in one process, for the integration database. */

@@ -3,10 +3,10 @@ import { verifyPassword } from "@/lib/auth/password";
 import { diagnose, diagnosisInputSchema, ENGINE_VERSION } from "@/lib/diagnosis";
 import { interviewAnswersSchema } from "@/lib/interview";
 import { closeSequelize } from "@/lib/db/sequelize";
-import { demoCases } from "@/lib/demo/cases";
-import { demoCustomers, demoPassword, demoShops } from "@/lib/demo/people";
-import { demoVehicles } from "@/lib/demo/vehicles";
-import { seedAllDemo } from "@/lib/demo/seed-all";
+import { demoCases } from "@/scripts/demo/cases";
+import { demoCustomers, demoPassword, demoShops } from "@/scripts/demo/people";
+import { demoVehicles } from "@/scripts/demo/vehicles";
+import { seedAllDemo } from "@/scripts/demo/seed-all";
 import { getModels } from "@/models";
 import { runTsx } from "./helpers";
 
