@@ -57,6 +57,11 @@ const layering = {
               "Nothing imports from app/: move what is shared into lib/ (contracts into lib/contracts/).",
           },
           {
+            target: ["./lib", "./models", "./migrations"],
+            from: ["./components", "./machines"],
+            message: "lib/ sits below the screens and the interview machine: move what both need into lib/.",
+          },
+          {
             target: CLIENT_SIDE,
             from: ["./lib/server", "./lib/db", "./models", "./lib/env.ts"],
             message:

@@ -1,5 +1,5 @@
 import { createStore, del, get, set, type UseStore } from "idb-keyval";
-import type { SavedInterview } from "@/machines/interview-view";
+import type { SavedInterview } from "@/lib/interview/saved";
 
 /**
  * The browser's copy of an interview that the server has not confirmed yet. It lives in

@@ -48,6 +48,19 @@ describe("layering rules in eslint.config.mjs", { timeout: 120_000 }, () => {
     expect(fromLib.map((h) => h.ruleId)).toContain(PATHS);
   });
 
+  it("refuses components and machines in lib/", async () => {
+    for (const line of [
+      'import type { SavedInterview } from "@/machines/interview-view";',
+      'import { StatusBadge } from "@/components/cases/status-badge";',
+    ]) {
+      const hits = await ruleHits("lib/queries/interview-outbox.ts", `${line}\nexport {};\n`);
+      expect(hits, line).toContainEqual({
+        ruleId: PATHS,
+        message: expect.stringContaining("lib/ sits below"),
+      });
+    }
+  });
+
   it("refuses server-only modules in client code, type-only imports included", async () => {
     const cases: [string, string][] = [
       ["components/cases/case-list.tsx", 'import type { CaseStatus } from "@/models";'],
