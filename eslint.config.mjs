@@ -2,7 +2,8 @@ import nextVitals from "eslint-config-next/core-web-vitals";
 import nextTs from "eslint-config-next/typescript";
 
 // Layering (DEVELOPERS.md): app → components → lib, server code beside the client, contracts below both.
-// tests/unit/layering.test.ts proves every rule here still fires.
+// tests/unit/layering.test.ts proves every rule here still fires. A test may import the app/ module it
+// tests (tests/unit/brand-icons.test.ts reads app/manifest.ts); test helpers may not.
 
 /** Pure lib/ folders: no React, no Next, no database; they run in the browser, the server and vitest. */
 const PURE_LIB = [
@@ -47,7 +48,8 @@ const layering = {
               "./models",
               "./migrations",
               "./scripts",
-              "./tests",
+              "./tests/support",
+              "./tests/e2e/pages",
               "./bench",
               "./data",
               "./proxy.ts",

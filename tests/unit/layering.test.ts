@@ -46,6 +46,11 @@ describe("layering rules in eslint.config.mjs", { timeout: 120_000 }, () => {
       'import { GET } from "@/app/api/health/route";\nexport const handler = GET;\n',
     );
     expect(fromLib.map((h) => h.ruleId)).toContain(PATHS);
+    const fromHelper = await ruleHits(
+      "tests/support/import-graph.ts",
+      'import { GET } from "@/app/api/health/route";\nexport const handler = GET;\n',
+    );
+    expect(fromHelper.map((h) => h.ruleId)).toContain(PATHS);
   });
 
   it("refuses components and machines in lib/", async () => {
