@@ -16,6 +16,7 @@ const PURE_LIB = [
   "interview",
   "contracts",
   "vehicles",
+  "credits",
 ];
 const PURE_LIB_PATHS = [
   ...PURE_LIB.map((folder) => `./lib/${folder}`),
