@@ -17,6 +17,8 @@ const PURE_LIB = [
   "contracts",
   "vehicles",
   "credits",
+  "owner",
+  "repairs",
 ];
 const PURE_LIB_PATHS = [
   ...PURE_LIB.map((folder) => `./lib/${folder}`),
@@ -66,7 +68,7 @@ const layering = {
           },
           {
             target: CLIENT_SIDE,
-            from: ["./lib/server", "./lib/db", "./models", "./lib/env.ts"],
+            from: ["./lib/server", "./lib/db", "./lib/mail", "./lib/storage", "./models", "./lib/env.ts"],
             message:
               "Client and pure code import no server-only module, types included: take the shape from lib/contracts/.",
           },

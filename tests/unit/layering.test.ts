@@ -74,6 +74,8 @@ describe("layering rules in eslint.config.mjs", { timeout: 120_000 }, () => {
       ["machines/interview.ts", 'import { getSequelize } from "@/lib/db/sequelize";'],
       ["lib/contracts/cases.ts", 'import type { ShopSummary } from "@/lib/server/shops";'],
       ["lib/units/convert.ts", 'import { env } from "@/lib/env";'],
+      ["components/cases/case-list.tsx", 'import type * as s3 from "@/lib/storage/s3";'],
+      ["lib/owner/summary.ts", 'import type * as transport from "@/lib/mail/transport";'],
       ["components/cases/case-list.tsx", 'import { validateRequest } from "@/lib/auth/session";'],
       ["lib/interview/steps.ts", 'import type { User } from "@/lib/auth/lucia";'],
     ];
