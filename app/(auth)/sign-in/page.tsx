@@ -2,15 +2,21 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { redirect } from "next/navigation";
 import { validateRequest } from "@/lib/auth/session";
+import { env } from "@/lib/env";
+import { safeNextPath } from "@/lib/security/safe-next-path";
 import { SignInForm } from "@/components/auth/sign-in-form";
 import { BrandMark } from "@/components/shell/brand-mark";
 
 export const metadata: Metadata = { title: "Sign in" };
 
-export default async function SignInPage({ searchParams }: { searchParams: Promise<{ next?: string }> }) {
+export default async function SignInPage({
+  searchParams,
+}: {
+  searchParams: Promise<{ next?: string | string[] }>;
+}) {
   const { user } = await validateRequest();
   const { next } = await searchParams;
-  const target = next && next.startsWith("/") && !next.startsWith("//") ? next : "/cases";
+  const target = safeNextPath(next, env().APP_ORIGIN);
   if (user) redirect(target);
   return (
     <main className="mx-auto flex min-h-dvh max-w-md flex-col justify-center p-4">
