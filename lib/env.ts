@@ -10,8 +10,9 @@ const envSchema = z.object({
   APP_ORIGIN: z.string().url().default("http://127.0.0.1:3000"),
   SIGN_IN_MAX_FAILURES: z.coerce.number().int().positive().default(5),
   SIGN_IN_WINDOW_MINUTES: z.coerce.number().int().positive().default(15),
-  // Only behind a reverse proxy that sets X-Forwarded-For may the client address be trusted.
-  TRUST_PROXY: z.enum(["0", "1"]).default("0"),
+  // How many reverse proxies in front of the app append the peer's address to X-Forwarded-For.
+  // 0 (the default): no proxy is trusted, forwarded headers are ignored and client addresses are unknown.
+  TRUSTED_PROXY: z.coerce.number().int().min(0).max(5).default(0),
   // Outgoing mail: a local SMTP catcher in development and tests, a real provider only through .env.
   SMTP_URL: z
     .string()

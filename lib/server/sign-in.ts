@@ -1,50 +1,68 @@
 import "server-only";
 import { Op } from "sequelize";
 import { getModels } from "@/models";
-import { env } from "@/lib/env";
 import { verifyPassword, hashPassword } from "@/lib/auth/password";
 import { AppError } from "@/lib/errors";
+import { admitSignInAttempt, waitText, type Refusal } from "./sign-in-throttle";
 
-// Failed sign-ins are counted in the database, so every app instance sees the same count.
-const IP_FAILURE_FACTOR = 4;
+// An address an account signed in from within this many days still counts as the owner's own.
+const KNOWN_ADDRESS_DAYS = 30;
 // Verifying against a real hash keeps the timing the same whether or not the e-mail exists.
 let dummyHash: Promise<string> | undefined;
 
+function refusalError({ retryAfterS, reason }: Refusal): AppError {
+  const wait = waitText(retryAfterS);
+  const message =
+    reason === "account"
+      ? `Too many sign-in attempts for this account from new places. Sign in from a device you have used before, or wait ${wait}.`
+      : `Too many sign-in attempts. Wait ${wait} and try again; the shop owner can reset a forgotten password.`;
+  return new AppError("rate_limited:sign-in", message, {
+    headers: { "Retry-After": String(Math.max(1, retryAfterS)) },
+  });
+}
+
+/**
+ * Checks an e-mail and password. The attempt is counted (atomically, in MariaDB) before the
+ * password is checked; past the limits it is refused with 429 and Retry-After, even when the
+ * password is right.
+ */
 export async function signInWithPassword({
   email,
   password,
-  ip,
+  clientAddress,
 }: {
   email: string;
   password: string;
-  ip: string | null;
+  /** The client's address as a trusted proxy reported it; null when no proxy is trusted. */
+  clientAddress: string | null;
 }) {
   const { User, SignInAttempt } = getModels();
-  const { SIGN_IN_MAX_FAILURES, SIGN_IN_WINDOW_MINUTES } = env();
   const normalisedEmail = email.trim().toLowerCase();
-  const since = new Date(Date.now() - SIGN_IN_WINDOW_MINUTES * 60_000);
 
-  const [emailFailures, ipFailures] = await Promise.all([
-    SignInAttempt.count({
-      where: { email: normalisedEmail, succeeded: false, attemptedAt: { [Op.gte]: since } },
-    }),
-    ip ? SignInAttempt.count({ where: { ip, succeeded: false, attemptedAt: { [Op.gte]: since } } }) : 0,
-  ]);
-  if (emailFailures >= SIGN_IN_MAX_FAILURES || ipFailures >= SIGN_IN_MAX_FAILURES * IP_FAILURE_FACTOR) {
-    throw new AppError(
-      "rate_limited:sign-in",
-      `Too many failed sign-ins. Wait ${SIGN_IN_WINDOW_MINUTES} minutes, or ask the shop owner to check the account.`,
-      { headers: { "Retry-After": String(SIGN_IN_WINDOW_MINUTES * 60) } },
-    );
-  }
+  const admission = await admitSignInAttempt({
+    email: normalisedEmail,
+    clientAddress,
+    isKnownAddress: async () =>
+      clientAddress !== null &&
+      (await SignInAttempt.count({
+        where: {
+          email: normalisedEmail,
+          ip: clientAddress,
+          succeeded: true,
+          attemptedAt: { [Op.gte]: new Date(Date.now() - KNOWN_ADDRESS_DAYS * 86_400_000) },
+        },
+      })) > 0,
+  });
+  if ("refusal" in admission) throw refusalError(admission.refusal);
 
   const user = await User.unscoped().findOne({ where: { email: normalisedEmail }, raw: true });
   dummyHash ??= hashPassword("not-a-real-password");
   const valid = await verifyPassword(user?.passwordHash ?? (await dummyHash), password);
   const succeeded = Boolean(user && user.active && valid);
+  // One row per checked password: the trail of who tried what, and the addresses an account knows.
   await SignInAttempt.create({
     email: normalisedEmail,
-    ip: ip ?? "unknown",
+    ip: clientAddress ?? "unknown",
     succeeded,
     attemptedAt: new Date(),
   });
@@ -52,5 +70,6 @@ export async function signInWithPassword({
   if (!succeeded || !user) {
     throw new AppError("unauthorized:sign-in", "That e-mail and password do not match an active account.");
   }
+  await admission.pass.succeeded();
   return { userId: user.id };
 }

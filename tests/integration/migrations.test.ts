@@ -23,6 +23,7 @@ const appTables = [
   "share_link",
   "shop",
   "sign_in_attempt",
+  "sign_in_throttle",
   "sign_off",
   "spec_entry",
   "user",

@@ -3,13 +3,16 @@ import { env } from "@/lib/env";
 import { handler } from "@/lib/server/handler";
 import { signInWithPassword } from "@/lib/server/sign-in";
 import { signInSchema } from "@/lib/contracts/session";
+import { clientAddress } from "@/lib/security/client-address";
 
 /** Sign in: creates a Lucia session and sets its cookie. */
 export const POST = handler({ public: true, body: signInSchema }, async ({ req, body, responseHeaders }) => {
-  // Without a trusted proxy the client address is unknown; the per-e-mail limit still applies.
-  const ip =
-    env().TRUST_PROXY === "1" ? (req.headers.get("x-forwarded-for")?.split(",")[0]?.trim() ?? null) : null;
-  const { userId } = await signInWithPassword({ email: body.email, password: body.password, ip });
+  // Without a trusted proxy the client address is unknown; the per-account limit still applies.
+  const { userId } = await signInWithPassword({
+    email: body.email,
+    password: body.password,
+    clientAddress: clientAddress(req.headers.get("x-forwarded-for"), env().TRUSTED_PROXY),
+  });
   const lucia = getLucia();
   const session = await lucia.createSession(userId, {});
   responseHeaders.append("Set-Cookie", lucia.createSessionCookie(session.id).serialize());
