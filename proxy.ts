@@ -1,23 +1,38 @@
 import { NextResponse, type NextRequest } from "next/server";
+import { env } from "@/lib/env";
+import {
+  API_CACHE_CONTROL,
+  API_CONTENT_SECURITY_POLICY,
+  STATIC_SECURITY_HEADERS,
+  STRICT_TRANSPORT_SECURITY,
+  createNonce,
+  pageContentSecurityPolicy,
+} from "@/lib/security/headers";
+import { isOwnOrigin, STATE_CHANGING_METHODS } from "@/lib/security/origin";
 
 // Cheap checks only: the real session check happens in every page, handler and action.
+// Here: the Origin check for state-changing requests, the security headers with a fresh CSP nonce
+// for each page, and a redirect to sign-in when there is no session cookie at all.
 const SESSION_COOKIE = "cw_session";
-const PUBLIC_PAGES = ["/sign-in", "/s/", "/credits"];
+const PUBLIC_PAGES = ["/sign-in", "/s/", "/credits", "/invitation/"];
 
 export function proxy(req: NextRequest) {
   const { pathname } = req.nextUrl;
+  const { APP_ORIGIN, NODE_ENV } = env();
+  const https = APP_ORIGIN.startsWith("https://");
+  const isApi = pathname.startsWith("/api/");
 
-  if (req.method !== "GET" && req.method !== "HEAD" && req.method !== "OPTIONS") {
-    const origin = req.headers.get("origin");
-    const host = req.headers.get("x-forwarded-host") ?? req.headers.get("host");
-    let sameOrigin = false;
-    try {
-      sameOrigin = Boolean(origin && host && new URL(origin).host === host);
-    } catch {
-      sameOrigin = false;
-    }
-    if (!sameOrigin) {
-      return NextResponse.json(
+  const withHeaders = (res: NextResponse, csp: string) => {
+    for (const [name, value] of Object.entries(STATIC_SECURITY_HEADERS)) res.headers.set(name, value);
+    if (https) res.headers.set("Strict-Transport-Security", STRICT_TRANSPORT_SECURITY);
+    res.headers.set("Content-Security-Policy", csp);
+    if (isApi) res.headers.set("Cache-Control", API_CACHE_CONTROL);
+    return res;
+  };
+
+  if (STATE_CHANGING_METHODS.has(req.method) && !isOwnOrigin(req.headers.get("origin"), APP_ORIGIN)) {
+    return withHeaders(
+      NextResponse.json(
         {
           error: {
             code: "forbidden:origin",
@@ -25,20 +40,30 @@ export function proxy(req: NextRequest) {
           },
         },
         { status: 403 },
-      );
-    }
-    return NextResponse.next();
+      ),
+      API_CONTENT_SECURITY_POLICY,
+    );
   }
 
-  if (pathname.startsWith("/api/")) return NextResponse.next();
+  if (isApi) return withHeaders(NextResponse.next(), API_CONTENT_SECURITY_POLICY);
+
+  // Next.js reads the nonce from the request's CSP header and puts it on its own scripts; the
+  // x-nonce request header is there for any inline script of ours (there is none today).
+  const nonce = createNonce();
+  const csp = pageContentSecurityPolicy({ nonce, development: NODE_ENV === "development", https });
+
   const isPublic = PUBLIC_PAGES.some((p) => pathname === p || pathname.startsWith(p));
-  if (!isPublic && !req.cookies.has(SESSION_COOKIE)) {
-    const url = req.nextUrl.clone();
-    url.pathname = "/sign-in";
-    url.search = pathname === "/" ? "" : `?next=${encodeURIComponent(pathname + req.nextUrl.search)}`;
-    return NextResponse.redirect(url);
+  if (!isPublic && !req.cookies.has(SESSION_COOKIE) && (req.method === "GET" || req.method === "HEAD")) {
+    // Built on APP_ORIGIN: the Host header is the client's to write, so it never names the target.
+    const url = new URL("/sign-in", APP_ORIGIN);
+    if (pathname !== "/") url.searchParams.set("next", pathname + req.nextUrl.search);
+    return withHeaders(NextResponse.redirect(url), csp);
   }
-  return NextResponse.next();
+
+  const requestHeaders = new Headers(req.headers);
+  requestHeaders.set("x-nonce", nonce);
+  requestHeaders.set("Content-Security-Policy", csp);
+  return withHeaders(NextResponse.next({ request: { headers: requestHeaders } }), csp);
 }
 
 export const config = {

@@ -1,9 +1,13 @@
 import "server-only";
-import { Lucia } from "lucia";
+import { Lucia, TimeSpan } from "lucia";
 import { Mysql2Adapter } from "@lucia-auth/adapter-mysql";
 import { getMysqlPool } from "@/lib/db/pool";
 import { env } from "@/lib/env";
+import { secureCookies } from "@/lib/security/cookies";
 import type { Role } from "./roles";
+
+/** How long a session lives without use; its cookie lives exactly as long (Max-Age), not 400 days. */
+export const SESSION_LIFETIME = new TimeSpan(30, "d");
 
 interface DatabaseUserAttributes {
   email: string;
@@ -16,10 +20,12 @@ interface DatabaseUserAttributes {
 function createLucia() {
   const adapter = new Mysql2Adapter(getMysqlPool(), { user: "user", session: "user_session" });
   return new Lucia(adapter, {
+    sessionExpiresIn: SESSION_LIFETIME,
     sessionCookie: {
       name: "cw_session",
-      expires: false,
-      attributes: { secure: env().APP_ORIGIN.startsWith("https://"), sameSite: "lax" },
+      // true: Max-Age follows sessionExpiresIn; a refreshed session sends a refreshed cookie.
+      expires: true,
+      attributes: { secure: secureCookies(env().APP_ORIGIN), sameSite: "lax" },
     },
     getUserAttributes: (attributes) => ({
       email: attributes.email,

@@ -1,15 +1,17 @@
 import "server-only";
 import { NextResponse, type NextRequest } from "next/server";
-import { verifyRequestOrigin, type User } from "lucia";
+import type { User } from "lucia";
 import { z } from "zod";
 import { getLucia } from "@/lib/auth/lucia";
 import { validateSessionId } from "@/lib/auth/session";
 import { can, type Permission } from "@/lib/auth/roles";
+import { env } from "@/lib/env";
 import { AppError, isAppError } from "@/lib/errors";
+import { API_CACHE_CONTROL } from "@/lib/security/headers";
+import { isOwnOrigin, STATE_CHANGING_METHODS } from "@/lib/security/origin";
 import { fieldErrorsOf } from "@/lib/validation";
 
 const MAX_BODY_BYTES = 1_000_000;
-const STATE_CHANGING = new Set(["POST", "PUT", "PATCH", "DELETE"]);
 
 type Schema = z.ZodType | undefined;
 type Infer<S extends Schema> = S extends z.ZodType ? z.infer<S> : undefined;
@@ -62,9 +64,10 @@ export function handler<B extends Schema, Q extends Schema, P extends Schema>(
   fn: (ctx: HandlerContext<B, Q, P, User>) => Promise<unknown>,
 ) {
   return async (req: NextRequest, routeCtx: RouteContext): Promise<Response> => {
-    const responseHeaders = new Headers();
+    // Answers hold one shop's data: never kept by a browser or proxy cache.
+    const responseHeaders = new Headers({ "Cache-Control": API_CACHE_CONTROL });
     try {
-      if (STATE_CHANGING.has(req.method)) checkOrigin(req);
+      if (STATE_CHANGING_METHODS.has(req.method)) checkOrigin(req);
 
       const lucia = getLucia();
       const sessionId = req.cookies.get(lucia.sessionCookieName)?.value ?? null;
@@ -92,7 +95,9 @@ export function handler<B extends Schema, Q extends Schema, P extends Schema>(
         User
       >);
       if (result instanceof Response) {
-        responseHeaders.forEach((value, key) => result.headers.append(key, value));
+        responseHeaders.forEach((value, key) =>
+          key === "cache-control" ? result.headers.set(key, value) : result.headers.append(key, value),
+        );
         return result;
       }
       return NextResponse.json(result ?? { ok: true }, { headers: responseHeaders });
@@ -102,10 +107,9 @@ export function handler<B extends Schema, Q extends Schema, P extends Schema>(
   };
 }
 
+/** The Origin header must be exactly APP_ORIGIN; Host and X-Forwarded-Host play no part. */
 function checkOrigin(req: NextRequest) {
-  const origin = req.headers.get("origin");
-  const host = req.headers.get("x-forwarded-host") ?? req.headers.get("host");
-  if (!origin || !host || !verifyRequestOrigin(origin, [host])) {
+  if (!isOwnOrigin(req.headers.get("origin"), env().APP_ORIGIN)) {
     throw new AppError("forbidden:origin", "This request did not come from Chillwright's own pages.");
   }
 }
