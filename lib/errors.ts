@@ -41,11 +41,17 @@ export class AppError extends Error {
   readonly status: number;
   readonly fieldErrors?: FieldErrors;
   readonly headers?: Record<string, string>;
+  /** Safe, structured facts about the refusal (e.g. the row a duplicate clashes with). */
+  readonly details?: Record<string, unknown>;
 
   constructor(
     code: `${ErrorKind}:${string}`,
     message?: string,
-    extra?: { fieldErrors?: FieldErrors; headers?: Record<string, string> },
+    extra?: {
+      fieldErrors?: FieldErrors;
+      headers?: Record<string, string>;
+      details?: Record<string, unknown>;
+    },
   ) {
     const [kind, resource = ""] = code.split(":") as [ErrorKind, string?];
     super(message ?? DEFAULT_MESSAGE[kind]);
@@ -55,6 +61,7 @@ export class AppError extends Error {
     this.status = STATUS[kind];
     this.fieldErrors = extra?.fieldErrors;
     this.headers = extra?.headers;
+    this.details = extra?.details;
   }
 
   get code(): string {
@@ -67,6 +74,7 @@ export class AppError extends Error {
         code: this.code,
         message: this.message,
         ...(this.fieldErrors ? { fieldErrors: this.fieldErrors } : {}),
+        ...(this.details ? { details: this.details } : {}),
       },
     };
   }

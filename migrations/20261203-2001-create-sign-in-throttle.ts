@@ -1,5 +1,6 @@
 import { DataTypes, type QueryInterface } from "sequelize";
 import type { MigrationParams } from "umzug";
+import { tableOptions } from "@/lib/db/schema-helpers";
 
 type Params = MigrationParams<QueryInterface>;
 
@@ -14,7 +15,7 @@ export async function up({ context: qi }: Params) {
       // Milliseconds since 1970 when the count lapses; null: never.
       expire: { type: DataTypes.BIGINT.UNSIGNED, allowNull: true },
     },
-    { engine: "InnoDB", charset: "ascii", collate: "ascii_bin" },
+    tableOptions,
   );
   await qi.addIndex("sign_in_throttle", ["expire"], { name: "sign_in_throttle_expire" });
 }

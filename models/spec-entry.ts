@@ -7,6 +7,7 @@ import {
   type InferCreationAttributes,
   type Sequelize,
 } from "sequelize";
+import { specMatchKey } from "@/lib/specs/schema";
 import type { Shop } from "./shop";
 import { vehicleRefrigerants, type VehicleRefrigerant } from "./vehicle";
 
@@ -24,6 +25,8 @@ export class SpecEntry extends Model<InferAttributes<SpecEntry>, InferCreationAt
   declare labelChargeG: number;
   declare oilType: string;
   declare totalOilMl: CreationOptional<number | null>;
+  /** specMatchKey of the row, set on every save; unique per shop (spec_entry_shop_match_key). */
+  declare matchKey: CreationOptional<string>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -41,10 +44,25 @@ export class SpecEntry extends Model<InferAttributes<SpecEntry>, InferCreationAt
         labelChargeG: { type: DataTypes.INTEGER, allowNull: false },
         oilType: { type: DataTypes.STRING(60), allowNull: false },
         totalOilMl: { type: DataTypes.INTEGER, allowNull: true },
+        matchKey: { type: DataTypes.STRING(720), allowNull: false },
         createdAt: DataTypes.DATE(3),
         updatedAt: DataTypes.DATE(3),
       },
-      { sequelize, tableName: "spec_entry", modelName: "SpecEntry", underscored: true },
+      {
+        sequelize,
+        tableName: "spec_entry",
+        modelName: "SpecEntry",
+        underscored: true,
+        // Every way of writing a row fills the key from the row itself, so no caller can forget it.
+        hooks: {
+          beforeValidate: (row: SpecEntry) => {
+            row.matchKey = specMatchKey(row);
+          },
+          beforeBulkCreate: (rows: SpecEntry[]) => {
+            for (const row of rows) row.matchKey = specMatchKey(row);
+          },
+        },
+      },
     );
   }
 }

@@ -8,7 +8,7 @@ import {
   type SpecCsvParse,
   matchSpecRows,
   parseSpecCsv,
-  specRowKey,
+  specMatchKey,
   specRowsToCsv,
 } from "@/lib/specs";
 import type {
@@ -82,18 +82,38 @@ async function allRows(shopId: number): Promise<SpecEntryDto[]> {
   return listSpecs({ shopId, limit: 100_000 });
 }
 
-async function refuseDuplicate(shopId: number, input: SpecInput, exceptId?: number) {
-  const key = specRowKey(input);
-  const clash = (await allRows(shopId)).find((r) => r.id !== exceptId && specRowKey(r) === key);
-  if (clash) {
-    throw new AppError(
-      "conflict:spec",
-      "The spec table already has a row for this make, model, variant, years and rear A/C.",
-      {
-        fieldErrors: { model: [`Already in the table (row ${clash.id}).`] },
-      },
-    );
-  }
+const MATCH_KEY_INDEX = "spec_entry_shop_match_key";
+
+function isMatchKeyClash(error: unknown): boolean {
+  const e = error as { name?: string; parent?: { message?: string }; message?: string } | null;
+  return (
+    e?.name === "SequelizeUniqueConstraintError" &&
+    `${e.parent?.message ?? ""} ${e.message ?? ""}`.includes(MATCH_KEY_INDEX)
+  );
+}
+
+function describeRow(r: SpecEntryDto): string {
+  const years = r.yearFrom === r.yearTo ? `${r.yearFrom}` : `${r.yearFrom}–${r.yearTo}`;
+  return `${r.make} ${r.model}${r.variant ? ` ${r.variant}` : ""}, ${years}, ${r.rearAc ? "front and rear A/C" : "front A/C only"}`;
+}
+
+/**
+ * The unique index on (shop_id, match_key) decides, so two parallel writes of one vehicle written
+ * two ways cannot both get in; the loser is told which row it repeats.
+ */
+async function duplicateError(shopId: number, input: SpecInput): Promise<AppError> {
+  const { SpecEntry } = getModels();
+  const clash = await SpecEntry.findOne({ where: { shopId, matchKey: specMatchKey(input) }, raw: true });
+  const row = clash ? toDto(clash as unknown as SpecEntryRow) : null;
+  const where = row ? `row ${row.id}: ${describeRow(row)}` : "another row";
+  return new AppError(
+    "conflict:spec",
+    `The spec table already has this vehicle variant (${where}). Change that row instead, or tell the two apart by variant or years.`,
+    {
+      fieldErrors: { model: [row ? `Already in the table (row ${row.id}).` : "Already in the table."] },
+      ...(row ? { details: { clash: row } } : {}),
+    },
+  );
 }
 
 export async function createSpec({
@@ -103,9 +123,13 @@ export async function createSpec({
   shopId: number;
   input: SpecInput;
 }): Promise<SpecEntryDto> {
-  await refuseDuplicate(shopId, input);
-  const row = await getModels().SpecEntry.create({ ...input, shopId });
-  return toDto(row.get({ plain: true }) as unknown as SpecEntryRow);
+  try {
+    const row = await getModels().SpecEntry.create({ ...input, shopId });
+    return toDto(row.get({ plain: true }) as unknown as SpecEntryRow);
+  } catch (error) {
+    if (isMatchKeyClash(error)) throw await duplicateError(shopId, input);
+    throw error;
+  }
 }
 
 export async function updateSpec({
@@ -120,8 +144,12 @@ export async function updateSpec({
   const { SpecEntry } = getModels();
   const row = await SpecEntry.findOne({ where: { id, shopId } });
   if (!row) throw new AppError("not_found:spec", "No such spec row in this shop.");
-  await refuseDuplicate(shopId, input, id);
-  await row.update(input);
+  try {
+    await row.update({ ...input, matchKey: specMatchKey(input) });
+  } catch (error) {
+    if (isMatchKeyClash(error)) throw await duplicateError(shopId, input);
+    throw error;
+  }
   return toDto(row.get({ plain: true }) as unknown as SpecEntryRow);
 }
 
@@ -177,10 +205,20 @@ export async function commitSpecImport({
         "bad_request:import",
         "No row in the file can be saved; fix the problems shown and try again.",
       );
-    await SpecEntry.bulkCreate(
-      good.map((r) => ({ ...(r.values as SpecRow), shopId })),
-      { transaction },
-    );
+    try {
+      await SpecEntry.bulkCreate(
+        good.map((r) => ({ ...(r.values as SpecRow), shopId })),
+        { transaction },
+      );
+    } catch (error) {
+      // A row saved by someone else between this file's check and its insert: all or none.
+      if (isMatchKeyClash(error))
+        throw new AppError(
+          "conflict:spec",
+          "Someone added one of these vehicles to the spec table meanwhile; nothing was saved. Preview the file again.",
+        );
+      throw error;
+    }
     return { created: good.length, leftOut: parsed.rows.length - good.length };
   });
 }

@@ -4,6 +4,7 @@ export {
   TOTAL_OIL_RANGE_ML,
   type SpecRow,
   normaliseName,
+  specMatchKey,
   specRowKey,
   specRowSchema,
 } from "./schema";

@@ -59,3 +59,11 @@ export function specRowKey(
     r.rearAc ? "rear" : "front",
   ].join("|");
 }
+
+/** Longest match key the spec_entry.match_key column holds (NFKD can lengthen odd characters). */
+export const SPEC_MATCH_KEY_MAX_LENGTH = 700;
+
+/** specRowKey as stored in spec_entry.match_key, whose unique index keeps one row per variant. */
+export function specMatchKey(r: Parameters<typeof specRowKey>[0]): string {
+  return specRowKey(r).slice(0, SPEC_MATCH_KEY_MAX_LENGTH);
+}
