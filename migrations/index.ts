@@ -8,6 +8,7 @@ import * as m0005 from "./20261202-0005-create-spec-table-and-ledger";
 import * as m1001 from "./20261203-1001-create-owner-summary-tables";
 import * as m2001 from "./20261203-2001-create-sign-in-throttle";
 import * as m2002 from "./20261203-2002-add-spec-entry-match-key";
+import * as m2003 from "./20261203-2003-create-user-invitations";
 
 // Listed by hand, not globbed, so the same list works under tsx, vitest and a Next bundle.
 // A new migration file goes here too; an integration test fails when one is missing.
@@ -20,4 +21,5 @@ export const migrations: RunnableMigration<QueryInterface>[] = [
   { name: "20261203-1001-create-owner-summary-tables", ...m1001 },
   { name: "20261203-2001-create-sign-in-throttle", ...m2001 },
   { name: "20261203-2002-add-spec-entry-match-key", ...m2002 },
+  { name: "20261203-2003-create-user-invitations", ...m2003 },
 ];

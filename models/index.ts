@@ -9,6 +9,7 @@ import { Shop } from "./shop";
 import { SignInAttempt } from "./sign-in-attempt";
 import { SignOff } from "./sign-off";
 import { User } from "./user";
+import { UserInvitation } from "./user-invitation";
 import { Vehicle } from "./vehicle";
 import { Cylinder } from "./cylinder";
 import { PartOilAllowance } from "./part-oil-allowance";
@@ -21,7 +22,7 @@ import { RepairProposal } from "./repair-proposal";
 import { ShareLink } from "./share-link";
 
 export { AuditEvent, Case, Customer, ReadingSet, Session, Shop, SignInAttempt, SignOff, User, Vehicle };
-export { Cylinder, PartOilAllowance, RefrigerantMovement, ServiceRecord, SpecEntry };
+export { Cylinder, PartOilAllowance, RefrigerantMovement, ServiceRecord, SpecEntry, UserInvitation };
 export { Attachment, OutboundEmail, RepairProposal, ShareLink };
 export type { CylinderKind } from "./cylinder";
 export type { PartReplacedJson } from "./service-record";
@@ -53,6 +54,7 @@ const MODELS = {
   RepairProposal,
   Attachment,
   OutboundEmail,
+  UserInvitation,
 };
 
 function initModels(sequelize: Sequelize) {
@@ -104,6 +106,10 @@ function initModels(sequelize: Sequelize) {
 
   User.hasMany(AuditEvent, { foreignKey: "actorId", as: "auditEvents" });
   AuditEvent.belongsTo(User, { foreignKey: "actorId", as: "actor" });
+
+  Shop.hasMany(UserInvitation, shopScoped);
+  UserInvitation.belongsTo(Shop, shopScoped);
+  UserInvitation.belongsTo(User, { foreignKey: { name: "invitedBy", allowNull: false }, as: "inviter" });
 
   Shop.hasMany(SpecEntry, shopScoped);
   SpecEntry.belongsTo(Shop, shopScoped);

@@ -6,7 +6,8 @@ import { ROLE_LABELS, ROLES, type Role } from "@/lib/auth/roles";
 import { apiFetch, ApiError } from "@/lib/queries/api-fetch";
 import type { UpdateUserInput, UserResponse } from "@/lib/contracts/users";
 import { userKeys, usersQuery } from "@/lib/queries/users";
-import { AddPersonForm } from "./add-person-form";
+import { InvitePersonForm } from "./invite-person-form";
+import { OpenInvitations } from "./open-invitations";
 
 export function PeopleManager({ currentUserId }: { currentUserId: string }) {
   const { data: users = [] } = useQuery(usersQuery());
@@ -71,7 +72,8 @@ export function PeopleManager({ currentUserId }: { currentUserId: string }) {
           {message}
         </p>
       </section>
-      <AddPersonForm />
+      <OpenInvitations />
+      <InvitePersonForm />
     </div>
   );
 }

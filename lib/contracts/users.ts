@@ -1,14 +1,6 @@
 import { z } from "zod";
 import { ROLES, type Role } from "@/lib/auth/roles";
 
-export const createUserSchema = z.object({
-  email: z.string().trim().toLowerCase().email("Enter a valid e-mail address.").max(255),
-  name: z.string().trim().min(1, "Enter the person's name.").max(120),
-  role: z.enum(ROLES, { message: "Choose one of: owner, senior, technician, apprentice." }),
-  password: z.string().min(12, "Use at least 12 characters.").max(200),
-});
-export type CreateUserInput = z.infer<typeof createUserSchema>;
-
 export const updateUserSchema = z
   .object({
     role: z.enum(ROLES, { message: "Choose one of: owner, senior, technician, apprentice." }).optional(),

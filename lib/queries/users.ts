@@ -1,5 +1,6 @@
 import { queryOptions } from "@tanstack/react-query";
 import type { UserListResponse } from "@/lib/contracts/users";
+import type { PendingInvitationDto } from "@/lib/contracts/invitations";
 import { apiFetch } from "./api-fetch";
 
 export const userKeys = {
@@ -11,4 +12,18 @@ export const usersQuery = () =>
   queryOptions({
     queryKey: userKeys.list(),
     queryFn: ({ signal }) => apiFetch<UserListResponse>("/api/users", { signal }).then((r) => r.users),
+  });
+
+export const invitationKeys = {
+  all: ["invitations"] as const,
+  list: () => [...invitationKeys.all, "list"] as const,
+};
+
+export const invitationsQuery = () =>
+  queryOptions({
+    queryKey: invitationKeys.list(),
+    queryFn: ({ signal }) =>
+      apiFetch<{ invitations: PendingInvitationDto[] }>("/api/invitations", { signal }).then(
+        (r) => r.invitations,
+      ),
   });

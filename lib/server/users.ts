@@ -1,7 +1,5 @@
 import "server-only";
-import { generateIdFromEntropySize } from "lucia";
 import { getModels } from "@/models";
-import { hashPassword } from "@/lib/auth/password";
 import { AppError } from "@/lib/errors";
 import type { Role } from "@/lib/auth/roles";
 import type { ShopUser } from "@/lib/contracts/users";
@@ -27,39 +25,6 @@ export async function listUsers({ shopId }: { shopId: number }): Promise<ShopUse
     raw: true,
   });
   return rows.map(toShopUser);
-}
-
-export async function createUser({
-  shopId,
-  email,
-  name,
-  role,
-  password,
-}: {
-  shopId: number;
-  email: string;
-  name: string;
-  role: Role;
-  password: string;
-}): Promise<ShopUser> {
-  const { User } = getModels();
-  const normalisedEmail = email.trim().toLowerCase();
-  const existing = await User.findOne({ where: { email: normalisedEmail }, attributes: ["id"], raw: true });
-  if (existing) {
-    throw new AppError("conflict:user", "An account with that e-mail already exists.", {
-      fieldErrors: { email: ["An account with that e-mail already exists."] },
-    });
-  }
-  const user = await User.create({
-    id: generateIdFromEntropySize(10),
-    shopId,
-    email: normalisedEmail,
-    name: name.trim(),
-    role,
-    passwordHash: await hashPassword(password),
-    active: true,
-  });
-  return toShopUser(user.get({ plain: true }));
 }
 
 export async function updateUser({

@@ -21,6 +21,7 @@ let harbourlinePhotoId = 0;
 let harbourlineProposalId = 0;
 let ridgebackToken = "";
 const MALFORMED_TOKEN = "not-a-token";
+let harbourlineInvitationId = 0;
 
 test.beforeAll(async () => {
   clients.set("anonymous", await apiClient());
@@ -61,6 +62,10 @@ test.beforeAll(async () => {
     await ridgeback.post(`/api/cases/${ridgebackCaseId}/share-links`, { data: {} })
   ).json();
   ridgebackToken = tokenOf(ridgebackLink.link.url);
+  const invited = await clients.get("owner")!.post("/api/invitations", {
+    data: { email: "access-table@harbourline.test", name: "Access Table", role: "apprentice" },
+  });
+  harbourlineInvitationId = (await invited.json()).invitation.id;
 });
 
 test.afterAll(async () => {
@@ -171,14 +176,77 @@ const table: {
     },
   },
   {
-    name: "POST /api/users (malformed)",
-    call: (c) => c.post("/api/users", { data: { email: "nope", role: "boss" } }),
+    name: "POST /api/users (people join by invitation instead)",
+    call: (c) => c.post("/api/users", { data: { email: "someone@harbourline.test" } }),
+    expect: {
+      anonymous: 405,
+      owner: 405,
+      senior: 405,
+      technician: 405,
+      apprentice: 405,
+      otherShopOwner: 405,
+    },
+  },
+  {
+    name: "GET /api/invitations",
+    call: (c) => c.get("/api/invitations"),
+    expect: {
+      anonymous: 401,
+      owner: 200,
+      senior: 403,
+      technician: 403,
+      apprentice: 403,
+      otherShopOwner: 200,
+    },
+  },
+  {
+    name: "POST /api/invitations (malformed)",
+    call: (c) => c.post("/api/invitations", { data: { email: "nope", role: "boss" } }),
     expect: {
       anonymous: 401,
       owner: 400,
       senior: 403,
       technician: 403,
       apprentice: 403,
+      otherShopOwner: 400,
+    },
+  },
+  {
+    name: "DELETE /api/invitations/:id (a Harbourline invitation)",
+    call: (c) => c.delete(`/api/invitations/${harbourlineInvitationId}`),
+    expect: {
+      anonymous: 401,
+      owner: 200,
+      senior: 403,
+      technician: 403,
+      apprentice: 403,
+      otherShopOwner: 404,
+    },
+  },
+  {
+    name: "POST /api/invitations/accept (a link never issued; public)",
+    call: (c) =>
+      c.post("/api/invitations/accept", {
+        data: { token: "A".repeat(43), name: "Nobody", password: "long-enough-password" },
+      }),
+    expect: {
+      anonymous: 404,
+      owner: 404,
+      senior: 404,
+      technician: 404,
+      apprentice: 404,
+      otherShopOwner: 404,
+    },
+  },
+  {
+    name: "POST /api/invitations/accept (malformed)",
+    call: (c) => c.post("/api/invitations/accept", { data: { token: "short", password: "x" } }),
+    expect: {
+      anonymous: 400,
+      owner: 400,
+      senior: 400,
+      technician: 400,
+      apprentice: 400,
       otherShopOwner: 400,
     },
   },

@@ -27,6 +27,7 @@ const appTables = [
   "sign_off",
   "spec_entry",
   "user",
+  "user_invitation",
   "user_session",
   "vehicle",
 ];

@@ -4,30 +4,38 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
-import { createUserSchema, type CreateUserInput } from "@/lib/contracts/users";
+import {
+  INVITATION_LIFETIME_DAYS,
+  inviteUserSchema,
+  type InvitationSentDto,
+  type InviteUserInput,
+} from "@/lib/contracts/invitations";
 import { ROLE_LABELS, ROLES } from "@/lib/auth/roles";
 import { apiFetch, ApiError } from "@/lib/queries/api-fetch";
-import { userKeys } from "@/lib/queries/users";
+import { invitationKeys } from "@/lib/queries/users";
 import { TextField } from "@/components/ui/text-field";
 
-export function AddPersonForm() {
+export function InvitePersonForm() {
   const queryClient = useQueryClient();
   const [done, setDone] = useState<string | null>(null);
-  const form = useForm<CreateUserInput>({
-    resolver: zodResolver(createUserSchema),
-    defaultValues: { email: "", name: "", role: "technician", password: "" },
+  const form = useForm<InviteUserInput>({
+    resolver: zodResolver(inviteUserSchema),
+    defaultValues: { email: "", name: "", role: "technician" },
   });
-  const create = useMutation({
-    mutationFn: (body: CreateUserInput) => apiFetch("/api/users", { method: "POST", body }),
-    onSuccess: (_data, body) => {
-      setDone(`${body.name} can now sign in.`);
-      form.reset({ email: "", name: "", role: body.role, password: "" });
-      return queryClient.invalidateQueries({ queryKey: userKeys.all });
+  const invite = useMutation({
+    mutationFn: (body: InviteUserInput) =>
+      apiFetch<InvitationSentDto>("/api/invitations", { method: "POST", body }),
+    onSuccess: (sent, body) => {
+      setDone(
+        `${sent.message} ${body.name} chooses a password through the link in it, within ${INVITATION_LIFETIME_DAYS} days.`,
+      );
+      form.reset({ email: "", name: "", role: body.role });
+      return queryClient.invalidateQueries({ queryKey: invitationKeys.all });
     },
     onError: (error) => {
       if (error instanceof ApiError) {
         for (const [field, messages] of Object.entries(error.fieldErrors ?? {})) {
-          form.setError(field as keyof CreateUserInput, { message: messages[0] });
+          form.setError(field as keyof InviteUserInput, { message: messages[0] });
         }
         form.setError("root", { message: error.message });
       } else {
@@ -38,16 +46,17 @@ export function AddPersonForm() {
   const { errors } = form.formState;
 
   return (
-    <section aria-labelledby="add-person-heading" className="card">
-      <h2 id="add-person-heading" className="mb-3 text-xl font-bold">
-        Add a person
+    <section aria-labelledby="invite-person-heading" className="card">
+      <h2 id="invite-person-heading" className="mb-1 text-xl font-bold">
+        Invite a person
       </h2>
+      <p className="mb-3 text-ink-soft">They get an e-mail with a link to choose their own password.</p>
       <form
         noValidate
         className="grid gap-4 sm:grid-cols-2"
         onSubmit={form.handleSubmit((values) => {
           setDone(null);
-          create.mutate(values);
+          invite.mutate(values);
         })}
       >
         <TextField label="Name" error={errors.name?.message} {...form.register("name")} autoComplete="off" />
@@ -70,14 +79,6 @@ export function AddPersonForm() {
             ))}
           </select>
         </div>
-        <TextField
-          label="First password"
-          type="password"
-          autoComplete="new-password"
-          hint="At least 12 characters; they can change it later."
-          error={errors.password?.message}
-          {...form.register("password")}
-        />
         {errors.root && (
           <p role="alert" className="field-error sm:col-span-2">
             {errors.root.message}
@@ -89,8 +90,8 @@ export function AddPersonForm() {
           </p>
         )}
         <div className="sm:col-span-2">
-          <button type="submit" className="btn-primary" disabled={create.isPending}>
-            {create.isPending ? "Adding…" : "Add person"}
+          <button type="submit" className="btn-primary" disabled={invite.isPending}>
+            {invite.isPending ? "Sending…" : "Send invitation"}
           </button>
         </div>
       </form>
