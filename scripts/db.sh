@@ -1,7 +1,9 @@
 #!/usr/bin/env bash
 # A private MariaDB for Chillwright: its own data folder, socket and loopback port.
 # Usage: scripts/db.sh up|down|status|url
-# Settings (env): DB_DIR, DB_PORT, DB_NAME, DB_USER, DB_PASSWORD, DB_START_TIMEOUT_S.
+#        scripts/db.sh backup [FILE]   consistent dump of DB_NAME (gzip); prints the file's path
+#        scripts/db.sh restore FILE    replaces DB_NAME with the dump's contents
+# Settings (env): DB_DIR, DB_PORT, DB_NAME, DB_USER, DB_PASSWORD, DB_START_TIMEOUT_S, BACKUP_DIR.
 set -euo pipefail
 
 REPO="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
@@ -11,6 +13,7 @@ DB_NAME="${DB_NAME:-chillwright}"
 DB_USER="${DB_USER:-chillwright}"
 DB_PASSWORD="${DB_PASSWORD:-chillwright-dev}"
 DB_START_TIMEOUT_S="${DB_START_TIMEOUT_S:-60}"
+BACKUP_DIR="${BACKUP_DIR:-$REPO/.data/backups}"
 export PATH="$PATH:/usr/sbin:/sbin"
 
 SOCK="$DB_DIR/sock"
@@ -163,10 +166,66 @@ urlencode() {
 
 cmd_url() { echo "mariadb://$(urlencode "$DB_USER"):$(urlencode "$DB_PASSWORD")@127.0.0.1:$DB_PORT/$DB_NAME"; }
 
+ensure_client_tools() {
+  command -v mariadb-dump >/dev/null 2>&1 && return 0
+  [[ "$(id -u)" == 0 ]] || die "mariadb-dump is not installed; run as root (or apt-get install mariadb-client) first"
+  say "installing mariadb-client with apt-get"
+  apt-get update
+  DEBIAN_FRONTEND=noninteractive apt-get install -y mariadb-client
+}
+
+# A dump is whole only when mariadb-dump reached its closing comment.
+dump_is_complete() { gzip -dc "$1" 2>/dev/null | tail -n 1 | grep -q '^-- Dump completed'; }
+
+# One transaction's snapshot of every InnoDB table: the app may keep writing meanwhile.
+cmd_backup() {
+  is_up || die "the database is not running (scripts/db.sh up first)"
+  ensure_client_tools
+  local file="${1:-$BACKUP_DIR/$DB_NAME-$(date -u +%Y%m%dT%H%M%SZ).sql.gz}"
+  mkdir -p "$(dirname "$file")"
+  local partial="$file.partial"
+  if ! ( umask 077
+    mariadb-dump --no-defaults --socket="$SOCK" -uroot --single-transaction --quick --hex-blob \
+      --routines --triggers --default-character-set=utf8mb4 "$DB_NAME" | gzip -6 >"$partial" ) \
+    || ! dump_is_complete "$partial"; then
+    rm -f "$partial"
+    die "the dump of $DB_NAME did not complete"
+  fi
+  mv "$partial" "$file"
+  say "backed up $DB_NAME to $file ($(du -h "$file" | cut -f1))"
+  echo "$file"
+}
+
+# Drops DB_NAME and loads the dump into a new, empty database of the same name. The file is
+# checked first, so a truncated or foreign file never costs the data that is there.
+cmd_restore() {
+  local file="${1:-}"
+  [[ -n "$file" ]] || die "usage: $0 restore FILE (a .sql.gz made by $0 backup)"
+  [[ -r "$file" ]] || die "cannot read $file"
+  gzip -t "$file" 2>/dev/null || die "$file is not a gzip file, or it is damaged"
+  local header
+  header="$(gzip -dc "$file" 2>/dev/null | head -n 5 || true)"
+  grep -q '^-- MariaDB dump' <<<"$header" || die "$file is not a mariadb-dump file"
+  dump_is_complete "$file" || die "$file is incomplete (no closing line); nothing was changed"
+  is_up || die "the database is not running (scripts/db.sh up first)"
+  say "replacing $DB_NAME with $file; stop the app first so nobody writes meanwhile"
+  root_sql <<SQL
+DROP DATABASE IF EXISTS \`$DB_NAME\`;
+CREATE DATABASE \`$DB_NAME\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;
+SQL
+  gzip -dc "$file" | mariadb --no-defaults --socket="$SOCK" -uroot --default-character-set=utf8mb4 "$DB_NAME" \
+    || die "loading $file failed part way; run restore again with a good file"
+  # Database-level grants outlive DROP DATABASE; this keeps a restore onto a new server working too.
+  create_database_and_user
+  say "restored $DB_NAME from $file"
+}
+
 case "${1:-}" in
   up) cmd_up ;;
   down) cmd_down ;;
   status) cmd_status ;;
   url) cmd_url ;;
-  *) echo "usage: $0 up|down|status|url" >&2; exit 2 ;;
+  backup) cmd_backup "${2:-}" ;;
+  restore) cmd_restore "${2:-}" ;;
+  *) echo "usage: $0 up|down|status|url|backup [FILE]|restore FILE" >&2; exit 2 ;;
 esac
