@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { closeMysqlPool } from "@/lib/db/pool";
 import { closeSequelize } from "@/lib/db/sequelize";
-import { newUserId } from "@/lib/demo/seed-demo";
+import { newUserId } from "@/scripts/demo/seed-demo";
 import { isAppError, type AppError } from "@/lib/errors";
 import { acceptInvitation, inviteUser, viewInvitation, withdrawInvitation } from "@/lib/server/invitations";
 import { signInWithPassword } from "@/lib/server/sign-in";

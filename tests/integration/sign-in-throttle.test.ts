@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { hashPassword } from "@/lib/auth/password";
 import { closeMysqlPool } from "@/lib/db/pool";
 import { closeSequelize } from "@/lib/db/sequelize";
-import { newUserId } from "@/lib/demo/seed-demo";
+import { newUserId } from "@/scripts/demo/seed-demo";
 import { isAppError } from "@/lib/errors";
 import { signInWithPassword } from "@/lib/server/sign-in";
 import { ACCOUNT_FREE_ATTEMPTS, CLIENT_FREE_ATTEMPTS, PAUSE_SCHEDULE_S } from "@/lib/server/sign-in-throttle";

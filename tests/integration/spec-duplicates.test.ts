@@ -1,8 +1,8 @@
 import { afterAll, describe, expect, it } from "vitest";
 import { closeSequelize } from "@/lib/db/sequelize";
 import { isAppError, type AppError } from "@/lib/errors";
-import { createSpec, listSpecs, updateSpec, type SpecEntryDto } from "@/lib/server/specs";
-import type { SpecInput } from "@/app/api/specs/schema";
+import { createSpec, listSpecs, updateSpec } from "@/lib/server/specs";
+import type { SpecEntryDto, SpecInput } from "@/lib/contracts/specs";
 import { getModels } from "@/models";
 import { uniqueName } from "./helpers";
 
