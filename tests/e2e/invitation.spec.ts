@@ -49,5 +49,7 @@ test("an owner invites a technician, who sets a password from the mailed link an
   await phone.close();
   await page.reload();
   await expect(page.getByRole("region", { name: "The shop's people" })).toContainText(address);
-  await expect(page.getByRole("region", { name: "Open invitations" })).toHaveCount(0);
+  // Other specs may leave invitations of their own open; this address must not be among them.
+  // Other specs may leave invitations of their own open: this address shows once, as one of the people.
+  await expect(page.getByText(address)).toHaveCount(1);
 });
