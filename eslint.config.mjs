@@ -19,6 +19,8 @@ const PURE_LIB = [
   "credits",
   "owner",
   "repairs",
+  "cases",
+  "cautions",
 ];
 const PURE_LIB_PATHS = [
   ...PURE_LIB.map((folder) => `./lib/${folder}`),

@@ -10,10 +10,10 @@ import {
 import type { Customer } from "./customer";
 import type { Shop } from "./shop";
 import type { User } from "./user";
+import { CASE_STATUSES, type CaseStatus } from "@/lib/cases/statuses";
 import type { Vehicle } from "./vehicle";
 
-export const caseStatuses = ["draft", "awaiting_signoff", "signed_off", "sent_back", "closed"] as const;
-export type CaseStatus = (typeof caseStatuses)[number];
+export type { CaseStatus };
 
 /** A JSON value as stored in the answers, computed and findings columns. */
 export type JsonValue = string | number | boolean | null | JsonValue[] | { [key: string]: JsonValue };
@@ -47,7 +47,7 @@ export class Case extends Model<InferAttributes<Case>, InferCreationAttributes<C
     Case.init(
       {
         id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
-        status: { type: DataTypes.ENUM(...caseStatuses), allowNull: false, defaultValue: "draft" },
+        status: { type: DataTypes.ENUM(...CASE_STATUSES), allowNull: false, defaultValue: "draft" },
         complaint: { type: DataTypes.TEXT, allowNull: false },
         symptomTags: { type: DataTypes.JSON, allowNull: false, defaultValue: [] },
         interviewStep: { type: DataTypes.STRING(40), allowNull: true },

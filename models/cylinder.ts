@@ -7,8 +7,8 @@ import {
   type InferCreationAttributes,
   type Sequelize,
 } from "sequelize";
+import { REFRIGERANT_IDS, type RefrigerantId } from "@/lib/refrigerants/catalog";
 import type { Shop } from "./shop";
-import { vehicleRefrigerants, type VehicleRefrigerant } from "./vehicle";
 
 export const cylinderKinds = ["recovery", "virgin", "recycled"] as const;
 export type CylinderKind = (typeof cylinderKinds)[number];
@@ -19,7 +19,7 @@ export class Cylinder extends Model<InferAttributes<Cylinder>, InferCreationAttr
   declare shopId: ForeignKey<Shop["id"]>;
   declare label: string;
   declare serial: CreationOptional<string | null>;
-  declare refrigerant: VehicleRefrigerant;
+  declare refrigerant: RefrigerantId;
   declare kind: CylinderKind;
   declare tareG: number;
   declare capacityG: number;
@@ -34,7 +34,7 @@ export class Cylinder extends Model<InferAttributes<Cylinder>, InferCreationAttr
         id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
         label: { type: DataTypes.STRING(60), allowNull: false },
         serial: { type: DataTypes.STRING(60), allowNull: true },
-        refrigerant: { type: DataTypes.ENUM(...vehicleRefrigerants), allowNull: false },
+        refrigerant: { type: DataTypes.ENUM(...REFRIGERANT_IDS), allowNull: false },
         kind: { type: DataTypes.ENUM(...cylinderKinds), allowNull: false },
         tareG: { type: DataTypes.INTEGER, allowNull: false },
         capacityG: { type: DataTypes.INTEGER, allowNull: false },

@@ -31,7 +31,7 @@ export type { UserRole } from "./user";
 export type { ShopUnits } from "./shop";
 export type { ReadingSetKind } from "./reading-set";
 export type { SignOffVerdict } from "./sign-off";
-export type { ExpansionDevice, VehicleRefrigerant } from "./vehicle";
+export type { ExpansionDevice } from "./vehicle";
 
 // Every model, once: initialised in this order and handed out by getModels().
 const MODELS = {

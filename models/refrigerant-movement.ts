@@ -7,9 +7,9 @@ import {
   type InferCreationAttributes,
   type Sequelize,
 } from "sequelize";
+import { REFRIGERANT_IDS, type RefrigerantId } from "@/lib/refrigerants/catalog";
 import { MOVEMENT_TYPES, type MovementType } from "@/lib/service/ledger";
 import type { Shop } from "./shop";
-import { vehicleRefrigerants, type VehicleRefrigerant } from "./vehicle";
 
 const appendOnly = () => {
   throw new Error("refrigerant_movement rows are append-only: post a correction instead");
@@ -27,7 +27,7 @@ export class RefrigerantMovement extends Model<
   declare serviceRecordId: CreationOptional<number | null>;
   declare technicianId: string;
   declare type: MovementType;
-  declare refrigerant: VehicleRefrigerant;
+  declare refrigerant: RefrigerantId;
   declare massG: number;
   declare occurredAt: Date;
   declare reversesId: CreationOptional<number | null>;
@@ -44,7 +44,7 @@ export class RefrigerantMovement extends Model<
         serviceRecordId: { type: DataTypes.INTEGER, allowNull: true },
         technicianId: { type: DataTypes.STRING(40), allowNull: false },
         type: { type: DataTypes.ENUM(...MOVEMENT_TYPES), allowNull: false },
-        refrigerant: { type: DataTypes.ENUM(...vehicleRefrigerants), allowNull: false },
+        refrigerant: { type: DataTypes.ENUM(...REFRIGERANT_IDS), allowNull: false },
         massG: { type: DataTypes.INTEGER, allowNull: false },
         occurredAt: { type: DataTypes.DATE(3), allowNull: false },
         reversesId: { type: DataTypes.INTEGER, allowNull: true },

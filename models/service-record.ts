@@ -7,10 +7,10 @@ import {
   type InferCreationAttributes,
   type Sequelize,
 } from "sequelize";
+import { REFRIGERANT_IDS, type RefrigerantId } from "@/lib/refrigerants/catalog";
 import type { Case } from "./case";
 import type { Shop } from "./shop";
 import type { User } from "./user";
-import { vehicleRefrigerants, type VehicleRefrigerant } from "./vehicle";
 
 export type PartReplacedJson = { part: string; count: number; measuredMl: number | null };
 
@@ -28,7 +28,7 @@ export class ServiceRecord extends Model<
   declare technicianId: ForeignKey<User["id"]>;
   declare version: CreationOptional<number>;
   declare step: CreationOptional<string>;
-  declare refrigerant: VehicleRefrigerant;
+  declare refrigerant: RefrigerantId;
   declare specEntryId: Opt<number>;
   declare labelChargeG: Opt<number>;
   declare purityPct: Opt<number>;
@@ -76,7 +76,7 @@ export class ServiceRecord extends Model<
         id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
         version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
         step: { type: DataTypes.STRING(20), allowNull: false, defaultValue: "identify" },
-        refrigerant: { type: DataTypes.ENUM(...vehicleRefrigerants), allowNull: false },
+        refrigerant: { type: DataTypes.ENUM(...REFRIGERANT_IDS), allowNull: false },
         specEntryId: int(),
         labelChargeG: int(),
         purityPct: decimal(5, 2, "purityPct"),

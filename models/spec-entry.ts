@@ -7,9 +7,9 @@ import {
   type InferCreationAttributes,
   type Sequelize,
 } from "sequelize";
+import { REFRIGERANT_IDS, type RefrigerantId } from "@/lib/refrigerants/catalog";
 import { specMatchKey } from "@/lib/specs/schema";
 import type { Shop } from "./shop";
-import { vehicleRefrigerants, type VehicleRefrigerant } from "./vehicle";
 
 /** One row of a shop's spec table: what a vehicle variant carries (grams, millilitres). */
 export class SpecEntry extends Model<InferAttributes<SpecEntry>, InferCreationAttributes<SpecEntry>> {
@@ -21,7 +21,7 @@ export class SpecEntry extends Model<InferAttributes<SpecEntry>, InferCreationAt
   declare model: string;
   declare variant: CreationOptional<string>;
   declare rearAc: boolean;
-  declare refrigerant: VehicleRefrigerant;
+  declare refrigerant: RefrigerantId;
   declare labelChargeG: number;
   declare oilType: string;
   declare totalOilMl: CreationOptional<number | null>;
@@ -40,7 +40,7 @@ export class SpecEntry extends Model<InferAttributes<SpecEntry>, InferCreationAt
         model: { type: DataTypes.STRING(80), allowNull: false },
         variant: { type: DataTypes.STRING(120), allowNull: false, defaultValue: "" },
         rearAc: { type: DataTypes.BOOLEAN, allowNull: false },
-        refrigerant: { type: DataTypes.ENUM(...vehicleRefrigerants), allowNull: false },
+        refrigerant: { type: DataTypes.ENUM(...REFRIGERANT_IDS), allowNull: false },
         labelChargeG: { type: DataTypes.INTEGER, allowNull: false },
         oilType: { type: DataTypes.STRING(60), allowNull: false },
         totalOilMl: { type: DataTypes.INTEGER, allowNull: true },

@@ -8,12 +8,11 @@ import {
   type Sequelize,
 } from "sequelize";
 import type { Customer } from "./customer";
+import { REFRIGERANT_IDS, type RefrigerantId } from "@/lib/refrigerants/catalog";
+import { EXPANSION_DEVICE_IDS, type ExpansionDevice } from "@/lib/vehicles/expansion-devices";
 import type { Shop } from "./shop";
 
-export const vehicleRefrigerants = ["R-134a", "R-1234yf", "R-744", "R-12"] as const;
-export type VehicleRefrigerant = (typeof vehicleRefrigerants)[number];
-export const expansionDevices = ["orifice_tube", "txv"] as const;
-export type ExpansionDevice = (typeof expansionDevices)[number];
+export type { ExpansionDevice };
 
 export class Vehicle extends Model<InferAttributes<Vehicle>, InferCreationAttributes<Vehicle>> {
   declare id: CreationOptional<number>;
@@ -24,7 +23,7 @@ export class Vehicle extends Model<InferAttributes<Vehicle>, InferCreationAttrib
   declare model: string;
   declare engine: CreationOptional<string | null>;
   declare vin: CreationOptional<string | null>;
-  declare refrigerant: VehicleRefrigerant;
+  declare refrigerant: RefrigerantId;
   declare expansionDevice: ExpansionDevice;
   declare electricCompressor: CreationOptional<boolean>;
   declare labelChargeG: CreationOptional<number | null>;
@@ -41,8 +40,8 @@ export class Vehicle extends Model<InferAttributes<Vehicle>, InferCreationAttrib
         model: { type: DataTypes.STRING(80), allowNull: false },
         engine: { type: DataTypes.STRING(80), allowNull: true },
         vin: { type: DataTypes.STRING(17), allowNull: true },
-        refrigerant: { type: DataTypes.ENUM(...vehicleRefrigerants), allowNull: false },
-        expansionDevice: { type: DataTypes.ENUM(...expansionDevices), allowNull: false },
+        refrigerant: { type: DataTypes.ENUM(...REFRIGERANT_IDS), allowNull: false },
+        expansionDevice: { type: DataTypes.ENUM(...EXPANSION_DEVICE_IDS), allowNull: false },
         electricCompressor: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         labelChargeG: { type: DataTypes.INTEGER, allowNull: true },
         oilType: { type: DataTypes.STRING(60), allowNull: true },

@@ -8,9 +8,8 @@ import { Check } from "lucide-react";
 import type { CreateCaseInput, CreateCaseResponse, NewVehicleInput } from "@/lib/contracts/cases";
 import { apiFetch, ApiError } from "@/lib/queries/api-fetch";
 import { vehicleChoicesQuery } from "@/lib/queries/vehicles";
+import { EXPANSION_DEVICE_LABELS } from "@/lib/vehicles/expansion-devices";
 import { NewVehicleFields, type NewVehicleDraft } from "./new-vehicle-fields";
-
-const DEVICE_LABEL = { orifice_tube: "orifice tube", txv: "TXV" } as const;
 
 export function NewCaseForm() {
   const router = useRouter();
@@ -76,7 +75,7 @@ export function NewCaseForm() {
                 <span className="flex-1">
                   <span className="block font-bold">{v.description}</span>
                   <span className="block text-ink-soft">
-                    {v.customer} · {v.refrigerant} · {DEVICE_LABEL[v.expansionDevice]}
+                    {v.customer} · {v.refrigerant} · {EXPANSION_DEVICE_LABELS[v.expansionDevice]}
                     {v.electricCompressor ? " · electric compressor" : ""}
                   </span>
                 </span>

@@ -1,6 +1,8 @@
 "use client";
 
 import { useEffect, useState } from "react";
+import { SERVICE_REFRIGERANT_OPTIONS } from "@/lib/refrigerants/catalog";
+import { EXPANSION_DEVICE_OPTIONS } from "@/lib/vehicles/expansion-devices";
 import { normaliseVin, vinCheckDigitMatches, vinFormatError } from "@/lib/vehicles/vin";
 
 export interface NewVehicleDraft {
@@ -108,10 +110,11 @@ export function NewVehicleFields({
           value={f.refrigerant}
           onChange={(e) => setF({ ...f, refrigerant: e.target.value })}
         >
-          <option value="R-1234yf">R-1234yf</option>
-          <option value="R-134a">R-134a</option>
-          <option value="R-744">R-744 (CO₂)</option>
-          <option value="R-12">R-12</option>
+          {SERVICE_REFRIGERANT_OPTIONS.map((o) => (
+            <option key={o.value} value={o.value}>
+              {o.label}
+            </option>
+          ))}
         </select>
       </div>
       <div>
@@ -124,8 +127,11 @@ export function NewVehicleFields({
           value={f.expansionDevice}
           onChange={(e) => setF({ ...f, expansionDevice: e.target.value })}
         >
-          <option value="txv">TXV with receiver-drier</option>
-          <option value="orifice_tube">Orifice tube with accumulator</option>
+          {EXPANSION_DEVICE_OPTIONS.map((o) => (
+            <option key={o.value} value={o.value}>
+              {o.label}
+            </option>
+          ))}
         </select>
       </div>
       <label className="flex min-h-glove items-center gap-3 sm:col-span-2">

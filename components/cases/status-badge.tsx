@@ -1,13 +1,5 @@
 import { clsx } from "clsx";
-import type { CaseStatus } from "@/lib/contracts/cases";
-
-export const STATUS_LABELS: Record<CaseStatus, string> = {
-  draft: "In progress",
-  awaiting_signoff: "Waiting for sign-off",
-  signed_off: "Signed off",
-  sent_back: "Sent back",
-  closed: "Closed",
-};
+import { CASE_STATUS_LABELS, type CaseStatus } from "@/lib/cases/statuses";
 
 const STYLES: Record<CaseStatus, string> = {
   draft: "border-ink-muted bg-paper-sunk text-ink",
@@ -22,7 +14,7 @@ export function StatusBadge({ status }: { status: CaseStatus }) {
     <span
       className={clsx("inline-block rounded-full border-2 px-2 py-0.5 text-sm font-bold", STYLES[status])}
     >
-      {STATUS_LABELS[status]}
+      {CASE_STATUS_LABELS[status]}
     </span>
   );
 }

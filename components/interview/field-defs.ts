@@ -14,18 +14,13 @@ export type FieldDef =
       name: string;
       label: string;
       kind: "choice";
-      options: ChoiceOption[];
+      options: readonly ChoiceOption[];
       optional?: boolean;
       hint?: string;
     }
   | { name: string; label: string; kind: "yesno"; hint?: string }
-  | { name: string; label: string; kind: "multi"; options: ChoiceOption[]; hint?: string };
+  | { name: string; label: string; kind: "multi"; options: readonly ChoiceOption[]; hint?: string };
 
 export type FormValues = Record<string, string | string[]>;
-
-export interface StepCopy {
-  title: string;
-  lead: string;
-}
 
 export type GroupFields = Record<GroupId, FieldDef[]>;

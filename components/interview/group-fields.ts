@@ -1,3 +1,5 @@
+import { SERVICE_REFRIGERANT_OPTIONS } from "@/lib/refrigerants/catalog";
+import { EXPANSION_DEVICE_OPTIONS } from "@/lib/vehicles/expansion-devices";
 import type { GroupFields } from "./field-defs";
 import { METHOD_OPTIONS, OIL_OPTIONS, PLACE_OPTIONS, SYMPTOM_OPTIONS } from "./labels";
 
@@ -11,20 +13,13 @@ export const GROUP_FIELDS: GroupFields = {
       name: "refrigerant",
       label: "Refrigerant on the label",
       kind: "choice",
-      options: [
-        { value: "R-134a", label: "R-134a" },
-        { value: "R-1234yf", label: "R-1234yf" },
-        { value: "R-744", label: "R-744 (CO₂)" },
-      ],
+      options: SERVICE_REFRIGERANT_OPTIONS,
     },
     {
       name: "expansionDevice",
       label: "Expansion device",
       kind: "choice",
-      options: [
-        { value: "orifice_tube", label: "Orifice tube + accumulator" },
-        { value: "txv", label: "TXV + receiver-drier" },
-      ],
+      options: EXPANSION_DEVICE_OPTIONS,
     },
     { name: "electricCompressor", label: "Electric (high-voltage) compressor?", kind: "yesno" },
     {

@@ -5,6 +5,7 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import type { CreateCylinderInput } from "@/lib/contracts/cylinders";
 import { apiFetch, ApiError, saveErrorOf } from "@/lib/queries/api-fetch";
 import { ledgerKeys } from "@/lib/queries/ledger";
+import { SERVICE_REFRIGERANT_OPTIONS } from "@/lib/refrigerants/catalog";
 import { readMassG } from "@/lib/service/entry";
 import type { MassUnit } from "@/lib/units";
 import { EntryInput } from "@/components/service/entry-input";
@@ -118,8 +119,10 @@ export function AddCylinderForm({ massUnit }: { massUnit: MassUnit }) {
             value={form.refrigerant}
             onChange={(e) => set("refrigerant")(e.target.value)}
           >
-            {["R-134a", "R-1234yf", "R-744", "R-12"].map((r) => (
-              <option key={r}>{r}</option>
+            {SERVICE_REFRIGERANT_OPTIONS.map((o) => (
+              <option key={o.value} value={o.value}>
+                {o.label}
+              </option>
             ))}
           </select>
         </div>

@@ -5,6 +5,7 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import type { SpecEntryDto, SpecInput } from "@/lib/contracts/specs";
 import { apiFetch, saveErrorOf } from "@/lib/queries/api-fetch";
 import { specKeys } from "@/lib/queries/specs";
+import { SERVICE_REFRIGERANT_OPTIONS } from "@/lib/refrigerants/catalog";
 import { readMassG, readVolumeMl } from "@/lib/service/entry";
 import { type MassUnit, type VolumeUnit, formatMass, formatVolume } from "@/lib/units";
 import { EntryInput } from "@/components/service/entry-input";
@@ -151,8 +152,10 @@ export function SpecForm({
           value={form.refrigerant}
           onChange={(e) => set("refrigerant")(e.target.value)}
         >
-          {["R-134a", "R-1234yf", "R-744", "R-12"].map((r) => (
-            <option key={r}>{r}</option>
+          {SERVICE_REFRIGERANT_OPTIONS.map((o) => (
+            <option key={o.value} value={o.value}>
+              {o.label}
+            </option>
           ))}
         </select>
       </div>

@@ -1,3 +1,5 @@
+import type { RefrigerantId } from "@/lib/refrigerants/catalog";
+
 /**
  * Published Wagner-form vapour-pressure equations, each with the critical point it was fitted with:
  *   ln(p / pc) = (Tc / T) · Σ nᵢ · θ^tᵢ,   θ = 1 − T / Tc
@@ -5,10 +7,8 @@
  * that equation of state's saturation pressure to the stated deviation, which is far below what a
  * gauge can read.
  */
-export type TableRefrigerantId = "R-134a" | "R-1234yf" | "R-744" | "R-12";
-
 export interface VapourPressureEquation {
-  id: TableRefrigerantId;
+  id: RefrigerantId;
   fileName: string;
   name: string;
   criticalTempK: number;

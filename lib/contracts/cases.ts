@@ -1,7 +1,9 @@
 import { z } from "zod";
+import { CASE_STATUSES, type CaseStatus } from "@/lib/cases/statuses";
+import { SERVICE_REFRIGERANT_IDS } from "@/lib/refrigerants/catalog";
+import { EXPANSION_DEVICE_IDS } from "@/lib/vehicles/expansion-devices";
 
-export const CASE_STATUSES = ["draft", "awaiting_signoff", "signed_off", "sent_back", "closed"] as const;
-export type CaseStatus = (typeof CASE_STATUSES)[number];
+export { CASE_STATUSES, type CaseStatus };
 
 export const caseListQuerySchema = z.object({
   status: z.enum(CASE_STATUSES, { message: "Unknown case status." }).optional(),
@@ -14,8 +16,6 @@ export const caseParamsSchema = z.object({
     .positive("A case id is positive."),
 });
 
-const REFRIGERANTS = ["R-134a", "R-1234yf", "R-744", "R-12"] as const;
-const DEVICES = ["orifice_tube", "txv"] as const;
 const thisYear = new Date().getUTCFullYear();
 
 export const newCustomerSchema = z.object({
@@ -59,8 +59,10 @@ export const newVehicleSchema = z.object({
     )
     .optional()
     .transform((v) => (v ? v : undefined)),
-  refrigerant: z.enum(REFRIGERANTS, { message: "Choose the refrigerant on the under-hood label." }),
-  expansionDevice: z.enum(DEVICES, { message: "Choose orifice tube or TXV." }),
+  refrigerant: z.enum(SERVICE_REFRIGERANT_IDS, {
+    message: "Choose the refrigerant on the under-hood label.",
+  }),
+  expansionDevice: z.enum(EXPANSION_DEVICE_IDS, { message: "Choose orifice tube or TXV." }),
   electricCompressor: z.boolean().default(false),
   labelChargeG: z
     .number()

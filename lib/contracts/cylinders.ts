@@ -1,7 +1,6 @@
 import { z } from "zod";
-import type { RefrigerantId } from "@/lib/refrigerants";
+import { type RefrigerantId, SERVICE_REFRIGERANT_IDS } from "@/lib/refrigerants/catalog";
 
-const REFRIGERANTS = ["R-134a", "R-1234yf", "R-744", "R-12"] as const;
 export const CYLINDER_KINDS = ["recovery", "virgin", "recycled"] as const;
 export type CylinderKind = (typeof CYLINDER_KINDS)[number];
 
@@ -25,7 +24,7 @@ export const createCylinderSchema = z
       .max(60, "At most 60 characters.")
       .optional()
       .or(z.literal("").transform(() => undefined)),
-    refrigerant: z.enum(REFRIGERANTS, { message: "Choose the refrigerant this cylinder holds." }),
+    refrigerant: z.enum(SERVICE_REFRIGERANT_IDS, { message: "Choose the refrigerant this cylinder holds." }),
     kind: z.enum(CYLINDER_KINDS, { message: "Choose recovery, virgin or recycled." }),
     tareG: z
       .number({ message: "Enter the tare weight stamped on the cylinder." })

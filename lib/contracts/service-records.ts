@@ -1,5 +1,6 @@
 import { z } from "zod";
 import type { RefrigerantId } from "@/lib/refrigerants";
+import type { ExpansionDevice } from "@/lib/vehicles/expansion-devices";
 import { REPLACED_PART_IDS } from "@/lib/service/oil";
 
 export const SERVICE_STEPS = ["identify", "recovery", "evacuation", "oil", "recharge", "final"] as const;
@@ -112,7 +113,7 @@ export interface ServiceCaseContext {
   year: number | null;
   engine: string | null;
   refrigerant: RefrigerantId | null;
-  expansionDevice: "orifice_tube" | "txv" | null;
+  expansionDevice: ExpansionDevice | null;
   electricCompressor: boolean;
   labelChargeG: number | null;
   oilType: string | null;

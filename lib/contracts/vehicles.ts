@@ -1,4 +1,5 @@
 import { z } from "zod";
+import type { ExpansionDevice } from "@/lib/vehicles/expansion-devices";
 
 export const vehicleListQuerySchema = z.object({
   q: z.string().max(80, "Search with fewer than 80 characters.").optional(),
@@ -11,7 +12,7 @@ export interface VehicleChoice {
   customer: string;
   description: string;
   refrigerant: string;
-  expansionDevice: "orifice_tube" | "txv";
+  expansionDevice: ExpansionDevice;
   electricCompressor: boolean;
   labelChargeG: number | null;
 }

@@ -1,7 +1,10 @@
 import { BEHAVIOUR_SYMPTOM_IDS } from "@/lib/diagnosis/symptoms";
+import { SERVICE_REFRIGERANT_IDS } from "@/lib/refrigerants/catalog";
+import { EXPANSION_DEVICE_IDS } from "@/lib/vehicles/expansion-devices";
 
-export const refrigerantChoices = ["R-134a", "R-1234yf", "R-744"] as const;
-export const expansionDeviceChoices = ["orifice_tube", "txv"] as const;
+/** The refrigerants offered everywhere (lib/refrigerants/catalog.ts says why R-12 is not among them). */
+export const refrigerantChoices = SERVICE_REFRIGERANT_IDS;
+export const expansionDeviceChoices = EXPANSION_DEVICE_IDS;
 export const oilTypeChoices = ["pag", "poe", "pao", "mineral", "other"] as const;
 
 /** The behaviour step asks for these; the rest of the engine's symptom list records next-check results. */

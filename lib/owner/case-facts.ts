@@ -1,4 +1,6 @@
+import { isServiceRefrigerant } from "@/lib/refrigerants/catalog";
 import type { RepairId } from "@/lib/repairs/catalog";
+import { isExpansionDevice } from "@/lib/vehicles/expansion-devices";
 import type { OwnerFacts } from "./facts";
 import type { OwnerUnits } from "./units";
 
@@ -40,11 +42,8 @@ export function ownerFactsFromCase({
   const sr = serviceRecord;
   const facts: OwnerFacts = {
     units,
-    refrigerant:
-      refrigerant === "R-134a" || refrigerant === "R-1234yf" || refrigerant === "R-744"
-        ? refrigerant
-        : undefined,
-    expansionDevice: device === "orifice_tube" || device === "txv" ? device : undefined,
+    refrigerant: isServiceRefrigerant(refrigerant) ? refrigerant : undefined,
+    expansionDevice: isExpansionDevice(device) ? device : undefined,
     electricCompressor: system.electricCompressor === true,
     labelChargeG: num(sr?.labelChargeG) ?? num(system.labelChargeG),
     foundChargeG: num(sr?.recoveredG) ?? (audit.recovered === true ? num(audit.recoveredChargeG) : undefined),

@@ -1,3 +1,5 @@
+import type { ServiceRefrigerantId } from "@/lib/refrigerants/catalog";
+import type { ExpansionDevice } from "@/lib/vehicles/expansion-devices";
 import type { OwnerUnits } from "./units";
 
 /**
@@ -6,8 +8,8 @@ import type { OwnerUnits } from "./units";
  */
 export interface OwnerFacts {
   units: OwnerUnits;
-  refrigerant?: "R-134a" | "R-1234yf" | "R-744";
-  expansionDevice?: "orifice_tube" | "txv";
+  refrigerant?: ServiceRefrigerantId;
+  expansionDevice?: ExpansionDevice;
   electricCompressor?: boolean;
   /** The maker's label charge, g. */
   labelChargeG?: number;

@@ -3,9 +3,48 @@ import r1234yfTable from "@/data/refrigerants/r-1234yf.json";
 import r134aTable from "@/data/refrigerants/r-134a.json";
 import r744Table from "@/data/refrigerants/r-744.json";
 
-export type RefrigerantId = "R-134a" | "R-1234yf" | "R-744" | "R-12";
+/**
+ * The one list of refrigerants (tests/unit/vocabulary.test.ts fails on a second one). REFRIGERANT_IDS
+ * are the refrigerants the bundled saturation tables cover and a stored row may hold;
+ * SERVICE_REFRIGERANT_IDS are the ones Chillwright offers anywhere a refrigerant is chosen: a new
+ * vehicle, a spec-table row or its CSV import, a cylinder, the interview and the findings.
+ *
+ * R-12 is offered nowhere, and this is why:
+ * - the findings engine's grades (expected bands, subcooling and superheat ranges, gauge limits, the
+ *   worked cases) are set and tested for R-134a, R-1234yf and R-744 only, so an R-12 interview would
+ *   end in findings nobody has checked; offering R-12 for a vehicle or a cylinder while the interview
+ *   refused it would tell the technician the product covers a system it does not;
+ * - an R-12 (CFC-12) system is an ozone-depleting one from before the changeover to R-134a in the early
+ *   1990s (from memory). Where servicing it is still allowed, it needs R-12-only recovery equipment and
+ *   its own rules (US 40 CFR Part 82; in the EU, Regulation (EC) No 1005/2009): the shop follows those
+ *   and the vehicle maker's procedure outside this product.
+ * Its saturation table stays: it is checked against its published equation, and a row stored before
+ * this rule still reads.
+ */
+export const REFRIGERANT_IDS = ["R-134a", "R-1234yf", "R-744", "R-12"] as const;
+export type RefrigerantId = (typeof REFRIGERANT_IDS)[number];
 
-export const REFRIGERANT_IDS: readonly RefrigerantId[] = ["R-134a", "R-1234yf", "R-744", "R-12"];
+export const SERVICE_REFRIGERANT_IDS = [
+  "R-134a",
+  "R-1234yf",
+  "R-744",
+] as const satisfies readonly RefrigerantId[];
+export type ServiceRefrigerantId = (typeof SERVICE_REFRIGERANT_IDS)[number];
+
+/** How a refrigerant is named on screen: its ASHRAE Standard 34 designation, CO₂ spelled out for R-744. */
+export const REFRIGERANT_LABELS: Readonly<Record<RefrigerantId, string>> = {
+  "R-134a": "R-134a",
+  "R-1234yf": "R-1234yf",
+  "R-744": "R-744 (CO₂)",
+  "R-12": "R-12",
+};
+
+/** The offered refrigerants as choices, in the order the lists show them. */
+export const SERVICE_REFRIGERANT_OPTIONS: readonly { value: ServiceRefrigerantId; label: string }[] =
+  SERVICE_REFRIGERANT_IDS.map((id) => ({ value: id, label: REFRIGERANT_LABELS[id] }));
+
+/** "R-134a, R-1234yf or R-744": the offered refrigerants in a sentence. */
+export const SERVICE_REFRIGERANTS_IN_WORDS = `${SERVICE_REFRIGERANT_IDS.slice(0, -1).join(", ")} or ${SERVICE_REFRIGERANT_IDS.at(-1)}`;
 
 export interface RefrigerantInfo {
   id: RefrigerantId;
@@ -77,4 +116,9 @@ export function refrigerantInfo(id: RefrigerantId): RefrigerantInfo {
 
 export function isRefrigerantId(value: unknown): value is RefrigerantId {
   return typeof value === "string" && (REFRIGERANT_IDS as readonly string[]).includes(value);
+}
+
+/** One of the refrigerants Chillwright offers (not a legacy one a stored row may still hold). */
+export function isServiceRefrigerant(value: unknown): value is ServiceRefrigerantId {
+  return typeof value === "string" && (SERVICE_REFRIGERANT_IDS as readonly string[]).includes(value);
 }

@@ -4,6 +4,7 @@ import type { User } from "lucia";
 import { getModels, type PartReplacedJson } from "@/models";
 import { AppError } from "@/lib/errors";
 import type { RefrigerantId } from "@/lib/refrigerants";
+import type { ExpansionDevice } from "@/lib/vehicles/expansion-devices";
 import { activeMovements } from "@/lib/service/ledger";
 import { postingsForRecordChange, postingsForServiceRecord } from "@/lib/service/ledger-corrections";
 import { vacuumHoldTest } from "@/lib/service/vacuum";
@@ -67,7 +68,7 @@ export async function getServiceCase({
     model: string;
     engine: string | null;
     refrigerant: RefrigerantId;
-    expansionDevice: "orifice_tube" | "txv";
+    expansionDevice: ExpansionDevice;
     electricCompressor: boolean;
     labelChargeG: number | null;
     oilType: string | null;

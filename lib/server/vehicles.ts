@@ -2,6 +2,7 @@ import "server-only";
 import { Op } from "sequelize";
 import { getModels } from "@/models";
 import type { VehicleChoice } from "@/lib/contracts/vehicles";
+import type { ExpansionDevice } from "@/lib/vehicles/expansion-devices";
 
 /** The shop's vehicles, most recently seen first, optionally filtered by customer, make, model or VIN. */
 export async function listVehicleChoices({
@@ -43,7 +44,7 @@ export async function listVehicleChoices({
       model: string;
       engine: string | null;
       refrigerant: string;
-      expansionDevice: "orifice_tube" | "txv";
+      expansionDevice: ExpansionDevice;
       electricCompressor: boolean | number;
       labelChargeG: number | null;
       Customer: { name: string };

@@ -1,5 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
+import { SERVICE_REFRIGERANT_IDS } from "@/lib/refrigerants/catalog";
 import { specRowsToCsv } from "./export-csv";
 import { parseSpecCsv } from "./parse-csv";
 import type { SpecRow } from "./schema";
@@ -65,7 +66,7 @@ describe("specRowsToCsv", () => {
       model: text,
       variant: fc.oneof(fc.constant(""), text),
       rearAc: fc.boolean(),
-      refrigerant: fc.constantFrom("R-134a", "R-1234yf", "R-744", "R-12"),
+      refrigerant: fc.constantFrom(...SERVICE_REFRIGERANT_IDS),
       labelChargeG: fc.integer({ min: 100, max: 3000 }),
       oilType: text,
       totalOilMl: fc.option(fc.integer({ min: 20, max: 1000 }), { nil: null }),

@@ -112,6 +112,7 @@ describe("parseSpecCsv: bad rows", () => {
     ["2019,2016,Ford,Explorer,,no,R-134a,765,PAG 46,210", "year range reversed (2019 to 2016)"],
     ["201x,2019,Ford,Explorer,,no,R-134a,765,PAG 46,210", 'year_from "201x" is not a four-digit year'],
     ["2016,2019,Ford,Explorer,,no,R-22,765,PAG 46,210", 'unknown refrigerant "R-22"'],
+    ["1990,1993,Ford,Explorer,,no,R-12,765,PAG 46,210", "R-12 is not covered"],
     ["2016,2019,Ford,Explorer,,no,R-134a,50,PAG 46,210", "label charge 50 g is outside 100–3000 g"],
     ["2016,2019,Ford,Explorer,,no,R-134a,3400,PAG 46,210", "label charge 3400 g is outside 100–3000 g"],
     ['2016,2019,Ford,Explorer,,no,R-134a,"1,250",PAG 46,210', "without a thousands separator"],

@@ -1,4 +1,5 @@
 import Papa from "papaparse";
+import { isServiceRefrigerant, SERVICE_REFRIGERANTS_IN_WORDS } from "@/lib/refrigerants/catalog";
 import type { MassUnit, VolumeUnit } from "@/lib/units";
 import {
   cleanCell,
@@ -165,9 +166,12 @@ function readValues(
   if (rearAc === null)
     problems.push(`rear_ac "${get("rearAc")}" should be yes (front and rear A/C) or no (front only)`);
 
-  const refrigerant = parseRefrigerantName(get("refrigerant"));
-  if (!refrigerant)
-    problems.push(`unknown refrigerant "${get("refrigerant")}" (use R-134a, R-1234yf, R-744 or R-12)`);
+  const named = parseRefrigerantName(get("refrigerant"));
+  const refrigerant = isServiceRefrigerant(named) ? named : null;
+  if (!named)
+    problems.push(`unknown refrigerant "${get("refrigerant")}" (use ${SERVICE_REFRIGERANTS_IN_WORDS})`);
+  else if (!refrigerant)
+    problems.push(`${named} is not covered: the spec table takes ${SERVICE_REFRIGERANTS_IN_WORDS}`);
 
   const rowUnits = get("units") ? unitsFromWord(get("units")) : null;
   if (get("units") && !rowUnits)

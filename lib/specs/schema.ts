@@ -1,13 +1,11 @@
 import { z } from "zod";
-import { REFRIGERANT_IDS, type RefrigerantId } from "@/lib/refrigerants";
+import { SERVICE_REFRIGERANT_IDS } from "@/lib/refrigerants/catalog";
 
 /** Label charges outside this band are almost surely a unit mistake for a car or light truck (common practice). */
 export const LABEL_CHARGE_RANGE_G = { min: 100, max: 3000 } as const;
 /** Total system oil band, mL (common practice: cars and light trucks hold about 100–250 mL). */
 export const TOTAL_OIL_RANGE_ML = { min: 20, max: 1000 } as const;
 export const MODEL_YEAR_RANGE = { min: 1940, max: 2100 } as const;
-
-const refrigerantIds = REFRIGERANT_IDS as readonly [RefrigerantId, ...RefrigerantId[]];
 
 /** One row of the shop's spec table. Masses in grams, volumes in millilitres. */
 export const specRowSchema = z
@@ -20,7 +18,7 @@ export const specRowSchema = z
     variant: z.string().trim().max(120),
     /** true: front and rear A/C; false: front only */
     rearAc: z.boolean(),
-    refrigerant: z.enum(refrigerantIds),
+    refrigerant: z.enum(SERVICE_REFRIGERANT_IDS),
     labelChargeG: z
       .number()
       .min(LABEL_CHARGE_RANGE_G.min, `label charge must be at least ${LABEL_CHARGE_RANGE_G.min} g`)

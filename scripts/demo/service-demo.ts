@@ -1,4 +1,5 @@
-import type { Models, VehicleRefrigerant } from "@/models";
+import type { ServiceRefrigerantId } from "@/lib/refrigerants/catalog";
+import type { Models } from "@/models";
 import type { CylinderKind } from "@/models";
 import { DEFAULT_PART_OIL_ALLOWANCES_ML, REPLACED_PART_IDS } from "@/lib/service/oil";
 
@@ -12,7 +13,7 @@ type DemoSpec = {
   model: string;
   variant: string;
   rearAc: boolean;
-  refrigerant: VehicleRefrigerant;
+  refrigerant: ServiceRefrigerantId;
   labelChargeG: number;
   oilType: string;
   totalOilMl: number | null;
@@ -20,7 +21,7 @@ type DemoSpec = {
 type DemoCylinder = {
   label: string;
   serial: string;
-  refrigerant: VehicleRefrigerant;
+  refrigerant: ServiceRefrigerantId;
   kind: CylinderKind;
   tareG: number;
   capacityG: number;

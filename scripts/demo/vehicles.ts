@@ -1,4 +1,5 @@
-import type { ExpansionDevice, VehicleRefrigerant } from "@/models";
+import type { ServiceRefrigerantId } from "@/lib/refrigerants/catalog";
+import type { ExpansionDevice } from "@/lib/vehicles/expansion-devices";
 
 // Real makes and models with invented VINs left empty. Label charges and oils here are
 // illustrative demo values, not a reference: the shop's spec table and the under-hood label decide.
@@ -10,7 +11,7 @@ export type DemoVehicle = {
   make: string;
   model: string;
   engine: string | null;
-  refrigerant: VehicleRefrigerant;
+  refrigerant: ServiceRefrigerantId;
   expansionDevice: ExpansionDevice;
   electricCompressor: boolean;
   labelChargeG: number | null;

@@ -6,6 +6,7 @@ import { caseIsEditable, mayChangeCase } from "@/lib/auth/case-access";
 import { can } from "@/lib/auth/roles";
 import { getCase } from "@/lib/server/cases";
 import { isAppError } from "@/lib/errors";
+import { EXPANSION_DEVICE_LABELS, isExpansionDevice } from "@/lib/vehicles/expansion-devices";
 import { StatusBadge } from "@/components/cases/status-badge";
 import { CaseReadings } from "@/components/cases/case-readings";
 import { FindingsSnapshot } from "@/components/cases/findings-snapshot";
@@ -76,11 +77,9 @@ export default async function CasePage({ params }: { params: Promise<{ id: strin
           <dd>{detail.refrigerant ?? "—"}</dd>
           <dt className="font-bold">Expansion device</dt>
           <dd>
-            {detail.expansionDevice === "txv"
-              ? "TXV with receiver-drier"
-              : detail.expansionDevice === "orifice_tube"
-                ? "Orifice tube with accumulator"
-                : "—"}
+            {isExpansionDevice(detail.expansionDevice)
+              ? EXPANSION_DEVICE_LABELS[detail.expansionDevice]
+              : "—"}
           </dd>
         </dl>
       </section>

@@ -4,6 +4,7 @@ import { notFound } from "next/navigation";
 import { requireUser } from "@/lib/auth/guard";
 import { can } from "@/lib/auth/roles";
 import { isAppError } from "@/lib/errors";
+import { EXPANSION_DEVICE_LABELS } from "@/lib/vehicles/expansion-devices";
 import { getShop } from "@/lib/server/shops";
 import { getServiceCase, getServiceRecord } from "@/lib/server/service-records";
 import { listCylinders } from "@/lib/server/ledger";
@@ -63,11 +64,9 @@ export default async function ServiceRecordPage({ params }: { params: Promise<{ 
         </h1>
         <p className="text-ink-soft">
           {serviceCase.refrigerant ?? "Refrigerant not recorded"} ·{" "}
-          {serviceCase.expansionDevice === "orifice_tube"
-            ? "orifice tube and accumulator"
-            : serviceCase.expansionDevice === "txv"
-              ? "TXV and receiver-drier"
-              : "expansion device not recorded"}
+          {serviceCase.expansionDevice
+            ? EXPANSION_DEVICE_LABELS[serviceCase.expansionDevice]
+            : "expansion device not recorded"}
           {serviceCase.electricCompressor ? " · electric compressor" : ""}
           {record ? ` · entered by ${record.technician}` : ""}
         </p>
