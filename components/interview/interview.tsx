@@ -4,11 +4,11 @@ import { useCallback, useEffect, useMemo, useRef } from "react";
 import { useMachine } from "@xstate/react";
 import { interviewMachine } from "@/machines/interview";
 import { savedInterviewOf, viewOf, type SavedInterview } from "@/machines/interview-view";
-import type { GroupId } from "@/lib/interview/steps";
+import { STEP_LABELS, type GroupId } from "@/lib/interview/steps";
 import { altitudeFor } from "@/lib/interview/branches";
 import { CautionsList } from "./cautions-list";
 import { FindingsStep } from "./findings-step";
-import { STEP_COPY } from "./labels";
+import { STEP_LEADS } from "./labels";
 import { ProgressStrip } from "./progress-strip";
 import { SaveBanner } from "./save-banner";
 import { SpecMatches } from "./spec-matches";
@@ -99,7 +99,6 @@ export function Interview({
   }
 
   const group: GroupId | null = view.group;
-  const copy = STEP_COPY[step];
   return (
     <div className="space-y-4">
       <div>
@@ -110,9 +109,9 @@ export function Interview({
       <section id="interview-step" aria-labelledby="step-heading" className="card space-y-4">
         <header>
           <h1 id="step-heading" ref={headingRef} tabIndex={-1} className="text-2xl font-bold outline-none">
-            {copy.title}
+            {STEP_LABELS[step]}
           </h1>
-          <p className="text-ink-soft">{copy.lead}</p>
+          <p className="text-ink-soft">{STEP_LEADS[step]}</p>
         </header>
         {step !== "findings" && (
           <CautionsList

@@ -6,55 +6,22 @@ import {
   oilTypeChoices,
 } from "@/lib/interview/choices";
 import type { StepId } from "@/lib/interview/steps";
-import type { ChoiceOption, StepCopy } from "./field-defs";
+import type { ChoiceOption } from "./field-defs";
 
-export const STEP_COPY: Record<StepId, StepCopy> = {
-  complaint: { title: "Complaint", lead: "What the owner says, in their words." },
-  system: { title: "Vehicle system", lead: "From the under-hood label and what you can see." },
-  conditions: { title: "Conditions", lead: "Where and how the readings are taken." },
-  static: {
-    title: "Engine-off pressure",
-    lead: "Engine off for a while, pressures equalised, system at the air temperature.",
-  },
-  running: {
-    title: "Running readings",
-    lead: "A/C at maximum, recirculation, blower high, doors open, after 5–10 minutes at a steady engine speed.",
-  },
-  behaviour: {
-    title: "What you see and hear",
-    lead: "Tick everything you noticed. Leave it empty if nothing stood out.",
-  },
-  leakFinding: {
-    title: "Leak search",
-    lead: "The system has lost its charge: find the leak before anything is run or charged.",
-  },
-  identification: {
-    title: "Refrigerant identifier",
-    lead: "Run the identifier before anything goes into the recovery machine.",
-  },
-  chargeAudit: {
-    title: "Charge by weight",
-    lead: "If you recovered the charge, what came out and how much oil with it.",
-  },
-  recoveryHeld: {
-    title: "Recovery on hold",
-    lead: "This refrigerant must not go into the shop's recovery machine.",
-  },
-  findings: { title: "Findings", lead: "The likely causes, ranked, with the evidence for and against each." },
-};
-
-export const SHORT_STEP: Record<StepId, string> = {
-  complaint: "Complaint",
-  system: "System",
-  conditions: "Conditions",
-  static: "Engine off",
-  running: "Running",
-  behaviour: "Behaviour",
-  leakFinding: "Leak",
-  identification: "Identifier",
-  chargeAudit: "Charge",
-  recoveryHeld: "On hold",
-  findings: "Findings",
+/** One line under each step's heading (the heading itself is the step's one name, STEP_LABELS). */
+export const STEP_LEADS: Readonly<Record<StepId, string>> = {
+  complaint: "What the owner says, in their words.",
+  system: "From the under-hood label and what you can see.",
+  conditions: "Where and how the readings are taken.",
+  static: "Engine off for a while, pressures equalised, system at the air temperature.",
+  running:
+    "A/C at maximum, recirculation, blower high, doors open, after 5–10 minutes at a steady engine speed.",
+  behaviour: "Tick everything you noticed. Leave it empty if nothing stood out.",
+  leakFinding: "The system has lost its charge: find the leak before anything is run or charged.",
+  identification: "Run the identifier before anything goes into the recovery machine.",
+  chargeAudit: "If you recovered the charge, what came out and how much oil with it.",
+  recoveryHeld: "This refrigerant must not go into the shop's recovery machine.",
+  findings: "The likely causes, ranked, with the evidence for and against each.",
 };
 
 const OIL_LABELS: Record<(typeof oilTypeChoices)[number], string> = {
@@ -81,7 +48,7 @@ const PLACE_LABELS: Record<(typeof leakPlaceChoices)[number], string> = {
   line_joint: "Line joint or O-ring",
   service_port: "Service port",
   accumulator_or_receiver_drier: "Accumulator or receiver-drier",
-  expansion_device: "Orifice tube or TXV",
+  expansion_device: "Expansion device",
   pressure_switch_or_sensor: "Pressure switch or sensor",
   not_found_yet: "Not found yet",
 };

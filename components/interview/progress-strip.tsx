@@ -2,8 +2,7 @@
 
 import { clsx } from "clsx";
 import type { ProgressEntry } from "@/lib/interview/progress";
-import type { StepId } from "@/lib/interview/steps";
-import { SHORT_STEP } from "./labels";
+import { STEP_LABELS, type StepId } from "@/lib/interview/steps";
 
 const MARK: Record<ProgressEntry["status"], string> = {
   current: "now",
@@ -32,7 +31,7 @@ export function ProgressStrip({
               aria-current={entry.status === "current" ? "step" : undefined}
               onClick={() => onOpen(entry.step)}
               className={clsx(
-                "flex min-h-touch flex-col items-start rounded-card border-2 px-2 py-1 text-left text-sm leading-tight",
+                "flex min-h-touch max-w-[9rem] flex-col items-start rounded-card border-2 px-2 py-1 text-left text-sm leading-tight",
                 entry.status === "current" && "border-glacier-700 bg-glacier-700 text-white",
                 entry.status === "answered" && "border-glacier-500 bg-glacier-50 text-glacier-900",
                 entry.status === "needs_fixing" && "border-ember-500 bg-ember-50 text-ember-700",
@@ -42,7 +41,7 @@ export function ProgressStrip({
               )}
             >
               <span className="font-bold">
-                {index + 1}. {SHORT_STEP[entry.step]}
+                {index + 1}. {STEP_LABELS[entry.step]}
               </span>
               {MARK[entry.status] && <span className="text-xs">{MARK[entry.status]}</span>}
             </button>

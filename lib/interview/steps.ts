@@ -64,16 +64,19 @@ export function isOptionalGroup(group: GroupId): boolean {
   return optionalGroups.includes(group);
 }
 
-/** Short names for the progress strip, in our own words. */
-export const stepLabels: Record<StepId, string> = {
+/**
+ * Each step's one name, in the trade's words where it has them: the step's heading, its entry in the
+ * progress strip, and what the browser tests look for. The id is the machine's state name.
+ */
+export const STEP_LABELS: Readonly<Record<StepId, string>> = {
   complaint: "Complaint",
-  system: "System",
+  system: "Vehicle system",
   conditions: "Conditions",
   static: "Static pressure",
   running: "Running readings",
   behaviour: "Behaviour",
   leakFinding: "Leak search",
-  identification: "Refrigerant identity",
+  identification: "Refrigerant identification",
   chargeAudit: "Charge audit",
   recoveryHeld: "Recovery on hold",
   findings: "Findings",

@@ -4,6 +4,7 @@ import { SignInPage } from "./pages/sign-in-page";
 import { InterviewPage, openCase } from "./pages/interview-page";
 import { readCase } from "./pages/db";
 import { BASE_URL } from "./pages/e2e-env";
+import { STEP_LABELS } from "@/lib/interview/steps";
 
 async function expectNoSeriousA11yIssues(page: Page, where: string) {
   // The WCAG A/AA rules, on the page's main content (the shared header is scanned on the sign-in and case pages).
@@ -31,23 +32,23 @@ test("a clear overcharge on a hot day: overcharge first, conclusion saved with t
     /Honda CR-V/,
     "Cools a little on the highway, blows warm at lights; it was topped up at a quick-lube last month.",
   );
-  await interview.expectStep("Vehicle system");
+  await interview.expectStep(STEP_LABELS.system);
   await expectNoSeriousA11yIssues(page, "system");
   await expect(page.getByText(/mildly flammable|flammable/i).first()).toBeVisible();
   await interview.next();
 
-  await interview.expectStep("Conditions");
+  await interview.expectStep(STEP_LABELS.conditions);
   await interview.digits("35");
   await expectNoSeriousA11yIssues(page, "conditions");
   await interview.press("Enter");
 
-  await interview.expectStep("Engine-off pressure");
+  await interview.expectStep(STEP_LABELS.static);
   await interview.digits("800");
   await expect(page.getByText(/Saturation at 35.0 °C ambient/)).toBeVisible();
   await expectNoSeriousA11yIssues(page, "static");
   await interview.press("Enter");
 
-  await interview.expectStep("Running readings");
+  await interview.expectStep(STEP_LABELS.running);
   await interview.digits("2300");
   await interview.enter("Low side", "330");
   await interview.enter(/Liquid line/, "58");
@@ -58,25 +59,25 @@ test("a clear overcharge on a hot day: overcharge first, conclusion saved with t
   await expectNoSeriousA11yIssues(page, "running");
   await interview.press("Enter");
 
-  await interview.expectStep("What you see and hear");
+  await interview.expectStep(STEP_LABELS.behaviour);
   await interview.choose(/shuts off on high pressure/);
   await expectNoSeriousA11yIssues(page, "behaviour");
   await interview.next();
 
-  await interview.expectStep("Refrigerant identifier");
+  await interview.expectStep(STEP_LABELS.identification);
   await interview.enter("Purity", "100");
   await interview.enter(/Air/, "0");
   await expectNoSeriousA11yIssues(page, "identification");
   await interview.next();
 
-  await interview.expectStep("Charge by weight");
+  await interview.expectStep(STEP_LABELS.chargeAudit);
   await interview.choose(/^Yes$/);
   await interview.enter("Mass recovered", "565");
   await expect(page.getByText(/\+115 g \(\+25\.6 %\) against the 450 g label/)).toBeVisible();
   await expectNoSeriousA11yIssues(page, "charge audit");
   await interview.next();
 
-  await interview.expectStep("Findings");
+  await interview.expectStep(STEP_LABELS.findings);
   await expect(interview.suspects().first()).toContainText("Too much refrigerant (overcharge)");
   await expect(page.getByTestId("next-check")).not.toBeEmpty();
   await expectNoSeriousA11yIssues(page, "findings");
@@ -112,14 +113,14 @@ test("an empty system branches to the leak search, skips running tests and ranks
     "No cold air at all since the spring; the compressor does not kick in.",
   );
   await interview.next();
-  await interview.expectStep("Conditions");
+  await interview.expectStep(STEP_LABELS.conditions);
   await interview.digits("24");
   await interview.press("Enter");
-  await interview.expectStep("Engine-off pressure");
+  await interview.expectStep(STEP_LABELS.static);
   await interview.digits("0");
   await interview.press("Enter");
 
-  await interview.expectStep("Leak search");
+  await interview.expectStep(STEP_LABELS.leakFinding);
   await expect(page.getByText("Do not run the compressor")).toBeVisible();
   await expect(
     page.getByRole("navigation", { name: "Interview steps" }).getByRole("button", { name: /Running/ }),
@@ -129,7 +130,7 @@ test("an empty system branches to the leak search, skips running tests and ranks
   await interview.choose("Condenser");
   await interview.next();
 
-  await interview.expectStep("Findings");
+  await interview.expectStep(STEP_LABELS.findings);
   await expect(interview.suspects().first()).toContainText("Not enough refrigerant");
   await interview.waitUntilSaved();
   const saved = await readCase(interview.caseIdFromUrl());
@@ -146,11 +147,11 @@ async function walkTwin(
   interview: InterviewPage,
   readings: { ambient: string; high: string; low: string; liquid: string; suction: string },
 ) {
-  await interview.expectStep("Conditions");
+  await interview.expectStep(STEP_LABELS.conditions);
   await interview.digits(readings.ambient);
   await interview.press("Enter");
   await interview.skip();
-  await interview.expectStep("Running readings");
+  await interview.expectStep(STEP_LABELS.running);
   await interview.digits(readings.high);
   await interview.enter("Low side", readings.low);
   await interview.enter(/Liquid line/, readings.liquid);
@@ -159,7 +160,7 @@ async function walkTwin(
   await interview.next();
   await interview.skip();
   await interview.skip();
-  await interview.expectStep("Findings");
+  await interview.expectStep(STEP_LABELS.findings);
   await interview.waitUntilSaved();
   return readCase(interview.caseIdFromUrl());
 }
@@ -181,13 +182,13 @@ test("a case entered in imperial units gives the same computed values as its met
   const imperial = new InterviewPage(page);
   await openCase(imperial, /Silverado/, "Cooling is weak in the afternoon.");
   await imperial.next();
-  await imperial.expectStep("Conditions");
+  await imperial.expectStep(STEP_LABELS.conditions);
   await imperial.setUnit("Air temperature at the condenser", "°F");
   // 95 °F = 35 °C; 250 psi = 1723.7 kPa; 40 psi = 275.8 kPa; 125.6 °F = 52 °C; 50 °F = 10 °C.
   await imperial.field("Air temperature at the condenser").fill("95");
   await imperial.press("Enter");
   await imperial.skip();
-  await imperial.expectStep("Running readings");
+  await imperial.expectStep(STEP_LABELS.running);
   await imperial.setUnit("High side", "psi");
   await imperial.field("High side").fill("250");
   await imperial.field("Low side").fill("40");
@@ -198,7 +199,7 @@ test("a case entered in imperial units gives the same computed values as its met
   await imperial.next();
   await imperial.skip();
   await imperial.skip();
-  await imperial.expectStep("Findings");
+  await imperial.expectStep(STEP_LABELS.findings);
   await imperial.waitUntilSaved();
   const imperialCase = await readCase(imperial.caseIdFromUrl());
 
@@ -220,22 +221,22 @@ test("a standard performance check reaches the findings in at most 25 taps and k
   const interview = new InterviewPage(page);
   await openCase(interview, /Ford Focus/, "Not as cold as it used to be.");
   await interview.next();
-  await interview.expectStep("Conditions");
+  await interview.expectStep(STEP_LABELS.conditions);
   await interview.digits("30");
   await interview.press("Enter");
-  await interview.expectStep("Engine-off pressure");
+  await interview.expectStep(STEP_LABELS.static);
   await interview.skip();
-  await interview.expectStep("Running readings");
+  await interview.expectStep(STEP_LABELS.running);
   await interview.digits("1500");
   await interview.enter("Low side", "200");
   await interview.press("Enter");
-  await interview.expectStep("What you see and hear");
+  await interview.expectStep(STEP_LABELS.behaviour);
   await interview.next();
-  await interview.expectStep("Refrigerant identifier");
+  await interview.expectStep(STEP_LABELS.identification);
   await interview.skip();
-  await interview.expectStep("Charge by weight");
+  await interview.expectStep(STEP_LABELS.chargeAudit);
   await interview.skip();
-  await interview.expectStep("Findings");
+  await interview.expectStep(STEP_LABELS.findings);
   await expect(interview.suspects().first()).toBeVisible();
   console.log(`performance check: ${interview.taps} taps and key presses besides digits`);
   expect(interview.taps).toBeLessThanOrEqual(25);
@@ -248,16 +249,16 @@ test("with the network cut mid-interview, answers wait on the device, reach the 
   const interview = new InterviewPage(page);
   await openCase(interview, /Ford Focus/, "Warm air after ten minutes of driving.");
   await interview.next();
-  await interview.expectStep("Conditions");
+  await interview.expectStep(STEP_LABELS.conditions);
   await interview.waitUntilSaved();
 
   await context.setOffline(true);
   await interview.digits("28");
   await interview.press("Enter");
-  await interview.expectStep("Engine-off pressure");
+  await interview.expectStep(STEP_LABELS.static);
   await interview.digits("650");
   await interview.press("Enter");
-  await interview.expectStep("Running readings");
+  await interview.expectStep(STEP_LABELS.running);
   await interview.digits("1600");
   await interview.enter("Low side", "210");
   await expect(page.getByText(/No connection: \d+ changes? waiting on this device/)).toBeVisible();
@@ -272,7 +273,7 @@ test("with the network cut mid-interview, answers wait on the device, reach the 
   expect(saved.interview_step).toBe("running");
 
   await page.reload();
-  await interview.expectStep("Running readings");
+  await interview.expectStep(STEP_LABELS.running);
   await expect(interview.field("High side")).toHaveValue("1600");
   await expect(interview.field("Low side")).toHaveValue("210");
 });
@@ -286,14 +287,14 @@ test("an impossible reading gets a plain message beside the field and keeps what
   await interview.digits("25");
   await interview.press("Enter");
   await interview.skip();
-  await interview.expectStep("Running readings");
+  await interview.expectStep(STEP_LABELS.running);
   await interview.digits("300");
   await interview.enter("Low side", "900");
   await interview.press("Enter");
   await expect(
     page.getByText("The low side reads above the high side — check the hose connections"),
   ).toBeVisible();
-  await interview.expectStep("Running readings");
+  await interview.expectStep(STEP_LABELS.running);
   await expect(interview.field("Low side")).toHaveValue("900");
   await interview.field("High side").fill("12.5.3");
   await interview.press("Enter");
@@ -308,7 +309,7 @@ test("two screens on one case: the second never silently overwrites the first, a
   const first = new InterviewPage(page);
   await openCase(first, /Ford Focus/, "Cold on the left vents only.");
   await first.next();
-  await first.expectStep("Conditions");
+  await first.expectStep(STEP_LABELS.conditions);
   await first.waitUntilSaved();
   const caseId = first.caseIdFromUrl();
 
@@ -318,7 +319,7 @@ test("two screens on one case: the second never silently overwrites the first, a
   await new SignInPage(otherPage).signInAs("technician");
   await otherPage.goto(`/cases/${caseId}/interview`);
   const second = new InterviewPage(otherPage);
-  await second.expectStep("Conditions");
+  await second.expectStep(STEP_LABELS.conditions);
 
   await first.digits("27");
   await first.waitUntilSaved();
@@ -339,7 +340,7 @@ test("switching units converts what was typed and keeps the quantity (1 psi = 6.
   await interview.next();
   await interview.digits("30");
   await interview.press("Enter");
-  await interview.expectStep("Engine-off pressure");
+  await interview.expectStep(STEP_LABELS.static);
   await interview.setUnit("Static pressure (either gauge)", "psi");
   await interview.enter(/Static pressure/, "90");
   await interview.setUnit("Static pressure (either gauge)", "kPa");
@@ -354,13 +355,13 @@ test("the system step offers the spec-table rows for the vehicle and the technic
 }) => {
   const interview = new InterviewPage(page);
   await openCase(interview, /Silverado/, "Rear vents blow warm, front is fine.");
-  await interview.expectStep("Vehicle system");
+  await interview.expectStep(STEP_LABELS.system);
   const offers = page.getByRole("region", { name: "From the shop's spec table" });
   await expect(offers.getByRole("button", { name: /front A\/C only/ })).toBeVisible();
   await interview.tap(offers.getByRole("button", { name: /front and rear A\/C/ }));
   await expect(interview.field("Label charge")).toHaveValue("1130");
   await interview.next();
-  await interview.expectStep("Conditions");
+  await interview.expectStep(STEP_LABELS.conditions);
   await interview.waitUntilSaved();
   const saved = await readCase(interview.caseIdFromUrl());
   expect(saved.answers.answers.system).toMatchObject({
@@ -380,17 +381,17 @@ test("an interview left open across an update still submits: the server's findin
     "Blows warm since the weekend; a hiss from under the hood on Friday.",
   );
   await interview.next();
-  await interview.expectStep("Conditions");
+  await interview.expectStep(STEP_LABELS.conditions);
   await interview.digits("24");
   await interview.press("Enter");
-  await interview.expectStep("Engine-off pressure");
+  await interview.expectStep(STEP_LABELS.static);
   await interview.digits("0");
   await interview.press("Enter");
-  await interview.expectStep("Leak search");
+  await interview.expectStep(STEP_LABELS.leakFinding);
   await interview.choose("Electronic detector");
   await interview.choose("Condenser");
   await interview.next();
-  await interview.expectStep("Findings");
+  await interview.expectStep(STEP_LABELS.findings);
   await interview.waitUntilSaved();
   const caseId = interview.caseIdFromUrl();
 
