@@ -1,10 +1,10 @@
+import { STANDARD_ATMOSPHERE_KPA } from "@/lib/units/barometric";
 import { type VapourPressureEquation, wagnerPressureKpaAbs } from "./equations";
 
 export const GENERATOR_VERSION = 1;
 export const TABLE_MIN_TEMP_C = -40;
 export const TABLE_STEP_K = 0.25;
 const KELVIN_OFFSET = 273.15;
-const STANDARD_ATMOSPHERE_KPA = 101.325;
 
 export interface SaturationTableFile {
   id: string;

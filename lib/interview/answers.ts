@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { FULL_VACUUM_KPA_GAUGE, MAX_READING_KPA_GAUGE } from "@/lib/refrigerants/gauge-limits";
 import {
   behaviourSymptomIds,
   expansionDeviceChoices,
@@ -14,11 +15,8 @@ import {
  * before validating. Messages are written for a technician at the vehicle.
  */
 
-// A gauge cannot read below a perfect vacuum: one standard atmosphere, 101.325 kPa (ISO 2533 standard atmosphere).
-export const FULL_VACUUM_KPA_GAUGE = -101.325;
-// Above any mobile A/C pressure, R-744 high sides included (those run to about 13 MPa; from memory).
-// Tighter limits per refrigerant are checked once the refrigerant is known (cross-checks.ts).
-export const MAX_READING_KPA_GAUGE = 16000;
+// The gauge limits live in lib/refrigerants/gauge-limits.ts. Tighter limits per refrigerant, and the
+// full vacuum at the shop's altitude, are checked once those are known (cross-checks.ts).
 
 function gaugeKpa(label: string) {
   return z

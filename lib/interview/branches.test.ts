@@ -1,16 +1,11 @@
 import { describe, expect, it } from "vitest";
 import { saturationPressure } from "@/lib/refrigerants";
 import { STATIC_SOAK_SPREAD_K } from "@/lib/refrigerants/derived";
+import { EMPTY_STATIC_MAX_KPA_GAUGE } from "@/lib/refrigerants/static-charge";
+import { PURITY_PASS_PCT } from "@/lib/service/identifier";
 import { barometricKpa } from "@/lib/units";
 import type { InterviewAnswers } from "./answers";
-import {
-  EMPTY_STATIC_MAX_KPA_GAUGE,
-  PURITY_MIN_PCT,
-  pressureLeft,
-  purityFailed,
-  refrigerantContaminated,
-  systemLooksEmpty,
-} from "./branches";
+import { pressureLeft, purityFailed, refrigerantContaminated, systemLooksEmpty } from "./branches";
 
 const SEA_LEVEL_KPA = 101.325; // ISO 2533 standard atmosphere
 
@@ -85,7 +80,7 @@ describe("pressureLeft", () => {
 
 describe("purityFailed and refrigerantContaminated", () => {
   it("fail below 98 % purity (SAE J2099 identifier threshold) and pass at 98 %", () => {
-    expect(PURITY_MIN_PCT).toBe(98);
+    expect(PURITY_PASS_PCT).toBe(98);
     expect(purityFailed({ identification: { purityPct: 97.9 } })).toBe(true);
     expect(purityFailed({ identification: { purityPct: 98 } })).toBe(false);
     expect(purityFailed({ identification: {} })).toBe(false);

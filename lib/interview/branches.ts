@@ -1,61 +1,56 @@
-import { staticCheck } from "@/lib/refrigerants/derived";
-import { gaugeToAbsoluteKpa } from "@/lib/units";
+import { refrigerantContaminated as contaminated } from "@/lib/service/identifier";
+import {
+  type StaticReading,
+  staticPressureLeft,
+  staticShowsNoCharge,
+} from "@/lib/refrigerants/static-charge";
 import type { InterviewAnswers } from "./answers";
 
 export interface ShopSettings {
   altitudeM?: number;
 }
 
-/*
- * A static gauge at or below about 0 kPa means there is no charge left to test or recover.
- * The 7 kPa (about 1 psi) allows for the resolution of a service gauge (common practice).
- */
-export const EMPTY_STATIC_MAX_KPA_GAUGE = 7;
-
-/*
- * Identifiers meeting the SAE specification report refrigerant at 98 % or better as pure, and recycling applies
- * only to refrigerant identified at ≥ 98 % (SAE J2099, which covers R-134a and R-1234yf); the same line for
- * R-744 and R-12 is common practice.
- */
-export const PURITY_MIN_PCT = 98;
-
 export function altitudeFor(answers: InterviewAnswers, shop?: ShopSettings): number | undefined {
   return answers.conditions?.altitudeM ?? shop?.altitudeM;
 }
 
-/** Empty or near-empty: the static gauge reads about zero, or too far below saturation at ambient for liquid to remain. */
-export function systemLooksEmpty(answers: InterviewAnswers, shop?: ShopSettings): boolean {
+/** The static reading in the shape the shared "empty system" test (and the findings engine) reads; null until taken. */
+export function staticReadingOf(answers: InterviewAnswers, shop?: ShopSettings): StaticReading | null {
   const staticKpaGauge = answers.static?.staticKpaGauge;
-  if (staticKpaGauge === undefined) return false;
-  if (staticKpaGauge <= EMPTY_STATIC_MAX_KPA_GAUGE) return true;
+  if (staticKpaGauge === undefined) return null;
   const refrigerant = answers.system?.refrigerant;
-  const ambientC = answers.conditions?.ambientC;
-  if (refrigerant === undefined || ambientC === undefined) return false;
-  try {
-    const altitudeM = altitudeFor(answers, shop);
-    const staticKpaAbs = gaugeToAbsoluteKpa(
-      staticKpaGauge,
-      altitudeM === undefined ? undefined : { altitudeM },
-    );
-    return staticCheck({ refrigerant, staticKpaAbs, ambientC }).kind === "no_liquid";
-  } catch {
-    // Outside what the tables cover: the reading cannot tell us the system is empty.
-    return false;
-  }
+  const reading: StaticReading = {
+    // Without the refrigerant only the gauge-zero test applies; R-134a stands in and is never read then.
+    refrigerant: refrigerant ?? "R-134a",
+    staticKpaGauge,
+    ambientC: refrigerant === undefined ? undefined : answers.conditions?.ambientC,
+  };
+  const altitudeM = altitudeFor(answers, shop);
+  if (altitudeM !== undefined) reading.altitudeM = altitudeM;
+  return reading;
+}
+
+/**
+ * Empty or near-empty: the static gauge reads about zero, or too far below saturation at ambient for
+ * liquid to remain. The interview's one call to the shared test (lib/refrigerants/static-charge.ts).
+ */
+export function systemLooksEmpty(answers: InterviewAnswers, shop?: ShopSettings): boolean {
+  const reading = staticReadingOf(answers, shop);
+  return reading !== null && staticShowsNoCharge(reading);
 }
 
 /** Some refrigerant vapour is still in the system, so it must be identified before anything is recovered. */
 export function pressureLeft(answers: InterviewAnswers): boolean {
-  const staticKpaGauge = answers.static?.staticKpaGauge;
-  return staticKpaGauge !== undefined && staticKpaGauge > EMPTY_STATIC_MAX_KPA_GAUGE;
+  return staticPressureLeft({ staticKpaGauge: answers.static?.staticKpaGauge });
 }
 
+/** Identifier purity below the pass mark (lib/service/identifier.ts). */
 export function purityFailed(answers: InterviewAnswers): boolean {
   const purityPct = answers.identification?.purityPct;
-  return purityPct !== undefined && purityPct < PURITY_MIN_PCT;
+  return purityPct !== undefined && contaminated({ purityPct });
 }
 
 /** Below the purity line, or flagged as holding hydrocarbon: the charge must stay out of the shop's recovery machine. */
 export function refrigerantContaminated(answers: InterviewAnswers): boolean {
-  return purityFailed(answers) || answers.identification?.hydrocarbonFlagged === true;
+  return contaminated(answers.identification ?? {});
 }

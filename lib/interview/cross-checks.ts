@@ -1,14 +1,8 @@
-import { standardBarometricKpa } from "@/lib/units";
+import { fullVacuumKpaGauge, MAX_KPA_GAUGE_BY_REFRIGERANT } from "@/lib/refrigerants/gauge-limits";
 import type { InterviewAnswers } from "./answers";
 import { altitudeFor, type ShopSettings } from "./branches";
 import type { GroupId } from "./steps";
 import type { AnswerIssue } from "./issues";
-
-/*
- * Above these an HFC system is past its high-side relief valve (SAE J639 systems relieve at about
- * 3.1–3.8 MPa, from memory); R-744 high sides run to about 13 MPa (from memory).
- */
-export const MAX_KPA_GAUGE_BY_REFRIGERANT = { "R-134a": 4500, "R-1234yf": 4500, "R-744": 16000 } as const;
 
 // More than three times the label charge points at the scale or the label, not at the vehicle (common practice).
 export const MAX_RECOVERED_TIMES_LABEL = 3;
@@ -18,16 +12,6 @@ const gaugeFields = [
   { group: "running", field: "highKpaGauge", label: "High side" },
   { group: "running", field: "lowKpaGauge", label: "Low side" },
 ] as const;
-
-/** A gauge reads against the local atmosphere, so a full vacuum reads minus the barometric pressure there (ISO 2533 standard atmosphere). */
-function deepestGaugeKpa(altitudeM: number | undefined): number | undefined {
-  if (altitudeM === undefined) return undefined;
-  try {
-    return -standardBarometricKpa(altitudeM);
-  } catch {
-    return undefined;
-  }
-}
 
 /** Checks that need more than one question group (or the shop's altitude); issues are filed under the group that should change. */
 export function crossCheck(
@@ -39,7 +23,7 @@ export function crossCheck(
     (found[group] ??= []).push(issue);
   };
   const altitudeM = altitudeFor(answers, shop);
-  const floorKpa = deepestGaugeKpa(altitudeM);
+  const floorKpa = altitudeM === undefined ? undefined : fullVacuumKpaGauge(altitudeM);
   if (floorKpa !== undefined) {
     for (const { group, field, label } of gaugeFields) {
       const value = (answers[group] as Record<string, number | undefined> | undefined)?.[field];

@@ -1,6 +1,6 @@
+import { STANDARD_ATMOSPHERE_KPA } from "@/lib/units/barometric";
 import { psychrolibSi } from "./psychrolib-si";
 
-const STANDARD_ATMOSPHERE_KPA = 101.325;
 // Air a vehicle meets, outside or at a vent; PsychroLib's iterations are checked across this span.
 const AIR_RANGE_C = { min: -50, max: 80 } as const;
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { identifierCheck } from "./identifier";
+import { identifierCheck, refrigerantContaminated } from "./identifier";
 
 describe("identifierCheck (SAE J2099 / SAE J2912: 98 % pass mark)", () => {
   it("passes at 98 % and fails just below", () => {
@@ -14,5 +14,15 @@ describe("identifierCheck (SAE J2099 / SAE J2912: 98 % pass mark)", () => {
   it("rejects readings outside 0–100 %", () => {
     expect(() => identifierCheck({ purityPct: 101 })).toThrow(RangeError);
     expect(() => identifierCheck({ purityPct: 99, airPct: -1 })).toThrow(RangeError);
+  });
+});
+
+describe("refrigerantContaminated (SAE J2099 98 % pass mark; hydrocarbon flag per SAE J2912)", () => {
+  it("is true below 98 % or with a hydrocarbon flag, false at 98 % or with nothing read yet", () => {
+    expect(refrigerantContaminated({ purityPct: 97.9 })).toBe(true);
+    expect(refrigerantContaminated({ purityPct: 98 })).toBe(false);
+    expect(refrigerantContaminated({ purityPct: 99.5, hydrocarbonFlagged: true })).toBe(true);
+    expect(refrigerantContaminated({ purityPct: null, hydrocarbonFlagged: false })).toBe(false);
+    expect(refrigerantContaminated({})).toBe(false);
   });
 });

@@ -85,7 +85,13 @@ export {
   monthlyReport,
   toCsv,
 } from "./ledger-report";
-export { IDENTIFIER_PURITY_PASS_PCT, type IdentifierCheck, identifierCheck } from "./identifier";
+export {
+  type IdentifierCheck,
+  identifierCheck,
+  type IdentifierReading,
+  PURITY_PASS_PCT,
+  refrigerantContaminated,
+} from "./identifier";
 export {
   type ServiceRecordContext,
   type ServiceRecordSummary,

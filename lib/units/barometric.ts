@@ -7,6 +7,9 @@ export interface BarometricSource {
   barometricKpa?: number;
 }
 
+/** One standard atmosphere, kPa: the barometric pressure at sea level (ISO 2533 standard atmosphere). */
+export const STANDARD_ATMOSPHERE_KPA = 101.325;
+
 // The standard-atmosphere formula is meant for the troposphere; shops sit well inside these bounds.
 const ALTITUDE_RANGE_M = { min: -500, max: 9000 } as const;
 

@@ -17,6 +17,7 @@ export {
   barometricKpa,
   gaugeToAbsoluteKpa,
   kpaAbsToVacuumInHg,
+  STANDARD_ATMOSPHERE_KPA,
   standardBarometricKpa,
   vacuumInHgToKpaAbs,
 } from "./barometric";
