@@ -6,7 +6,7 @@ import { interviewMachine } from "@/machines/interview";
 import { savedInterviewOf, viewOf, type SavedInterview } from "@/machines/interview-view";
 import { STEP_LABELS, type GroupId } from "@/lib/interview/steps";
 import { altitudeFor } from "@/lib/interview/branches";
-import { CautionsList } from "./cautions-list";
+import { CautionsList } from "@/components/cautions/cautions-list";
 import { FindingsStep } from "./findings-step";
 import { STEP_LEADS } from "./labels";
 import { ProgressStrip } from "./progress-strip";

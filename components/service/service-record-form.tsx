@@ -11,7 +11,7 @@ import { cautionsFor } from "@/lib/service/cautions";
 import { summariseServiceRecord } from "@/lib/service/record-summary";
 import type { ReplacedPartId } from "@/lib/service/oil";
 import { readVolumeMl } from "@/lib/service/entry";
-import { CautionsList } from "./cautions-list";
+import { CautionsList } from "@/components/cautions/cautions-list";
 import { type Draft, type TextField, draftFromRecord, inputFromDraft, readDraft } from "./draft";
 import type { ServiceRecordFormProps } from "./form-props";
 import { StepFields } from "./step-fields";
@@ -196,6 +196,10 @@ export function ServiceRecordForm(props: ServiceRecordFormProps) {
           props={props}
         />
         <CautionsList
+          heading="Before you go on"
+          showHeading
+          withSources
+          foldNotices={false}
           cautions={cautionsFor({
             step: cautionStep,
             refrigerant,

@@ -23,7 +23,7 @@ describe("cautionsFor", () => {
       system: { ...contaminatedAnswers.system, electricCompressor: true },
     })) {
       expect(caution.text.length).toBeGreaterThan(20);
-      expect(caution.basis.length).toBeGreaterThan(5);
+      expect(caution.source.length).toBeGreaterThan(5);
       expect(["danger", "warning", "notice"]).toContain(caution.level);
     }
   });

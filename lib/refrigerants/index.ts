@@ -1,8 +1,12 @@
 export {
   REFRIGERANT_IDS,
+  REFRIGERANT_LABELS,
   type RefrigerantId,
   type RefrigerantInfo,
+  SERVICE_REFRIGERANT_IDS,
+  type ServiceRefrigerantId,
   isRefrigerantId,
+  isServiceRefrigerant,
   refrigerantInfo,
 } from "./catalog";
 export { SaturationRangeError, type SaturationLimit, type SaturationQuantity } from "./range-error";
@@ -19,4 +23,3 @@ export {
   subcoolingK,
   superheatK,
 } from "./derived";
-export { type Caution, refrigerantCautions } from "./cautions";

@@ -53,7 +53,6 @@ export {
 export { waterSaturationKpaAbs } from "./water-boiling";
 export {
   type CautionContext,
-  type ExpansionDevice,
   SERVICE_CAUTIONS,
   type ServiceCaution,
   type ServiceStep,

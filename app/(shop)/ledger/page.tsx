@@ -8,15 +8,15 @@ import { getShop } from "@/lib/server/shops";
 import { ledgerReport, listCylinders, listMovements } from "@/lib/server/ledger";
 import { cautionsFor } from "@/lib/service/cautions";
 import { LedgerView } from "@/components/ledger/ledger-view";
-import { CautionsList } from "@/components/service/cautions-list";
+import { CautionsList } from "@/components/cautions/cautions-list";
 
 export const metadata: Metadata = { title: "Ledger" };
 
-const LEDGER_CAUTIONS = [
-  "recovery-cylinder-fill",
-  "never-vent",
-  "r1234yf-equipment-only",
-  "local-rules-prevail",
+const LEDGER_CAUTIONS: readonly string[] = [
+  "recovery_cylinder_fill",
+  "never_vent",
+  "flammable_r1234yf",
+  "defer_to_procedure",
 ];
 
 export default async function LedgerPage() {
@@ -43,7 +43,10 @@ export default async function LedgerPage() {
       </HydrationBoundary>
       <div className="card mt-6">
         <CautionsList
-          title="Cylinders and refrigerant"
+          heading="Cylinders and refrigerant"
+          showHeading
+          withSources
+          foldNotices={false}
           cautions={cautionsFor().filter((c) => LEDGER_CAUTIONS.includes(c.id))}
         />
       </div>
