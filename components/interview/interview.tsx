@@ -15,7 +15,7 @@ import { SpecMatches } from "./spec-matches";
 import { StepForm, type StepFormHandle } from "./step-form";
 import { useAutosave } from "./use-autosave";
 import { useUnitPreferences } from "./unit-preferences";
-import type { PhysicsContext } from "./live-physics";
+import type { PhysicsContext } from "@/lib/interview/readouts";
 
 export interface InterviewProps {
   caseId: number;

@@ -7,7 +7,7 @@ import type { AnswerIssue } from "@/lib/interview/validate";
 import type { ShopSettings } from "@/lib/interview/branches";
 import { GroupForm } from "./group-form";
 import { GROUP_FIELDS } from "./group-fields";
-import { liveReadouts, type PhysicsContext, type ReadoutLine } from "./live-physics";
+import { liveReadouts, type PhysicsContext, type ReadoutLine } from "@/lib/interview/readouts";
 import { answerValuesOf, formValuesOf } from "./form-values";
 import { otherSystem } from "./quantities";
 import { useGroupForm } from "./use-group-form";

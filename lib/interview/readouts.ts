@@ -1,0 +1,216 @@
+import { STATIC_EXCESS_KPA, SUBCOOLING_K, SUPERHEAT_K } from "@/lib/diagnosis/grading";
+import type { RefrigerantId } from "@/lib/refrigerants/catalog";
+import { staticCheck } from "@/lib/refrigerants/derived";
+import { expectedBands } from "@/lib/refrigerants/expected-bands";
+import { runningPhysics, type RunningPhysics } from "@/lib/refrigerants/readings";
+import { saturationTemperature } from "@/lib/refrigerants/saturation";
+import { recoveredAgainstLabel } from "@/lib/service/charge";
+import type { ExpansionDevice } from "@/lib/vehicles/expansion-devices";
+
+/*
+ * The physics shown beside each reading as it is typed: pure, recomputed on every keystroke. The numbers
+ * come from the same functions the findings engine uses (runningPhysics, staticCheck, expectedBands) and
+ * are judged against the engine's own grading table, so the screen and the findings agree.
+ */
+
+export type BandStatus = "inside" | "below" | "above" | "unknown";
+export interface ReadoutLine {
+  text: string;
+  status?: BandStatus;
+  /** Replaces the plain "in range / above range" word when the reading needs its own. */
+  verdict?: string;
+}
+
+export interface PhysicsContext {
+  refrigerant?: RefrigerantId;
+  expansionDevice?: ExpansionDevice;
+  ambientC?: number;
+  relativeHumidityPct?: number;
+  altitudeM?: number;
+  labelChargeG?: number;
+}
+
+const fmt = (value: number, decimals = 1) =>
+  (Math.round(value * 10 ** decimals) / 10 ** decimals).toFixed(decimals);
+const num = (v: unknown): v is number => typeof v === "number" && Number.isFinite(v);
+
+function safely(fn: () => ReadoutLine[]): ReadoutLine[] {
+  try {
+    return fn();
+  } catch (error) {
+    return error instanceof RangeError ? [{ text: error.message, status: "unknown" }] : [];
+  }
+}
+
+/** Why a pressure has no saturation temperature: the tables' own message (reached only off the table). */
+function offTable(refrigerant: RefrigerantId, kpaAbs: number): ReadoutLine[] {
+  return safely(() => {
+    saturationTemperature(refrigerant, kpaAbs);
+    return [];
+  });
+}
+
+function band(value: number, min: number, max: number): BandStatus {
+  return value < min ? "below" : value > max ? "above" : "inside";
+}
+
+function expectedBandsOrNull(refrigerant: RefrigerantId, ambientC: number, relativeHumidityPct?: number) {
+  try {
+    return expectedBands({ refrigerant, ambientC, relativeHumidityPct });
+  } catch {
+    return null;
+  }
+}
+
+function staticLines(
+  refrigerant: RefrigerantId,
+  staticKpaGauge: number,
+  ambientC: number,
+  barometricKpa: number,
+) {
+  return safely(() => {
+    const check = staticCheck({ refrigerant, staticKpaAbs: staticKpaGauge + barometricKpa, ambientC });
+    if (check.kind === "out_of_range") return [{ text: check.message, status: "unknown" }];
+    const satGauge = check.saturationKpaAbs - barometricKpa;
+    const lines: ReadoutLine[] = [
+      { text: `Saturation at ${fmt(ambientC)} °C ambient: ${fmt(satGauge, 0)} kPa gauge` },
+    ];
+    if (check.kind === "no_liquid") lines.push({ text: check.message, status: "below", verdict: "" });
+    // The same tolerance the findings engine grades against, so the screen and the findings agree.
+    else {
+      const air = check.excessKpa > STATIC_EXCESS_KPA.slight;
+      lines.push({
+        text: `Static pressure is ${fmt(Math.abs(check.excessKpa), 0)} kPa ${check.excessKpa >= 0 ? "above" : "below"} saturation`,
+        status: air ? "above" : "inside",
+        verdict: air ? "air or another gas is likely present" : "no sign of air",
+      });
+    }
+    return lines;
+  });
+}
+
+function runningLines(
+  values: Record<string, unknown>,
+  ctx: PhysicsContext & { refrigerant: RefrigerantId },
+  physics: RunningPhysics,
+): Record<string, ReadoutLine[]> {
+  const { refrigerant, ambientC } = ctx;
+  const out: Record<string, ReadoutLine[]> = {};
+  const gauge = (kpaAbs: number) => kpaAbs - physics.barometricKpa;
+  const bands = num(ambientC) ? expectedBandsOrNull(refrigerant, ambientC, ctx.relativeHumidityPct) : null;
+  const { highKpaAbs, lowKpaAbs, condensingC, evaporatingC, subcoolingK, superheatK } = physics;
+
+  if (num(values.highKpaGauge) && highKpaAbs !== undefined) {
+    const high = values.highKpaGauge;
+    if (condensingC === undefined) out.highKpaGauge = offTable(refrigerant, highKpaAbs);
+    else {
+      const lines: ReadoutLine[] = [
+        {
+          text: `Condensing at ${fmt(condensingC)} °C${num(ambientC) ? `, ${fmt(condensingC - ambientC)} K above the air` : ""}`,
+        },
+      ];
+      if (bands) {
+        const [min, max] = [gauge(bands.high.minKpaAbs), gauge(bands.high.maxKpaAbs)];
+        lines.push({
+          text: `Expected ${fmt(min, 0)}–${fmt(max, 0)} kPa gauge for this air temperature`,
+          status: band(high, min, max),
+        });
+      }
+      out.highKpaGauge = lines;
+    }
+  }
+  if (num(values.lowKpaGauge) && lowKpaAbs !== undefined) {
+    const low = values.lowKpaGauge;
+    if (evaporatingC === undefined) out.lowKpaGauge = offTable(refrigerant, lowKpaAbs);
+    else {
+      const lines: ReadoutLine[] = [{ text: `Evaporating at ${fmt(evaporatingC)} °C` }];
+      if (bands) {
+        const [min, max] = [gauge(bands.low.minKpaAbs), gauge(bands.low.maxKpaAbs)];
+        lines.push({ text: `Expected ${fmt(min, 0)}–${fmt(max, 0)} kPa gauge`, status: band(low, min, max) });
+      }
+      out.lowKpaGauge = lines;
+    }
+  }
+  if (num(values.liquidLineC) && highKpaAbs !== undefined) {
+    if (subcoolingK === undefined) out.liquidLineC = offTable(refrigerant, highKpaAbs);
+    else {
+      // The findings engine's typical range for a TXV system (lib/diagnosis/grading.ts).
+      const { low, high } = SUBCOOLING_K.txv;
+      const typical =
+        ctx.expansionDevice === "txv"
+          ? { text: ` (typical for a TXV system ${low}–${high} K)`, status: band(subcoolingK, low, high) }
+          : { text: "", status: undefined };
+      out.liquidLineC = [{ text: `Subcooling ${fmt(subcoolingK)} K${typical.text}`, status: typical.status }];
+    }
+  }
+  if (num(values.suctionLineC) && lowKpaAbs !== undefined) {
+    if (superheatK === undefined) out.suctionLineC = offTable(refrigerant, lowKpaAbs);
+    else {
+      const { nearZero, high } = SUPERHEAT_K.txv;
+      const typical =
+        ctx.expansionDevice === "txv"
+          ? {
+              text: ` (typical for a TXV system ${nearZero}–${high} K)`,
+              status: band(superheatK, nearZero, high),
+            }
+          : { text: " (an orifice-tube evaporator runs near 0 K)", status: undefined };
+      out.suctionLineC = [{ text: `Superheat ${fmt(superheatK)} K${typical.text}`, status: typical.status }];
+    }
+  }
+  if (num(values.ventC) && num(ambientC)) {
+    out.ventC = [{ text: `${fmt(ambientC - values.ventC)} K below the air temperature` }];
+  }
+  return out;
+}
+
+function chargeLines(refrigerant: RefrigerantId, labelChargeG: number, recoveredChargeG: number) {
+  return safely(() => {
+    // The service record's verdict (SAE J2788/J2843 recovery allowance), so both screens agree.
+    const { deltaG, deltaPct, verdict } = recoveredAgainstLabel({
+      labelChargeG,
+      recoveredChargeG,
+      refrigerant,
+    });
+    const status: BandStatus = verdict === "over" ? "above" : verdict === "under" ? "below" : "inside";
+    return [
+      {
+        text: `${deltaG >= 0 ? "+" : "−"}${fmt(Math.abs(deltaG), 0)} g (${deltaPct >= 0 ? "+" : "−"}${fmt(Math.abs(deltaPct))} %) against the ${fmt(labelChargeG, 0)} g label`,
+        status,
+      },
+    ];
+  });
+}
+
+/** The readout lines for each field of the group on screen, keyed by field name. */
+export function liveReadouts(
+  group: string,
+  values: Record<string, unknown>,
+  ctx: PhysicsContext,
+): Record<string, ReadoutLine[]> {
+  const { refrigerant, ambientC } = ctx;
+  if (!refrigerant) return {};
+  let physics: RunningPhysics;
+  try {
+    physics = runningPhysics({
+      refrigerant,
+      altitudeM: ctx.altitudeM,
+      ambientC,
+      highKpaGauge: num(values.highKpaGauge) ? values.highKpaGauge : undefined,
+      lowKpaGauge: num(values.lowKpaGauge) ? values.lowKpaGauge : undefined,
+      liquidLineC: num(values.liquidLineC) ? values.liquidLineC : undefined,
+      suctionLineC: num(values.suctionLineC) ? values.suctionLineC : undefined,
+    });
+  } catch {
+    // An altitude outside the standard atmosphere: the conditions step says so; nothing to compute here.
+    return {};
+  }
+
+  if (group === "static" && num(values.staticKpaGauge) && num(ambientC))
+    return {
+      staticKpaGauge: staticLines(refrigerant, values.staticKpaGauge, ambientC, physics.barometricKpa),
+    };
+  if (group === "running") return runningLines(values, { ...ctx, refrigerant }, physics);
+  if (group === "chargeAudit" && num(values.recoveredChargeG) && num(ctx.labelChargeG))
+    return { recoveredChargeG: chargeLines(refrigerant, ctx.labelChargeG, values.recoveredChargeG) };
+  return {};
+}
