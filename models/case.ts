@@ -15,7 +15,7 @@ import type { Vehicle } from "./vehicle";
 
 export type { CaseStatus };
 
-/** A JSON value as stored in the answers, computed and findings columns. */
+/** A JSON value as stored in the answers and findings columns. */
 export type JsonValue = string | number | boolean | null | JsonValue[] | { [key: string]: JsonValue };
 export type JsonObject = { [key: string]: JsonValue };
 
@@ -32,7 +32,6 @@ export class Case extends Model<InferAttributes<Case>, InferCreationAttributes<C
   declare symptomTags: CreationOptional<string[]>;
   declare interviewStep: CreationOptional<string | null>;
   declare answers: CreationOptional<JsonObject>;
-  declare computed: CreationOptional<JsonObject | null>;
   declare findings: CreationOptional<JsonValue | null>;
   declare engineVersion: CreationOptional<string | null>;
   declare conclusionCause: CreationOptional<string | null>;
@@ -52,7 +51,6 @@ export class Case extends Model<InferAttributes<Case>, InferCreationAttributes<C
         symptomTags: { type: DataTypes.JSON, allowNull: false, defaultValue: [] },
         interviewStep: { type: DataTypes.STRING(40), allowNull: true },
         answers: { type: DataTypes.JSON, allowNull: false, defaultValue: {} },
-        computed: { type: DataTypes.JSON, allowNull: true },
         findings: { type: DataTypes.JSON, allowNull: true },
         engineVersion: { type: DataTypes.STRING(64), allowNull: true },
         conclusionCause: { type: DataTypes.STRING(40), allowNull: true },

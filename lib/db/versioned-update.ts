@@ -10,7 +10,6 @@ export type CaseChanges = Partial<{
   symptomTags: string[];
   interviewStep: string | null;
   answers: JsonObject;
-  computed: JsonObject | null;
   findings: JsonValue | null;
   engineVersion: string | null;
   conclusionCause: string | null;

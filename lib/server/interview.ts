@@ -74,8 +74,6 @@ export async function saveInterview({
   const shop = { altitudeM: shopAltitudeM };
   const sorted = sortSavedAnswers(input.answers, shop);
   const drafts = { ...input.drafts, ...sorted.drafts };
-  const diagnosisInput = diagnosisInputFor(sorted.answers, shop);
-  const computed = diagnosisInput ? (diagnose(diagnosisInput).computed as unknown as JsonObject) : null;
   const version = await updateIfVersion({
     caseId,
     shopId: user.shopId,
@@ -89,7 +87,6 @@ export async function saveInterview({
         visited: input.visited,
       } as unknown as JsonObject,
       symptomTags: sorted.answers.behaviour?.symptoms ?? [],
-      computed,
     },
   });
   return { version, draftGroups: Object.keys(sorted.drafts) };
@@ -133,7 +130,6 @@ export async function submitCase({
       status,
       findings: { input: diagnosisInput, ...findings } as unknown as JsonValue,
       engineVersion: findings.engineVersion,
-      computed: findings.computed as unknown as JsonObject,
       conclusionCause: input.conclusionCause,
       conclusionNotes: input.conclusionNotes,
       submittedAt: new Date(),

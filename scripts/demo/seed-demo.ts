@@ -120,12 +120,11 @@ export function interviewColumns(d: DemoCase, altitudeM: number) {
   const visited = stepIds.filter((step) => step in answers || step === d.interviewStep);
   const record = { answers, drafts: {}, skipped: d.skipped ?? [], visited };
   const toJson = (value: unknown) => JSON.parse(JSON.stringify(value)) as JsonObject;
-  if (!d.diagnosed) return { answers: toJson(record), computed: null, findings: null, engineVersion: null };
+  if (!d.diagnosed) return { answers: toJson(record), findings: null, engineVersion: null };
   const input = diagnosisInputSchema.parse(toDiagnosisInput(answers, { altitudeM }));
   const findings = diagnose(input);
   return {
     answers: toJson(record),
-    computed: toJson(findings.computed),
     findings: toJson({ input, ...findings }) as JsonValue,
     engineVersion: findings.engineVersion,
   };

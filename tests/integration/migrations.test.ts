@@ -88,6 +88,18 @@ describe("migrations", () => {
     expect((await tables()).filter((t) => t !== "schema_migration")).toEqual(appTables);
   });
 
+  it("drops the case's unread computed column, and brings it back empty on the way down", async () => {
+    const migrator = createMigrator(sequelize);
+    const columns = async () =>
+      Object.keys(await sequelize.getQueryInterface().describeTable("service_case"));
+    await migrator.up();
+    expect(await columns()).not.toContain("computed");
+    await migrator.down({ to: "20261203-4001-drop-case-computed" });
+    expect(await columns()).toContain("computed");
+    await migrator.up();
+    expect(await columns()).not.toContain("computed");
+  });
+
   it("makes every table InnoDB with utf8mb4", async () => {
     const [rows] = await sequelize.query(
       "SELECT table_name AS name, engine, table_collation AS collation FROM information_schema.tables WHERE table_schema = DATABASE()",

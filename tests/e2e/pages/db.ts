@@ -15,7 +15,6 @@ export interface SavedCaseRow {
   interview_step: string | null;
   version: number;
   answers: { answers: Record<string, Record<string, unknown>>; skipped: string[] };
-  computed: Record<string, number> | null;
   findings: {
     engineVersion: string;
     suspects: { cause: string; score: number }[];
@@ -32,7 +31,7 @@ export async function readCase(caseId: number): Promise<SavedCaseRow> {
   const connection = await mysql.createConnection(E2E_DATABASE);
   try {
     const [rows] = await connection.query(
-      "SELECT status, interview_step, version, answers, computed, findings, engine_version, conclusion_cause FROM service_case WHERE id = ?",
+      "SELECT status, interview_step, version, answers, findings, engine_version, conclusion_cause FROM service_case WHERE id = ?",
       [caseId],
     );
     const row = (rows as Record<string, unknown>[])[0];
@@ -40,7 +39,6 @@ export async function readCase(caseId: number): Promise<SavedCaseRow> {
     return {
       ...row,
       answers: parse(row.answers),
-      computed: parse(row.computed),
       findings: parse(row.findings),
     } as SavedCaseRow;
   } finally {
