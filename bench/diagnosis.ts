@@ -2,6 +2,11 @@
 import { loadavg } from "node:os";
 import { diagnose, type DiagnosisInput, SYMPTOM_IDS } from "@/lib/diagnosis";
 import { WORKED_CASES } from "@/lib/diagnosis/fixtures";
+import { SERVICE_REFRIGERANT_IDS } from "@/lib/refrigerants/catalog";
+import { EXPANSION_DEVICE_IDS } from "@/lib/vehicles/expansion-devices";
+
+// R-744 systems are the rarer ones in a shop: half as likely as each of the others in the mix.
+const REFRIGERANT_MIX = SERVICE_REFRIGERANT_IDS.flatMap((id) => (id === "R-744" ? [id] : [id, id]));
 
 /** Small deterministic generator (mulberry32) so every run measures the same inputs. */
 function mulberry32(seed: number): () => number {
@@ -21,12 +26,12 @@ function variedInputs(count: number): DiagnosisInput[] {
   const maybe = (value: number) => (random() < 0.7 ? value : undefined);
   const inputs: DiagnosisInput[] = WORKED_CASES.map((c) => c.input);
   while (inputs.length < count) {
-    const refrigerant = pick(["R-134a", "R-1234yf", "R-134a", "R-1234yf", "R-744"] as const);
+    const refrigerant = pick(REFRIGERANT_MIX);
     const scale = refrigerant === "R-744" ? 7 : 1;
     const ambientC = 15 + random() * 27;
     inputs.push({
       refrigerant,
-      expansionDevice: pick(["orifice_tube", "txv"] as const),
+      expansionDevice: pick(EXPANSION_DEVICE_IDS),
       ambientC,
       relativeHumidityPct: maybe(20 + random() * 70),
       altitudeM: maybe(random() * 1800),

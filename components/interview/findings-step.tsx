@@ -5,7 +5,7 @@ import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useMutation } from "@tanstack/react-query";
 import { CAUSE_IDS, CAUSE_LABELS, diagnose, type CauseId, type DiagnosisInput } from "@/lib/diagnosis";
-import { CAUTIONS, isCautionId } from "@/lib/cautions/catalog";
+import { cautionNamed } from "@/lib/cautions/catalog";
 import type { Caution as InterviewCaution } from "@/lib/interview/cautions";
 import { ApiError } from "@/lib/queries/api-fetch";
 import { submitCase, type CaseSubmitResult } from "@/lib/queries/case-submit";
@@ -79,8 +79,7 @@ export function FindingsStep({
   // The engine names its cautions by the catalogue's ids: one caution, one wording and level on screen.
   const cautions: CautionItem[] = [...interviewCautions];
   for (const c of findings.cautions)
-    if (!cautions.some((x) => x.id === c.id))
-      cautions.push(isCautionId(c.id) ? CAUTIONS[c.id] : { id: c.id, text: c.text, level: "notice" });
+    if (!cautions.some((x) => x.id === c.id)) cautions.push(cautionNamed(c.id, c.text));
 
   function submit(event: React.FormEvent) {
     event.preventDefault();

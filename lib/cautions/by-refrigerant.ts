@@ -1,4 +1,4 @@
-import type { RefrigerantId } from "@/lib/refrigerants/catalog";
+import { refrigerantInfo, type RefrigerantId } from "@/lib/refrigerants/catalog";
 import { type Caution, type CautionId, cautionsById } from "./catalog";
 
 /** The cautions a refrigerant brings of its own, most serious first. */
@@ -14,7 +14,7 @@ export function refrigerantCautionIds(refrigerant: RefrigerantId): CautionId[] {
  * refrigerant keeps the ban on screen: better once too often than missed.
  */
 export function ventingBanApplies(refrigerant: RefrigerantId | undefined): boolean {
-  return refrigerant !== "R-744";
+  return refrigerant === undefined || refrigerantInfo(refrigerant).chemistry !== "natural";
 }
 
 /** Cautions to show wherever a technician works on a system with this refrigerant, most specific first. */

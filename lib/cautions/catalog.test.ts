@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { CAUTION_IDS, CAUTION_LEVELS, CAUTIONS, cautionsById, isCautionId } from "./catalog";
+import { CAUTION_IDS, CAUTION_LEVELS, CAUTIONS, cautionNamed, cautionsById, isCautionId } from "./catalog";
 
 describe("the caution catalogue", () => {
   it("spells every id one way: lower-case words joined by underscores", () => {
@@ -30,5 +30,14 @@ describe("the caution catalogue", () => {
     expect(isCautionId("eye_and_skin")).toBe(true);
     expect(isCautionId("eye-and-skin")).toBe(false);
     expect(isCautionId("toString")).toBe(false);
+  });
+
+  it("reads a caution named elsewhere by id in the catalogue's words, and keeps an unknown one as a notice", () => {
+    expect(cautionNamed("empty_system", "another wording")).toBe(CAUTIONS.empty_system);
+    expect(cautionNamed("new_engine_caution", "Its own text.")).toEqual({
+      id: "new_engine_caution",
+      level: "notice",
+      text: "Its own text.",
+    });
   });
 });

@@ -187,6 +187,14 @@ export function isCautionId(value: unknown): value is CautionId {
   return typeof value === "string" && Object.hasOwn(ENTRIES, value);
 }
 
+/**
+ * A caution another module names by id with its own text (the findings engine's): the catalogue's entry,
+ * so one caution reads the same everywhere; an id the catalogue lacks keeps its text, as a notice.
+ */
+export function cautionNamed(id: string, text: string): Pick<Caution, "level" | "text"> & { id: string } {
+  return isCautionId(id) ? CAUTIONS[id] : { id, level: "notice", text };
+}
+
 /** The catalogue's cautions for these ids, in the order given. */
 export function cautionsById(ids: readonly CautionId[]): Caution[] {
   return ids.map((id) => CAUTIONS[id]);

@@ -59,7 +59,12 @@ export interface RefrigerantInfo {
   flammable: boolean;
   /** ASHRAE Standard 34 safety group. */
   safetyClass: string;
+  /** The refrigerant's kind: it decides the venting rules and which oils mix with it. */
+  chemistry: RefrigerantChemistry;
 }
+
+/** Hydrofluorocarbon, hydrofluoro-olefin, chlorofluorocarbon, or a natural refrigerant (CO₂). */
+export type RefrigerantChemistry = "HFC" | "HFO" | "CFC" | "natural";
 
 export interface SaturationTableData {
   id: string;
@@ -82,11 +87,14 @@ export const SATURATION_TABLES: Readonly<Record<RefrigerantId, SaturationTableDa
 };
 
 // ASHRAE Standard 34 safety groups (from memory): only R-1234yf is flammable (A2L, mildly flammable).
-const SAFETY: Record<RefrigerantId, { safetyClass: string; flammable: boolean }> = {
-  "R-134a": { safetyClass: "A1", flammable: false },
-  "R-1234yf": { safetyClass: "A2L", flammable: true },
-  "R-744": { safetyClass: "A1", flammable: false },
-  "R-12": { safetyClass: "A1", flammable: false },
+const SAFETY: Record<
+  RefrigerantId,
+  { safetyClass: string; flammable: boolean; chemistry: RefrigerantChemistry }
+> = {
+  "R-134a": { safetyClass: "A1", flammable: false, chemistry: "HFC" },
+  "R-1234yf": { safetyClass: "A2L", flammable: true, chemistry: "HFO" },
+  "R-744": { safetyClass: "A1", flammable: false, chemistry: "natural" },
+  "R-12": { safetyClass: "A1", flammable: false, chemistry: "CFC" },
 };
 
 const INFO = Object.fromEntries(

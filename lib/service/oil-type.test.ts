@@ -20,7 +20,7 @@ describe("oilSuitsCompressor", () => {
     const r = oilSuitsCompressor({ compressorDrive: "electric", oilAdded: "PAG 46" });
     expect(r.suits).toBe(false);
     expect(r.warnings[0]?.id).toBe("pag_in_electric");
-    expect(r.warnings[0]?.severity).toBe("danger");
+    expect(r.warnings[0]?.level).toBe("danger");
   });
 
   it("accepts POE in an electric compressor that calls for it", () => {

@@ -1,4 +1,5 @@
-import type { RefrigerantId } from "@/lib/refrigerants";
+import type { CautionLevel } from "@/lib/cautions/catalog";
+import { refrigerantInfo, type RefrigerantId } from "@/lib/refrigerants";
 import { SERVICE_SOURCES } from "./sources";
 
 export type OilFamily = "PAG" | "POE" | "mineral" | "PAO" | "unknown";
@@ -16,7 +17,8 @@ export function oilFamily(oilType: string): OilFamily {
 
 export interface OilWarning {
   id: "pag_in_electric" | "unconfirmed_dielectric" | "differs_from_spec" | "mineral_with_hfc";
-  severity: "danger" | "caution";
+  /** on the cautions' scale (lib/cautions/catalog.ts): danger, or warning */
+  level: Extract<CautionLevel, "danger" | "warning">;
   text: string;
   source: string;
 }
@@ -34,14 +36,14 @@ export function oilSuitsCompressor(input: {
     if (added === "PAG") {
       warnings.push({
         id: "pag_in_electric",
-        severity: "danger",
+        level: "danger",
         text: "PAG oil in a high-voltage electric compressor can break down its insulation and leave the compressor case live. Use the dielectric oil (usually POE) the maker specifies, through equipment that does not inject oil.",
         source: SERVICE_SOURCES.dielectricOil,
       });
     } else if (added !== "POE") {
       warnings.push({
         id: "unconfirmed_dielectric",
-        severity: "caution",
+        level: "warning",
         text: "Confirm this is the dielectric oil the maker specifies for the electric compressor before adding it.",
         source: SERVICE_SOURCES.dielectricOil,
       });
@@ -54,18 +56,19 @@ export function oilSuitsCompressor(input: {
   ) {
     warnings.push({
       id: "differs_from_spec",
-      severity: "caution",
+      level: "warning",
       text: `The oil added (${input.oilAdded}) is not the kind the spec calls for (${input.specOilType}).`,
       source: "vehicle spec",
     });
   }
-  if (added === "mineral" && (input.refrigerant === "R-134a" || input.refrigerant === "R-1234yf")) {
+  const chemistry = input.refrigerant && refrigerantInfo(input.refrigerant).chemistry;
+  if (added === "mineral" && (chemistry === "HFC" || chemistry === "HFO")) {
     warnings.push({
       id: "mineral_with_hfc",
-      severity: "caution",
-      text: "Mineral oil does not mix with R-134a or R-1234yf and will not return to the compressor.",
+      level: "warning",
+      text: `Mineral oil does not mix with ${input.refrigerant} and will not return to the compressor.`,
       source: "from memory — refrigerant/oil miscibility",
     });
   }
-  return { suits: !warnings.some((w) => w.severity === "danger" || w.id === "differs_from_spec"), warnings };
+  return { suits: !warnings.some((w) => w.level === "danger" || w.id === "differs_from_spec"), warnings };
 }
