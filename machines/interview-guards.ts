@@ -20,7 +20,7 @@ export function pressureLeft(context: InterviewContext): boolean {
   return branches.pressureLeft(context.answers);
 }
 
-/** Identifier purity below 98 % (SAE J2099; common practice for) or a hydrocarbon flag. */
+/** Identifier purity below the pass mark (lib/service/identifier.ts) or a hydrocarbon flag. */
 export function refrigerantContaminated(context: InterviewContext): boolean {
   return branches.refrigerantContaminated(context.answers);
 }

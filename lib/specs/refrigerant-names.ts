@@ -11,6 +11,7 @@ const SPELLINGS: Readonly<Record<string, RefrigerantId>> = {
   r744: "R-744",
   "744": "R-744",
   co2: "R-744",
+  // Recognised so that a row naming R-12 is refused for what it is (lib/refrigerants/catalog.ts: not offered).
   r12: "R-12",
   cfc12: "R-12",
 };
