@@ -10,8 +10,9 @@ import { PURITY_PASS_PCT } from "@/lib/service/identifier";
 
 /**
  * - danger: can kill or maim at once (high voltage, very high pressure, fire or explosion);
- * - warning: can injure the technician, or breaks the law;
- * - notice: protects the system, the shop's refrigerant or the record.
+ * - warning: can injure someone, or ruin a part or the shop's equipment;
+ * - notice: what the law, good practice or the record asks. The interview folds notices away, so a
+ *   phone at the vehicle shows the cautions that can hurt first.
  */
 export const CAUTION_LEVELS = ["danger", "warning", "notice"] as const;
 export type CautionLevel = (typeof CAUTION_LEVELS)[number];
@@ -45,7 +46,7 @@ const ENTRIES = {
     source: "common practice",
   },
   never_vent: {
-    level: "warning",
+    level: "notice",
     title: "Certified hands, no venting",
     text: "Never release refrigerant to the air: recover it with certified equipment. Only a certified technician recovers or charges refrigerant.",
     source:
@@ -152,7 +153,7 @@ const ENTRIES = {
     source: "SAE J2788 (recharge from the liquid phase); US Army TM 5-2420-230-24-1",
   },
   repair_before_refill: {
-    level: "warning",
+    level: "notice",
     title: "Repair before refilling",
     text: "Do not refill a system that has leaked until the leak is repaired: topping it off brings the fault back, and in the EU refilling after an abnormal leak before the repair is forbidden.",
     source: "Directive 2006/40/EC, Article 7",
