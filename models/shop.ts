@@ -16,6 +16,8 @@ export class Shop extends Model<InferAttributes<Shop>, InferCreationAttributes<S
   declare units: CreationOptional<ShopUnits>;
   declare altitudeM: CreationOptional<number>;
   declare timeZone: CreationOptional<string>;
+  /** BCP 47 tag for dates and times the shop reads, with timeZone */
+  declare locale: CreationOptional<string>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -27,6 +29,7 @@ export class Shop extends Model<InferAttributes<Shop>, InferCreationAttributes<S
         units: { type: DataTypes.ENUM(...shopUnits), allowNull: false, defaultValue: "metric" },
         altitudeM: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         timeZone: { type: DataTypes.STRING(64), allowNull: false, defaultValue: "UTC" },
+        locale: { type: DataTypes.STRING(35), allowNull: false, defaultValue: "en" },
         createdAt: DataTypes.DATE(3),
         updatedAt: DataTypes.DATE(3),
       },

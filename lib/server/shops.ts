@@ -8,12 +8,13 @@ export interface ShopSummary {
   units: "metric" | "imperial";
   altitudeM: number;
   timeZone: string;
+  locale: string;
 }
 
 export async function getShop({ shopId }: { shopId: number }): Promise<ShopSummary> {
   const { Shop } = getModels();
   const shop = await Shop.findByPk(shopId, {
-    attributes: ["id", "name", "units", "altitudeM", "timeZone"],
+    attributes: ["id", "name", "units", "altitudeM", "timeZone", "locale"],
     raw: true,
   });
   if (!shop) throw new AppError("not_found:shop");
@@ -23,5 +24,6 @@ export async function getShop({ shopId }: { shopId: number }): Promise<ShopSumma
     units: shop.units,
     altitudeM: shop.altitudeM,
     timeZone: shop.timeZone,
+    locale: shop.locale,
   };
 }

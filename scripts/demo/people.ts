@@ -12,6 +12,7 @@ export type DemoShop = {
   units: ShopUnits;
   altitudeM: number;
   timeZone: string;
+  locale: string;
   users: DemoUser[];
 };
 
@@ -21,6 +22,7 @@ export const harbourline: DemoShop = {
   units: "metric",
   altitudeM: 12,
   timeZone: "America/Halifax",
+  locale: "en-CA",
   users: [
     { key: "owner", email: "owner@harbourline.test", name: "Maren Quist", role: "owner" },
     { key: "senior", email: "senior@harbourline.test", name: "Tobias Okonkwo-Reyes", role: "senior" },
@@ -35,6 +37,7 @@ export const ridgeback: DemoShop = {
   units: "imperial",
   altitudeM: 1500,
   timeZone: "America/Denver",
+  locale: "en-US",
   users: [{ key: "owner", email: "owner@ridgeback.test", name: "Wendell Achterberg", role: "owner" }],
 };
 

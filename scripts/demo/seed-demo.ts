@@ -63,7 +63,13 @@ async function seedShop(
   transaction: Transaction,
 ) {
   const shop = await models.Shop.create(
-    { name: demo.name, units: demo.units, altitudeM: demo.altitudeM, timeZone: demo.timeZone },
+    {
+      name: demo.name,
+      units: demo.units,
+      altitudeM: demo.altitudeM,
+      timeZone: demo.timeZone,
+      locale: demo.locale,
+    },
     { transaction },
   );
   const userIds = new Map<string, string>();
