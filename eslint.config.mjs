@@ -77,9 +77,8 @@ const layering = {
           {
             target: CLIENT_SIDE,
             from: "./lib/auth",
-            except: ["./roles.ts", "./case-access.ts", "./navigation.ts"],
-            message:
-              "Only the pure parts of lib/auth (roles, case-access, navigation) may reach client code.",
+            except: ["./roles.ts", "./navigation.ts"],
+            message: "Only the pure parts of lib/auth (roles, navigation) may reach client code.",
           },
         ],
       },

@@ -1,6 +1,7 @@
 import "server-only";
 import type { User } from "lucia";
-import { mayChangeCase } from "@/lib/auth/case-access";
+import { caseRefusal } from "@/lib/cases/rules";
+import type { CaseStatus } from "@/lib/contracts/cases";
 import { AppError } from "@/lib/errors";
 import { ownerSummaryAvailable } from "@/lib/owner/availability";
 import type { ServiceRecordFacts } from "@/lib/owner/case-facts";
@@ -12,7 +13,7 @@ import { getModels } from "@/models";
 export interface OwnerCaseRow {
   id: number;
   shopId: number;
-  status: string;
+  status: CaseStatus;
   complaint: string;
   technicianId: string;
   technicianRole: string | null;
@@ -28,8 +29,8 @@ export interface OwnerCaseRow {
 }
 
 /**
- * The case scoped to the user's shop (404 otherwise). With forChange, the user must also be one
- * who may change the case: its technician, a senior or the owner (403).
+ * The case scoped to the user's shop (404 otherwise). With forChange, the case's rules must let the
+ * user work on it (photos, proposal, owner page): its technician, a senior or the owner (403).
  */
 export async function loadCaseForOwner({
   user,
@@ -41,8 +42,8 @@ export async function loadCaseForOwner({
   forChange?: boolean;
 }): Promise<OwnerCaseRow> {
   const row = await loadOwnerCase({ shopId: user.shopId, caseId });
-  if (forChange && !mayChangeCase(user, row))
-    throw new AppError("forbidden:case", "Only the case's technician, a senior or the owner can do this.");
+  const refusal = forChange ? caseRefusal("work_on", user, row) : null;
+  if (refusal) throw new AppError(refusal.code, refusal.message);
   return row;
 }
 
@@ -67,7 +68,7 @@ export async function loadOwnerCase({
   const c = row.get({ plain: true }) as unknown as {
     id: number;
     shopId: number;
-    status: string;
+    status: CaseStatus;
     complaint: string;
     technicianId: string;
     answers: unknown;

@@ -1,7 +1,6 @@
 import "server-only";
 import type { User } from "lucia";
-import { mayChangeCase } from "@/lib/auth/case-access";
-import { can } from "@/lib/auth/roles";
+import { mayDo } from "@/lib/cases/rules";
 import type { AttachmentView } from "@/lib/contracts/attachments";
 import type { OutboundEmailView } from "@/lib/contracts/emails";
 import type { ShareLinkView, ShopProposalView } from "@/lib/contracts/owner-summary";
@@ -48,7 +47,7 @@ export async function ownerPanelData({
   return {
     caseId,
     available: row.available,
-    mayAct: can(user.role, "cases:write") && mayChangeCase(user, row),
+    mayAct: mayDo("work_on", user, row),
     customerEmail: row.customerEmail,
     links,
     emails,

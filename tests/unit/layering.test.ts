@@ -94,8 +94,8 @@ describe("layering rules in eslint.config.mjs", { timeout: 120_000 }, () => {
       [
         'import type { CaseStatus } from "@/lib/contracts/cases";',
         'import { ROLES } from "@/lib/auth/roles";',
-        'import { caseIsEditable } from "@/lib/auth/case-access";',
-        "export const seen: [CaseStatus[], typeof ROLES, typeof caseIsEditable] = [[], ROLES, caseIsEditable];",
+        'import { caseAbilities } from "@/lib/cases/rules";',
+        "export const seen: [CaseStatus[], typeof ROLES, typeof caseAbilities] = [[], ROLES, caseAbilities];",
         "",
       ].join("\n"),
     );

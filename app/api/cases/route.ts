@@ -1,6 +1,5 @@
 import { handler } from "@/lib/server/handler";
-import { listCases } from "@/lib/server/cases";
-import { createCase } from "@/lib/server/case-create";
+import { createCase, listCases } from "@/lib/server/cases";
 import { caseListQuerySchema, createCaseSchema } from "@/lib/contracts/cases";
 
 export const GET = handler(

@@ -2,8 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { requireUser } from "@/lib/auth/guard";
-import { caseIsEditable, mayChangeCase } from "@/lib/auth/case-access";
-import { can } from "@/lib/auth/roles";
+import { caseAbilities } from "@/lib/cases/rules";
 import { getCase } from "@/lib/server/cases";
 import { isAppError } from "@/lib/errors";
 import { EXPANSION_DEVICE_LABELS, isExpansionDevice } from "@/lib/vehicles/expansion-devices";
@@ -27,12 +26,7 @@ export default async function CasePage({ params }: { params: Promise<{ id: strin
     throw error;
   });
   const record = (detail.answers ?? {}) as { answers?: Record<string, never> };
-  const editable = caseIsEditable(detail);
-  const mayEdit = mayChangeCase(user, detail);
-  const mayReview =
-    detail.status === "awaiting_signoff" &&
-    can(user.role, "signoff:review") &&
-    detail.technicianId !== user.id;
+  const may = caseAbilities(user, detail);
   const owner = await ownerPanelData({ user, caseId: detail.id });
   const findings = detail.findings as Parameters<typeof FindingsSnapshot>[0]["findings"] | null;
   return (
@@ -43,7 +37,7 @@ export default async function CasePage({ params }: { params: Promise<{ id: strin
         </h1>
         <StatusBadge status={detail.status} />
       </header>
-      {editable && mayEdit && (
+      {may.edit && (
         <Link href={`/cases/${detail.id}/interview`} className="btn-primary min-h-glove w-full text-lg">
           {detail.status === "sent_back" ? "Reopen the interview" : "Continue the interview"}
         </Link>
@@ -64,7 +58,7 @@ export default async function CasePage({ params }: { params: Promise<{ id: strin
           </ul>
         </section>
       )}
-      {mayReview && <SignOffForm caseId={detail.id} />}
+      {may.sign_off && may.send_back && <SignOffForm caseId={detail.id} />}
       <section className="card">
         <h2 className="text-lg font-bold">Complaint, in the owner&apos;s words</h2>
         <p className="mt-1">&ldquo;{detail.complaint}&rdquo;</p>

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { notFound, redirect } from "next/navigation";
 import { requireUser } from "@/lib/auth/guard";
-import { caseIsEditable, mayChangeCase } from "@/lib/auth/case-access";
+import { mayDo } from "@/lib/cases/rules";
 import { getCase } from "@/lib/server/cases";
 import { getShop } from "@/lib/server/shops";
 import { isAppError } from "@/lib/errors";
@@ -21,9 +21,7 @@ export default async function InterviewPage({ params }: { params: Promise<{ id: 
     }),
     getShop({ shopId: user.shopId }),
   ]);
-  const editable = caseIsEditable(detail);
-  const mayEdit = mayChangeCase(user, detail);
-  if (!editable || !mayEdit) redirect(`/cases/${caseId}`);
+  if (!mayDo("edit", user, detail)) redirect(`/cases/${caseId}`);
 
   const saved = (detail.answers ?? {}) as Partial<SavedInterview>;
   const record: Partial<SavedInterview> = {

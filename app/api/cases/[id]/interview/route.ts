@@ -1,14 +1,10 @@
 import { handler } from "@/lib/server/handler";
-import { saveInterview } from "@/lib/server/interview";
-import { getShop } from "@/lib/server/shops";
+import { saveInterview } from "@/lib/server/cases";
 import { caseParamsSchema } from "@/lib/contracts/cases";
 import { interviewSaveSchema } from "@/lib/contracts/interview";
 
 /** Autosave: the whole interview record, guarded by the version the client last saw. */
 export const PUT = handler(
   { permission: "cases:write", params: caseParamsSchema, body: interviewSaveSchema },
-  async ({ user, params, body }) => {
-    const shop = await getShop({ shopId: user.shopId });
-    return saveInterview({ user, caseId: params.id, input: body, shopAltitudeM: shop.altitudeM });
-  },
+  async ({ user, params, body }) => saveInterview({ user, caseId: params.id, input: body }),
 );

@@ -1,5 +1,5 @@
 import { handler } from "@/lib/server/handler";
-import { recordSignOff } from "@/lib/server/sign-off";
+import { recordSignOff } from "@/lib/server/cases";
 import { caseParamsSchema, signOffSchema } from "@/lib/contracts/cases";
 
 export const POST = handler(

@@ -3,7 +3,7 @@ import { getModels, type JsonObject, type Vehicle as VehicleModel } from "@/mode
 import type { InferAttributes } from "sequelize";
 import { AppError } from "@/lib/errors";
 import type { CreateCaseInput } from "@/lib/contracts/cases";
-import { recordAudit } from "./audit";
+import { recordAudit } from "../audit";
 
 /**
  * Opens a case for a picked or new customer and vehicle. The interview's system answers are
@@ -20,7 +20,7 @@ export async function createCase({
   input: CreateCaseInput;
 }): Promise<{ id: number }> {
   const { sequelize, Customer, Vehicle, Case } = getModels();
-  const created = await sequelize.transaction(async (transaction) => {
+  return sequelize.transaction(async (transaction) => {
     let customerId = input.customerId;
     let vehicle: InferAttributes<VehicleModel> | null = input.vehicleId
       ? await Vehicle.findOne({ where: { id: input.vehicleId, shopId }, transaction, raw: true })
@@ -89,7 +89,7 @@ export async function createCase({
       electricCompressor: Boolean(vehicle.electricCompressor),
       ...(vehicle.labelChargeG ? { labelChargeG: vehicle.labelChargeG } : {}),
     };
-    return Case.create(
+    const created = await Case.create(
       {
         shopId,
         customerId,
@@ -101,13 +101,14 @@ export async function createCase({
       },
       { transaction },
     );
+    await recordAudit({
+      shopId,
+      actorId: technicianId,
+      entity: "case",
+      entityId: created.id,
+      action: "create",
+      transaction,
+    });
+    return { id: created.id };
   });
-  await recordAudit({
-    shopId,
-    actorId: technicianId,
-    entity: "case",
-    entityId: created.id,
-    action: "create",
-  });
-  return { id: created.id };
 }

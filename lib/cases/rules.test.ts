@@ -1,0 +1,99 @@
+import { describe, expect, it } from "vitest";
+import { ROLES, type Role } from "@/lib/auth/roles";
+import { CASE_STATUSES, type CaseStatus } from "@/lib/contracts/cases";
+import {
+  CASE_ACTIONS,
+  STATUS_AFTER,
+  caseAbilities,
+  caseRefusal,
+  statusAfterSubmit,
+  type CaseAction,
+} from "./rules";
+
+// Letters for the actions a person may take: E edit, W work on (photos, proposal, owner page),
+// S submit, O sign off, B send back, C close, R reopen. Written out by hand for every role, on their
+// own case and on someone else's, in every status, so a changed rule shows up here as a changed cell.
+const LETTER: Record<CaseAction, string> = {
+  edit: "E",
+  work_on: "W",
+  submit: "S",
+  sign_off: "O",
+  send_back: "B",
+  close: "C",
+  reopen: "R",
+};
+
+type Row = Record<CaseStatus, string>;
+const EXPECTED: Record<`${Role}/${"own" | "other"}`, Row> = {
+  "owner/own": { draft: "EWS", awaiting_signoff: "W", signed_off: "WC", sent_back: "EWS", closed: "WR" },
+  "owner/other": { draft: "EWS", awaiting_signoff: "WOB", signed_off: "WC", sent_back: "EWS", closed: "WR" },
+  "senior/own": { draft: "EWS", awaiting_signoff: "W", signed_off: "WC", sent_back: "EWS", closed: "WR" },
+  "senior/other": { draft: "EWS", awaiting_signoff: "WOB", signed_off: "WC", sent_back: "EWS", closed: "WR" },
+  "technician/own": { draft: "EWS", awaiting_signoff: "W", signed_off: "WC", sent_back: "EWS", closed: "W" },
+  "technician/other": { draft: "", awaiting_signoff: "", signed_off: "", sent_back: "", closed: "" },
+  "apprentice/own": { draft: "EWS", awaiting_signoff: "W", signed_off: "WC", sent_back: "EWS", closed: "W" },
+  "apprentice/other": { draft: "", awaiting_signoff: "", signed_off: "", sent_back: "", closed: "" },
+};
+
+describe("the case's rules", () => {
+  it("say, for every role × own or other's case × status, exactly which actions are allowed", () => {
+    for (const role of ROLES)
+      for (const whose of ["own", "other"] as const)
+        for (const status of CASE_STATUSES) {
+          const facts = { status, technicianId: whose === "own" ? "me" : "someone-else" };
+          const may = caseAbilities({ id: "me", role }, facts);
+          const letters = CASE_ACTIONS.filter((a) => may[a])
+            .map((a) => LETTER[a])
+            .join("");
+          expect(letters, `${role} on ${whose} case, ${status}`).toBe(EXPECTED[`${role}/${whose}`][status]);
+        }
+  });
+
+  it("refuse with 403 who may never do it and 409 what the status does not allow, in that order for changes", () => {
+    const other = { id: "t2", role: "technician" as const };
+    const owner = { id: "o1", role: "owner" as const };
+    expect(caseRefusal("edit", other, { status: "awaiting_signoff", technicianId: "a1" })).toEqual({
+      code: "forbidden:case",
+      message: "Only the case's technician, a senior or the owner can change this case.",
+    });
+    expect(caseRefusal("edit", owner, { status: "awaiting_signoff", technicianId: "a1" })).toEqual({
+      code: "conflict:case",
+      message: "This case has been submitted; a senior must send it back before it can change.",
+    });
+  });
+
+  it("answer a verdict on a case not waiting for one with 409 before looking at whose case it is", () => {
+    const senior = { id: "s1", role: "senior" as const };
+    expect(caseRefusal("sign_off", senior, { status: "draft", technicianId: "s1" })?.code).toBe(
+      "conflict:case",
+    );
+    expect(caseRefusal("sign_off", senior, { status: "awaiting_signoff", technicianId: "s1" })).toEqual({
+      code: "forbidden:case",
+      message: "A second person signs off: you cannot sign off your own case.",
+    });
+    expect(
+      caseRefusal(
+        "send_back",
+        { id: "t1", role: "technician" },
+        { status: "awaiting_signoff", technicianId: "a1" },
+      )?.code,
+    ).toBe("forbidden:case");
+  });
+
+  it("send an apprentice's submission to sign-off and sign anyone else's off at once", () => {
+    expect(statusAfterSubmit("apprentice")).toBe("awaiting_signoff");
+    for (const role of ["technician", "senior", "owner"] as const)
+      expect(statusAfterSubmit(role)).toBe("signed_off");
+    // No technician found for the case reads as "not an apprentice", as it always has.
+    expect(statusAfterSubmit(null)).toBe("signed_off");
+  });
+
+  it("lead each verdict and the closing steps to the status the brief names", () => {
+    expect(STATUS_AFTER).toEqual({
+      sign_off: "signed_off",
+      send_back: "sent_back",
+      close: "closed",
+      reopen: "signed_off",
+    });
+  });
+});

@@ -1,0 +1,147 @@
+import "server-only";
+import type { Transaction } from "sequelize";
+import type { User } from "lucia";
+import { getModels, type JsonObject, type JsonValue } from "@/models";
+import { AppError } from "@/lib/errors";
+import { sortSavedAnswers } from "@/lib/interview/validate";
+import { diagnosisInputFor } from "@/lib/interview/to-diagnosis-input";
+import { diagnose } from "@/lib/diagnosis";
+import { statusAfterSubmit } from "@/lib/cases/rules";
+import type { CaseSubmitResult } from "@/lib/contracts/case-submit";
+import type { CaseSubmitInput, InterviewSaveInput, InterviewSaveResponse } from "@/lib/contracts/interview";
+import { updateCaseAtVersion, type CaseChanges } from "@/lib/db/versioned-update";
+import { recordAudit } from "../audit";
+import { getShop } from "../shops";
+import { caseForAction } from "./load";
+
+/**
+ * Applies the change only at the version the client last saw; otherwise says plainly what happened.
+ * The case row is locked by the caller.
+ */
+async function updateIfVersion({
+  row,
+  baseVersion,
+  values,
+  transaction,
+}: {
+  row: { id: number; shopId: number; version: number; updatedAt: Date };
+  baseVersion: number;
+  values: CaseChanges;
+  transaction: Transaction;
+}) {
+  const version =
+    row.version === baseVersion
+      ? await updateCaseAtVersion({
+          shopId: row.shopId,
+          caseId: row.id,
+          expectedVersion: baseVersion,
+          changes: values,
+          transaction,
+        })
+      : null;
+  if (version !== null) return version;
+  throw new AppError(
+    "conflict:case",
+    `This case was changed on another screen at ${row.updatedAt.toISOString().slice(11, 16)} UTC. Reload to see those answers; what you typed here is kept on this device.`,
+  );
+}
+
+export async function saveInterview({
+  user,
+  caseId,
+  input,
+}: {
+  user: User;
+  caseId: number;
+  input: InterviewSaveInput;
+}): Promise<InterviewSaveResponse> {
+  const shop = await getShop({ shopId: user.shopId });
+  return getModels().sequelize.transaction(async (transaction) => {
+    const row = await caseForAction({ user, caseId, action: "edit", transaction });
+    // Nothing typed is lost: a group that fails validation is stored as a draft, not refused.
+    const settings = { altitudeM: shop.altitudeM };
+    const sorted = sortSavedAnswers(input.answers, settings);
+    const drafts = { ...input.drafts, ...sorted.drafts };
+    const version = await updateIfVersion({
+      row,
+      baseVersion: input.baseVersion,
+      transaction,
+      values: {
+        interviewStep: input.step,
+        answers: {
+          answers: sorted.answers,
+          drafts,
+          skipped: input.skipped,
+          visited: input.visited,
+        } as unknown as JsonObject,
+        symptomTags: sorted.answers.behaviour?.symptoms ?? [],
+      },
+    });
+    return { version, draftGroups: Object.keys(sorted.drafts) };
+  });
+}
+
+export async function submitCase({
+  user,
+  caseId,
+  input,
+}: {
+  user: User;
+  caseId: number;
+  input: CaseSubmitInput;
+}): Promise<CaseSubmitResult> {
+  const shop = await getShop({ shopId: user.shopId });
+  const { sequelize, User: UserModel } = getModels();
+  return sequelize.transaction(async (transaction) => {
+    const row = await caseForAction({ user, caseId, action: "submit", transaction });
+    const record = row.answers as { answers?: unknown };
+    const settings = { altitudeM: shop.altitudeM };
+    const { answers } = sortSavedAnswers(record.answers, settings);
+    // The same route-filtered input the findings screen used, so the stored snapshot matches what was shown
+    // whenever both ran the same engine.
+    const diagnosisInput = diagnosisInputFor(answers, settings);
+    if (!diagnosisInput)
+      throw new AppError("bad_request:case", "Answer the system and conditions steps before submitting.");
+    // Always the server's engine: a screen left open across an update may hold findings from an older one.
+    // The technician's conclusion stands either way; the response says when the findings differ.
+    const findings = diagnose(diagnosisInput);
+    const findingsChanged = input.engineVersion !== findings.engineVersion;
+    const technician = await UserModel.findOne({
+      where: { id: row.technicianId, shopId: user.shopId },
+      attributes: ["role"],
+      raw: true,
+      transaction,
+    });
+    const status = statusAfterSubmit(technician?.role ?? null);
+    const version = await updateIfVersion({
+      row,
+      baseVersion: input.baseVersion,
+      transaction,
+      values: {
+        status,
+        findings: { input: diagnosisInput, ...findings } as unknown as JsonValue,
+        engineVersion: findings.engineVersion,
+        conclusionCause: input.conclusionCause,
+        conclusionNotes: input.conclusionNotes,
+        submittedAt: new Date(),
+      },
+    });
+    await recordAudit({
+      shopId: user.shopId,
+      actorId: user.id,
+      entity: "case",
+      entityId: caseId,
+      action: "submit",
+      detail: {
+        status,
+        conclusionCause: input.conclusionCause,
+        engineVersion: findings.engineVersion,
+        ...(findingsChanged ? { screenEngineVersion: input.engineVersion } : {}),
+      },
+      transaction,
+    });
+    return findingsChanged
+      ? { version, status, findingsChanged: true, findings }
+      : { version, status, findingsChanged: false };
+  });
+}
