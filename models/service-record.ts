@@ -35,9 +35,9 @@ export class ServiceRecord extends Model<
   declare airPct: Opt<number>;
   declare recoveryStartedAt: Opt<Date>;
   declare recoveryEndedAt: Opt<Date>;
-  declare recoveredG: Opt<number>;
+  declare recoveredChargeG: Opt<number>;
   declare recoveryCylinderId: Opt<number>;
-  declare oilDrainedMl: Opt<number>;
+  declare oilRemovedMl: Opt<number>;
   declare oilPulled: CreationOptional<boolean>;
   declare slowRecoveryNote: Opt<string>;
   declare deepestKpaAbs: Opt<number>;
@@ -83,9 +83,9 @@ export class ServiceRecord extends Model<
         airPct: decimal(5, 2, "airPct"),
         recoveryStartedAt: { type: DataTypes.DATE(3), allowNull: true },
         recoveryEndedAt: { type: DataTypes.DATE(3), allowNull: true },
-        recoveredG: int(),
+        recoveredChargeG: int(),
         recoveryCylinderId: int(),
-        oilDrainedMl: int(),
+        oilRemovedMl: int(),
         oilPulled: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         slowRecoveryNote: { type: DataTypes.TEXT, allowNull: true },
         deepestKpaAbs: decimal(7, 3, "deepestKpaAbs"),

@@ -27,9 +27,9 @@ const saved: ServiceRecordDto = {
   airPct: 0.3,
   recoveryStartedAt: "2026-12-01T09:00:00.000Z",
   recoveryEndedAt: "2026-12-01T09:22:00.000Z",
-  recoveredG: 430,
+  recoveredChargeG: 430,
   recoveryCylinderId: 7,
-  oilDrainedMl: 12,
+  oilRemovedMl: 12,
   oilPulled: false,
   slowRecoveryNote: null,
   deepestKpaAbs: 0.35,
@@ -59,7 +59,7 @@ describe("service record draft", () => {
       const read = readDraft(draft, units);
       expect(read.errors).toEqual({});
       const input = inputFromDraft(draft, read, "final", saved.version, units);
-      expect(Math.abs((input.recoveredG ?? 0) - 430)).toBeLessThanOrEqual(tolerance.g);
+      expect(Math.abs((input.recoveredChargeG ?? 0) - 430)).toBeLessThanOrEqual(tolerance.g);
       expect(Math.abs((input.chargedG ?? 0) - 572)).toBeLessThanOrEqual(tolerance.g);
       expect(Math.abs((input.oilAddedMl ?? 0) - 42)).toBeLessThanOrEqual(tolerance.ml);
       expect(Math.abs((input.holdEndKpaAbs ?? 0) - 1.6)).toBeLessThanOrEqual(tolerance.kpa + 1e-9);
@@ -79,10 +79,10 @@ describe("service record draft", () => {
 
   it("keeps what was typed and reports an unreadable entry instead of sending it", () => {
     const draft = draftFromRecord(null, metric, { labelChargeG: 480, oilType: "PAG 46" });
-    expect(draft.text.labelCharge).toBe("480 g");
-    draft.text.recovered = "about a pound";
+    expect(draft.text.labelChargeG).toBe("480 g");
+    draft.text.recoveredChargeG = "about a pound";
     const read = readDraft(draft, metric);
-    expect(read.errors.recovered).toMatch(/Could not read/);
-    expect(draft.text.recovered).toBe("about a pound");
+    expect(read.errors.recoveredChargeG).toMatch(/Could not read/);
+    expect(draft.text.recoveredChargeG).toBe("about a pound");
   });
 });

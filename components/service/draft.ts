@@ -1,4 +1,11 @@
-import type { ServiceRecordDto, ServiceRecordInput, ServiceStepId } from "@/lib/contracts/service-records";
+import {
+  SERVICE_RECORD_ENTRIES,
+  type ServiceEntryField,
+  type ServiceEntryKind,
+  type ServiceRecordDto,
+  type ServiceRecordInput,
+  type ServiceStepId,
+} from "@/lib/contracts/service-records";
 import type { ReplacedPartId } from "@/lib/service/oil";
 import {
   type Entry,
@@ -29,30 +36,9 @@ export interface ShopUnitsPrefs {
   altitudeM: number;
 }
 
-export const TEXT_FIELDS = [
-  "labelCharge",
-  "purity",
-  "air",
-  "recoveryStartedAt",
-  "recoveryEndedAt",
-  "recovered",
-  "oilDrained",
-  "slowRecoveryNote",
-  "deepest",
-  "holdStart",
-  "holdEnd",
-  "holdMinutes",
-  "oilAddedType",
-  "oilAdded",
-  "target",
-  "charged",
-  "finalAmbient",
-  "finalHigh",
-  "finalLow",
-  "finalVent",
-  "notes",
-] as const;
-export type TextField = (typeof TEXT_FIELDS)[number];
+/** The record's typed fields, by the API's names: the draft keeps what was typed in each. */
+export type TextField = ServiceEntryField;
+export const TEXT_FIELDS = Object.keys(SERVICE_RECORD_ENTRIES) as TextField[];
 
 export interface Draft {
   text: Record<TextField, string>;
@@ -80,49 +66,42 @@ export function draftFromRecord(
   u: ShopUnitsPrefs,
   defaults: { labelChargeG: number | null; oilType: string | null },
 ): Draft {
-  const mass = (g: number | null | undefined) =>
-    g == null ? "" : withUnit(round(massFromG(g, u.mass), u.mass === "g" ? 0 : 2), u.mass);
-  const vol = (ml: number | null | undefined) =>
-    ml == null ? "" : withUnit(round(volumeFromMl(ml, u.volume), u.volume === "mL" ? 0 : 1), u.volume);
+  const mass = (g: number) => withUnit(round(massFromG(g, u.mass), u.mass === "g" ? 0 : 2), u.mass);
+  const vol = (ml: number) =>
+    withUnit(round(volumeFromMl(ml, u.volume), u.volume === "mL" ? 0 : 1), u.volume);
   // Metric shops see the stored absolute pressure as it is; others see inHg of vacuum, to 0.001 so a re-save does not drift.
-  const vac = (k: number | null | undefined) =>
-    k == null
-      ? ""
-      : u.gauge === "kPa"
-        ? `${round(k, 3)} kPa`
-        : `${round(kpaAbsToVacuumInHg(k, { altitudeM: u.altitudeM }), 3)} inHg`;
-  const gauge = (k: number | null | undefined) =>
-    k == null ? "" : withUnit(round(pressureFromKpa(k, u.gauge), 1), u.gauge);
-  const temp = (c: number | null | undefined) =>
-    c == null ? "" : withUnit(round(temperatureFromC(c, u.temperature), 1), u.temperature);
-  const plain = (n: number | null | undefined) => (n == null ? "" : String(n));
+  const vac = (k: number) =>
+    u.gauge === "kPa"
+      ? `${round(k, 3)} kPa`
+      : `${round(kpaAbsToVacuumInHg(k, { altitudeM: u.altitudeM }), 3)} inHg`;
+  const shown: Record<ServiceEntryKind, (value: number | string) => string> = {
+    mass: (v) => mass(Number(v)),
+    volume: (v) => vol(Number(v)),
+    vacuum: (v) => vac(Number(v)),
+    gauge: (v) => withUnit(round(pressureFromKpa(Number(v), u.gauge), 1), u.gauge),
+    temperature: (v) => withUnit(round(temperatureFromC(Number(v), u.temperature), 1), u.temperature),
+    percent: (v) => String(v),
+    minutes: (v) => String(v),
+    instant: (v) => toLocalInput(String(v)),
+    text: (v) => String(v),
+  };
+  // Before a record exists the label charge comes from the vehicle, and the oil from the spec.
+  const stored = (field: TextField) =>
+    field === "labelChargeG" && !r
+      ? defaults.labelChargeG
+      : field === "oilAddedType"
+        ? (r?.oilAddedType ?? defaults.oilType)
+        : r?.[field];
+  const text = {} as Record<TextField, string>;
+  for (const field of TEXT_FIELDS) {
+    const value = stored(field);
+    text[field] = value == null || value === "" ? "" : shown[SERVICE_RECORD_ENTRIES[field]](value);
+  }
   const parts: Draft["parts"] = {};
   for (const p of r?.partsReplaced ?? [])
     parts[p.part] = { count: p.count ?? 1, measured: p.measuredMl == null ? "" : vol(p.measuredMl) };
   return {
-    text: {
-      labelCharge: mass(r ? r.labelChargeG : defaults.labelChargeG),
-      purity: plain(r?.purityPct),
-      air: plain(r?.airPct),
-      recoveryStartedAt: toLocalInput(r?.recoveryStartedAt),
-      recoveryEndedAt: toLocalInput(r?.recoveryEndedAt),
-      recovered: mass(r?.recoveredG),
-      oilDrained: vol(r?.oilDrainedMl),
-      slowRecoveryNote: r?.slowRecoveryNote ?? "",
-      deepest: vac(r?.deepestKpaAbs),
-      holdStart: vac(r?.holdStartKpaAbs),
-      holdEnd: vac(r?.holdEndKpaAbs),
-      holdMinutes: plain(r?.holdMinutes),
-      oilAddedType: r?.oilAddedType ?? defaults.oilType ?? "",
-      oilAdded: vol(r?.oilAddedMl),
-      target: mass(r?.targetG),
-      charged: mass(r?.chargedG),
-      finalAmbient: temp(r?.finalAmbientC),
-      finalHigh: gauge(r?.finalHighKpaGauge),
-      finalLow: gauge(r?.finalLowKpaGauge),
-      finalVent: temp(r?.finalVentC),
-      notes: r?.notes ?? "",
-    },
+    text,
     specEntryId: r?.specEntryId ?? null,
     recoveryCylinderId: r?.recoveryCylinderId ?? null,
     chargeCylinderId: r?.chargeCylinderId ?? null,
@@ -136,29 +115,22 @@ export type ReadDraft = {
   errors: Partial<Record<string, string>>;
 };
 
-/** Every typed field in internal units, with a message for each one that cannot be read. */
+/** Every typed quantity in internal units, with a message for each one that cannot be read. */
 export function readDraft(d: Draft, u: ShopUnitsPrefs): ReadDraft {
-  const readers: Partial<Record<TextField, (t: string) => Entry>> = {
-    labelCharge: (t) => readMassG(t, u.mass),
-    recovered: (t) => readMassG(t, u.mass),
-    target: (t) => readMassG(t, u.mass),
-    charged: (t) => readMassG(t, u.mass),
-    oilDrained: (t) => readVolumeMl(t, u.volume),
-    oilAdded: (t) => readVolumeMl(t, u.volume),
-    purity: (t) => readPlainNumber(t, "a percentage"),
-    air: (t) => readPlainNumber(t, "a percentage"),
-    holdMinutes: (t) => readPlainNumber(t, "minutes"),
-    deepest: (t) => readVacuumKpaAbs(t, { altitudeM: u.altitudeM }),
-    holdStart: (t) => readVacuumKpaAbs(t, { altitudeM: u.altitudeM }),
-    holdEnd: (t) => readVacuumKpaAbs(t, { altitudeM: u.altitudeM }),
-    finalAmbient: (t) => readTemperatureC(t, u.temperature),
-    finalVent: (t) => readTemperatureC(t, u.temperature),
-    finalHigh: (t) => readGaugeKpa(t, u.gauge),
-    finalLow: (t) => readGaugeKpa(t, u.gauge),
+  const readers: Partial<Record<ServiceEntryKind, (t: string) => Entry>> = {
+    mass: (t) => readMassG(t, u.mass),
+    volume: (t) => readVolumeMl(t, u.volume),
+    percent: (t) => readPlainNumber(t, "a percentage"),
+    minutes: (t) => readPlainNumber(t, "minutes"),
+    vacuum: (t) => readVacuumKpaAbs(t, { altitudeM: u.altitudeM }),
+    temperature: (t) => readTemperatureC(t, u.temperature),
+    gauge: (t) => readGaugeKpa(t, u.gauge),
   };
   const values: ReadDraft["values"] = {};
   const errors: ReadDraft["errors"] = {};
-  for (const [field, read] of Object.entries(readers) as [TextField, (t: string) => Entry][]) {
+  for (const field of TEXT_FIELDS) {
+    const read = readers[SERVICE_RECORD_ENTRIES[field]];
+    if (!read) continue;
     const e = read(d.text[field]);
     if ("error" in e) errors[field] = e.error;
     else values[field] = "value" in e ? e.value : null;
@@ -179,27 +151,24 @@ export function inputFromDraft(
   baseVersion: number,
   u: ShopUnitsPrefs,
 ): ServiceRecordInput {
-  const v = read.values;
+  const typed: Record<string, string | number | null> = {};
+  for (const field of TEXT_FIELDS) {
+    const kind = SERVICE_RECORD_ENTRIES[field];
+    typed[field] =
+      kind === "text"
+        ? d.text[field].trim() || null
+        : kind === "instant"
+          ? iso(d.text[field])
+          : (read.values[field] ?? null);
+  }
   return {
+    ...(typed as Pick<ServiceRecordInput, TextField>),
     baseVersion,
     step,
     specEntryId: d.specEntryId,
-    labelChargeG: v.labelCharge ?? null,
-    purityPct: v.purity ?? null,
-    airPct: v.air ?? null,
-    recoveryStartedAt: iso(d.text.recoveryStartedAt),
-    recoveryEndedAt: iso(d.text.recoveryEndedAt),
-    recoveredG: v.recovered ?? null,
     recoveryCylinderId: d.recoveryCylinderId,
-    oilDrainedMl: v.oilDrained ?? null,
+    chargeCylinderId: d.chargeCylinderId,
     oilPulled: d.oilPulled,
-    slowRecoveryNote: d.text.slowRecoveryNote.trim() || null,
-    deepestKpaAbs: v.deepest ?? null,
-    holdStartKpaAbs: v.holdStart ?? null,
-    holdEndKpaAbs: v.holdEnd ?? null,
-    holdMinutes: v.holdMinutes ?? null,
-    oilAddedType: d.text.oilAddedType.trim() || null,
-    oilAddedMl: v.oilAdded ?? null,
     partsReplaced: Object.entries(d.parts).map(([part, p]) => {
       const m = readVolumeMl(p?.measured ?? "", u.volume);
       return {
@@ -208,13 +177,5 @@ export function inputFromDraft(
         measuredMl: "value" in m ? m.value : null,
       };
     }),
-    targetG: v.target ?? null,
-    chargedG: v.charged ?? null,
-    chargeCylinderId: d.chargeCylinderId,
-    finalAmbientC: v.finalAmbient ?? null,
-    finalHighKpaGauge: v.finalHigh ?? null,
-    finalLowKpaGauge: v.finalLow ?? null,
-    finalVentC: v.finalVent ?? null,
-    notes: d.text.notes.trim() || null,
   };
 }

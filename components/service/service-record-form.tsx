@@ -25,26 +25,6 @@ export const STEP_TITLES: Record<ServiceStepId, string> = {
   final: "Final reading",
 };
 
-// Server field names → the draft field that shows their message.
-const SERVER_FIELD: Record<string, string> = {
-  labelChargeG: "labelCharge",
-  purityPct: "purity",
-  airPct: "air",
-  recoveredG: "recovered",
-  oilDrainedMl: "oilDrained",
-  deepestKpaAbs: "deepest",
-  holdStartKpaAbs: "holdStart",
-  holdEndKpaAbs: "holdEnd",
-  holdMinutes: "holdMinutes",
-  oilAddedMl: "oilAdded",
-  targetG: "target",
-  chargedG: "charged",
-  finalAmbientC: "finalAmbient",
-  finalHighKpaGauge: "finalHigh",
-  finalLowKpaGauge: "finalLow",
-  finalVentC: "finalVent",
-};
-
 export function ServiceRecordForm(props: ServiceRecordFormProps) {
   const { caseId, serviceCase, units } = props;
   const queryClient = useQueryClient();
@@ -68,13 +48,11 @@ export function ServiceRecordForm(props: ServiceRecordFormProps) {
     () =>
       summariseServiceRecord(
         {
+          ...read.values,
           refrigerant,
-          labelChargeG: read.values.labelCharge,
           specChargeG: spec?.labelChargeG ?? null,
           specOilType: spec?.oilType ?? serviceCase.oilType,
           specTotalOilMl: spec?.totalOilMl ?? null,
-          recoveredG: read.values.recovered,
-          oilDrainedMl: read.values.oilDrained,
           oilPulled: draft.oilPulled,
           partsReplaced: Object.entries(draft.parts).map(([part, p]) => {
             const measured = readVolumeMl(p?.measured ?? "", units.volume);
@@ -84,14 +62,7 @@ export function ServiceRecordForm(props: ServiceRecordFormProps) {
               ...("value" in measured ? { measuredMl: measured.value } : {}),
             };
           }),
-          deepestKpaAbs: read.values.deepest,
-          holdStartKpaAbs: read.values.holdStart,
-          holdEndKpaAbs: read.values.holdEnd,
-          holdMinutes: read.values.holdMinutes,
           oilAddedType: draft.text.oilAddedType,
-          oilAddedMl: read.values.oilAdded,
-          targetG: read.values.target,
-          chargedG: read.values.charged,
         },
         {
           altitudeM: units.altitudeM,
@@ -123,8 +94,7 @@ export function ServiceRecordForm(props: ServiceRecordFormProps) {
     onError: (error) => {
       if (error instanceof ApiError) {
         const mapped: Record<string, string> = {};
-        for (const [k, v] of Object.entries(error.fieldErrors ?? {}))
-          if (v[0]) mapped[SERVER_FIELD[k] ?? k] = v[0];
+        for (const [k, v] of Object.entries(error.fieldErrors ?? {})) if (v[0]) mapped[k] = v[0];
         setServerErrors(mapped);
         setMessage({ tone: "error", text: `${error.message} Nothing you typed was lost.` });
       } else

@@ -125,10 +125,10 @@ export function StepFields({ step, draft, setDraft, setText, errorOf, summary, p
               </button>
             )}
           </fieldset>
-          {f("labelCharge", "Label charge (under-hood label)", massHint)}
+          {f("labelChargeG", "Label charge (under-hood label)", massHint)}
           <div className="grid grid-cols-2 gap-3">
-            {f("purity", "Identifier: purity %")}
-            {f("air", "Identifier: air %")}
+            {f("purityPct", "Identifier: purity %")}
+            {f("airPct", "Identifier: air %")}
           </div>
           {summary.target?.warnings.map((w) => (
             <ResultLine key={w} tone="bad">
@@ -156,7 +156,7 @@ export function StepFields({ step, draft, setDraft, setText, errorOf, summary, p
               error={errorOf("recoveryEndedAt")}
             />
           </div>
-          {f("recovered", "Recovered mass", massHint)}
+          {f("recoveredChargeG", "Recovered mass", massHint)}
           <CylinderSelect
             label="Recovered into cylinder"
             value={draft.recoveryCylinderId}
@@ -165,7 +165,7 @@ export function StepFields({ step, draft, setDraft, setText, errorOf, summary, p
             error={errorOf("recoveryCylinderId")}
             massUnit={u.mass}
           />
-          {f("oilDrained", "Oil drained into the machine's bottle", volHint)}
+          {f("oilRemovedMl", "Oil drained into the machine's bottle", volHint)}
           <label className="flex min-h-glove items-center gap-3">
             <input
               type="checkbox"
@@ -206,9 +206,9 @@ export function StepFields({ step, draft, setDraft, setText, errorOf, summary, p
     case "evacuation":
       return (
         <div className="space-y-4">
-          {f("deepest", "Deepest vacuum reached", vacHint)}
-          {f("holdStart", "Vacuum at the start of the hold", vacHint)}
-          {f("holdEnd", "Vacuum at the end of the hold", vacHint)}
+          {f("deepestKpaAbs", "Deepest vacuum reached", vacHint)}
+          {f("holdStartKpaAbs", "Vacuum at the start of the hold", vacHint)}
+          {f("holdEndKpaAbs", "Vacuum at the end of the hold", vacHint)}
           {f("holdMinutes", "Hold time, minutes")}
           {summary.evacuation?.messages.map((m) => (
             <ResultLine
@@ -310,7 +310,7 @@ export function StepFields({ step, draft, setDraft, setText, errorOf, summary, p
             onChange={(v) => setText("oilAddedType", v)}
             error={errorOf("oilAddedType")}
           />
-          {f("oilAdded", "Oil added", volHint)}
+          {f("oilAddedMl", "Oil added", volHint)}
           {summary.oilAddedSentence && (
             <ResultLine
               tone={Math.abs(summary.oilAddedDeltaMl ?? 0) <= 5 ? "good" : "bad"}
@@ -330,13 +330,13 @@ export function StepFields({ step, draft, setDraft, setText, errorOf, summary, p
       return (
         <div className="space-y-4">
           {f(
-            "target",
+            "targetG",
             "Target charge",
             summary.target
               ? `Leave empty to charge to ${formatMass(summary.target.targetG, u.mass)} (from the ${summary.target.basis === "label" ? "label" : summary.target.basis === "spec_table" ? "spec table" : "maker's revised figure"}).`
               : massHint,
           )}
-          {f("charged", "Charged mass (machine display)", massHint)}
+          {f("chargedG", "Charged mass (machine display)", massHint)}
           <CylinderSelect
             label="Charged from cylinder"
             value={draft.chargeCylinderId}
@@ -363,10 +363,10 @@ export function StepFields({ step, draft, setDraft, setText, errorOf, summary, p
             The performance reading after the recharge, engine running, doors closed, A/C at maximum.
           </p>
           <div className="grid grid-cols-2 gap-3">
-            {f("finalAmbient", "Ambient temperature")}
-            {f("finalVent", "Centre vent temperature")}
-            {f("finalHigh", "High side (gauge)")}
-            {f("finalLow", "Low side (gauge)")}
+            {f("finalAmbientC", "Ambient temperature")}
+            {f("finalVentC", "Centre vent temperature")}
+            {f("finalHighKpaGauge", "High side (gauge)")}
+            {f("finalLowKpaGauge", "Low side (gauge)")}
           </div>
           <div>
             <label htmlFor="record-notes" className="field-label">

@@ -45,9 +45,9 @@ export const serviceRecordInputSchema = z
     airPct: num("Air", 0, 100, "%"),
     recoveryStartedAt: instant,
     recoveryEndedAt: instant,
-    recoveredG: whole("Recovered mass", 0, 10_000, "g"),
+    recoveredChargeG: whole("Recovered mass", 0, 10_000, "g"),
     recoveryCylinderId: id("Recovery cylinder"),
-    oilDrainedMl: whole("Oil drained", 0, 1000, "mL"),
+    oilRemovedMl: whole("Oil drained", 0, 1000, "mL"),
     oilPulled: z.boolean().default(false),
     slowRecoveryNote: text(2000),
     deepestKpaAbs: num("Deepest vacuum", 0, 110, "kPa absolute"),
@@ -86,7 +86,7 @@ export const serviceRecordInputSchema = z
       path: ["recoveryEndedAt"],
     },
   )
-  .refine((r) => !(r.recoveredG && r.recoveredG > 0) || r.recoveryCylinderId, {
+  .refine((r) => !(r.recoveredChargeG && r.recoveredChargeG > 0) || r.recoveryCylinderId, {
     message: "Choose the recovery cylinder the refrigerant went into: the ledger needs it.",
     path: ["recoveryCylinderId"],
   })
@@ -96,6 +96,44 @@ export const serviceRecordInputSchema = z
   });
 export type ServiceRecordInput = z.infer<typeof serviceRecordInputSchema>;
 export type ServiceRecordDraft = z.input<typeof serviceRecordInputSchema>;
+
+/** How a typed entry is written and read: a quantity in the shop's units, a moment, or plain text. */
+export type ServiceEntryKind =
+  "mass" | "volume" | "percent" | "minutes" | "vacuum" | "gauge" | "temperature" | "instant" | "text";
+
+/**
+ * Every field of the record that is typed rather than picked, by its one name, with its kind. The
+ * screen's draft, the save's mapping and the stored row all take their field names from here: a new
+ * typed field is a line here, a line in the schema above, a column (migration and model) and its input
+ * on the screen.
+ */
+export const SERVICE_RECORD_ENTRIES = {
+  labelChargeG: "mass",
+  purityPct: "percent",
+  airPct: "percent",
+  recoveryStartedAt: "instant",
+  recoveryEndedAt: "instant",
+  recoveredChargeG: "mass",
+  oilRemovedMl: "volume",
+  slowRecoveryNote: "text",
+  deepestKpaAbs: "vacuum",
+  holdStartKpaAbs: "vacuum",
+  holdEndKpaAbs: "vacuum",
+  holdMinutes: "minutes",
+  oilAddedType: "text",
+  oilAddedMl: "volume",
+  targetG: "mass",
+  chargedG: "mass",
+  finalAmbientC: "temperature",
+  finalHighKpaGauge: "gauge",
+  finalLowKpaGauge: "gauge",
+  finalVentC: "temperature",
+  notes: "text",
+} as const satisfies Partial<Record<keyof ServiceRecordInput, ServiceEntryKind>>;
+export type ServiceEntryField = keyof typeof SERVICE_RECORD_ENTRIES;
+
+/** The fields picked from a list rather than typed: a spec-table row and the two cylinders. */
+export const SERVICE_RECORD_CHOICES = ["specEntryId", "recoveryCylinderId", "chargeCylinderId"] as const;
 
 export const serviceRecordDeleteQuerySchema = z.object({
   version: z.coerce.number({ message: "version is the version you last loaded." }).int().positive(),

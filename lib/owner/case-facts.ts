@@ -7,7 +7,7 @@ import type { OwnerUnits } from "./units";
 /** The service record's values the owner's wording uses (internal units; null when not entered). */
 export interface ServiceRecordFacts {
   labelChargeG: number | null;
-  recoveredG: number | null;
+  recoveredChargeG: number | null;
   chargedG: number | null;
   holdMinutes: number | null;
   holdPassed: boolean | null;
@@ -46,7 +46,8 @@ export function ownerFactsFromCase({
     expansionDevice: isExpansionDevice(device) ? device : undefined,
     electricCompressor: system.electricCompressor === true,
     labelChargeG: num(sr?.labelChargeG) ?? num(system.labelChargeG),
-    foundChargeG: num(sr?.recoveredG) ?? (audit.recovered === true ? num(audit.recoveredChargeG) : undefined),
+    foundChargeG:
+      num(sr?.recoveredChargeG) ?? (audit.recovered === true ? num(audit.recoveredChargeG) : undefined),
     chargedG: num(sr?.chargedG),
     ambientC: num(conditions.ambientC),
     ventC: num(running.ventC),

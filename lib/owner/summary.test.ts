@@ -87,7 +87,7 @@ describe("owner summary", () => {
   it("turns a service record into facts and done repairs", () => {
     const record = {
       labelChargeG: 570,
-      recoveredG: 430,
+      recoveredChargeG: 430,
       chargedG: 572,
       holdMinutes: 10,
       holdPassed: true,

@@ -110,7 +110,7 @@ export async function loadServiceRecordFacts({
   if (!record) return null;
   return {
     labelChargeG: record.labelChargeG ?? null,
-    recoveredG: record.recoveredG ?? null,
+    recoveredChargeG: record.recoveredChargeG ?? null,
     chargedG: record.chargedG ?? null,
     holdMinutes: record.holdMinutes ?? null,
     holdPassed: record.holdPassed ?? null,

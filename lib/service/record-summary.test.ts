@@ -6,7 +6,7 @@ const KPA_PER_INHG = 3.386389;
 
 describe("summariseServiceRecord", () => {
   it("reports a recovered mass a quarter over the label as an overcharge of that size (SAE J2788 95 % recovery; ±15 g accuracy, from memory)", () => {
-    const s = summariseServiceRecord({ refrigerant: "R-134a", labelChargeG: 800, recoveredG: 1000 });
+    const s = summariseServiceRecord({ refrigerant: "R-134a", labelChargeG: 800, recoveredChargeG: 1000 });
     expect(s.recovered?.verdict).toBe("over");
     expect(s.recovered?.deltaG).toBe(1000 - 800);
     expect(s.recovered?.deltaPct).toBeCloseTo(((1000 - 800) / 800) * 100, 6);
@@ -15,33 +15,33 @@ describe("summariseServiceRecord", () => {
 
   it("asks to add back the oil the recovery machine drained (US Army TM 5-3810-307-24-1-2 ch. 9)", () => {
     const drainedMl = 45;
-    const s = summariseServiceRecord({ refrigerant: "R-134a", oilDrainedMl: drainedMl });
+    const s = summariseServiceRecord({ refrigerant: "R-134a", oilRemovedMl: drainedMl });
     expect(s.addBack?.totalMl).toBe(drainedMl);
     expect(s.addBack?.complete).toBe(true);
   });
 
   it("adds the shop's own allowance for a replaced part (common practice; shop-edited figure)", () => {
     const s = summariseServiceRecord(
-      { refrigerant: "R-134a", oilDrainedMl: 20, partsReplaced: [{ part: "receiver_drier" }] },
+      { refrigerant: "R-134a", oilRemovedMl: 20, partsReplaced: [{ part: "receiver_drier" }] },
       { allowancesMl: { receiver_drier: 25 } },
     );
     expect(s.addBack?.totalMl).toBe(20 + 25);
   });
 
   it("uses the pulled-oil estimate when oil left with liquid (common practice: about 4 % oil in circulating refrigerant)", () => {
-    const recoveredG = 1500;
+    const recoveredChargeG = 1500;
     const s = summariseServiceRecord({
       refrigerant: "R-134a",
-      recoveredG,
+      recoveredChargeG,
       oilPulled: true,
-      oilDrainedMl: 20,
+      oilRemovedMl: 20,
     });
-    const expectedMl = (recoveredG * 0.04) / 0.99; // PAG about 0.99 g/mL, from memory
+    const expectedMl = (recoveredChargeG * 0.04) / 0.99; // PAG about 0.99 g/mL, from memory
     expect(s.pulledOil?.oilMl).toBeCloseTo(expectedMl, 6);
     expect(s.pulledOil?.sumpComparison).toBe("about_a_sump"); // 60–90 mL sump, common practice
     expect(s.addBack?.totalMl).toBeCloseTo(expectedMl, 6);
     expect(
-      summariseServiceRecord({ refrigerant: "R-134a", recoveredG, oilPulled: false, oilDrainedMl: 20 })
+      summariseServiceRecord({ refrigerant: "R-134a", recoveredChargeG, oilPulled: false, oilRemovedMl: 20 })
         .pulledOil,
     ).toBeNull();
   });
@@ -80,7 +80,7 @@ describe("summariseServiceRecord", () => {
   });
 
   it("compares the oil added with what the record asks for", () => {
-    const s = summariseServiceRecord({ refrigerant: "R-134a", oilDrainedMl: 40, oilAddedMl: 70 });
+    const s = summariseServiceRecord({ refrigerant: "R-134a", oilRemovedMl: 40, oilAddedMl: 70 });
     expect(s.oilAddedDeltaMl).toBe(30);
     expect(s.oilAddedSentence).toMatch(/too much/);
   });
@@ -88,7 +88,7 @@ describe("summariseServiceRecord", () => {
   it("turns an impossible value into a problem line instead of throwing", () => {
     const s = summariseServiceRecord({
       refrigerant: "R-134a",
-      oilDrainedMl: -5,
+      oilRemovedMl: -5,
       holdStartKpaAbs: 3,
       holdEndKpaAbs: 4,
       holdMinutes: 0,

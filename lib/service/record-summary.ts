@@ -32,8 +32,8 @@ export interface ServiceRecordValues {
   specChargeG?: number | null;
   specOilType?: string | null;
   specTotalOilMl?: number | null;
-  recoveredG?: number | null;
-  oilDrainedMl?: number | null;
+  recoveredChargeG?: number | null;
+  oilRemovedMl?: number | null;
   oilPulled?: boolean;
   partsReplaced?: readonly ReplacedPart[];
   deepestKpaAbs?: number | null;
@@ -92,25 +92,25 @@ export function summariseServiceRecord(
   };
 
   const recovered =
-    has(v.labelChargeG) && v.labelChargeG > 0 && has(v.recoveredG)
+    has(v.labelChargeG) && v.labelChargeG > 0 && has(v.recoveredChargeG)
       ? attempt(() =>
           recoveredAgainstLabel({
             labelChargeG: v.labelChargeG!,
-            recoveredChargeG: v.recoveredG!,
+            recoveredChargeG: v.recoveredChargeG!,
             refrigerant: v.refrigerant,
           }),
         )
       : null;
 
   const pulledOil =
-    v.oilPulled && has(v.recoveredG)
-      ? attempt(() => estimateOilPulledMl({ liquidRecoveredG: v.recoveredG! }))
+    v.oilPulled && has(v.recoveredChargeG)
+      ? attempt(() => estimateOilPulledMl({ liquidRecoveredG: v.recoveredChargeG! }))
       : null;
 
-  const addBack = has(v.oilDrainedMl)
+  const addBack = has(v.oilRemovedMl)
     ? attempt(() =>
         oilToAddBack({
-          drainedDuringRecoveryMl: v.oilDrainedMl!,
+          drainedDuringRecoveryMl: v.oilRemovedMl!,
           replacedParts: v.partsReplaced,
           allowancesMl: ctx.allowancesMl,
           estimatedPulledMl: pulledOil?.oilMl,

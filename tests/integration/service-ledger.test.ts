@@ -18,7 +18,7 @@ async function netOf(shopId: number, cylinderId: number) {
 async function totals(shopId: number) {
   const { rows } = await ledgerReport({ shopId });
   return {
-    recoveredG: rows.reduce((s, r) => s + r.recoveredG, 0),
+    recoveredChargeG: rows.reduce((s, r) => s + r.recoveredG, 0),
     chargedG: rows.reduce((s, r) => s + r.chargedG, 0),
   };
 }
@@ -26,7 +26,7 @@ async function totals(shopId: number) {
 async function recordSums(shopId: number) {
   const records = await getModels().ServiceRecord.findAll({ where: { shopId }, raw: true });
   return {
-    recoveredG: records.reduce((s, r) => s + (r.recoveredG ?? 0), 0),
+    recoveredChargeG: records.reduce((s, r) => s + (r.recoveredChargeG ?? 0), 0),
     chargedG: records.reduce((s, r) => s + (r.chargedG ?? 0), 0),
   };
 }
@@ -36,7 +36,7 @@ describe("service record ↔ refrigerant ledger", () => {
     const models = getModels();
     const { shop, serviceCase, recovery, supply, user } = await createShopWithCylinders(models);
     const input = recordInput({
-      recoveredG: 800,
+      recoveredChargeG: 800,
       recoveryCylinderId: recovery.id,
       chargedG: 650,
       chargeCylinderId: supply.id,
@@ -60,7 +60,7 @@ describe("service record ↔ refrigerant ledger", () => {
     const edited = await saveServiceRecord({
       user,
       caseId: serviceCase.id,
-      input: { ...input, recoveredG: 820, baseVersion: same.record.version },
+      input: { ...input, recoveredChargeG: 820, baseVersion: same.record.version },
     });
     expect(edited.posted).toBe(2); // one correction cancelling 800, one new posting of 820
     expect(await netOf(shop.id, recovery.id)).toBe(1000 + 820);
@@ -73,7 +73,7 @@ describe("service record ↔ refrigerant ledger", () => {
     expect(await getServiceRecord({ shopId: shop.id, caseId: serviceCase.id })).toBeNull();
     expect(await netOf(shop.id, recovery.id)).toBe(1000);
     expect(await netOf(shop.id, supply.id)).toBe(13_600);
-    expect(await totals(shop.id)).toEqual({ recoveredG: 0, chargedG: 0 });
+    expect(await totals(shop.id)).toEqual({ recoveredChargeG: 0, chargedG: 0 });
     // Nothing was erased: 2 postings + 2 on edit + 2 cancellations on delete.
     expect((await listMovements({ shopId: shop.id })).length).toBe(6);
   });
@@ -87,7 +87,7 @@ describe("service record ↔ refrigerant ledger", () => {
       user,
       caseId: serviceCase.id,
       input: recordInput({
-        recoveredG: 410,
+        recoveredChargeG: 410,
         recoveryCylinderId: recovery.id,
         chargedG: 500,
         chargeCylinderId: supply.id,
@@ -96,7 +96,7 @@ describe("service record ↔ refrigerant ledger", () => {
     await saveServiceRecord({
       user,
       caseId: second.id,
-      input: recordInput({ recoveredG: 735, recoveryCylinderId: recovery.id }),
+      input: recordInput({ recoveredChargeG: 735, recoveryCylinderId: recovery.id }),
     });
     expect(await totals(shop.id)).toEqual(await recordSums(shop.id));
     await saveServiceRecord({
@@ -104,14 +104,14 @@ describe("service record ↔ refrigerant ledger", () => {
       caseId: serviceCase.id,
       input: recordInput({
         baseVersion: a.record.version,
-        recoveredG: 0,
+        recoveredChargeG: 0,
         recoveryCylinderId: recovery.id,
         chargedG: 515,
         chargeCylinderId: supply.id,
       }),
     });
     expect(await totals(shop.id)).toEqual(await recordSums(shop.id));
-    expect(await totals(shop.id)).toEqual({ recoveredG: 735, chargedG: 515 });
+    expect(await totals(shop.id)).toEqual({ recoveredChargeG: 735, chargedG: 515 });
   });
 
   it("refuses a stale version with 409 and leaves record and ledger as they were", async () => {
@@ -120,14 +120,14 @@ describe("service record ↔ refrigerant ledger", () => {
     const first = await saveServiceRecord({
       user,
       caseId: serviceCase.id,
-      input: recordInput({ recoveredG: 300, recoveryCylinderId: recovery.id }),
+      input: recordInput({ recoveredChargeG: 300, recoveryCylinderId: recovery.id }),
     });
     await saveServiceRecord({
       user,
       caseId: serviceCase.id,
       input: recordInput({
         baseVersion: first.record.version,
-        recoveredG: 310,
+        recoveredChargeG: 310,
         recoveryCylinderId: recovery.id,
       }),
     });
@@ -136,12 +136,12 @@ describe("service record ↔ refrigerant ledger", () => {
       caseId: serviceCase.id,
       input: recordInput({
         baseVersion: first.record.version,
-        recoveredG: 999,
+        recoveredChargeG: 999,
         recoveryCylinderId: recovery.id,
       }),
     });
     await expect(stale).rejects.toMatchObject({ status: 409 });
-    expect((await getServiceRecord({ shopId: shop.id, caseId: serviceCase.id }))?.recoveredG).toBe(310);
+    expect((await getServiceRecord({ shopId: shop.id, caseId: serviceCase.id }))?.recoveredChargeG).toBe(310);
     expect(await netOf(shop.id, recovery.id)).toBe(1000 + 310);
   });
 
@@ -159,7 +159,7 @@ describe("service record ↔ refrigerant ledger", () => {
     const wrongGas = saveServiceRecord({
       user,
       caseId: serviceCase.id,
-      input: recordInput({ recoveredG: 500, recoveryCylinderId: yf.id }),
+      input: recordInput({ recoveredChargeG: 500, recoveryCylinderId: yf.id }),
     });
     await expect(wrongGas).rejects.toMatchObject({
       status: 400,
@@ -168,7 +168,7 @@ describe("service record ↔ refrigerant ledger", () => {
     const wrongKind = saveServiceRecord({
       user,
       caseId: serviceCase.id,
-      input: recordInput({ recoveredG: 500, recoveryCylinderId: supply.id }),
+      input: recordInput({ recoveredChargeG: 500, recoveryCylinderId: supply.id }),
     });
     await expect(wrongKind).rejects.toMatchObject({ status: 400 });
     expect(await getServiceRecord({ shopId: shop.id, caseId: serviceCase.id })).toBeNull();
@@ -183,7 +183,7 @@ describe("service record ↔ refrigerant ledger", () => {
     const foreignCylinder = saveServiceRecord({
       user: a.user,
       caseId: a.serviceCase.id,
-      input: recordInput({ recoveredG: 200, recoveryCylinderId: b.recovery.id }),
+      input: recordInput({ recoveredChargeG: 200, recoveryCylinderId: b.recovery.id }),
     });
     await expect(foreignCylinder).rejects.toBeInstanceOf(AppError);
     await expect(foreignCylinder).rejects.toMatchObject({ status: 400 });

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { requireUser } from "@/lib/auth/guard";
-import { can } from "@/lib/auth/roles";
+import { serviceRecordRefusal } from "@/lib/service/record-rules";
 import { isAppError } from "@/lib/errors";
 import { EXPANSION_DEVICE_LABELS } from "@/lib/vehicles/expansion-devices";
 import { getShop } from "@/lib/server/shops";
@@ -42,15 +42,12 @@ export default async function ServiceRecordPage({ params }: { params: Promise<{ 
         })
       : [];
   const imperial = shop.units === "imperial";
-  const readOnlyReason = !can(user.role, "service:write")
-    ? "Your role can read this record; a technician or senior enters it."
-    : serviceCase.status === "closed"
-      ? "This case is closed: its service record is kept as it was saved."
-      : !serviceCase.refrigerant
-        ? "Record the vehicle on the case before its service record."
-        : record && record.technicianId !== user.id && user.role !== "owner" && user.role !== "senior"
-          ? `${record.technician} started this record; only they or a senior can change it.`
-          : null;
+  const readOnlyReason =
+    serviceRecordRefusal("save", user, {
+      caseStatus: serviceCase.status,
+      refrigerant: serviceCase.refrigerant,
+      startedBy: record ? { id: record.technicianId, name: record.technician } : null,
+    })?.notice ?? null;
   return (
     <article className="space-y-4">
       <header>
