@@ -1,5 +1,6 @@
 import { can, type Role } from "@/lib/auth/roles";
 import type { RefrigerantId } from "@/lib/refrigerants";
+import { endSentence } from "@/lib/units/clock";
 
 // The service record's rules, in one place: who may save or remove it and when, which cylinder may
 // take part, and what a version conflict says. The server refuses with `message`; the page shows
@@ -114,10 +115,10 @@ export function cylinderProblem(
 
 const KEPT = "what you typed here is kept on this device.";
 
-/** What a save or removal at a stale version says; `changedAt` is the time of the other change, when known. */
+/** What a save or removal at a stale version says; `changedAt` is the time on the shop's clock, when known. */
 export const RECORD_CONFLICT = {
   changed: (changedAt?: string) =>
-    `This record was changed on another screen${changedAt ? ` at ${changedAt}` : ""}. Reload to see it; ${KEPT}`,
+    `This record was changed on another screen${changedAt ? ` at ${endSentence(changedAt)}` : "."} Reload to see it; ${KEPT}`,
   removed: `This record was removed on another screen. Reload; ${KEPT}`,
   started: `This record was started on another screen. Reload; ${KEPT}`,
   beforeRemoving: "This record was changed on another screen. Reload before removing it.",

@@ -1,12 +1,15 @@
 import { NextRequest } from "next/server";
+import type { User } from "lucia";
 import { afterAll, afterEach, describe, expect, it, vi } from "vitest";
 import { DELETE, PUT } from "@/app/api/cases/[id]/service/route";
 import { getLucia } from "@/lib/auth/lucia";
 import { closeMysqlPool } from "@/lib/db/pool";
 import { closeSequelize } from "@/lib/db/sequelize";
+import { AppError } from "@/lib/errors";
 import { exampleAnswers } from "@/lib/interview/example-answers";
-import { createCase, submitCase } from "@/lib/server/cases";
+import { createCase, saveInterview, submitCase } from "@/lib/server/cases";
 import { deleteServiceRecord, saveServiceRecord } from "@/lib/server/service-records";
+import { endSentence, formatShopTime } from "@/lib/units/clock";
 import { getModels } from "@/models";
 import { addCase, createShopWithCylinders, recordInput } from "./service-fixtures";
 import "./helpers";
@@ -146,5 +149,59 @@ describe("case changes and their audit rows", () => {
     ).rejects.toThrow("audit trail unavailable");
     const after = await models.Case.findByPk(serviceCase.id, { raw: true });
     expect(after).toMatchObject({ status: "draft", version: stored!.version, conclusionCause: null });
+  });
+});
+
+describe("conflict messages", () => {
+  async function halifaxShop() {
+    const fixture = await shopWithRecordCase();
+    await fixture.shop.update({ timeZone: "America/Halifax", locale: "en-CA" });
+    return fixture;
+  }
+  const clock = { timeZone: "America/Halifax", locale: "en-CA" };
+
+  it("give the other screen's change on the shop's clock for the interview (failed before: in UTC)", async () => {
+    const models = getModels();
+    const { serviceCase, user } = await halifaxShop();
+    const stored = await models.Case.findByPk(serviceCase.id, { raw: true });
+    const input = {
+      baseVersion: stored!.version - 1,
+      step: "complaint" as const,
+      answers: {},
+      drafts: {},
+      skipped: [],
+      visited: [],
+    };
+    const error = await saveInterview({ user, caseId: serviceCase.id, input }).catch((e: unknown) => e);
+    expect(error).toBeInstanceOf(AppError);
+    const message = (error as AppError).message;
+    expect(message).toContain(
+      `changed on another screen at ${endSentence(formatShopTime(stored!.updatedAt, clock))} Reload`,
+    );
+    expect(message).not.toMatch(/UTC|\.\./);
+  });
+
+  it("give the other screen's change on the shop's clock for the service record (failed before: in UTC)", async () => {
+    const { serviceCase, user } = await halifaxShop();
+    const first = await saveServiceRecord({
+      user,
+      caseId: serviceCase.id,
+      input: recordInput({ labelChargeG: 650 }),
+    });
+    await saveServiceRecord({
+      user,
+      caseId: serviceCase.id,
+      input: recordInput({ labelChargeG: 660, baseVersion: first.record.version }),
+    });
+    const stored = await getModels().ServiceRecord.findOne({ where: { caseId: serviceCase.id }, raw: true });
+    const error = await saveServiceRecord({
+      user: user as User,
+      caseId: serviceCase.id,
+      input: recordInput({ labelChargeG: 670, baseVersion: first.record.version }),
+    }).catch((e: unknown) => e);
+    expect((error as AppError).status).toBe(409);
+    expect((error as AppError).message).toBe(
+      `This record was changed on another screen at ${endSentence(formatShopTime(stored!.updatedAt, clock))} Reload to see it; what you typed here is kept on this device.`,
+    );
   });
 });

@@ -7,24 +7,27 @@ import { sortSavedAnswers } from "@/lib/interview/validate";
 import { diagnosisInputFor } from "@/lib/interview/to-diagnosis-input";
 import { diagnose } from "@/lib/diagnosis";
 import { statusAfterSubmit } from "@/lib/cases/rules";
+import { endSentence, formatShopTime } from "@/lib/units/clock";
 import type { CaseSubmitResult } from "@/lib/contracts/case-submit";
 import type { CaseSubmitInput, InterviewSaveInput, InterviewSaveResponse } from "@/lib/contracts/interview";
 import { updateCaseAtVersion, type CaseChanges } from "@/lib/db/versioned-update";
 import { recordAudit } from "../audit";
-import { getShop } from "../shops";
+import { getShop, type ShopSummary } from "../shops";
 import { caseForAction } from "./load";
 
 /**
- * Applies the change only at the version the client last saw; otherwise says plainly what happened.
- * The case row is locked by the caller.
+ * Applies the change only at the version the client last saw; otherwise says plainly what happened,
+ * with the time of the other change on the shop's clock. The case row is locked by the caller.
  */
 async function updateIfVersion({
   row,
+  shop,
   baseVersion,
   values,
   transaction,
 }: {
   row: { id: number; shopId: number; version: number; updatedAt: Date };
+  shop: ShopSummary;
   baseVersion: number;
   values: CaseChanges;
   transaction: Transaction;
@@ -42,7 +45,7 @@ async function updateIfVersion({
   if (version !== null) return version;
   throw new AppError(
     "conflict:case",
-    `This case was changed on another screen at ${row.updatedAt.toISOString().slice(11, 16)} UTC. Reload to see those answers; what you typed here is kept on this device.`,
+    `This case was changed on another screen at ${endSentence(formatShopTime(row.updatedAt, shop))} Reload to see those answers; what you typed here is kept on this device.`,
   );
 }
 
@@ -64,6 +67,7 @@ export async function saveInterview({
     const drafts = { ...input.drafts, ...sorted.drafts };
     const version = await updateIfVersion({
       row,
+      shop,
       baseVersion: input.baseVersion,
       transaction,
       values: {
@@ -115,6 +119,7 @@ export async function submitCase({
     const status = statusAfterSubmit(technician?.role ?? null);
     const version = await updateIfVersion({
       row,
+      shop,
       baseVersion: input.baseVersion,
       transaction,
       values: {

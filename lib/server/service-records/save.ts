@@ -5,8 +5,10 @@ import { getModels } from "@/models";
 import { AppError } from "@/lib/errors";
 import type { ServiceRecordInput, ServiceRecordSaveResponse } from "@/lib/contracts/service-records";
 import { RECORD_CONFLICT, serviceRecordRefusal } from "@/lib/service/record-rules";
+import { formatShopTime } from "@/lib/units/clock";
 import { recordAudit } from "../audit";
 import { listCylinders } from "../ledger";
+import { getShop } from "../shops";
 import { checkNamedRows } from "./checks";
 import { postLedger } from "./ledger-posting";
 import { finalReadingColumns, recordColumns } from "./mapping";
@@ -52,6 +54,7 @@ export async function saveServiceRecord({
 }): Promise<ServiceRecordSaveResponse> {
   const { sequelize, ServiceRecord } = getModels();
   const shopId = user.shopId;
+  const shop = await getShop({ shopId });
   try {
     return await sequelize.transaction(async (transaction) => {
       const serviceCase = await getServiceCase({ shopId, caseId, transaction });
@@ -67,7 +70,7 @@ export async function saveServiceRecord({
       if (existing && existing.version !== input.baseVersion)
         throw new AppError(
           "conflict:service_record",
-          RECORD_CONFLICT.changed(`${existing.updatedAt.toISOString().slice(11, 16)} UTC`),
+          RECORD_CONFLICT.changed(formatShopTime(existing.updatedAt, shop)),
         );
 
       // The vehicle is recorded (the rules checked it); a started record keeps the refrigerant it began with.
