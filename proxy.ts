@@ -14,6 +14,9 @@ import { isOwnOrigin, STATE_CHANGING_METHODS } from "@/lib/security/origin";
 // Here: the Origin check for state-changing requests, the security headers with a fresh CSP nonce
 // for each page, and a redirect to sign-in when there is no session cookie at all.
 const SESSION_COOKIE = "cw_session";
+// Pages reached without a session. "/s/" is the owner summary (app/s/[token]): the vehicle's owner
+// has no account, so the page is public and lets in only a link token that is unguessable, stored
+// hashed, expiring and revocable, which the page itself checks (lib/server/share-links.ts).
 const PUBLIC_PAGES = ["/sign-in", "/s/", "/credits", "/invitation/"];
 
 export function proxy(req: NextRequest) {

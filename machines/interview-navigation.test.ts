@@ -230,7 +230,7 @@ describe("resuming a saved interview", () => {
     expect(context.visited).toEqual(["complaint", "system", "conditions", "static", "running"]);
   });
 
-  it("resumes from what autosave stored, through JSON and the route's schema, at the same step with the same view", () => {
+  it("resumes from what autosave stored, through JSON and the saved-interview schema, at the same step with the same view", () => {
     const actor = startInterview({ shop: { altitudeM: 400 } });
     walk(actor, { ...exampleAnswers, behaviour: undefined }, 4);
     answer(actor, "running", { highKpaGauge: 300, lowKpaGauge: 900 });

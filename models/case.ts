@@ -19,8 +19,12 @@ export type { CaseStatus };
 export type JsonValue = string | number | boolean | null | JsonValue[] | { [key: string]: JsonValue };
 export type JsonObject = { [key: string]: JsonValue };
 
-// Table `service_case`: CASE is reserved in SQL. `version` is Sequelize's optimistic lock:
-// every save bumps it, and saving a stale copy throws OptimisticLockError.
+// Table `service_case`: CASE is reserved in SQL. `version` counts the case's changes, and a change is
+// made only at the version its writer last saw. The app changes a case through updateCaseAtVersion
+// (lib/db/versioned-update.ts): the expected version in the WHERE clause, bumped in the same UPDATE,
+// so a stale writer changes nothing and is told so. The model's `version` option guards instance
+// saves the same way (save() bumps it; saving a stale copy throws OptimisticLockError); the static
+// Case.update checks nothing, so the app never changes a case through it directly.
 export class Case extends Model<InferAttributes<Case>, InferCreationAttributes<Case>> {
   declare id: CreationOptional<number>;
   declare shopId: ForeignKey<Shop["id"]>;
@@ -31,6 +35,14 @@ export class Case extends Model<InferAttributes<Case>, InferCreationAttributes<C
   declare complaint: string;
   declare symptomTags: CreationOptional<string[]>;
   declare interviewStep: CreationOptional<string | null>;
+  /**
+   * The interview as autosave stores it: `{ answers, drafts, skipped, visited }`, where `answers`
+   * holds the valid answer groups by group id (complaint, system, conditions, …: ids in
+   * lib/interview/steps.ts, shapes in lib/interview/answers.ts), `drafts` what was typed in a group
+   * that is not valid yet, by group id, `skipped` the optional groups passed over and `visited` the
+   * steps seen, in order. The current step is `interviewStep`.
+   * A new case starts with the complaint and the system prefilled and no `visited`.
+   */
   declare answers: CreationOptional<JsonObject>;
   declare findings: CreationOptional<JsonValue | null>;
   declare engineVersion: CreationOptional<string | null>;

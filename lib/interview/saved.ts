@@ -13,8 +13,12 @@ export interface SavedInterview {
 }
 
 /**
- * For the autosave route. Answers must be valid (the machine only stores valid ones); drafts are
- * whatever was typed, kept so nothing is lost. The shop's altitude is checked again when the machine starts.
+ * A saved interview as the machine resumes from it, checked strictly: answers must be valid (the
+ * machine only stores valid ones); drafts are whatever was typed, kept so nothing is lost. The shop's
+ * altitude is checked again when the machine starts. This is not the autosave route's schema: the
+ * route validates with `interviewSaveSchema` (lib/contracts/interview.ts), which takes any answers so
+ * the server can keep a group that fails as a draft; the server then stores answers, drafts, skipped
+ * and visited in the case's `answers` column and the step in `interviewStep`.
  */
 export const savedInterviewSchema = z.object({
   answers: interviewAnswersSchema,
