@@ -2,6 +2,7 @@ import "server-only";
 import type { Transaction } from "sequelize";
 import { getModels, type CylinderKind } from "@/models";
 import { AppError } from "@/lib/errors";
+import { recordAudit } from "./audit";
 import type { RefrigerantId } from "@/lib/refrigerants";
 import {
   type Cylinder as LedgerCylinder,
@@ -123,39 +124,63 @@ export async function listCylinders({
 
 export async function createCylinder({
   shopId,
+  actorId,
   input,
 }: {
   shopId: number;
+  actorId: string;
   input: CreateCylinderInput;
 }): Promise<CylinderDto> {
-  const { Cylinder } = getModels();
-  if (await Cylinder.findOne({ where: { shopId, label: input.label }, attributes: ["id"] })) {
-    throw new AppError("conflict:cylinder", "Another cylinder already has this label.", {
-      fieldErrors: { label: ["Already used by another cylinder."] },
+  const { Cylinder, sequelize } = getModels();
+  return sequelize.transaction(async (transaction) => {
+    if (await Cylinder.findOne({ where: { shopId, label: input.label }, attributes: ["id"], transaction })) {
+      throw new AppError("conflict:cylinder", "Another cylinder already has this label.", {
+        fieldErrors: { label: ["Already used by another cylinder."] },
+      });
+    }
+    const row = await Cylinder.create({ ...input, serial: input.serial ?? null, shopId }, { transaction });
+    await recordAudit({
+      shopId,
+      actorId,
+      entity: "cylinder",
+      entityId: row.id,
+      action: "created",
+      transaction,
     });
-  }
-  const row = await Cylinder.create({ ...input, serial: input.serial ?? null, shopId });
-  const created = (await listCylinders({ shopId })).find((c) => c.id === row.id);
-  if (!created) throw new AppError("not_found:cylinder");
-  return created;
+    const created = (await listCylinders({ shopId, transaction })).find((c) => c.id === row.id);
+    if (!created) throw new AppError("not_found:cylinder");
+    return created;
+  });
 }
 
 export async function setCylinderRetired({
   shopId,
+  actorId,
   id,
   retired,
 }: {
   shopId: number;
+  actorId: string;
   id: number;
   retired: boolean;
 }): Promise<CylinderDto> {
-  const { Cylinder } = getModels();
-  const row = await Cylinder.findOne({ where: { id, shopId } });
-  if (!row) throw new AppError("not_found:cylinder", "No such cylinder in this shop.");
-  await row.update({ retiredAt: retired ? (row.retiredAt ?? new Date()) : null });
-  const updated = (await listCylinders({ shopId })).find((c) => c.id === id);
-  if (!updated) throw new AppError("not_found:cylinder");
-  return updated;
+  const { Cylinder, sequelize } = getModels();
+  return sequelize.transaction(async (transaction) => {
+    const row = await Cylinder.findOne({ where: { id, shopId }, transaction });
+    if (!row) throw new AppError("not_found:cylinder", "No such cylinder in this shop.");
+    await row.update({ retiredAt: retired ? (row.retiredAt ?? new Date()) : null }, { transaction });
+    await recordAudit({
+      shopId,
+      actorId,
+      entity: "cylinder",
+      entityId: row.id,
+      action: retired ? "retired" : "reactivated",
+      transaction,
+    });
+    const updated = (await listCylinders({ shopId, transaction })).find((c) => c.id === id);
+    if (!updated) throw new AppError("not_found:cylinder");
+    return updated;
+  });
 }
 
 export async function listMovements({

@@ -2,6 +2,7 @@ import "server-only";
 import { getModels } from "@/models";
 import { DEFAULT_PART_OIL_ALLOWANCES_ML, REPLACED_PART_IDS } from "@/lib/service/oil";
 import type { AllowancesMl } from "@/lib/contracts/specs";
+import { recordAudit } from "./audit";
 
 /** The shop's figures where it set them, the defaults from lib/service elsewhere. */
 export async function getPartOilAllowances({ shopId }: { shopId: number }): Promise<AllowancesMl> {
@@ -13,9 +14,11 @@ export async function getPartOilAllowances({ shopId }: { shopId: number }): Prom
 
 export async function setPartOilAllowances({
   shopId,
+  actorId,
   allowancesMl,
 }: {
   shopId: number;
+  actorId: string;
   allowancesMl: Partial<AllowancesMl>;
 }): Promise<AllowancesMl> {
   const { PartOilAllowance, sequelize } = getModels();
@@ -31,6 +34,15 @@ export async function setPartOilAllowances({
       });
       if (!created) await row.update({ allowanceMl }, { transaction });
     }
+    await recordAudit({
+      shopId,
+      actorId,
+      entity: "part_oil_allowance",
+      entityId: "all",
+      action: "updated",
+      detail: allowancesMl,
+      transaction,
+    });
   });
   return getPartOilAllowances({ shopId });
 }

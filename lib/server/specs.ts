@@ -2,6 +2,7 @@ import "server-only";
 import { Op } from "sequelize";
 import { getModels } from "@/models";
 import { AppError } from "@/lib/errors";
+import { recordAudit } from "./audit";
 import { type MassUnit, type VolumeUnit } from "@/lib/units";
 import {
   type SpecRow,
@@ -116,16 +117,32 @@ async function duplicateError(shopId: number, input: SpecInput): Promise<AppErro
   );
 }
 
+/** Who made a change to the spec table, for its audit row: the signed-in user, or null for a script. */
+type Actor = { actorId: string | null };
+
+const audit = (shopId: number, actorId: string | null, entityId: number | string, action: string) => ({
+  shopId,
+  actorId,
+  entity: "spec_entry",
+  entityId,
+  action,
+});
+
 export async function createSpec({
   shopId,
+  actorId,
   input,
-}: {
+}: Actor & {
   shopId: number;
   input: SpecInput;
 }): Promise<SpecEntryDto> {
+  const { SpecEntry, sequelize } = getModels();
   try {
-    const row = await getModels().SpecEntry.create({ ...input, shopId });
-    return toDto(row.get({ plain: true }) as unknown as SpecEntryRow);
+    return await sequelize.transaction(async (transaction) => {
+      const row = await SpecEntry.create({ ...input, shopId }, { transaction });
+      await recordAudit({ ...audit(shopId, actorId, row.id, "created"), transaction });
+      return toDto(row.get({ plain: true }) as unknown as SpecEntryRow);
+    });
   } catch (error) {
     if (isMatchKeyClash(error)) throw await duplicateError(shopId, input);
     throw error;
@@ -134,36 +151,47 @@ export async function createSpec({
 
 export async function updateSpec({
   shopId,
+  actorId,
   id,
   input,
-}: {
+}: Actor & {
   shopId: number;
   id: number;
   input: SpecInput;
 }): Promise<SpecEntryDto> {
-  const { SpecEntry } = getModels();
-  const row = await SpecEntry.findOne({ where: { id, shopId } });
-  if (!row) throw new AppError("not_found:spec", "No such spec row in this shop.");
+  const { SpecEntry, sequelize } = getModels();
   try {
-    await row.update({ ...input, matchKey: specMatchKey(input) });
+    return await sequelize.transaction(async (transaction) => {
+      const row = await SpecEntry.findOne({ where: { id, shopId }, transaction });
+      if (!row) throw new AppError("not_found:spec", "No such spec row in this shop.");
+      await row.update({ ...input, matchKey: specMatchKey(input) }, { transaction });
+      await recordAudit({ ...audit(shopId, actorId, row.id, "updated"), transaction });
+      return toDto(row.get({ plain: true }) as unknown as SpecEntryRow);
+    });
   } catch (error) {
     if (isMatchKeyClash(error)) throw await duplicateError(shopId, input);
     throw error;
   }
-  return toDto(row.get({ plain: true }) as unknown as SpecEntryRow);
 }
 
-export async function deleteSpec({ shopId, id }: { shopId: number; id: number }): Promise<void> {
-  const { SpecEntry, ServiceRecord } = getModels();
-  const row = await SpecEntry.findOne({ where: { id, shopId } });
-  if (!row) throw new AppError("not_found:spec", "No such spec row in this shop.");
-  const used = await ServiceRecord.count({ where: { shopId, specEntryId: id } });
-  if (used > 0)
-    throw new AppError(
-      "conflict:spec",
-      `${used} service record${used > 1 ? "s use" : " uses"} this row; correct it instead of deleting it.`,
-    );
-  await row.destroy();
+export async function deleteSpec({
+  shopId,
+  actorId,
+  id,
+}: Actor & { shopId: number; id: number }): Promise<void> {
+  const { SpecEntry, ServiceRecord, sequelize } = getModels();
+  await sequelize.transaction(async (transaction) => {
+    const row = await SpecEntry.findOne({ where: { id, shopId }, transaction });
+    if (!row) throw new AppError("not_found:spec", "No such spec row in this shop.");
+    const used = await ServiceRecord.count({ where: { shopId, specEntryId: id }, transaction });
+    if (used > 0)
+      throw new AppError(
+        "conflict:spec",
+        `${used} service record${used > 1 ? "s use" : " uses"} this row; correct it instead of deleting it.`,
+      );
+    await row.destroy({ transaction });
+    await recordAudit({ ...audit(shopId, actorId, id, "deleted"), transaction });
+  });
 }
 
 export type ImportUnits = { charge?: MassUnit; oil?: VolumeUnit };
@@ -184,9 +212,10 @@ export async function previewSpecImport({
 /** Save the rows without problems, all or none, after reading the file again against the table as it is now. */
 export async function commitSpecImport({
   shopId,
+  actorId,
   csv,
   units,
-}: {
+}: Actor & {
   shopId: number;
   csv: string;
   units?: ImportUnits;
@@ -219,7 +248,9 @@ export async function commitSpecImport({
         );
       throw error;
     }
-    return { created: good.length, leftOut: parsed.rows.length - good.length };
+    const result = { created: good.length, leftOut: parsed.rows.length - good.length };
+    await recordAudit({ ...audit(shopId, actorId, "import", "imported"), detail: result, transaction });
+    return result;
   });
 }
 

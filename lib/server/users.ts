@@ -3,6 +3,7 @@ import { getModels } from "@/models";
 import { AppError } from "@/lib/errors";
 import type { Role } from "@/lib/auth/roles";
 import type { ShopUser } from "@/lib/contracts/users";
+import { recordAudit } from "./audit";
 
 const PUBLIC_ATTRIBUTES = ["id", "email", "name", "role", "active"] as const;
 
@@ -40,14 +41,25 @@ export async function updateUser({
   role?: Role;
   active?: boolean;
 }): Promise<ShopUser> {
-  const { User } = getModels();
-  const user = await User.findOne({ where: { id: userId, shopId } });
-  if (!user) throw new AppError("not_found:user", "No such user in this shop.");
-  if (userId === actorId && ((role && role !== "owner") || active === false)) {
-    throw new AppError("conflict:user", "You cannot remove your own owner role or deactivate yourself.");
-  }
-  if (role) user.set("role", role);
-  if (active !== undefined) user.set("active", active);
-  await user.save();
-  return toShopUser(user.get({ plain: true }));
+  const { User, sequelize } = getModels();
+  return sequelize.transaction(async (transaction) => {
+    const user = await User.findOne({ where: { id: userId, shopId }, transaction });
+    if (!user) throw new AppError("not_found:user", "No such user in this shop.");
+    if (userId === actorId && ((role && role !== "owner") || active === false)) {
+      throw new AppError("conflict:user", "You cannot remove your own owner role or deactivate yourself.");
+    }
+    if (role) user.set("role", role);
+    if (active !== undefined) user.set("active", active);
+    await user.save({ transaction });
+    await recordAudit({
+      shopId,
+      actorId,
+      entity: "user",
+      entityId: user.id,
+      action: "update",
+      detail: { ...(role !== undefined ? { role } : {}), ...(active !== undefined ? { active } : {}) },
+      transaction,
+    });
+    return toShopUser(user.get({ plain: true }));
+  });
 }

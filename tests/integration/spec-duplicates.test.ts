@@ -42,7 +42,7 @@ describe("spec rows: one vehicle variant, one row, even under parallel writes", 
   it("lets exactly one of five parallel rows with the model written five ways in; the others get 409 naming it", async () => {
     const shopId = await newShop();
     const results = await Promise.all(
-      SPELLINGS.map((model) => settle(createSpec({ shopId, input: { ...PICKUP, model } }))),
+      SPELLINGS.map((model) => settle(createSpec({ shopId, actorId: null, input: { ...PICKUP, model } }))),
     );
     const created = results.filter((r): r is { ok: true; value: SpecEntryDto } => r.ok);
     const refused = results.filter((r): r is { ok: false; error: AppError } => !r.ok);
@@ -64,27 +64,27 @@ describe("spec rows: one vehicle variant, one row, even under parallel writes", 
 
   it("refuses the same spellings one at a time too, and keeps other variants, years and shops apart", async () => {
     const shopId = await newShop();
-    await createSpec({ shopId, input: PICKUP });
+    await createSpec({ shopId, actorId: null, input: PICKUP });
     for (const model of SPELLINGS.slice(1))
-      await expect(createSpec({ shopId, input: { ...PICKUP, model } })).rejects.toMatchObject({
+      await expect(createSpec({ shopId, actorId: null, input: { ...PICKUP, model } })).rejects.toMatchObject({
         status: 409,
       });
-    await createSpec({ shopId, input: { ...PICKUP, variant: "3.5L EcoBoost" } });
-    await createSpec({ shopId, input: { ...PICKUP, yearFrom: 2021, yearTo: 2023 } });
-    await createSpec({ shopId, input: { ...PICKUP, rearAc: true } });
-    await createSpec({ shopId: await newShop(), input: PICKUP });
+    await createSpec({ shopId, actorId: null, input: { ...PICKUP, variant: "3.5L EcoBoost" } });
+    await createSpec({ shopId, actorId: null, input: { ...PICKUP, yearFrom: 2021, yearTo: 2023 } });
+    await createSpec({ shopId, actorId: null, input: { ...PICKUP, rearAc: true } });
+    await createSpec({ shopId: await newShop(), actorId: null, input: PICKUP });
     expect(await listSpecs({ shopId })).toHaveLength(4);
   });
 
   it("lets only one of two parallel edits turn two rows into the same vehicle", async () => {
     const shopId = await newShop();
-    const a = await createSpec({ shopId, input: { ...PICKUP, variant: "2.7L" } });
-    const b = await createSpec({ shopId, input: { ...PICKUP, variant: "3.3L" } });
-    const c = await createSpec({ shopId, input: { ...PICKUP, variant: "5.0L" } });
+    const a = await createSpec({ shopId, actorId: null, input: { ...PICKUP, variant: "2.7L" } });
+    const b = await createSpec({ shopId, actorId: null, input: { ...PICKUP, variant: "3.3L" } });
+    const c = await createSpec({ shopId, actorId: null, input: { ...PICKUP, variant: "5.0L" } });
     const target = { ...PICKUP, variant: "3.5L" };
     const results = await Promise.all(
       [a, b, c].map((row, i) =>
-        settle(updateSpec({ shopId, id: row.id, input: { ...target, model: SPELLINGS[i]! } })),
+        settle(updateSpec({ shopId, actorId: null, id: row.id, input: { ...target, model: SPELLINGS[i]! } })),
       ),
     );
     expect(results.filter((r) => r.ok)).toHaveLength(1);
@@ -96,13 +96,15 @@ describe("spec rows: one vehicle variant, one row, even under parallel writes", 
 
   it("keeps the stored key in step with an edited row", async () => {
     const shopId = await newShop();
-    const row = await createSpec({ shopId, input: PICKUP });
-    await updateSpec({ shopId, id: row.id, input: { ...PICKUP, model: "F-250" } });
+    const row = await createSpec({ shopId, actorId: null, input: PICKUP });
+    await updateSpec({ shopId, actorId: null, id: row.id, input: { ...PICKUP, model: "F-250" } });
     const stored = await getModels().SpecEntry.findByPk(row.id, { raw: true });
     expect(stored?.matchKey).toBe("ford|f250||2015|2020|front");
     // The old spelling is free again; the new one is taken.
-    await createSpec({ shopId, input: { ...PICKUP, model: "f150" } });
-    await expect(createSpec({ shopId, input: { ...PICKUP, model: "F 250" } })).rejects.toMatchObject({
+    await createSpec({ shopId, actorId: null, input: { ...PICKUP, model: "f150" } });
+    await expect(
+      createSpec({ shopId, actorId: null, input: { ...PICKUP, model: "F 250" } }),
+    ).rejects.toMatchObject({
       status: 409,
     });
   });

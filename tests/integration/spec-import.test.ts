@@ -43,7 +43,7 @@ describe("spec table CSV import", () => {
     expect(byLine.get(8)?.problems.join(" ")).toMatch(/label charge/);
     expect(await listSpecs({ shopId: shop.id })).toEqual([]); // a preview saves nothing
 
-    const result = await commitSpecImport({ shopId: shop.id, csv: CSV });
+    const result = await commitSpecImport({ shopId: shop.id, actorId: null, csv: CSV });
     expect(result).toEqual({ created: 3, leftOut: 4 });
     const saved = await listSpecs({ shopId: shop.id });
     expect(saved.map((s) => `${s.model}:${s.rearAc}:${s.labelChargeG}`).sort()).toEqual([
@@ -54,16 +54,18 @@ describe("spec table CSV import", () => {
 
     const again = await previewSpecImport({ shopId: shop.id, csv: CSV });
     expect(again.rows.find((r) => r.line === 2)?.problems).toContain("already in the spec table");
-    await expect(commitSpecImport({ shopId: shop.id, csv: CSV })).rejects.toMatchObject({ status: 400 });
+    await expect(commitSpecImport({ shopId: shop.id, actorId: null, csv: CSV })).rejects.toMatchObject({
+      status: 400,
+    });
     expect(await listSpecs({ shopId: shop.id })).toHaveLength(3);
   });
 
   it("round-trips through the export", async () => {
     const { shop } = await createShopWithCase(getModels());
-    await commitSpecImport({ shopId: shop.id, csv: CSV });
+    await commitSpecImport({ shopId: shop.id, actorId: null, csv: CSV });
     const exported = await exportSpecsCsv({ shopId: shop.id });
     const other = await createShopWithCase(getModels());
-    expect(await commitSpecImport({ shopId: other.shop.id, csv: exported })).toEqual({
+    expect(await commitSpecImport({ shopId: other.shop.id, actorId: null, csv: exported })).toEqual({
       created: 3,
       leftOut: 0,
     });
@@ -76,7 +78,9 @@ describe("spec table CSV import", () => {
 
   it("refuses a file without the required columns", async () => {
     const { shop } = await createShopWithCase(getModels());
-    await expect(commitSpecImport({ shopId: shop.id, csv: "make,model\nMazda,3" })).rejects.toMatchObject({
+    await expect(
+      commitSpecImport({ shopId: shop.id, actorId: null, csv: "make,model\nMazda,3" }),
+    ).rejects.toMatchObject({
       status: 400,
     });
   });
@@ -99,14 +103,20 @@ describe("spec table scoping and edits", () => {
   it("answers 404 for another shop's row and vehicle, 409 for a duplicate", async () => {
     const a = await createShopWithCase(getModels());
     const b = await createShopWithCase(getModels());
-    const mine = await createSpec({ shopId: a.shop.id, input: row });
-    await expect(createSpec({ shopId: a.shop.id, input: { ...row, make: "MAZDA" } })).rejects.toMatchObject({
+    const mine = await createSpec({ shopId: a.shop.id, actorId: null, input: row });
+    await expect(
+      createSpec({ shopId: a.shop.id, actorId: null, input: { ...row, make: "MAZDA" } }),
+    ).rejects.toMatchObject({
       status: 409,
     });
-    await expect(updateSpec({ shopId: b.shop.id, id: mine.id, input: row })).rejects.toMatchObject({
+    await expect(
+      updateSpec({ shopId: b.shop.id, actorId: null, id: mine.id, input: row }),
+    ).rejects.toMatchObject({
       status: 404,
     });
-    await expect(deleteSpec({ shopId: b.shop.id, id: mine.id })).rejects.toMatchObject({ status: 404 });
+    await expect(deleteSpec({ shopId: b.shop.id, actorId: null, id: mine.id })).rejects.toMatchObject({
+      status: 404,
+    });
     await expect(
       listSpecMatchesForVehicle({ shopId: b.shop.id, vehicleId: a.vehicle.id }),
     ).rejects.toMatchObject({ status: 404 });

@@ -1,6 +1,5 @@
 import { handler } from "@/lib/server/handler";
 import { createCylinder, listCylinders } from "@/lib/server/ledger";
-import { recordAudit } from "@/lib/server/audit";
 import { createCylinderSchema, cylinderListQuerySchema } from "@/lib/contracts/cylinders";
 
 export const GET = handler(
@@ -15,14 +14,7 @@ export const GET = handler(
 export const POST = handler(
   { permission: "ledger:write", body: createCylinderSchema },
   async ({ user, body }) => {
-    const cylinder = await createCylinder({ shopId: user.shopId, input: body });
-    await recordAudit({
-      shopId: user.shopId,
-      actorId: user.id,
-      entity: "cylinder",
-      entityId: cylinder.id,
-      action: "created",
-    });
+    const cylinder = await createCylinder({ shopId: user.shopId, actorId: user.id, input: body });
     return Response.json({ cylinder }, { status: 201 });
   },
 );

@@ -1,20 +1,11 @@
 import { NextResponse } from "next/server";
-import { QueryTypes } from "sequelize";
-import { getSequelize } from "@/lib/db/sequelize";
+import { databaseHealth } from "@/lib/server/health";
 
 export const dynamic = "force-dynamic";
 
 export async function GET() {
-  const started = performance.now();
-  try {
-    await getSequelize().query("SELECT 1", { type: QueryTypes.SELECT });
-    return NextResponse.json({
-      status: "ok",
-      database: "ok",
-      latencyMs: Math.round(performance.now() - started),
-    });
-  } catch (error) {
-    console.error("Health check: database did not answer", error);
-    return NextResponse.json({ status: "degraded", database: "unreachable" }, { status: 503 });
-  }
+  const health = await databaseHealth();
+  return health.ok
+    ? NextResponse.json({ status: "ok", database: "ok", latencyMs: health.latencyMs })
+    : NextResponse.json({ status: "degraded", database: "unreachable" }, { status: 503 });
 }

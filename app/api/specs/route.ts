@@ -1,6 +1,5 @@
 import { handler } from "@/lib/server/handler";
 import { createSpec, listSpecs } from "@/lib/server/specs";
-import { recordAudit } from "@/lib/server/audit";
 import { specInputSchema, specListQuerySchema } from "@/lib/contracts/specs";
 
 export const GET = handler(
@@ -11,13 +10,6 @@ export const GET = handler(
 );
 
 export const POST = handler({ permission: "specs:edit", body: specInputSchema }, async ({ user, body }) => {
-  const spec = await createSpec({ shopId: user.shopId, input: body });
-  await recordAudit({
-    shopId: user.shopId,
-    actorId: user.id,
-    entity: "spec_entry",
-    entityId: spec.id,
-    action: "created",
-  });
+  const spec = await createSpec({ shopId: user.shopId, actorId: user.id, input: body });
   return Response.json({ spec }, { status: 201 });
 });

@@ -7,3 +7,4 @@ export { createCase } from "./create";
 export { saveInterview, submitCase } from "./interview";
 export { recordSignOff } from "./verdict";
 export { caseForAction } from "./load";
+export { addCasePhoto, caseAttachments, caseEmails, caseProposal, caseShareLinks, shareCase } from "./panels";

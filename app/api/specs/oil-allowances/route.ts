@@ -1,6 +1,5 @@
 import { handler } from "@/lib/server/handler";
 import { getPartOilAllowances, setPartOilAllowances } from "@/lib/server/oil-allowances";
-import { recordAudit } from "@/lib/server/audit";
 import { oilAllowancesInputSchema } from "@/lib/contracts/specs";
 
 export const GET = handler({ permission: "specs:read" }, async ({ user }) => {
@@ -9,16 +8,11 @@ export const GET = handler({ permission: "specs:read" }, async ({ user }) => {
 
 export const PUT = handler(
   { permission: "specs:edit", body: oilAllowancesInputSchema },
-  async ({ user, body }) => {
-    const allowancesMl = await setPartOilAllowances({ shopId: user.shopId, allowancesMl: body.allowancesMl });
-    await recordAudit({
+  async ({ user, body }) => ({
+    allowancesMl: await setPartOilAllowances({
       shopId: user.shopId,
       actorId: user.id,
-      entity: "part_oil_allowance",
-      entityId: "all",
-      action: "updated",
-      detail: body.allowancesMl,
-    });
-    return { allowancesMl };
-  },
+      allowancesMl: body.allowancesMl,
+    }),
+  }),
 );

@@ -1,15 +1,12 @@
 import { sendOwnerEmailSchema } from "@/lib/contracts/emails";
 import { caseIdParamsSchema } from "@/lib/contracts/owner-summary";
 import { handler } from "@/lib/server/handler";
-import { loadCaseForOwner } from "@/lib/server/owner-case";
-import { listEmails, sendOwnerSummaryEmail } from "@/lib/server/outbound-email";
+import { caseEmails } from "@/lib/server/cases";
+import { sendOwnerSummaryEmail } from "@/lib/server/outbound-email";
 
 export const GET = handler(
   { permission: "cases:read", params: caseIdParamsSchema },
-  async ({ user, params }) => {
-    await loadCaseForOwner({ user, caseId: params.id });
-    return { emails: await listEmails({ shopId: user.shopId, caseId: params.id }) };
-  },
+  async ({ user, params }) => caseEmails({ user, caseId: params.id }),
 );
 
 /** Sends the owner page by e-mail; the answer says whether it went or is waiting for a retry. */

@@ -1,14 +1,11 @@
 import { caseIdParamsSchema, repairProposalSchema } from "@/lib/contracts/owner-summary";
 import { handler } from "@/lib/server/handler";
-import { loadCaseForOwner } from "@/lib/server/owner-case";
-import { currentProposalForShop, proposeRepair } from "@/lib/server/repair-proposals";
+import { caseProposal } from "@/lib/server/cases";
+import { proposeRepair } from "@/lib/server/repair-proposals";
 
 export const GET = handler(
   { permission: "cases:read", params: caseIdParamsSchema },
-  async ({ user, params }) => {
-    await loadCaseForOwner({ user, caseId: params.id });
-    return { proposal: await currentProposalForShop({ shopId: user.shopId, caseId: params.id }) };
-  },
+  async ({ user, params }) => caseProposal({ user, caseId: params.id }),
 );
 
 export const POST = handler(
