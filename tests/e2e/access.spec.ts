@@ -299,6 +299,67 @@ const table: {
     },
   },
   {
+    name: "POST /api/cases (malformed)",
+    call: (c) => c.post("/api/cases", { data: { complaint: "" } }),
+    expect: {
+      anonymous: 401,
+      owner: 400,
+      senior: 400,
+      technician: 400,
+      apprentice: 400,
+      otherShopOwner: 400,
+    },
+  },
+  {
+    name: "PUT /api/cases/:id/interview (malformed)",
+    call: (c) =>
+      c.put(`/api/cases/${harbourlineCaseId}/interview`, { data: { baseVersion: 0, step: "nowhere" } }),
+    expect: {
+      anonymous: 401,
+      owner: 400,
+      senior: 400,
+      technician: 400,
+      apprentice: 400,
+      otherShopOwner: 400,
+    },
+  },
+  {
+    name: "POST /api/cases/:id/submit (malformed)",
+    call: (c) => c.post(`/api/cases/${harbourlineCaseId}/submit`, { data: { conclusionCause: "gremlins" } }),
+    expect: {
+      anonymous: 401,
+      owner: 400,
+      senior: 400,
+      technician: 400,
+      apprentice: 400,
+      otherShopOwner: 400,
+    },
+  },
+  {
+    name: "POST /api/cases/:id/signoff (sent back without a comment)",
+    call: (c) => c.post(`/api/cases/${harbourlineCaseId}/signoff`, { data: { verdict: "sent_back" } }),
+    expect: {
+      anonymous: 401,
+      owner: 400,
+      senior: 400,
+      technician: 403,
+      apprentice: 403,
+      otherShopOwner: 400,
+    },
+  },
+  {
+    name: "GET /api/vehicles",
+    call: (c) => c.get("/api/vehicles"),
+    expect: {
+      anonymous: 401,
+      owner: 200,
+      senior: 200,
+      technician: 200,
+      apprentice: 200,
+      otherShopOwner: 200,
+    },
+  },
+  {
     name: "GET /api/cases/:id (not a number)",
     call: (c) => c.get("/api/cases/abc"),
     expect: {
@@ -434,7 +495,7 @@ const table: {
     name: "PUT /api/cases/:id/service (malformed)",
     call: (c) =>
       c.put(`/api/cases/${harbourlineCaseId}/service`, {
-        data: { baseVersion: -1, step: "somewhere", recoveredG: "lots" },
+        data: { baseVersion: -1, step: "somewhere", recoveredChargeG: "lots" },
       }),
     expect: {
       anonymous: 401,
