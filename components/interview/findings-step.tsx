@@ -17,7 +17,8 @@ interface Props {
   caseId: number;
   input: DiagnosisInput | null;
   interviewCautions: InterviewCaution[];
-  isApprentice: boolean;
+  /** whether submitting sends the case to a senior (lib/cases/rules.ts) rather than signing it off */
+  waitsForSignOff: boolean;
   saveStatus: SaveStatus;
   currentVersion: () => number;
   onBack: () => void;
@@ -27,7 +28,7 @@ export function FindingsStep({
   caseId,
   input,
   interviewCautions,
-  isApprentice,
+  waitsForSignOff,
   saveStatus,
   currentVersion,
   onBack,
@@ -224,7 +225,7 @@ export function FindingsStep({
               Back
             </button>
             <button type="submit" className="btn-primary ml-auto flex-1" disabled={mutation.isPending}>
-              {isApprentice ? "Send to a senior for sign-off" : "Submit the diagnosis"}
+              {waitsForSignOff ? "Send to a senior for sign-off" : "Submit the diagnosis"}
             </button>
           </div>
           <p className="text-sm text-ink-soft">Findings engine {findings.engineVersion}</p>

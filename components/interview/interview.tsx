@@ -24,7 +24,7 @@ export interface InterviewProps {
   /** Changes made on this device that the server has not confirmed; they are sent at once. */
   pendingFromDevice: number;
   shop: { altitudeM: number; units: "metric" | "imperial" };
-  isApprentice: boolean;
+  waitsForSignOff: boolean;
   heading: string;
   vehicleId: number | null;
 }
@@ -35,7 +35,7 @@ export function Interview({
   record,
   pendingFromDevice,
   shop,
-  isApprentice,
+  waitsForSignOff,
   heading,
   vehicleId,
 }: InterviewProps) {
@@ -164,7 +164,7 @@ export function Interview({
             caseId={caseId}
             input={view.diagnosisInput}
             interviewCautions={view.cautions}
-            isApprentice={isApprentice}
+            waitsForSignOff={waitsForSignOff}
             saveStatus={autosave.status}
             currentVersion={autosave.currentVersion}
             onBack={() => send({ type: "BACK" })}

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import type { Role } from "@/lib/auth/roles";
 import { CASE_STATUSES, type CaseStatus } from "@/lib/cases/statuses";
 import { SERVICE_REFRIGERANT_IDS } from "@/lib/refrigerants/catalog";
 import { EXPANSION_DEVICE_IDS } from "@/lib/vehicles/expansion-devices";
@@ -114,6 +115,7 @@ export interface CaseListItem {
 /** One case with its interview record, findings and sign-offs (GET /api/cases/[id]). */
 export interface CaseDetail extends CaseListItem {
   technicianId: string;
+  technicianRole: Role;
   vehicleId: number | null;
   refrigerant: string | null;
   expansionDevice: string | null;

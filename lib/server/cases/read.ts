@@ -2,6 +2,7 @@ import "server-only";
 import { getModels } from "@/models";
 import type { CaseDetail, CaseListItem, CaseStatus } from "@/lib/contracts/cases";
 import { AppError } from "@/lib/errors";
+import type { Role } from "@/lib/auth/roles";
 
 type VehicleRow = {
   year: number;
@@ -21,7 +22,7 @@ function includes() {
   return [
     { model: Vehicle, attributes: ["year", "make", "model", "engine", "refrigerant", "expansionDevice"] },
     { model: Customer, attributes: ["name"] },
-    { model: User, as: "technician", attributes: ["name"] },
+    { model: User, as: "technician", attributes: ["name", "role"] },
   ];
 }
 
@@ -73,7 +74,7 @@ export async function getCase({ shopId, caseId }: { shopId: number; caseId: numb
   const c = row.get({ plain: true }) as unknown as Record<string, unknown> & {
     Vehicle: VehicleRow;
     Customer: { name: string } | null;
-    technician: { name: string };
+    technician: { name: string; role: Role };
     signOffs: { verdict: string; comment: string | null; createdAt: Date; reviewer: { name: string } }[];
   };
   return {
@@ -84,6 +85,7 @@ export async function getCase({ shopId, caseId }: { shopId: number; caseId: numb
     customer: c.Customer?.name ?? null,
     technician: c.technician.name,
     technicianId: c.technicianId as string,
+    technicianRole: c.technician.role,
     vehicleId: (c.vehicleId as number | null) ?? null,
     updatedAt: (c.updatedAt as Date).toISOString(),
     refrigerant: c.Vehicle?.refrigerant ?? null,

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { notFound, redirect } from "next/navigation";
 import { requireUser } from "@/lib/auth/guard";
-import { mayDo } from "@/lib/cases/rules";
+import { mayDo, statusAfterSubmit } from "@/lib/cases/rules";
 import { getCase } from "@/lib/server/cases";
 import { getShop } from "@/lib/server/shops";
 import { isAppError } from "@/lib/errors";
@@ -34,7 +34,7 @@ export default async function InterviewPage({ params }: { params: Promise<{ id: 
       version={detail.version}
       serverRecord={record}
       shop={{ altitudeM: shop.altitudeM, units: shop.units }}
-      isApprentice={user.role === "apprentice"}
+      waitsForSignOff={statusAfterSubmit(detail.technicianRole) === "awaiting_signoff"}
       heading={`Case ${caseId} · ${detail.vehicle ?? "vehicle"}`}
       vehicleId={detail.vehicleId}
     />
