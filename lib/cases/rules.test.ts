@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { ROLES, type Role } from "@/lib/auth/roles";
-import { CASE_STATUSES, type CaseStatus } from "@/lib/contracts/cases";
+import { CASE_STATUSES, type CaseStatus } from "./statuses";
 import {
   CASE_ACTIONS,
   STATUS_AFTER,

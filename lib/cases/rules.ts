@@ -1,5 +1,5 @@
 import { can, type Permission, type Role } from "@/lib/auth/roles";
-import type { CaseStatus } from "@/lib/contracts/cases";
+import type { CaseStatus } from "./statuses";
 
 // The case's rules, in one place: who may do what to a case, in which status, and where each step
 // leads. Pages ask `caseAbilities` what to offer; the server asks `caseRefusal` before it changes a
