@@ -31,7 +31,7 @@ async function ruleHits(
 
 const PATHS = "import/no-restricted-paths";
 
-describe("layering rules in eslint.config.mjs", { timeout: 120_000 }, () => {
+describe("layering rules in eslint.config.mjs", { timeout: 300_000 }, () => {
   it("refuses an import from app/ outside app/", async () => {
     const hits = await ruleHits(
       "components/cases/case-list.tsx",
