@@ -183,43 +183,36 @@ export async function setCylinderRetired({
   });
 }
 
-export async function listMovements({
-  shopId,
-  cylinderId,
-  limit = 200,
-}: {
-  shopId: number;
-  cylinderId?: number;
-  limit?: number;
-}): Promise<MovementDto[]> {
-  const { RefrigerantMovement, Cylinder, User } = getModels();
-  const rows = await RefrigerantMovement.findAll({
-    where: { shopId, ...(cylinderId ? { cylinderId } : {}) },
-    include: [
-      { model: Cylinder, attributes: ["label"] },
-      { model: User, as: "technician", attributes: ["name"] },
-    ],
-    order: [
-      ["occurredAt", "DESC"],
-      ["id", "DESC"],
-    ],
-    limit,
-  });
-  const plain = rows.map(
-    (r) =>
-      r.get({ plain: true }) as unknown as MovementRow & {
-        Cylinder: { label: string };
-        technician: { name: string };
-      },
-  );
+type MovementWithNames = MovementRow & { Cylinder: { label: string }; technician: { name: string } };
+
+function movementIncludes() {
+  const { Cylinder, User } = getModels();
+  return [
+    { model: Cylinder, attributes: ["label"] },
+    { model: User, as: "technician", attributes: ["name"] },
+  ];
+}
+
+/** The ids of the corrections cancelling any of `ids` (one query, only for the lines asked about). */
+async function reversalsOf(
+  shopId: number,
+  ids: number[],
+  transaction?: Transaction,
+): Promise<Map<number, number>> {
   const reversedBy = new Map<number, number>();
-  const reversals = await RefrigerantMovement.findAll({
-    where: { shopId },
+  if (ids.length === 0) return reversedBy;
+  const rows = await getModels().RefrigerantMovement.findAll({
+    where: { shopId, reversesId: ids },
     attributes: ["id", "reversesId"],
     raw: true,
+    transaction,
   });
-  for (const r of reversals) if (r.reversesId) reversedBy.set(r.reversesId, r.id);
-  return plain.map((m) => ({
+  for (const r of rows) if (r.reversesId) reversedBy.set(r.reversesId, r.id);
+  return reversedBy;
+}
+
+function toMovementDto(m: MovementWithNames, reversedBy: Map<number, number>): MovementDto {
+  return {
     id: m.id,
     cylinderId: m.cylinderId,
     cylinderLabel: m.Cylinder.label,
@@ -235,7 +228,53 @@ export async function listMovements({
     reversedById: reversedBy.get(m.id) ?? null,
     destination: m.destination,
     note: m.note,
-  }));
+  };
+}
+
+export async function listMovements({
+  shopId,
+  cylinderId,
+  limit = 200,
+}: {
+  shopId: number;
+  cylinderId?: number;
+  limit?: number;
+}): Promise<MovementDto[]> {
+  const rows = await getModels().RefrigerantMovement.findAll({
+    where: { shopId, ...(cylinderId ? { cylinderId } : {}) },
+    include: movementIncludes(),
+    order: [
+      ["occurredAt", "DESC"],
+      ["id", "DESC"],
+    ],
+    limit,
+  });
+  const plain = rows.map((r) => r.get({ plain: true }) as unknown as MovementWithNames);
+  const reversedBy = await reversalsOf(
+    shopId,
+    plain.map((m) => m.id),
+  );
+  return plain.map((m) => toMovementDto(m, reversedBy));
+}
+
+/** One ledger line by id, however old; not_found when it is missing or another shop's. */
+export async function getMovement({
+  shopId,
+  id,
+  transaction,
+}: {
+  shopId: number;
+  id: number;
+  transaction?: Transaction;
+}): Promise<MovementDto> {
+  const row = await getModels().RefrigerantMovement.findOne({
+    where: { shopId, id },
+    include: movementIncludes(),
+    transaction,
+  });
+  if (!row) throw new AppError("not_found:movement", "No such ledger line in this shop.");
+  const m = row.get({ plain: true }) as unknown as MovementWithNames;
+  return toMovementDto(m, await reversalsOf(shopId, [m.id], transaction));
 }
 
 export async function postManualMovement({
@@ -266,9 +305,8 @@ export async function postManualMovement({
     destination: input.destination || null,
     note: input.note || null,
   });
-  const [posted] = (await listMovements({ shopId, limit: 500 })).filter((m) => m.id === row.id);
-  if (!posted) throw new AppError("not_found:movement");
-  return posted;
+  // By id: a backdated line may be older than any page of the newest lines.
+  return getMovement({ shopId, id: row.id });
 }
 
 /** Recovered, recycled, charged and sent out per month × technician × refrigerant, in the shop's time zone. */
