@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { type RefrigerantId, SERVICE_REFRIGERANT_IDS } from "@/lib/refrigerants/catalog";
+import { RECOVERY_CYLINDER_FILL_LIMIT_PCT } from "@/lib/service/ledger";
 
 export const CYLINDER_KINDS = ["recovery", "virgin", "recycled"] as const;
 export type CylinderKind = (typeof CYLINDER_KINDS)[number];
@@ -16,46 +17,68 @@ export const createCylinderSchema = z
     label: z
       .string()
       .trim()
-      .min(1, "Give the cylinder a label the shop can read on it.")
-      .max(60, "At most 60 characters."),
+      .min(1, "The label is missing: use the one written on the cylinder.")
+      .max(60, "The label is at most 60 characters."),
     serial: z
       .string()
       .trim()
-      .max(60, "At most 60 characters.")
+      .max(60, "The serial number is at most 60 characters.")
       .optional()
       .or(z.literal("").transform(() => undefined)),
     refrigerant: z.enum(SERVICE_REFRIGERANT_IDS, { message: "Choose the refrigerant this cylinder holds." }),
     kind: z.enum(CYLINDER_KINDS, { message: "Choose recovery, virgin or recycled." }),
     tareG: z
-      .number({ message: "Enter the tare weight stamped on the cylinder." })
-      .int("Whole grams.")
+      .number({ message: "The tare is missing: it is stamped on the cylinder's collar." })
+      .int("The tare is in whole grams.")
       .min(500, "A tare under 500 g is not a refrigerant cylinder.")
-      .max(60_000, "Over 60 kg: check the unit."),
+      .max(60_000, "A tare over 60 kg is not a refrigerant cylinder: check the unit."),
     capacityG: z
-      .number({ message: "Enter the cylinder's refrigerant capacity." })
-      .int("Whole grams.")
-      .min(500, "At least 500 g.")
-      .max(120_000, "Over 120 kg: check the unit."),
+      .number({ message: "The refrigerant capacity is missing." })
+      .int("The capacity is in whole grams.")
+      .min(500, "A capacity under 500 g is not a refrigerant cylinder: check the unit.")
+      .max(120_000, "That is more than any cylinder holds: check the figure and its unit."),
     initialNetG: z
-      .number({ message: "Enter what it holds now (0 when empty)." })
-      .int("Whole grams.")
-      .min(0, "Cannot be negative.")
-      .max(120_000),
+      .number({ message: "Say what it holds now (0 when empty)." })
+      .int("The contents are in whole grams.")
+      .min(0, "A cylinder cannot hold less than nothing.")
+      .max(120_000, "That is more than any cylinder holds: check the figure and its unit."),
   })
   .strict()
   .refine((c) => c.initialNetG <= c.capacityG, {
     message: "It cannot hold more than its capacity.",
     path: ["initialNetG"],
-  });
+  })
+  .refine(
+    (c) =>
+      c.kind !== "recovery" ||
+      c.initialNetG > c.capacityG ||
+      c.initialNetG <= (c.capacityG * RECOVERY_CYLINDER_FILL_LIMIT_PCT) / 100,
+    {
+      message: `A recovery cylinder is filled to ${RECOVERY_CYLINDER_FILL_LIMIT_PCT} % of its capacity at most; this one is past it.`,
+      path: ["initialNetG"],
+    },
+  );
 export type CreateCylinderInput = z.infer<typeof createCylinderSchema>;
 
 export const updateCylinderSchema = z
   .object({ retired: z.boolean({ message: "retired is true or false." }) })
   .strict();
 
+export const CYLINDER_PAGE_DEFAULT = 100;
+export const CYLINDER_PAGE_MAX = 200;
+
 export const cylinderListQuerySchema = z.object({
   retired: z.enum(["include", "exclude"], { message: "retired is include or exclude." }).optional(),
+  limit: z.coerce
+    .number({ message: "limit is a number." })
+    .int("limit is a whole number.")
+    .min(1, "limit is at least 1.")
+    .max(CYLINDER_PAGE_MAX, `At most ${CYLINDER_PAGE_MAX} cylinders at a time.`)
+    .optional(),
+  /** the label of the last cylinder of the page you have (labels are unique in a shop) */
+  after: z.string().min(1).max(60, "after is the nextCursor of the page you already have.").optional(),
 });
+export type CylinderListQuery = z.infer<typeof cylinderListQuerySchema>;
 
 /** A cylinder with its contents replayed from the ledger, and what its fill means. */
 export interface CylinderDto {
@@ -72,11 +95,21 @@ export interface CylinderDto {
   grossG: number;
   fillPct: number;
   limitPct: number;
+  /** the most it may hold: 80 % of capacity for a recovery cylinder (common practice), else its capacity */
+  safeFillG: number;
+  /** room left before safeFillG (negative when past it) */
+  roomG: number;
   fillMessage: string;
   problems: string[];
 }
 
-/** GET /api/cylinders. */
+/** GET /api/cylinders: ordered by label; nextCursor fetches the next page (null: no more). */
 export interface CylinderListResponse {
   cylinders: CylinderDto[];
+  nextCursor: string | null;
+}
+
+/** POST /api/cylinders and PATCH /api/cylinders/[id]. */
+export interface CylinderResponse {
+  cylinder: CylinderDto;
 }

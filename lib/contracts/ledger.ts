@@ -3,14 +3,38 @@ import type { RefrigerantId } from "@/lib/refrigerants";
 import type { MovementType } from "@/lib/service/ledger";
 import type { MonthlyReportRow } from "@/lib/service/ledger-report";
 
+/** The most any cylinder a shop keeps could hold, grams; a mass past it is a typing or unit mistake. */
+export const LEDGER_MASS_MAX_G = 120_000;
+export const MOVEMENT_PAGE_DEFAULT = 50;
+export const MOVEMENT_PAGE_MAX = 200;
+
+/** "<ISO instant>~<id>": the last line of a page; the next page starts just after it. */
+const MOVEMENT_CURSOR = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}(\.\d{1,3})?Z~\d{1,10}$/;
+
 export const movementListQuerySchema = z.object({
-  cylinderId: z.coerce.number({ message: "cylinderId is a number." }).int().positive().optional(),
+  cylinderId: z.coerce
+    .number({ message: "cylinderId is a number." })
+    .int("cylinderId is a whole number.")
+    .positive("cylinderId is positive.")
+    .optional(),
   limit: z.coerce
     .number({ message: "limit is a number." })
-    .int()
-    .min(1)
-    .max(500, "At most 500 at a time.")
+    .int("limit is a whole number.")
+    .min(1, "limit is at least 1.")
+    .max(MOVEMENT_PAGE_MAX, `At most ${MOVEMENT_PAGE_MAX} lines at a time.`)
     .optional(),
+  before: z
+    .string()
+    .regex(MOVEMENT_CURSOR, "before is the nextCursor of the page you already have.")
+    .optional(),
+});
+export type MovementListQuery = z.infer<typeof movementListQuerySchema>;
+
+export const movementParamsSchema = z.object({
+  id: z.coerce
+    .number({ message: "A ledger line id is a number." })
+    .int("A ledger line id is a whole number.")
+    .positive("A ledger line id is positive."),
 });
 
 export const reportQuerySchema = z.object({
@@ -20,18 +44,25 @@ export const reportQuerySchema = z.object({
 /** Movements a technician posts by hand; recovery and recharge are posted by the service record. */
 export const manualMovementSchema = z
   .object({
-    cylinderId: z.number({ message: "Choose a cylinder." }).int().positive(),
+    cylinderId: z
+      .number({ message: "Choose a cylinder." })
+      .int("Choose a cylinder.")
+      .positive("Choose a cylinder."),
     type: z.enum(["recycled", "sent_out", "adjustment"], {
       message: "Choose recycled, sent out or a weighed adjustment.",
     }),
-    massG: z.number({ message: "Enter the mass." }).int("Whole grams.").min(-120_000).max(120_000),
+    massG: z
+      .number({ message: "The mass is missing." })
+      .int("The mass is in whole grams.")
+      .min(-LEDGER_MASS_MAX_G, "That is more than any cylinder holds: check the figure and its unit.")
+      .max(LEDGER_MASS_MAX_G, "That is more than any cylinder holds: check the figure and its unit."),
     occurredAt: z.iso.datetime({ offset: true, message: "Give the date and time." }).optional(),
-    destination: z.string().trim().max(120).optional(),
-    note: z.string().trim().max(255).optional(),
+    destination: z.string().trim().max(120, "The destination is at most 120 characters.").optional(),
+    note: z.string().trim().max(255, "The note is at most 255 characters.").optional(),
   })
   .strict()
   .refine((m) => (m.type === "adjustment" ? m.massG !== 0 : m.massG > 0), {
-    message: "Enter a positive mass (an adjustment may be negative, never zero).",
+    message: "The mass must be more than zero (only a weighed correction may be negative).",
     path: ["massG"],
   })
   .refine((m) => m.type !== "sent_out" || (m.destination ?? "") !== "", {
@@ -43,6 +74,18 @@ export const manualMovementSchema = z
     path: ["note"],
   });
 export type ManualMovementInput = z.infer<typeof manualMovementSchema>;
+
+/** Cancelling a wrong line: the line stays, a correction that cancels it is posted with the reason. */
+export const reversalSchema = z
+  .object({
+    reason: z
+      .string({ message: "Say why this line is wrong." })
+      .trim()
+      .min(3, "Say why this line is wrong, in a few words.")
+      .max(200, "The reason is at most 200 characters."),
+  })
+  .strict();
+export type ReversalInput = z.infer<typeof reversalSchema>;
 
 /** One ledger row as the client shows it. */
 export interface MovementDto {
@@ -63,9 +106,21 @@ export interface MovementDto {
   note: string | null;
 }
 
-/** GET /api/ledger/movements. */
+/** GET /api/ledger/movements: the newest lines first; nextCursor fetches the older ones (null: no more). */
 export interface MovementListResponse {
   movements: MovementDto[];
+  nextCursor: string | null;
+}
+
+/** POST /api/ledger/movements. */
+export interface MovementResponse {
+  movement: MovementDto;
+}
+
+/** POST /api/ledger/movements/[id]/reversal: the correction posted, and the line it cancels. */
+export interface ReversalResponse {
+  correction: MovementDto;
+  original: MovementDto;
 }
 
 export interface LedgerReportRow extends MonthlyReportRow {

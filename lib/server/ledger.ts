@@ -1,5 +1,5 @@
 import "server-only";
-import type { Transaction } from "sequelize";
+import { Op, type Transaction } from "sequelize";
 import { getModels, type CylinderKind } from "@/models";
 import { AppError } from "@/lib/errors";
 import { recordAudit } from "./audit";
@@ -10,11 +10,24 @@ import {
   type MovementType,
   applyMovements,
 } from "@/lib/service/ledger";
+import { safeFillG } from "@/lib/service/ledger-guard";
 import { monthlyReport, toCsv } from "@/lib/service/ledger-report";
-import type { CreateCylinderInput, CylinderDto } from "@/lib/contracts/cylinders";
-import type { LedgerReportResponse, ManualMovementInput, MovementDto } from "@/lib/contracts/ledger";
+import {
+  CYLINDER_PAGE_DEFAULT,
+  type CreateCylinderInput,
+  type CylinderDto,
+  type CylinderListQuery,
+  type CylinderListResponse,
+} from "@/lib/contracts/cylinders";
+import {
+  MOVEMENT_PAGE_DEFAULT,
+  type LedgerReportResponse,
+  type MovementDto,
+  type MovementListQuery,
+  type MovementListResponse,
+} from "@/lib/contracts/ledger";
 
-type CylinderRow = {
+export type CylinderRow = {
   id: number;
   label: string;
   serial: string | null;
@@ -25,7 +38,7 @@ type CylinderRow = {
   initialNetG: number;
   retiredAt: Date | null;
 };
-type MovementRow = {
+export type MovementRow = {
   id: number;
   cylinderId: number;
   caseId: number | null;
@@ -66,6 +79,7 @@ export function toLedgerMovement(m: MovementRow): CylinderMovement {
   };
 }
 
+/** Every line of the shop, oldest first: the monthly report needs them all. */
 async function movementRows(shopId: number, transaction?: Transaction): Promise<MovementRow[]> {
   const rows = await getModels().RefrigerantMovement.findAll({
     where: { shopId },
@@ -79,47 +93,128 @@ async function movementRows(shopId: number, transaction?: Transaction): Promise<
   return rows as unknown as MovementRow[];
 }
 
-/** Cylinders with their contents replayed from the ledger. */
+/** The lines of the given cylinders only, oldest first. */
+export async function cylinderMovementRows({
+  shopId,
+  cylinderIds,
+  transaction,
+  latest = false,
+}: {
+  shopId: number;
+  cylinderIds: number[];
+  transaction?: Transaction;
+  /**
+   * Read what is committed now (a locking read), not the transaction's snapshot: a post that
+   * waited for a cylinder's lock must see the lines the post before it added.
+   */
+  latest?: boolean;
+}): Promise<MovementRow[]> {
+  if (cylinderIds.length === 0) return [];
+  const rows = await getModels().RefrigerantMovement.findAll({
+    where: { shopId, cylinderId: cylinderIds },
+    order: [
+      ["occurredAt", "ASC"],
+      ["id", "ASC"],
+    ],
+    raw: true,
+    transaction,
+    ...(latest && transaction ? { lock: transaction.LOCK.SHARE } : {}),
+  });
+  return rows as unknown as MovementRow[];
+}
+
+function toCylinderDto(c: CylinderRow, movements: CylinderMovement[]): CylinderDto {
+  const ledgerCylinder = toLedgerCylinder(c);
+  // A correction always cancels a movement of the same cylinder, so `movements` holds both ends of it.
+  const state = applyMovements(ledgerCylinder, movements);
+  return {
+    id: c.id,
+    label: c.label,
+    serial: c.serial,
+    refrigerant: c.refrigerant,
+    kind: c.kind,
+    tareG: c.tareG,
+    capacityG: c.capacityG,
+    initialNetG: c.initialNetG,
+    retired: Boolean(c.retiredAt),
+    netG: state.netG,
+    grossG: state.grossG,
+    fillPct: state.fill.fillPct,
+    limitPct: state.fill.limitPct,
+    safeFillG: safeFillG(ledgerCylinder),
+    roomG: state.fill.roomG,
+    fillMessage: state.fill.message,
+    problems: state.problems,
+  };
+}
+
+/**
+ * Cylinders ordered by label with their contents replayed from their own lines. `ids` picks
+ * some; `limit` and `after` (the last label of the previous page) page through the rest.
+ */
 export async function listCylinders({
   shopId,
   includeRetired = true,
+  ids,
+  limit,
+  after,
   transaction,
 }: {
   shopId: number;
   includeRetired?: boolean;
+  ids?: number[];
+  limit?: number;
+  after?: string;
   transaction?: Transaction;
 }): Promise<CylinderDto[]> {
+  if (ids && ids.length === 0) return [];
   const rows = (await getModels().Cylinder.findAll({
-    where: { shopId },
+    where: {
+      shopId,
+      ...(ids ? { id: ids } : {}),
+      ...(includeRetired ? {} : { retiredAt: null }),
+      ...(after !== undefined ? { label: { [Op.gt]: after } } : {}),
+    },
     order: [["label", "ASC"]],
+    ...(limit ? { limit } : {}),
     raw: true,
     transaction,
   })) as unknown as CylinderRow[];
-  const movements = (await movementRows(shopId, transaction)).map(toLedgerMovement);
-  return rows
-    .filter((c) => includeRetired || !c.retiredAt)
-    .map((c) => {
-      const own = movements.filter((m) => m.cylinderId === String(c.id));
-      // A correction always cancels a movement of the same cylinder, so `own` holds both ends of it.
-      const state = applyMovements(toLedgerCylinder(c), own);
-      return {
-        id: c.id,
-        label: c.label,
-        serial: c.serial,
-        refrigerant: c.refrigerant,
-        kind: c.kind,
-        tareG: c.tareG,
-        capacityG: c.capacityG,
-        initialNetG: c.initialNetG,
-        retired: Boolean(c.retiredAt),
-        netG: state.netG,
-        grossG: state.grossG,
-        fillPct: state.fill.fillPct,
-        limitPct: state.fill.limitPct,
-        fillMessage: state.fill.message,
-        problems: state.problems,
-      };
-    });
+  const movements = (
+    await cylinderMovementRows({ shopId, cylinderIds: rows.map((c) => c.id), transaction })
+  ).map(toLedgerMovement);
+  return rows.map((c) =>
+    toCylinderDto(
+      c,
+      movements.filter((m) => m.cylinderId === String(c.id)),
+    ),
+  );
+}
+
+/** GET /api/cylinders: one page, and the cursor of the next one. */
+export async function listCylinderPage({
+  shopId,
+  query,
+}: {
+  shopId: number;
+  query: CylinderListQuery;
+}): Promise<CylinderListResponse> {
+  const limit = query.limit ?? CYLINDER_PAGE_DEFAULT;
+  const page = await listCylinders({
+    shopId,
+    includeRetired: query.retired !== "exclude",
+    limit: limit + 1,
+    after: query.after,
+  });
+  const more = page.length > limit;
+  const cylinders = more ? page.slice(0, limit) : page;
+  return { cylinders, nextCursor: more ? (cylinders.at(-1)?.label ?? null) : null };
+}
+
+async function oneCylinder(shopId: number, id: number, transaction?: Transaction): Promise<CylinderDto> {
+  const [found] = await listCylinders({ shopId, ids: [id], transaction });
+  if (!found) throw new AppError("not_found:cylinder", "No such cylinder in this shop.");
+  return found;
 }
 
 export async function createCylinder({
@@ -135,7 +230,7 @@ export async function createCylinder({
   return sequelize.transaction(async (transaction) => {
     if (await Cylinder.findOne({ where: { shopId, label: input.label }, attributes: ["id"], transaction })) {
       throw new AppError("conflict:cylinder", "Another cylinder already has this label.", {
-        fieldErrors: { label: ["Already used by another cylinder."] },
+        fieldErrors: { label: ["Another cylinder already has this label."] },
       });
     }
     const row = await Cylinder.create({ ...input, serial: input.serial ?? null, shopId }, { transaction });
@@ -147,9 +242,7 @@ export async function createCylinder({
       action: "created",
       transaction,
     });
-    const created = (await listCylinders({ shopId, transaction })).find((c) => c.id === row.id);
-    if (!created) throw new AppError("not_found:cylinder");
-    return created;
+    return oneCylinder(shopId, row.id, transaction);
   });
 }
 
@@ -177,9 +270,7 @@ export async function setCylinderRetired({
       action: retired ? "retired" : "reactivated",
       transaction,
     });
-    const updated = (await listCylinders({ shopId, transaction })).find((c) => c.id === id);
-    if (!updated) throw new AppError("not_found:cylinder");
-    return updated;
+    return oneCylinder(shopId, id, transaction);
   });
 }
 
@@ -231,17 +322,32 @@ function toMovementDto(m: MovementWithNames, reversedBy: Map<number, number>): M
   };
 }
 
+/** The newest lines first; `before` (a nextCursor) continues after the last line of a page. */
 export async function listMovements({
   shopId,
   cylinderId,
-  limit = 200,
+  limit = MOVEMENT_PAGE_DEFAULT,
+  before,
 }: {
   shopId: number;
   cylinderId?: number;
   limit?: number;
+  before?: string;
 }): Promise<MovementDto[]> {
+  const [beforeAt, beforeId] = before ? before.split("~") : [];
   const rows = await getModels().RefrigerantMovement.findAll({
-    where: { shopId, ...(cylinderId ? { cylinderId } : {}) },
+    where: {
+      shopId,
+      ...(cylinderId ? { cylinderId } : {}),
+      ...(beforeAt && beforeId
+        ? {
+            [Op.or]: [
+              { occurredAt: { [Op.lt]: new Date(beforeAt) } },
+              { occurredAt: new Date(beforeAt), id: { [Op.lt]: Number(beforeId) } },
+            ],
+          }
+        : {}),
+    },
     include: movementIncludes(),
     order: [
       ["occurredAt", "DESC"],
@@ -255,6 +361,27 @@ export async function listMovements({
     plain.map((m) => m.id),
   );
   return plain.map((m) => toMovementDto(m, reversedBy));
+}
+
+/** GET /api/ledger/movements: one page, and the cursor of the next one. */
+export async function listMovementPage({
+  shopId,
+  query,
+}: {
+  shopId: number;
+  query: MovementListQuery;
+}): Promise<MovementListResponse> {
+  const limit = query.limit ?? MOVEMENT_PAGE_DEFAULT;
+  const page = await listMovements({
+    shopId,
+    cylinderId: query.cylinderId,
+    before: query.before,
+    limit: limit + 1,
+  });
+  const more = page.length > limit;
+  const movements = more ? page.slice(0, limit) : page;
+  const last = movements.at(-1);
+  return { movements, nextCursor: more && last ? `${last.occurredAt}~${last.id}` : null };
 }
 
 /** One ledger line by id, however old; not_found when it is missing or another shop's. */
@@ -275,38 +402,6 @@ export async function getMovement({
   if (!row) throw new AppError("not_found:movement", "No such ledger line in this shop.");
   const m = row.get({ plain: true }) as unknown as MovementWithNames;
   return toMovementDto(m, await reversalsOf(shopId, [m.id], transaction));
-}
-
-export async function postManualMovement({
-  shopId,
-  technicianId,
-  input,
-}: {
-  shopId: number;
-  technicianId: string;
-  input: ManualMovementInput;
-}): Promise<MovementDto> {
-  const { Cylinder, RefrigerantMovement } = getModels();
-  const cylinder = await Cylinder.findOne({ where: { id: input.cylinderId, shopId }, raw: true });
-  if (!cylinder)
-    throw new AppError("bad_request:movement", "Choose one of the shop's cylinders.", {
-      fieldErrors: { cylinderId: ["Not a cylinder of this shop."] },
-    });
-  if (cylinder.retiredAt)
-    throw new AppError("conflict:cylinder", "This cylinder is retired; reactivate it before posting to it.");
-  const row = await RefrigerantMovement.create({
-    shopId,
-    cylinderId: cylinder.id,
-    technicianId,
-    type: input.type,
-    refrigerant: cylinder.refrigerant,
-    massG: input.massG,
-    occurredAt: input.occurredAt ? new Date(input.occurredAt) : new Date(),
-    destination: input.destination || null,
-    note: input.note || null,
-  });
-  // By id: a backdated line may be older than any page of the newest lines.
-  return getMovement({ shopId, id: row.id });
 }
 
 /** Recovered, recycled, charged and sent out per month × technician × refrigerant, in the shop's time zone. */

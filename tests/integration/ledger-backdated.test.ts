@@ -1,7 +1,7 @@
 import { afterAll, describe, expect, it } from "vitest";
 import { closeSequelize } from "@/lib/db/sequelize";
 import { getModels } from "@/models";
-import { postManualMovement } from "@/lib/server/ledger";
+import { postManualMovement } from "@/lib/server/ledger-post";
 import { createShopWithCylinders } from "./service-fixtures";
 import "./helpers";
 

@@ -1,14 +1,10 @@
 import { handler } from "@/lib/server/handler";
-import { createCylinder, listCylinders } from "@/lib/server/ledger";
+import { createCylinder, listCylinderPage } from "@/lib/server/ledger";
 import { createCylinderSchema, cylinderListQuerySchema } from "@/lib/contracts/cylinders";
 
 export const GET = handler(
   { permission: "ledger:read", query: cylinderListQuerySchema },
-  async ({ user, query }) => {
-    return {
-      cylinders: await listCylinders({ shopId: user.shopId, includeRetired: query.retired !== "exclude" }),
-    };
-  },
+  async ({ user, query }) => listCylinderPage({ shopId: user.shopId, query }),
 );
 
 export const POST = handler(

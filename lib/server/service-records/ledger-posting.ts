@@ -6,6 +6,7 @@ import type { ServiceRecordInput } from "@/lib/contracts/service-records";
 import { activeMovements } from "@/lib/service/ledger";
 import { postingsForRecordChange, postingsForServiceRecord } from "@/lib/service/ledger-corrections";
 import { toLedgerMovement } from "../ledger";
+import { postMovements } from "../ledger-post";
 
 /**
  * Brings the ledger in line with the record, in the record's transaction: postings that no longer
@@ -23,11 +24,13 @@ export async function postLedger(opts: {
 }): Promise<number> {
   const { RefrigerantMovement } = getModels();
   const { shopId, caseId, recordId, technicianId, refrigerant, input, transaction } = opts;
+  // No lock here: the record's own row (updated before this at its version) already keeps two saves
+  // of it apart, and postMovements locks the cylinders. A range lock on these lines would also block
+  // unrelated posts waiting for a cylinder this save holds, and the two could deadlock.
   const mine = await RefrigerantMovement.findAll({
     where: { shopId, serviceRecordId: recordId },
     raw: true,
     transaction,
-    lock: transaction.LOCK.UPDATE,
   });
   const posted = activeMovements(
     (mine as unknown as Parameters<typeof toLedgerMovement>[0][]).map(toLedgerMovement),
@@ -56,27 +59,27 @@ export async function postLedger(opts: {
     technicianId,
     newId: () => `new-${++n}`,
   });
-  for (const m of changes) {
-    const recoveredAt =
-      m.type === "recovered_into" && !m.reverses && input?.recoveryEndedAt
-        ? new Date(input.recoveryEndedAt)
-        : now;
-    await RefrigerantMovement.create(
-      {
-        shopId,
-        caseId,
-        serviceRecordId: recordId,
-        cylinderId: Number(m.cylinderId),
-        technicianId: m.technicianId,
-        type: m.type,
-        refrigerant: m.refrigerant,
-        massG: m.massG,
-        occurredAt: recoveredAt,
-        reversesId: m.reverses ? Number(m.reverses) : null,
-        note: m.note ?? null,
-      },
-      { transaction },
-    );
-  }
+  // Through the ledger's own guard: the cylinders are locked, and a save that would take one
+  // below empty or past its safe fill is refused whole, record and all.
+  await postMovements({
+    shopId,
+    transaction,
+    lines: changes.map((m) => ({
+      cylinderId: Number(m.cylinderId),
+      caseId,
+      serviceRecordId: recordId,
+      technicianId: m.technicianId,
+      type: m.type,
+      refrigerant: m.refrigerant,
+      massG: m.massG,
+      occurredAt:
+        m.type === "recovered_into" && !m.reverses && input?.recoveryEndedAt
+          ? new Date(input.recoveryEndedAt)
+          : now,
+      reversesId: m.reverses ? Number(m.reverses) : null,
+      note: m.note ?? null,
+      field: m.type === "recovered_into" ? "recoveredChargeG" : "chargedG",
+    })),
+  });
   return changes.length;
 }

@@ -102,9 +102,10 @@ export async function saveServiceRecord({
         input,
         transaction,
       });
-      const warnings = (await listCylinders({ shopId, transaction }))
-        .filter((c) => c.id === input.recoveryCylinderId || c.id === input.chargeCylinderId)
-        .flatMap((c) => c.problems.map((p) => `${c.label}: ${p}`));
+      const touched = [input.recoveryCylinderId, input.chargeCylinderId].filter((id): id is number => !!id);
+      const warnings = (await listCylinders({ shopId, ids: touched, transaction })).flatMap((c) =>
+        c.problems.map((p) => `${c.label}: ${p}`),
+      );
       const saved = await getServiceRecord({ shopId, caseId, transaction });
       if (!saved) throw new AppError("conflict:service_record", RECORD_CONFLICT.removed);
       await recordAudit({

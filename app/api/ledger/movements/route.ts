@@ -1,18 +1,11 @@
 import { handler } from "@/lib/server/handler";
-import { listMovements, postManualMovement } from "@/lib/server/ledger";
+import { listMovementPage } from "@/lib/server/ledger";
+import { postManualMovement } from "@/lib/server/ledger-post";
 import { manualMovementSchema, movementListQuerySchema } from "@/lib/contracts/ledger";
 
 export const GET = handler(
   { permission: "ledger:read", query: movementListQuerySchema },
-  async ({ user, query }) => {
-    return {
-      movements: await listMovements({
-        shopId: user.shopId,
-        cylinderId: query.cylinderId,
-        limit: query.limit,
-      }),
-    };
-  },
+  async ({ user, query }) => listMovementPage({ shopId: user.shopId, query }),
 );
 
 export const POST = handler(
