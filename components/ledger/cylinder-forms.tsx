@@ -2,34 +2,69 @@
 
 import { useState } from "react";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import type { CreateCylinderInput } from "@/lib/contracts/cylinders";
+import type { CreateCylinderInput, CylinderDto } from "@/lib/contracts/cylinders";
 import { apiFetch, ApiError, saveErrorOf } from "@/lib/queries/api-fetch";
 import { ledgerKeys } from "@/lib/queries/ledger";
 import { SERVICE_REFRIGERANT_OPTIONS } from "@/lib/refrigerants/catalog";
 import { readMassG } from "@/lib/service/entry";
-import type { MassUnit } from "@/lib/units";
+import { type MassUnit, formatMass } from "@/lib/units";
 import { EntryInput } from "@/components/service/entry-input";
+import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 
-export function RetireButton({ id, retired, label }: { id: number; retired: boolean; label: string }) {
+/** Retiring asks first; reactivating a retired cylinder does not. */
+export function RetireButton({ cylinder, massUnit }: { cylinder: CylinderDto; massUnit: MassUnit }) {
   const queryClient = useQueryClient();
+  const [asking, setAsking] = useState(false);
   const [error, setError] = useState<string | null>(null);
+  const { id, label, retired } = cylinder;
   const change = useMutation({
     mutationFn: () => apiFetch(`/api/cylinders/${id}`, { method: "PATCH", body: { retired: !retired } }),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: ledgerKeys.all }),
-    onError: (e) => setError(e instanceof ApiError ? e.message : "Not saved; try again."),
+    onSuccess: () => {
+      setAsking(false);
+      setError(null);
+      return queryClient.invalidateQueries({ queryKey: ledgerKeys.all });
+    },
+    onError: (e) =>
+      setError(e instanceof ApiError ? e.message : "No answer from the server; nothing changed. Try again."),
   });
   return (
     <span>
       <button
         type="button"
         className="btn-quiet"
-        onClick={() => change.mutate()}
+        onClick={() => {
+          setError(null);
+          if (retired) change.mutate();
+          else setAsking(true);
+        }}
         disabled={change.isPending}
         aria-label={`${retired ? "Reactivate" : "Retire"} ${label}`}
       >
-        {retired ? "Reactivate" : "Retire"}
+        {retired ? "Reactivate" : "Retire…"}
       </button>
-      {error && <span className="field-error ml-2">{error}</span>}
+      {error && !asking && <span className="field-error ml-2">{error}</span>}
+      <ConfirmDialog
+        open={asking}
+        title={`Retire ${label}?`}
+        confirmLabel="Retire the cylinder"
+        danger
+        busy={change.isPending}
+        error={asking ? error : null}
+        onConfirm={() => change.mutate()}
+        onCancel={() => setAsking(false)}
+      >
+        <p>
+          {label} ({cylinder.refrigerant}, {cylinder.kind}) holds {formatMass(cylinder.netG, massUnit)} by the
+          ledger. Once retired it is no longer offered for recovery, charging or shipments; its lines stay in
+          the ledger, and it can be reactivated.
+        </p>
+        {cylinder.netG > 0 && (
+          <p className="font-bold">
+            It still holds refrigerant: send it out or move it before the cylinder leaves the shop. Never vent
+            it.
+          </p>
+        )}
+      </ConfirmDialog>
     </span>
   );
 }
@@ -72,11 +107,16 @@ export function AddCylinderForm({ massUnit }: { massUnit: MassUnit }) {
       capacityG: readMassG(form.capacity, massUnit),
       initialNetG: readMassG(form.initial, massUnit),
     };
+    const missing: Record<keyof typeof masses, string> = {
+      tareG: "The tare is missing: it is stamped on the cylinder's collar.",
+      capacityG: "The refrigerant capacity is missing.",
+      initialNetG: "Say what it holds now (0 when empty).",
+    };
     const next: Record<string, string> = {};
-    for (const [k, r] of Object.entries(masses))
+    for (const [k, r] of Object.entries(masses) as [keyof typeof masses, (typeof masses)["tareG"]][])
       if ("error" in r) next[k] = r.error;
-      else if ("empty" in r) next[k] = "Enter a mass.";
-    if (!form.label.trim()) next.label = "Give the cylinder a label the shop can read on it.";
+      else if ("empty" in r) next[k] = missing[k];
+    if (!form.label.trim()) next.label = "The label is missing: use the one written on the cylinder.";
     setErrors(next);
     if (Object.keys(next).length) return;
     const g = (r: (typeof masses)["tareG"]) => ("value" in r ? r.value : 0);

@@ -3,14 +3,20 @@
 import { useState } from "react";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import type { CylinderDto } from "@/lib/contracts/cylinders";
-import type { ManualMovementInput } from "@/lib/contracts/ledger";
-import { apiFetch, saveErrorOf } from "@/lib/queries/api-fetch";
+import { LEDGER_MASS_MAX_G, type ManualMovementInput } from "@/lib/contracts/ledger";
+import { apiFetch, ApiError, saveErrorOf } from "@/lib/queries/api-fetch";
 import { ledgerKeys } from "@/lib/queries/ledger";
 import { readMassG } from "@/lib/service/entry";
-import type { MassUnit } from "@/lib/units";
+import { type MassUnit, formatMass } from "@/lib/units";
 import { EntryInput } from "@/components/service/entry-input";
 
-const EMPTY = { cylinderId: "", type: "recycled", mass: "", destination: "", note: "" };
+const EMPTY = { cylinderId: "", type: "recycled", mass: "", when: "", destination: "", note: "" };
+
+/** What the technician typed, with the unit a bare number was read in. */
+function asTyped(text: string, massUnit: MassUnit): string {
+  const t = text.trim();
+  return /[a-z]/i.test(t) ? t : `${t} ${massUnit}`;
+}
 
 /** Recycling, sending refrigerant out for reclaim, and weighed corrections: the movements no service record posts. */
 export function MovementForm({ cylinders, massUnit }: { cylinders: CylinderDto[]; massUnit: MassUnit }) {
@@ -27,8 +33,10 @@ export function MovementForm({ cylinders, massUnit }: { cylinders: CylinderDto[]
     },
     onError: (e) => {
       const { fieldErrors, message } = saveErrorOf(e);
-      setErrors(fieldErrors);
-      setStatus(message);
+      // A refusal with the cylinder's figures is said once, in the status line, not again under the field.
+      const refused = e instanceof ApiError && e.code === "conflict:ledger";
+      setErrors(refused ? {} : fieldErrors);
+      setStatus(refused ? `${e.message} Nothing was posted; what you typed is kept.` : message);
     },
   });
   const set = (k: keyof typeof EMPTY) => (v: string) => setForm((f) => ({ ...f, [k]: v }));
@@ -36,12 +44,24 @@ export function MovementForm({ cylinders, massUnit }: { cylinders: CylinderDto[]
   function submit(e: React.FormEvent) {
     e.preventDefault();
     setStatus(null);
-    const negative = form.type === "adjustment" && form.mass.trim().startsWith("-");
-    const mass = readMassG(form.mass.trim().replace(/^-/, ""), massUnit);
+    const negative = form.type === "adjustment" && /^[-\u2212]/.test(form.mass.trim());
+    const typed = form.mass.trim().replace(/^[-\u2212]\s*/, "");
+    const mass = readMassG(typed, massUnit);
+    const cylinder = cylinders.find((c) => String(c.id) === form.cylinderId);
+    const largestG = Math.max(0, ...cylinders.map((c) => c.capacityG));
     const next: Record<string, string> = {};
     if (!form.cylinderId) next.cylinderId = "Choose a cylinder.";
     if ("error" in mass) next.massG = mass.error;
-    if ("empty" in mass) next.massG = "Enter the mass.";
+    else if ("empty" in mass) next.massG = "The mass is missing.";
+    else if (mass.value === 0) next.massG = "The mass must be more than zero.";
+    else if (mass.value > Math.min(LEDGER_MASS_MAX_G, largestG || LEDGER_MASS_MAX_G))
+      next.massG = `${asTyped(typed, massUnit)} is more than any cylinder here holds. Check the figure and its unit.`;
+    else if (cylinder && mass.value > cylinder.capacityG)
+      next.massG = `${asTyped(typed, massUnit)} is more than ${cylinder.label} holds when full (${formatMass(cylinder.capacityG, massUnit)}).`;
+    const when = form.when ? new Date(form.when) : null;
+    if (when && Number.isNaN(when.getTime())) next.occurredAt = "The date and time could not be read.";
+    else if (when && when.getTime() > Date.now())
+      next.occurredAt = "A ledger line cannot be dated in the future.";
     setErrors(next);
     if (Object.keys(next).length) return;
     const massG = "value" in mass ? mass.value * (negative ? -1 : 1) : 0;
@@ -49,6 +69,7 @@ export function MovementForm({ cylinders, massUnit }: { cylinders: CylinderDto[]
       cylinderId: Number(form.cylinderId),
       type: form.type as ManualMovementInput["type"],
       massG,
+      occurredAt: when ? when.toISOString() : undefined,
       destination: form.destination || undefined,
       note: form.note || undefined,
     });
@@ -105,6 +126,13 @@ export function MovementForm({ cylinders, massUnit }: { cylinders: CylinderDto[]
             : undefined
         }
       />
+      <EntryInput
+        label="When it happened (empty: now)"
+        type="datetime-local"
+        value={form.when}
+        onChange={set("when")}
+        error={errors.occurredAt}
+      />
       {form.type === "sent_out" && (
         <EntryInput
           label="Sent to (facility)"
@@ -121,11 +149,9 @@ export function MovementForm({ cylinders, massUnit }: { cylinders: CylinderDto[]
         onChange={set("note")}
         error={errors.note}
       />
-      {status && (
-        <p role="status" className="font-bold">
-          {status}
-        </p>
-      )}
+      <p role="status" className="min-h-6 font-bold" data-testid="movement-form-status">
+        {status}
+      </p>
       <button type="submit" className="btn-quiet w-full" disabled={post.isPending}>
         {post.isPending ? "Posting…" : "Post to the ledger"}
       </button>

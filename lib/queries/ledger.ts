@@ -1,4 +1,4 @@
-import { queryOptions } from "@tanstack/react-query";
+import { infiniteQueryOptions, queryOptions } from "@tanstack/react-query";
 import type { CylinderListResponse } from "@/lib/contracts/cylinders";
 import type { LedgerReportResponse, MovementListResponse } from "@/lib/contracts/ledger";
 import { apiFetch } from "./api-fetch";
@@ -10,18 +10,30 @@ export const ledgerKeys = {
   report: () => [...ledgerKeys.all, "report"] as const,
 };
 
+/** Pages of cylinders by label; the next page starts after the last label of the one before. */
 export const cylindersQuery = () =>
-  queryOptions({
+  infiniteQueryOptions({
     queryKey: ledgerKeys.cylinders(),
-    queryFn: ({ signal }) =>
-      apiFetch<CylinderListResponse>("/api/cylinders", { signal }).then((r) => r.cylinders),
+    queryFn: ({ signal, pageParam }) =>
+      apiFetch<CylinderListResponse>(
+        `/api/cylinders${pageParam ? `?after=${encodeURIComponent(pageParam)}` : ""}`,
+        { signal },
+      ),
+    initialPageParam: null as string | null,
+    getNextPageParam: (last) => last.nextCursor,
   });
 
+/** Pages of ledger lines, newest first. */
 export const movementsQuery = () =>
-  queryOptions({
+  infiniteQueryOptions({
     queryKey: ledgerKeys.movements(),
-    queryFn: ({ signal }) =>
-      apiFetch<MovementListResponse>("/api/ledger/movements", { signal }).then((r) => r.movements),
+    queryFn: ({ signal, pageParam }) =>
+      apiFetch<MovementListResponse>(
+        `/api/ledger/movements${pageParam ? `?before=${encodeURIComponent(pageParam)}` : ""}`,
+        { signal },
+      ),
+    initialPageParam: null as string | null,
+    getNextPageParam: (last) => last.nextCursor,
   });
 
 export const ledgerReportQuery = () =>

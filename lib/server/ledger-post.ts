@@ -234,6 +234,7 @@ export async function reverseMovement({
           massG: original.massG,
           occurredAt: new Date(),
           reversesId: original.id,
+          destination: original.destination,
           note: input.reason,
         },
       ],

@@ -1,7 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { type Cylinder, type CylinderMovement, activeMovements, movementEffectG } from "./ledger";
-import { checkLedgerChange, ledgerRefusalMessage, safeFillG } from "./ledger-guard";
+import { checkLedgerChange, fillSentence, ledgerRefusalMessage, safeFillG } from "./ledger-guard";
 
 const recovery: Cylinder = {
   id: "rec",
@@ -187,5 +187,16 @@ describe("checkLedgerChange", () => {
     // Both branches ran: the property is not satisfied by refusing everything or by refusing nothing.
     expect(accepted).toBeGreaterThan(300);
     expect(refusedTotal).toBeGreaterThan(300);
+  });
+});
+
+describe("fillSentence", () => {
+  it("words the fill in the reader's unit (NIST SP 811: 1 lb = 453.59237 g)", () => {
+    expect(fillSentence({ fillPct: 50, limitPct: 80, roomG: 6_000 }, "g")).toBe(
+      "50 % full; 6000 g of room before the 80 % limit.",
+    );
+    expect(fillSentence({ fillPct: 81, limitPct: 80, roomG: -227 }, "lb")).toBe(
+      "81 % full: 0.50 lb past the 80 % limit. Stop filling this cylinder and change to an empty one.",
+    );
   });
 });

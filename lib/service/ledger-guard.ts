@@ -6,6 +6,7 @@ import {
   activeMovements,
   movementEffectG,
 } from "./ledger";
+import { formatPercent } from "./format";
 import { SERVICE_SOURCES } from "./sources";
 
 /**
@@ -143,4 +144,15 @@ export function ledgerRefusalMessage(
     `Refused: ${opts.cylinderLabel} would be filled past ${limit}${when}. ` +
     `${held} ${m(refusal.beforeG)} and this adds ${m(changeG)}. ${advice}`
   );
+}
+
+/** "52.3 % full; 3.20 lb of room before the 80 % limit." in the reader's unit. */
+export function fillSentence(
+  fill: { fillPct: number; limitPct: number; roomG: number },
+  massUnit: MassUnit,
+): string {
+  const pct = `${formatPercent(fill.fillPct)} full`;
+  return fill.roomG >= 0
+    ? `${pct}; ${formatMass(fill.roomG, massUnit)} of room before the ${fill.limitPct} % limit.`
+    : `${pct}: ${formatMass(-fill.roomG, massUnit)} past the ${fill.limitPct} % limit. Stop filling this cylinder and change to an empty one.`;
 }

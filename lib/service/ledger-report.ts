@@ -12,6 +12,8 @@ export interface MonthlyReportRow {
   chargedG: number;
   sentOutG: number;
   adjustmentG: number;
+  /** correction lines netted into this row's figures (each cancels a line of this month) */
+  corrections: number;
 }
 
 const COLUMN: Readonly<Record<MovementType, keyof MonthlyReportRow>> = {
@@ -70,11 +72,13 @@ export function monthlyReport(
         chargedG: 0,
         sentOutG: 0,
         adjustmentG: 0,
+        corrections: 0,
       };
       rows.set(key, row);
     }
     const column = COLUMN[original.type] as "recoveredG";
     row[column] += m.reverses ? -original.massG : m.massG;
+    if (m.reverses) row.corrections += 1;
   }
   return [...rows.values()].sort(
     (a, b) =>
@@ -93,6 +97,7 @@ export const MONTHLY_REPORT_CSV_COLUMNS = [
   "charged_g",
   "sent_out_g",
   "adjustment_g",
+  "corrections",
 ] as const;
 
 /** CSV for the shop's records; names starting with = + - @ are defused so a spreadsheet will not run them. */
@@ -109,6 +114,7 @@ export function toCsv(
     r.chargedG,
     r.sentOutG,
     r.adjustmentG,
+    r.corrections,
   ]);
   return Papa.unparse(
     { fields: [...MONTHLY_REPORT_CSV_COLUMNS], data },

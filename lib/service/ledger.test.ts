@@ -174,6 +174,11 @@ describe("corrections", () => {
     expect(movementProblems([mv({ type: "sent_out", massG: 100 })]).join(" ")).toContain(
       "where the refrigerant was sent",
     );
+    // A correction cancels the shipment; it names no facility of its own.
+    const shipped = mv({ type: "sent_out", massG: 100, destination: "Prairie Reclaim Co." });
+    expect(movementProblems([shipped, mv({ type: "sent_out", massG: 100, reverses: shipped.id })])).toEqual(
+      [],
+    );
   });
 });
 
@@ -249,6 +254,8 @@ describe("monthlyReport", () => {
     expect(rows).toHaveLength(1);
     expect(rows[0]?.month).toBe("2026-10");
     expect(rows[0]?.recoveredG).toBe(0);
+    expect(rows[0]?.corrections).toBe(1);
+    expect(toCsv(rows).split("\r\n")[1]).toBe("2026-10,tech-ines,R-134a,0,0,0,0,0,1");
   });
 
   it("property: report totals equal the sum of the movements still in force, and the cylinder follows them", () => {
@@ -325,12 +332,12 @@ describe("toCsv", () => {
     const csv = toCsv(rows, { technicianNames: { t1: 'Okafor, "Chi" N.', t2: "Lena Brandt" } });
     const lines = csv.split("\r\n");
     expect(lines[0]).toBe(
-      "month,technician,refrigerant,recovered_g,recycled_g,charged_g,sent_out_g,adjustment_g",
+      "month,technician,refrigerant,recovered_g,recycled_g,charged_g,sent_out_g,adjustment_g,corrections",
     );
-    expect(lines[1]).toBe('2026-10,"Okafor, ""Chi"" N.",R-134a,700,0,0,0,0');
+    expect(lines[1]).toBe('2026-10,"Okafor, ""Chi"" N.",R-134a,700,0,0,0,0,0');
     const back = Papa.parse<string[]>(csv, { skipEmptyLines: true }).data;
     expect(back[1]?.[1]).toBe('Okafor, "Chi" N.');
-    expect(back[2]).toEqual(["2026-10", "Lena Brandt", "R-134a", "0", "0", "650", "0", "0"]);
+    expect(back[2]).toEqual(["2026-10", "Lena Brandt", "R-134a", "0", "0", "650", "0", "0", "0"]);
   });
 
   it("defuses a name a spreadsheet would run as a formula (OWASP CSV injection)", () => {

@@ -74,7 +74,7 @@ export function movementProblems(movements: readonly CylinderMovement[]): string
       problems.push(`Movement ${m.id}: the mass must be a positive number of grams.`);
     }
     if (Number.isNaN(Date.parse(m.at))) problems.push(`Movement ${m.id}: "${m.at}" is not a date and time.`);
-    if (m.type === "sent_out" && !m.destination?.trim())
+    if (m.type === "sent_out" && !m.reverses && !m.destination?.trim())
       problems.push(`Movement ${m.id}: say where the refrigerant was sent.`);
   }
   for (const m of movements) {

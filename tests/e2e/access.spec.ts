@@ -531,6 +531,18 @@ const table: {
     },
   },
   {
+    name: "GET /api/cylinders?limit=0 (malformed page)",
+    call: (c) => c.get("/api/cylinders?limit=0"),
+    expect: {
+      anonymous: 401,
+      owner: 400,
+      senior: 400,
+      technician: 400,
+      apprentice: 403,
+      otherShopOwner: 400,
+    },
+  },
+  {
     name: "POST /api/cylinders (malformed)",
     call: (c) => c.post("/api/cylinders", { data: { label: "", tareG: -1 } }),
     expect: {
@@ -569,6 +581,43 @@ const table: {
   {
     name: "POST /api/ledger/movements (malformed)",
     call: (c) => c.post("/api/ledger/movements", { data: { type: "vented", massG: 0 } }),
+    expect: {
+      anonymous: 401,
+      owner: 400,
+      senior: 400,
+      technician: 400,
+      apprentice: 403,
+      otherShopOwner: 400,
+    },
+  },
+  {
+    name: "GET /api/ledger/movements?limit=500 (past a page)",
+    call: (c) => c.get("/api/ledger/movements?limit=500"),
+    expect: {
+      anonymous: 401,
+      owner: 400,
+      senior: 400,
+      technician: 400,
+      apprentice: 403,
+      otherShopOwner: 400,
+    },
+  },
+  {
+    name: "POST /api/ledger/movements/:id/reversal (no such line)",
+    call: (c) =>
+      c.post("/api/ledger/movements/999999999/reversal", { data: { reason: "Typed the wrong mass" } }),
+    expect: {
+      anonymous: 401,
+      owner: 404,
+      senior: 404,
+      technician: 404,
+      apprentice: 403,
+      otherShopOwner: 404,
+    },
+  },
+  {
+    name: "POST /api/ledger/movements/:id/reversal (no reason)",
+    call: (c) => c.post("/api/ledger/movements/1/reversal", { data: { reason: "" } }),
     expect: {
       anonymous: 401,
       owner: 400,

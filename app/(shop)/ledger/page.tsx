@@ -5,7 +5,7 @@ import { can } from "@/lib/auth/roles";
 import { getQueryClient } from "@/lib/query-client";
 import { ledgerKeys } from "@/lib/queries/ledger";
 import { getShop } from "@/lib/server/shops";
-import { ledgerReport, listCylinders, listMovements } from "@/lib/server/ledger";
+import { ledgerReport, listCylinderPage, listMovementPage } from "@/lib/server/ledger";
 import { cautionsFor } from "@/lib/service/cautions";
 import { LedgerView } from "@/components/ledger/ledger-view";
 import { CautionsList } from "@/components/cautions/cautions-list";
@@ -24,21 +24,26 @@ export default async function LedgerPage() {
   const shopId = user.shopId;
   const [shop, cylinders, movements, report] = await Promise.all([
     getShop({ shopId }),
-    listCylinders({ shopId }),
-    listMovements({ shopId }),
+    listCylinderPage({ shopId, query: {} }),
+    listMovementPage({ shopId, query: {} }),
     ledgerReport({ shopId }),
   ]);
   const queryClient = getQueryClient();
-  queryClient.setQueryData(ledgerKeys.cylinders(), cylinders);
-  queryClient.setQueryData(ledgerKeys.movements(), movements);
+  queryClient.setQueryData(ledgerKeys.cylinders(), { pages: [cylinders], pageParams: [null] });
+  queryClient.setQueryData(ledgerKeys.movements(), { pages: [movements], pageParams: [null] });
   queryClient.setQueryData(ledgerKeys.report(), { rows: report.rows, timeZone: report.timeZone });
   return (
     <>
       <h1 className="mb-4 text-2xl font-bold">Refrigerant ledger</h1>
       <HydrationBoundary state={dehydrate(queryClient)}>
         <LedgerView
-          massUnit={shop.units === "imperial" ? "lb" : "g"}
-          canWrite={can(user.role, "ledger:write")}
+          viewer={{
+            massUnit: shop.units === "imperial" ? "lb" : "g",
+            timeZone: shop.timeZone,
+            canWrite: can(user.role, "ledger:write"),
+            canCancelAny: user.role === "owner" || user.role === "senior",
+            userId: user.id,
+          }}
         />
       </HydrationBoundary>
       <div className="card mt-6">

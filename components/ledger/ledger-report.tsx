@@ -1,0 +1,94 @@
+"use client";
+
+import { useQuery } from "@tanstack/react-query";
+import { type MassUnit, formatMass } from "@/lib/units";
+import type { LedgerReportRow } from "@/lib/contracts/ledger";
+import { ledgerReportQuery } from "@/lib/queries/ledger";
+
+/** The monthly figures, the same rows and corrections the CSV carries. */
+export function LedgerReport({ massUnit }: { massUnit: MassUnit }) {
+  const { data: report } = useQuery(ledgerReportQuery());
+  const m = (g: number) => formatMass(g, massUnit);
+  const rows = report?.rows ?? [];
+  const key = (r: LedgerReportRow) => `${r.month}-${r.technicianId}-${r.refrigerant}`;
+  // The CSV's columns, in its order.
+  const figures = (r: LedgerReportRow): [string, string][] => [
+    ["Recovered", m(r.recoveredG)],
+    ["Recycled", m(r.recycledG)],
+    ["Charged", m(r.chargedG)],
+    ["Sent out", m(r.sentOutG)],
+    ["Weighed adjustments", m(r.adjustmentG)],
+    ["Corrections", r.corrections === 0 ? "none" : `${r.corrections} netted in`],
+  ];
+  return (
+    <section aria-labelledby="report-heading" className="card">
+      <div className="mb-3 flex flex-wrap items-center justify-between gap-2">
+        <h2 id="report-heading" className="text-xl font-bold">
+          Monthly report
+        </h2>
+        <a className="btn-quiet" href="/api/ledger/report?format=csv" download>
+          Export CSV
+        </a>
+      </div>
+      <p className="mb-2 text-ink-soft">
+        Refrigerant recovered, recycled, charged and sent out, per month, technician and refrigerant
+        {report ? ` (months in ${report.timeZone})` : ""}. A correction counts in the month of the line it
+        cancels, so a past month shows what really happened. Keep it with the shop&apos;s certification and
+        environmental records.
+      </p>
+      <div data-testid="ledger-report">
+        {rows.length === 0 && <p className="text-ink-soft">Nothing posted yet.</p>}
+        {/* A phone gets one card per row; a wider screen the table. */}
+        <ul className="space-y-3 sm:hidden">
+          {rows.map((r) => (
+            <li key={key(r)} className="rounded-card border-2 border-paper-line p-3">
+              <p className="font-bold">
+                {r.month} · {r.technician} · {r.refrigerant}
+              </p>
+              <dl className="mt-1 grid grid-cols-2 gap-x-3">
+                {figures(r).map(([label, value]) => (
+                  <div key={label} className="contents">
+                    <dt className="text-ink-soft">{label}</dt>
+                    <dd className="text-right">{value}</dd>
+                  </div>
+                ))}
+              </dl>
+            </li>
+          ))}
+        </ul>
+        {rows.length > 0 && (
+          <div className="hidden overflow-x-auto sm:block">
+            <table className="w-full text-left">
+              <thead>
+                <tr className="border-b-2 border-paper-line">
+                  <th className="p-2">Month</th>
+                  <th className="p-2">Technician</th>
+                  <th className="p-2">Refrigerant</th>
+                  {figures(rows[0]!).map(([label]) => (
+                    <th key={label} className="p-2">
+                      {label}
+                    </th>
+                  ))}
+                </tr>
+              </thead>
+              <tbody>
+                {rows.map((r) => (
+                  <tr key={key(r)} className="border-b border-paper-line">
+                    <td className="p-2">{r.month}</td>
+                    <td className="p-2">{r.technician}</td>
+                    <td className="p-2">{r.refrigerant}</td>
+                    {figures(r).map(([label, value]) => (
+                      <td key={label} className="p-2">
+                        {value}
+                      </td>
+                    ))}
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
+        )}
+      </div>
+    </section>
+  );
+}
