@@ -4,8 +4,9 @@ import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
 import { ROLE_LABELS, ROLES, type Role } from "@/lib/auth/roles";
 import { apiFetch, ApiError } from "@/lib/queries/api-fetch";
-import type { UpdateUserInput, UserResponse } from "@/lib/contracts/users";
+import type { ShopUser, UpdateUserInput, UserResponse } from "@/lib/contracts/users";
 import { userKeys, usersQuery } from "@/lib/queries/users";
+import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { InvitePersonForm } from "./invite-person-form";
 import { OpenInvitations } from "./open-invitations";
 
@@ -13,6 +14,7 @@ export function PeopleManager({ currentUserId }: { currentUserId: string }) {
   const { data: users = [] } = useQuery(usersQuery());
   const queryClient = useQueryClient();
   const [message, setMessage] = useState<string | null>(null);
+  const [deactivating, setDeactivating] = useState<ShopUser | null>(null);
   const update = useMutation({
     mutationFn: ({ id, ...body }: { id: string } & UpdateUserInput) =>
       apiFetch<UserResponse>(`/api/users/${id}`, { method: "PATCH", body }),
@@ -20,6 +22,7 @@ export function PeopleManager({ currentUserId }: { currentUserId: string }) {
       setMessage(
         `${user.name} is now ${ROLE_LABELS[user.role].toLowerCase()}${user.active ? "" : " (inactive)"}.`,
       );
+      setDeactivating(null);
       return queryClient.invalidateQueries({ queryKey: userKeys.all });
     },
     onError: (error) => setMessage(error instanceof ApiError ? error.message : "The change was not saved."),
@@ -60,9 +63,14 @@ export function PeopleManager({ currentUserId }: { currentUserId: string }) {
                 <button
                   type="button"
                   className="btn-quiet"
-                  onClick={() => update.mutate({ id: u.id, active: !u.active })}
+                  onClick={() => {
+                    setMessage(null);
+                    if (u.active) setDeactivating(u);
+                    else update.mutate({ id: u.id, active: true });
+                  }}
+                  aria-label={`${u.active ? "Deactivate" : "Reactivate"} ${u.name}`}
                 >
-                  {u.active ? "Deactivate" : "Reactivate"}
+                  {u.active ? "Deactivate…" : "Reactivate"}
                 </button>
               )}
             </li>
@@ -71,6 +79,23 @@ export function PeopleManager({ currentUserId }: { currentUserId: string }) {
         <p role="status" className="mt-2 min-h-6 text-ink-soft">
           {message}
         </p>
+        <ConfirmDialog
+          open={deactivating !== null}
+          title={deactivating ? `Deactivate ${deactivating.name}?` : "Deactivate a person?"}
+          confirmLabel="Deactivate"
+          danger
+          busy={update.isPending}
+          error={deactivating && update.error ? message : null}
+          onConfirm={() => deactivating && update.mutate({ id: deactivating.id, active: false })}
+          onCancel={() => setDeactivating(null)}
+        >
+          {deactivating && (
+            <p>
+              {deactivating.name} ({deactivating.email}) is signed out everywhere and can no longer sign in.
+              Their cases, records and ledger lines stay as they are. You can reactivate them later.
+            </p>
+          )}
+        </ConfirmDialog>
       </section>
       <OpenInvitations />
       <InvitePersonForm />

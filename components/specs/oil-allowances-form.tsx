@@ -8,6 +8,7 @@ import type { AllowancesMl, OilAllowancesResponse } from "@/lib/contracts/specs"
 import { REPLACED_PART_IDS, REPLACED_PART_LABELS, type ReplacedPartId } from "@/lib/service/oil";
 import { type VolumeUnit, formatVolume } from "@/lib/units";
 import { EntryInput } from "@/components/service/entry-input";
+import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 
 /** The shop's figures for the oil each replaced part carries out; empty means "drain and measure". */
 export function OilAllowancesForm({
@@ -29,14 +30,24 @@ export function OilAllowancesForm({
   );
   const [errors, setErrors] = useState<Partial<Record<ReplacedPartId, string>>>({});
   const [status, setStatus] = useState<string | null>(null);
+  const [saved, setSaved] = useState<AllowancesMl>(initial);
+  // Figures about to be cleared wait for a yes: a cleared part is drained and measured instead.
+  const [clearing, setClearing] = useState<{ values: AllowancesMl; parts: ReplacedPartId[] } | null>(null);
   const save = useMutation({
     mutationFn: (allowancesMl: AllowancesMl) =>
       apiFetch<OilAllowancesResponse>("/api/specs/oil-allowances", {
         method: "PUT",
         body: { allowancesMl },
       }),
-    onSuccess: () => setStatus("Saved the shop's oil allowances."),
-    onError: (e) => setStatus(saveErrorOf(e).message),
+    onSuccess: (answer) => {
+      setSaved(answer.allowancesMl);
+      setClearing(null);
+      setStatus("Saved the shop's oil allowances.");
+    },
+    onError: (e) => {
+      setClearing(null);
+      setStatus(saveErrorOf(e).message);
+    },
   });
 
   function submit(e: React.FormEvent) {
@@ -51,7 +62,10 @@ export function OilAllowancesForm({
     }
     setErrors(next);
     setStatus(null);
-    if (Object.keys(next).length === 0) save.mutate(values);
+    if (Object.keys(next).length > 0) return;
+    const cleared = REPLACED_PART_IDS.filter((p) => saved[p] != null && values[p] == null);
+    if (cleared.length > 0) setClearing({ values, parts: cleared });
+    else save.mutate(values);
   }
 
   return (
@@ -91,6 +105,35 @@ export function OilAllowancesForm({
           {save.isPending ? "Saving…" : "Save the allowances"}
         </button>
       )}
+      <ConfirmDialog
+        open={clearing !== null}
+        title={
+          clearing?.parts.length === 1
+            ? `Clear the figure for ${REPLACED_PART_LABELS[clearing.parts[0]!].toLowerCase()}?`
+            : "Clear these figures?"
+        }
+        confirmLabel="Clear and save"
+        danger
+        busy={save.isPending}
+        onConfirm={() => clearing && save.mutate(clearing.values)}
+        onCancel={() => setClearing(null)}
+      >
+        {clearing && (
+          <>
+            <ul className="list-disc pl-5">
+              {clearing.parts.map((p) => (
+                <li key={p}>
+                  {REPLACED_PART_LABELS[p]}: {formatVolume(saved[p] ?? 0, volume)}
+                </li>
+              ))}
+            </ul>
+            <p>
+              The service record will ask the technician to drain and measure{" "}
+              {clearing.parts.length === 1 ? "this part" : "these parts"} instead.
+            </p>
+          </>
+        )}
+      </ConfirmDialog>
     </form>
   );
 }

@@ -7,6 +7,7 @@ import { apiFetch, saveErrorOf } from "@/lib/queries/api-fetch";
 import { specKeys } from "@/lib/queries/specs";
 import { SERVICE_REFRIGERANT_OPTIONS } from "@/lib/refrigerants/catalog";
 import { readMassG, readVolumeMl } from "@/lib/service/entry";
+import { LABEL_CHARGE_RANGE_G, TOTAL_OIL_RANGE_ML } from "@/lib/specs";
 import { type MassUnit, type VolumeUnit, formatMass, formatVolume } from "@/lib/units";
 import { EntryInput } from "@/components/service/entry-input";
 
@@ -74,11 +75,23 @@ export function SpecForm({
     const charge = readMassG(form.charge, mass);
     const oil = readVolumeMl(form.totalOil, volume);
     const next: Record<string, string> = {};
+    const band = (g: number, range: { min: number; max: number }) => g < range.min || g > range.max;
     if ("error" in charge) next.labelChargeG = charge.error;
-    if ("empty" in charge) next.labelChargeG = "Enter the label charge.";
+    else if ("empty" in charge) next.labelChargeG = "The label charge is missing.";
+    else if (band(charge.value, LABEL_CHARGE_RANGE_G))
+      next.labelChargeG = `${formatMass(charge.value, mass)} is outside the label charges of cars and light trucks (${formatMass(LABEL_CHARGE_RANGE_G.min, mass)} to ${formatMass(LABEL_CHARGE_RANGE_G.max, mass)}): check the figure and its unit.`;
     if ("error" in oil) next.totalOilMl = oil.error;
+    else if ("value" in oil && band(oil.value, TOTAL_OIL_RANGE_ML))
+      next.totalOilMl = `${formatVolume(oil.value, volume)} is outside the oil a car or light truck holds (${formatVolume(TOTAL_OIL_RANGE_ML.min, volume)} to ${formatVolume(TOTAL_OIL_RANGE_ML.max, volume)}): check the figure and its unit.`;
+    if (!form.make.trim()) next.make = "Make is missing.";
+    if (!form.model.trim()) next.model = "Model is missing.";
+    if (!form.oilType.trim()) next.oilType = "The oil type is missing.";
+    const yearWords = { yearFrom: "The first year", yearTo: "The last year" } as const;
     for (const k of ["yearFrom", "yearTo"] as const)
-      if (!/^\d{4}$/.test(form[k].trim())) next[k] = "A four-digit year.";
+      if (form[k].trim() === "") next[k] = `${yearWords[k]} is missing.`;
+      else if (!/^\d{4}$/.test(form[k].trim())) next[k] = "A year has four digits, for example 2016.";
+    if (!next.yearFrom && !next.yearTo && Number(form.yearFrom) > Number(form.yearTo))
+      next.yearTo = "The first year is after the last.";
     setErrors(next);
     setStatus(null);
     if (Object.keys(next).length) return;

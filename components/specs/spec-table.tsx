@@ -6,7 +6,13 @@ import { apiFetch, ApiError } from "@/lib/queries/api-fetch";
 import type { SpecEntryDto } from "@/lib/contracts/specs";
 import { specKeys, specsQuery } from "@/lib/queries/specs";
 import { type MassUnit, type VolumeUnit, formatMass, formatVolume } from "@/lib/units";
+import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { SpecForm } from "./spec-form";
+
+/** "2015–2019 Mazda 3 2.0 L", the way the row reads in the list. */
+function rowName(r: SpecEntryDto): string {
+  return `${r.yearFrom}–${r.yearTo} ${r.make} ${r.model}${r.variant ? ` ${r.variant}` : ""}`;
+}
 
 export function SpecTable({
   canEdit,
@@ -22,16 +28,22 @@ export function SpecTable({
   const [q, setQ] = useState(initialQuery);
   const [editing, setEditing] = useState<SpecEntryDto | "new" | null>(null);
   const [status, setStatus] = useState<string | null>(null);
+  const [deleting, setDeleting] = useState<SpecEntryDto | null>(null);
   const { data: rows = [], isFetching } = useQuery(specsQuery(q.trim()));
   const queryClient = useQueryClient();
   const remove = useMutation({
-    mutationFn: (id: number) => apiFetch(`/api/specs/${id}`, { method: "DELETE" }),
-    onSuccess: () => {
-      setStatus("Row deleted.");
+    mutationFn: (row: SpecEntryDto) => apiFetch(`/api/specs/${row.id}`, { method: "DELETE" }),
+    onSuccess: (_data, row) => {
+      setDeleting(null);
+      setStatus(`Deleted the row for ${rowName(row)}.`);
       return queryClient.invalidateQueries({ queryKey: specKeys.all });
     },
-    onError: (e) => setStatus(e instanceof ApiError ? e.message : "Not deleted; try again."),
   });
+  const removeError = remove.error
+    ? remove.error instanceof ApiError
+      ? remove.error.message
+      : "No answer from the server; nothing was deleted. Try again."
+    : null;
 
   return (
     <section aria-labelledby="specs-heading" className="card space-y-3">
@@ -98,12 +110,14 @@ export function SpecTable({
                   <button
                     type="button"
                     className="btn-quiet"
-                    onClick={() =>
-                      window.confirm(`Delete ${r.make} ${r.model} ${r.yearFrom}–${r.yearTo}?`) &&
-                      remove.mutate(r.id)
-                    }
+                    onClick={() => {
+                      remove.reset();
+                      setStatus(null);
+                      setDeleting(r);
+                    }}
+                    aria-label={`Delete ${rowName(r)}`}
                   >
-                    Delete
+                    Delete…
                   </button>
                 </>
               )}
@@ -112,6 +126,24 @@ export function SpecTable({
         )}
         {rows.length === 0 && <li className="py-3 text-ink-soft">No row matches.</li>}
       </ul>
+      <ConfirmDialog
+        open={deleting !== null}
+        title={deleting ? `Delete ${rowName(deleting)}?` : "Delete a row?"}
+        confirmLabel="Delete the row"
+        danger
+        busy={remove.isPending}
+        error={removeError}
+        onConfirm={() => deleting && remove.mutate(deleting)}
+        onCancel={() => setDeleting(null)}
+      >
+        {deleting && (
+          <p>
+            {deleting.refrigerant}, label charge {formatMass(deleting.labelChargeG, mass)}, {deleting.oilType}
+            . The row leaves the shop&apos;s table for good; a row a service record used cannot be deleted,
+            only corrected.
+          </p>
+        )}
+      </ConfirmDialog>
     </section>
   );
 }

@@ -7,8 +7,18 @@ export const INVITATION_LIFETIME_DAYS = 7;
 export const PASSWORD_MIN_LENGTH = 12;
 
 export const inviteUserSchema = z.object({
-  email: z.string().trim().toLowerCase().email("Enter a valid e-mail address.").max(255),
-  name: z.string().trim().min(1, "Enter the person's name.").max(120),
+  email: z
+    .string({ message: "The e-mail address is missing." })
+    .trim()
+    .toLowerCase()
+    .min(1, "The e-mail address is missing.")
+    .email("That is not an e-mail address.")
+    .max(255, "The e-mail address is at most 255 characters."),
+  name: z
+    .string({ message: "The name is missing." })
+    .trim()
+    .min(1, "The name is missing.")
+    .max(120, "The name is at most 120 characters."),
   role: z.enum(ROLES, { message: "Choose one of: owner, senior, technician, apprentice." }),
 });
 export type InviteUserInput = z.infer<typeof inviteUserSchema>;
@@ -25,7 +35,11 @@ export const invitationTokenSchema = z.string().regex(/^[A-Za-z0-9_-]{43}$/, "Th
 
 export const acceptInvitationSchema = z.object({
   token: invitationTokenSchema,
-  name: z.string().trim().min(1, "Enter your name.").max(120),
+  name: z
+    .string({ message: "Your name is missing." })
+    .trim()
+    .min(1, "Your name is missing.")
+    .max(120, "Your name is at most 120 characters."),
   password: z
     .string()
     .min(PASSWORD_MIN_LENGTH, `Use at least ${PASSWORD_MIN_LENGTH} characters.`)

@@ -4,9 +4,11 @@ import { ROLES, type Role } from "@/lib/auth/roles";
 export const updateUserSchema = z
   .object({
     role: z.enum(ROLES, { message: "Choose one of: owner, senior, technician, apprentice." }).optional(),
-    active: z.boolean().optional(),
+    active: z.boolean({ message: "active is true or false." }).optional(),
   })
-  .refine((v) => v.role !== undefined || v.active !== undefined, { message: "Nothing to change." });
+  .refine((v) => v.role !== undefined || v.active !== undefined, {
+    message: "Nothing to change: send a role or active.",
+  });
 export type UpdateUserInput = z.infer<typeof updateUserSchema>;
 
 export const userParamsSchema = z.object({ id: z.string().regex(/^[a-z0-9]{8,40}$/, "Not a user id.") });

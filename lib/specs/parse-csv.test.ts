@@ -107,9 +107,9 @@ describe("parseSpecCsv: bad rows", () => {
   const bad = (row: string) => parseSpecCsv(`${HEADER}\n${row}`).rows[0]!;
 
   it.each([
-    ["2016,2019,,Explorer,,no,R-134a,765,PAG 46,210", "make is empty"],
+    ["2016,2019,,Explorer,,no,R-134a,765,PAG 46,210", "make is missing"],
     ["2016,2019,Ford,Explorer,,no,R-134a,abc,PAG 46,210", 'label charge "abc" is not a mass'],
-    ["2019,2016,Ford,Explorer,,no,R-134a,765,PAG 46,210", "year range reversed (2019 to 2016)"],
+    ["2019,2016,Ford,Explorer,,no,R-134a,765,PAG 46,210", "the first year is after the last (2019 to 2016)"],
     ["201x,2019,Ford,Explorer,,no,R-134a,765,PAG 46,210", 'year_from "201x" is not a four-digit year'],
     ["2016,2019,Ford,Explorer,,no,R-22,765,PAG 46,210", 'unknown refrigerant "R-22"'],
     ["1990,1993,Ford,Explorer,,no,R-12,765,PAG 46,210", "R-12 is not covered"],
@@ -117,7 +117,7 @@ describe("parseSpecCsv: bad rows", () => {
     ["2016,2019,Ford,Explorer,,no,R-134a,3400,PAG 46,210", "label charge 3400 g is outside 100–3000 g"],
     ['2016,2019,Ford,Explorer,,no,R-134a,"1,250",PAG 46,210', "without a thousands separator"],
     ["2016,2019,Ford,Explorer,,maybe,R-134a,765,PAG 46,210", 'rear_ac "maybe"'],
-    ["2016,2019,Ford,Explorer,,no,R-134a,765,,210", "oil_type is empty"],
+    ["2016,2019,Ford,Explorer,,no,R-134a,765,,210", "oil_type is missing"],
     ["2016,2019,Ford,Explorer,,no,R-134a,765,PAG 46,5000", "total oil 5000 mL is outside"],
     ["2016,2019,Ford,Explorer,,no,R-134a,765 oz,PAG 46,210", "is in oz but the column says g"],
   ])("%s → %s", (row, expected) => {

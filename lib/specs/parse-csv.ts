@@ -157,10 +157,10 @@ function readValues(
       problems.push(`${FIELD_COLUMN_NAMES[field]} "${get(field)}" is not a year or a range like 2015-2019`);
   }
   if (yearFrom !== null && yearTo !== null && yearFrom > yearTo)
-    problems.push(`year range reversed (${yearFrom} to ${yearTo})`);
+    problems.push(`the first year is after the last (${yearFrom} to ${yearTo})`);
 
   for (const f of ["make", "model", "oilType"] as const)
-    if (get(f) === "") problems.push(`${FIELD_COLUMN_NAMES[f]} is empty`);
+    if (get(f) === "") problems.push(`${FIELD_COLUMN_NAMES[f]} is missing`);
 
   const rearAc = parseRearAc(get("rearAc"));
   if (rearAc === null)
@@ -183,7 +183,7 @@ function readValues(
   if (get("oilUnit") && !rowOilUnit) problems.push(`oil_unit "${get("oilUnit")}" should be mL or fl oz`);
 
   let labelChargeG: number | null = null;
-  if (get("labelCharge") === "") problems.push("label charge is empty");
+  if (get("labelCharge") === "") problems.push("label charge is missing");
   else {
     const headerUnit = roles.get("labelCharge")?.role.unit as MassUnit | undefined;
     const charge = parseChargeCell(
@@ -246,8 +246,7 @@ function readValues(
     totalOilMl,
   });
   if (!parsed.success) {
-    for (const issue of parsed.error.issues)
-      problems.push(`${issue.path.join(".") || "row"}: ${issue.message}`);
+    for (const issue of parsed.error.issues) problems.push(issue.message);
     return undefined;
   }
   return parsed.data;

@@ -10,23 +10,56 @@ export const MODEL_YEAR_RANGE = { min: 1940, max: 2100 } as const;
 /** One row of the shop's spec table. Masses in grams, volumes in millilitres. */
 export const specRowSchema = z
   .object({
-    yearFrom: z.number().int().min(MODEL_YEAR_RANGE.min).max(MODEL_YEAR_RANGE.max),
-    yearTo: z.number().int().min(MODEL_YEAR_RANGE.min).max(MODEL_YEAR_RANGE.max),
-    make: z.string().trim().min(1, "make is empty").max(60),
-    model: z.string().trim().min(1, "model is empty").max(80),
+    yearFrom: z
+      .number({ message: "The first year is missing." })
+      .int("A year is a whole number, for example 2016.")
+      .min(MODEL_YEAR_RANGE.min, `The first year is before ${MODEL_YEAR_RANGE.min}: check it.`)
+      .max(MODEL_YEAR_RANGE.max, `The first year is after ${MODEL_YEAR_RANGE.max}: check it.`),
+    yearTo: z
+      .number({ message: "The last year is missing." })
+      .int("A year is a whole number, for example 2019.")
+      .min(MODEL_YEAR_RANGE.min, `The last year is before ${MODEL_YEAR_RANGE.min}: check it.`)
+      .max(MODEL_YEAR_RANGE.max, `The last year is after ${MODEL_YEAR_RANGE.max}: check it.`),
+    make: z
+      .string({ message: "Make is missing." })
+      .trim()
+      .min(1, "Make is missing.")
+      .max(60, "Make is at most 60 characters."),
+    model: z
+      .string({ message: "Model is missing." })
+      .trim()
+      .min(1, "Model is missing.")
+      .max(80, "Model is at most 80 characters."),
     /** engine or variant; "" when the row covers every variant */
-    variant: z.string().trim().max(120),
+    variant: z.string().trim().max(120, "The engine or variant is at most 120 characters."),
     /** true: front and rear A/C; false: front only */
-    rearAc: z.boolean(),
-    refrigerant: z.enum(SERVICE_REFRIGERANT_IDS),
+    rearAc: z.boolean({ message: "Say whether the vehicle has rear A/C." }),
+    refrigerant: z.enum(SERVICE_REFRIGERANT_IDS, {
+      message: "Choose the refrigerant on the under-hood label.",
+    }),
+    // The limits are said without numbers here: the form says them in the reader's unit.
     labelChargeG: z
-      .number()
-      .min(LABEL_CHARGE_RANGE_G.min, `label charge must be at least ${LABEL_CHARGE_RANGE_G.min} g`)
-      .max(LABEL_CHARGE_RANGE_G.max, `label charge must be at most ${LABEL_CHARGE_RANGE_G.max} g`),
-    oilType: z.string().trim().min(1, "oil type is empty").max(60),
-    totalOilMl: z.number().min(TOTAL_OIL_RANGE_ML.min).max(TOTAL_OIL_RANGE_ML.max).nullable(),
+      .number({ message: "The label charge is missing." })
+      .min(
+        LABEL_CHARGE_RANGE_G.min,
+        "That label charge is too small for a car or light truck: check the unit.",
+      )
+      .max(
+        LABEL_CHARGE_RANGE_G.max,
+        "That label charge is too large for a car or light truck: check the unit.",
+      ),
+    oilType: z
+      .string({ message: "The oil type is missing." })
+      .trim()
+      .min(1, "The oil type is missing.")
+      .max(60, "The oil type is at most 60 characters."),
+    totalOilMl: z
+      .number({ message: "The total oil is a volume." })
+      .min(TOTAL_OIL_RANGE_ML.min, "That total oil is too little for a car or light truck: check the unit.")
+      .max(TOTAL_OIL_RANGE_ML.max, "That total oil is too much for a car or light truck: check the unit.")
+      .nullable(),
   })
-  .refine((r) => r.yearFrom <= r.yearTo, { message: "year range reversed", path: ["yearTo"] });
+  .refine((r) => r.yearFrom <= r.yearTo, { message: "The first year is after the last.", path: ["yearTo"] });
 
 export type SpecRow = z.infer<typeof specRowSchema>;
 
