@@ -12,6 +12,7 @@ import * as m2003 from "./20261203-2003-create-user-invitations";
 import * as m4001 from "./20261203-4001-drop-case-computed";
 import * as m5001 from "./20261203-5001-add-shop-locale";
 import * as m5002 from "./20261203-5002-name-service-record-figures-once";
+import * as m6001 from "./20261203-6001-add-user-temporary-password";
 
 // Listed by hand, not globbed, so the same list works under tsx, vitest and a Next bundle.
 // A new migration file goes here too; an integration test fails when one is missing.
@@ -28,4 +29,5 @@ export const migrations: RunnableMigration<QueryInterface>[] = [
   { name: "20261203-4001-drop-case-computed", ...m4001 },
   { name: "20261203-5001-add-shop-locale", ...m5001 },
   { name: "20261203-5002-name-service-record-figures-once", ...m5002 },
+  { name: "20261203-6001-add-user-temporary-password", ...m6001 },
 ];

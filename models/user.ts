@@ -20,6 +20,10 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare passwordHash: string;
   declare role: UserRole;
   declare active: CreationOptional<boolean>;
+  /** set by an owner's reset: the person must choose their own password before anything else */
+  declare passwordMustChange: CreationOptional<boolean>;
+  /** when a temporary password stops working; null for a password the person chose */
+  declare passwordExpiresAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -39,6 +43,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
         passwordHash: { type: DataTypes.STRING(255), allowNull: false },
         role: { type: DataTypes.ENUM(...userRoles), allowNull: false },
         active: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
+        passwordMustChange: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+        passwordExpiresAt: { type: DataTypes.DATE(3), allowNull: true },
         createdAt: DataTypes.DATE(3),
         updatedAt: DataTypes.DATE(3),
       },

@@ -3,14 +3,20 @@ import { requireUser } from "@/lib/auth/guard";
 import { navigationFor } from "@/lib/auth/navigation";
 import { ROLE_LABELS } from "@/lib/auth/roles";
 import { getShop } from "@/lib/server/shops";
+import { passwordMustChange } from "@/lib/server/passwords";
+import { ChangePasswordForm } from "@/components/account/change-password-form";
 import { BrandMark } from "@/components/shell/brand-mark";
 import { NavLinks } from "@/components/shell/nav-links";
 import { SignOutButton } from "@/components/auth/sign-out-button";
 
 export default async function ShopLayout({ children }: { children: React.ReactNode }) {
   const user = await requireUser();
-  const shop = await getShop({ shopId: user.shopId });
-  const items = navigationFor(user.role).map(({ href, label }) => ({ href, label }));
+  const [shop, mustChange] = await Promise.all([
+    getShop({ shopId: user.shopId }),
+    passwordMustChange({ userId: user.id }),
+  ]);
+  // Signed in with a temporary password an owner set: nothing else until they choose their own.
+  const items = mustChange ? [] : navigationFor(user.role).map(({ href, label }) => ({ href, label }));
   return (
     <div className="min-h-dvh">
       <a
@@ -29,16 +35,34 @@ export default async function ShopLayout({ children }: { children: React.ReactNo
           </Link>
           <span className="text-sm text-glacier-100">{shop.name}</span>
           <div className="ml-auto flex items-center gap-2">
-            <span className="text-sm" data-testid="signed-in-as">
+            <Link
+              href="/account/password"
+              className="inline-flex min-h-touch items-center text-sm underline-offset-4 hover:underline"
+              data-testid="signed-in-as"
+            >
               {user.name} · {ROLE_LABELS[user.role]}
-            </span>
+              <span className="sr-only">: your password</span>
+            </Link>
             <SignOutButton />
           </div>
         </div>
         <NavLinks items={items} />
       </header>
       <main id="main" className="mx-auto max-w-5xl px-3 py-4">
-        {children}
+        {mustChange ? (
+          <div className="mx-auto max-w-xl space-y-4">
+            <h1 className="text-2xl font-bold">Choose your own password</h1>
+            <p>
+              You signed in with a temporary password the shop owner set. Choose a password only you know
+              before you go on; the temporary one stops working once you do.
+            </p>
+            <div className="card">
+              <ChangePasswordForm email={user.email} temporary />
+            </div>
+          </div>
+        ) : (
+          children
+        )}
       </main>
       <footer className="mx-auto max-w-5xl px-3 pb-6 text-sm">
         <Link href="/credits" className="inline-flex min-h-touch items-center text-ink-soft underline">

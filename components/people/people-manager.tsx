@@ -8,6 +8,7 @@ import type { ShopUser, UpdateUserInput, UserResponse } from "@/lib/contracts/us
 import { userKeys, usersQuery } from "@/lib/queries/users";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { InvitePersonForm } from "./invite-person-form";
+import { ResetPassword } from "./reset-password";
 import { OpenInvitations } from "./open-invitations";
 
 export function PeopleManager({ currentUserId }: { currentUserId: string }) {
@@ -59,6 +60,7 @@ export function PeopleManager({ currentUserId }: { currentUserId: string }) {
                   </option>
                 ))}
               </select>
+              {u.id !== currentUserId && u.active && <ResetPassword person={u} />}
               {u.id !== currentUserId && (
                 <button
                   type="button"

@@ -58,7 +58,9 @@ export async function signInWithPassword({
   const user = await User.unscoped().findOne({ where: { email: normalisedEmail }, raw: true });
   dummyHash ??= hashPassword("not-a-real-password");
   const valid = await verifyPassword(user?.passwordHash ?? (await dummyHash), password);
-  const succeeded = Boolean(user && user.active && valid);
+  // A temporary password an owner set stops working at its expiry (lib/server/passwords.ts).
+  const expired = Boolean(user?.passwordExpiresAt && new Date(user.passwordExpiresAt).getTime() < Date.now());
+  const succeeded = Boolean(user && user.active && valid && !expired);
   // One row per checked password: the trail of who tried what, and the addresses an account knows.
   await SignInAttempt.create({
     email: normalisedEmail,
@@ -67,6 +69,13 @@ export async function signInWithPassword({
     attemptedAt: new Date(),
   });
 
+  if (user && user.active && valid && expired) {
+    // Only someone holding the temporary password learns this.
+    throw new AppError(
+      "unauthorized:sign-in",
+      "That temporary password has expired. Ask the shop owner for a new one.",
+    );
+  }
   if (!succeeded || !user) {
     throw new AppError("unauthorized:sign-in", "That e-mail and password do not match an active account.");
   }

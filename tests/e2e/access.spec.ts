@@ -628,6 +628,55 @@ const table: {
     },
   },
   {
+    name: "PUT /api/me/password (malformed)",
+    call: (c) => c.put("/api/me/password", { data: { newPassword: "short" } }),
+    expect: {
+      anonymous: 401,
+      owner: 400,
+      senior: 400,
+      technician: 400,
+      apprentice: 400,
+      otherShopOwner: 400,
+    },
+  },
+  {
+    // The Ridgeback owner: another shop's person for Harbourline, themselves for Ridgeback.
+    name: "POST /api/users/:id/password-reset (the Ridgeback owner)",
+    call: (c) => c.post(`/api/users/${ridgebackUserId}/password-reset`),
+    expect: {
+      anonymous: 401,
+      owner: 404,
+      senior: 403,
+      technician: 403,
+      apprentice: 403,
+      otherShopOwner: 409,
+    },
+  },
+  {
+    name: "POST /api/users/:id/password-reset (malformed id)",
+    call: (c) => c.post("/api/users/NOT-AN-ID/password-reset"),
+    expect: {
+      anonymous: 401,
+      owner: 400,
+      senior: 403,
+      technician: 403,
+      apprentice: 403,
+      otherShopOwner: 400,
+    },
+  },
+  {
+    name: "GET /account/password (page)",
+    call: (c) => c.get("/account/password", { maxRedirects: 0 }),
+    expect: {
+      anonymous: 307,
+      owner: 200,
+      senior: 200,
+      technician: 200,
+      apprentice: 200,
+      otherShopOwner: 200,
+    },
+  },
+  {
     name: "GET /api/ledger/report?format=csv",
     call: (c) => c.get("/api/ledger/report?format=csv"),
     expect: {
