@@ -10,6 +10,7 @@ import {
   revokeOwnerLink,
   sendOwnerEmail,
 } from "@/lib/queries/owner-summary";
+import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { useCaseAction } from "./use-case-action";
 
 const when = (iso: string) => new Date(iso).toLocaleString("en", { dateStyle: "medium", timeStyle: "short" });
@@ -37,7 +38,11 @@ export function OwnerSummaryPanel({
     () => createOwnerLink(caseId),
     (r) => setNewUrl(r.link.url),
   );
-  const revoke = useCaseAction((linkId: number) => revokeOwnerLink(caseId, linkId));
+  const [revoking, setRevoking] = useState<number | null>(null);
+  const revoke = useCaseAction(
+    (linkId: number) => revokeOwnerLink(caseId, linkId),
+    () => setRevoking(null),
+  );
   const retry = useCaseAction((emailId: number) => retryOwnerEmail(caseId, emailId));
   const error = send.error ?? create.error ?? revoke.error ?? retry.error;
   return (
@@ -129,9 +134,9 @@ export function OwnerSummaryPanel({
                     type="button"
                     className="btn-danger"
                     disabled={revoke.isPending}
-                    onClick={() => revoke.mutate(l.id)}
+                    onClick={() => setRevoking(l.id)}
                   >
-                    Revoke link {l.id}
+                    Revoke link {l.id}…
                   </button>
                 )}
               </li>
@@ -139,6 +144,21 @@ export function OwnerSummaryPanel({
           </ul>
         </div>
       )}
+      <ConfirmDialog
+        open={revoking !== null}
+        title={`Revoke link ${revoking ?? ""}?`}
+        confirmLabel="Revoke the link"
+        danger
+        busy={revoke.isPending}
+        error={revoking !== null ? revoke.error : null}
+        onConfirm={() => revoking !== null && revoke.mutate(revoking)}
+        onCancel={() => setRevoking(null)}
+      >
+        <p>
+          The owner&apos;s page at this link stops working at once, for anyone who has it. You can make a new
+          link afterwards.
+        </p>
+      </ConfirmDialog>
     </section>
   );
 }

@@ -10,6 +10,7 @@ import {
 } from "@/lib/contracts/attachments";
 import { removePhoto, updatePhoto, uploadPhoto } from "@/lib/queries/attachments";
 import { useCaseAction } from "@/components/owner/use-case-action";
+import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 
 /** Photos on a case: taken with the phone's camera or chosen from files; shared with the owner by choice. */
 export function CasePhotos({
@@ -36,7 +37,11 @@ export function CasePhotos({
   const share = useCaseAction((a: { id: number; shareable: boolean }) =>
     updatePhoto(caseId, a.id, { shareable: a.shareable }),
   );
-  const remove = useCaseAction((id: number) => removePhoto(caseId, id));
+  const [removing, setRemoving] = useState<AttachmentView | null>(null);
+  const remove = useCaseAction(
+    (id: number) => removePhoto(caseId, id),
+    () => setRemoving(null),
+  );
   const error = localError ?? upload.error ?? share.error ?? remove.error;
   return (
     <section aria-labelledby="photos-heading" className="card space-y-3">
@@ -151,9 +156,9 @@ export function CasePhotos({
                     type="button"
                     className="btn-quiet text-sm"
                     disabled={remove.isPending}
-                    onClick={() => remove.mutate(a.id)}
+                    onClick={() => setRemoving(a)}
                   >
-                    Remove photo {a.id}
+                    Remove photo {a.id}…
                   </button>
                 </>
               )}
@@ -161,6 +166,25 @@ export function CasePhotos({
           ))}
         </ul>
       )}
+      <ConfirmDialog
+        open={removing !== null}
+        title={removing ? `Remove photo ${removing.id}?` : "Remove a photo?"}
+        confirmLabel="Remove the photo"
+        danger
+        busy={remove.isPending}
+        error={removing ? remove.error : null}
+        onConfirm={() => removing && remove.mutate(removing.id)}
+        onCancel={() => setRemoving(null)}
+      >
+        {removing && (
+          <p>
+            {ATTACHMENT_KIND_LABELS[removing.kind]}
+            {removing.caption ? `: ${removing.caption}` : ""}. It leaves the case
+            {removing.shareable ? " and the owner's page" : ""}, and cannot be brought back; take it again if
+            it is needed.
+          </p>
+        )}
+      </ConfirmDialog>
     </section>
   );
 }

@@ -1,6 +1,7 @@
 import AxeBuilder from "@axe-core/playwright";
 import { expect, test, type Page } from "@playwright/test";
 import { signedInClient } from "./pages/api-client";
+import { caseIdByVehicle, phonePhoto } from "./pages/owner-fixtures";
 import { SignInPage } from "./pages/sign-in-page";
 
 test.use({ viewport: { width: 390, height: 844 } });
@@ -104,4 +105,33 @@ test("deactivating a person asks first; Escape and Go back leave everyone as the
   await dialog.getByRole("button", { name: "Go back" }).click();
   await expect(dialog).toBeHidden();
   await expect(page.getByText(`${person} (inactive)`)).toHaveCount(0);
+});
+
+test("removing a photo from a case asks first", async ({ page }) => {
+  const tech = await signedInClient("tech@harbourline.test");
+  const caseId = await caseIdByVehicle(tech, "CX-5");
+  const caption = `Condenser fins, test ${Date.now().toString(36)}`;
+  const upload = await tech.post(`/api/cases/${caseId}/attachments`, {
+    multipart: {
+      file: { name: "fins.jpg", mimeType: "image/jpeg", buffer: await phonePhoto() },
+      kind: "damage",
+      caption,
+      shareable: "false",
+    },
+  });
+  expect(upload.ok()).toBe(true);
+  const photoId = (await upload.json()).attachment.id as number;
+  await tech.dispose();
+
+  await new SignInPage(page).signInAs("technician");
+  await page.goto(`/cases/${caseId}`);
+  const photos = page.getByRole("region", { name: "Photos" });
+  await photos.getByRole("button", { name: `Remove photo ${photoId}` }).click();
+  const dialog = page.getByRole("dialog", { name: `Remove photo ${photoId}?` });
+  await expect(dialog).toContainText(caption);
+  await dialog.getByRole("button", { name: "Go back" }).click();
+  await expect(photos.getByRole("img", { name: caption })).toBeVisible();
+  await photos.getByRole("button", { name: `Remove photo ${photoId}` }).click();
+  await dialog.getByRole("button", { name: "Remove the photo" }).click();
+  await expect(photos.getByRole("img", { name: caption })).toHaveCount(0);
 });

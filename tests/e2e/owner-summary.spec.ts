@@ -105,10 +105,14 @@ test("a technician e-mails the owner page; the owner reads it, sees the photo, a
   const linkId = (await answer.textContent())?.match(/through link (\d+)/)?.[1];
   expect(linkId).toBeTruthy();
 
-  // Revoke that link: the same address now says it is no longer valid, with a 404.
+  // Revoke that link, after the question: the same address now says it is no longer valid, with a 404.
   await page
     .getByRole("region", { name: "Owner summary" })
     .getByRole("button", { name: `Revoke link ${linkId}` })
+    .click();
+  await page
+    .getByRole("dialog", { name: `Revoke link ${linkId}?` })
+    .getByRole("button", { name: "Revoke the link" })
     .click();
   await expect(
     page
