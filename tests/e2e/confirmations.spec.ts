@@ -135,3 +135,30 @@ test("removing a photo from a case asks first", async ({ page }) => {
   await dialog.getByRole("button", { name: "Remove the photo" }).click();
   await expect(photos.getByRole("img", { name: caption })).toHaveCount(0);
 });
+
+test("withdrawing an invitation asks first; Go back keeps its link", async ({ page }) => {
+  const owner = await signedInClient("owner@harbourline.test");
+  const email = `new-hand-${Date.now().toString(36)}@harbourline.test`;
+  const invited = await owner.post("/api/invitations", {
+    data: { email, name: "Noor Vasquez", role: "apprentice" },
+  });
+  expect(invited.ok()).toBe(true);
+  await owner.dispose();
+
+  await new SignInPage(page).signInAs("owner");
+  await page.goto("/settings/users");
+  const open = page.getByRole("region", { name: "Open invitations" });
+  const button = open.getByRole("button", { name: `Withdraw the invitation to ${email}` });
+  await button.click();
+  const dialog = page.getByRole("dialog", { name: `Withdraw the invitation to ${email}?` });
+  await expect(dialog).toContainText("Noor Vasquez");
+  await axe(page);
+  await dialog.getByRole("button", { name: "Go back" }).click();
+  await expect(dialog).toBeHidden();
+  await expect(button).toBeFocused();
+  await expect(open.getByText(`${email} · link valid until`)).toBeVisible();
+  await button.click();
+  await dialog.getByRole("button", { name: "Withdraw the invitation" }).click();
+  await expect(open.getByRole("status")).toHaveText("Invitation withdrawn; its link no longer works.");
+  await expect(button).toHaveCount(0);
+});

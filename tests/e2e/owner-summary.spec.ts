@@ -21,6 +21,8 @@ test("a technician e-mails the owner page; the owner reads it, sees the photo, a
   page,
   browser,
 }) => {
+  // A long journey (two people, e-mail, photo, PDF, revoke): on a loaded machine it needs more than the default minute.
+  test.slow();
   const client = await signedInClient(DEMO_USERS.technician.email);
   const caseId = await caseIdByVehicle(client, "CX-5");
   await client.dispose();
