@@ -38,7 +38,7 @@ describe("spec table CSV import", () => {
     expect(byLine.get(3)?.problems.join(" ")).toMatch(/duplicate of line 2/);
     expect(byLine.get(4)?.problems).toEqual([]);
     expect(byLine.get(5)?.problems).toEqual([]);
-    expect(byLine.get(6)?.problems.join(" ")).toMatch(/reversed/);
+    expect(byLine.get(6)?.problems.join(" ")).toMatch(/first year is after the last \(2019 to 2017\)/);
     expect(byLine.get(7)?.problems.join(" ")).toMatch(/unknown refrigerant/);
     expect(byLine.get(8)?.problems.join(" ")).toMatch(/label charge/);
     expect(await listSpecs({ shopId: shop.id })).toEqual([]); // a preview saves nothing
