@@ -67,7 +67,7 @@ export function collectCautions(a: {
   if (input.refrigerant !== "R-744") ids.push("never_vent");
   if (input.refrigerant === "R-1234yf") ids.push("flammable_r1234yf");
   if (input.refrigerant === "R-744") ids.push("r744_pressure");
-  if (input.electricCompressor) ids.push("high_voltage_compressor");
+  if (input.compressorType === "electric") ids.push("high_voltage_compressor");
   if (mixed) ids.push("contaminated_do_not_recover");
   if (observations.has("symptom:identifier_flags_hydrocarbon")) ids.push("hydrocarbon_flammable");
   if (observations.has("high_side:very_high") || observations.has("symptom:high_pressure_cutout"))

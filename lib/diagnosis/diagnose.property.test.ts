@@ -3,7 +3,7 @@ import { describe, expect, it } from "vitest";
 import { CAUSE_IDS } from "./causes";
 import { diagnose } from "./diagnose";
 import { ENGINE_VERSION } from "./engine-version";
-import { type DiagnosisInput, diagnosisInputSchema } from "./schema";
+import { COMPRESSOR_TYPES, type DiagnosisInput, diagnosisInputSchema } from "./schema";
 import { SYMPTOM_IDS } from "./symptoms";
 
 const optional = <T>(arb: fc.Arbitrary<T>) => fc.option(arb, { nil: undefined, freq: 3 });
@@ -30,7 +30,12 @@ const candidateInput = fc
       recoveredChargeG: optional(real(0, 6000)),
       identifierPurityPct: optional(real(0, 100)),
       identifierAirPct: optional(real(0, 100)),
-      electricCompressor: optional(fc.boolean()),
+      compressorType: optional(fc.constantFrom(...COMPRESSOR_TYPES)),
+      staticSoakC: optional(real(-30, 60)),
+      staticSoakMin: optional(real(0, 1440)),
+      lowCutOutKpaGauge: optional(pressure),
+      lowCutInKpaGauge: optional(pressure),
+      chargedG: optional(real(0, 6000)),
       symptoms: optional(fc.subarray([...SYMPTOM_IDS])),
     });
   });

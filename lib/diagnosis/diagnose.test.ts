@@ -194,7 +194,7 @@ describe("gates, next check and cautions", () => {
       refrigerant: "R-134a",
       expansionDevice: "txv",
       ambientC: 25,
-      electricCompressor: true,
+      compressorType: "electric",
     });
     expect(findings.cautions.at(-1)?.id).toBe("defer_to_procedure");
     expect(findings.cautions.at(-1)?.text).toMatch(

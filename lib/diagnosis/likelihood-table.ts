@@ -835,6 +835,13 @@ export const LIKELIHOOD_TABLE: readonly LikelihoodRow[] = [
     source: "Leak detection at 4 g/yr sensitivity (SAE J2791/J2913); common practice",
     weights: { undercharge: -1.0 },
   },
+  // Accepted from the interview and the next checks; weighed in a later change.
+  { observation: "symptom:part_replaced_no_oil_added", source: "not yet weighed", weights: {} },
+  { observation: "symptom:part_replaced_oil_added", source: "not yet weighed", weights: {} },
+  { observation: "symptom:sealant_found", source: "not yet weighed", weights: {} },
+  { observation: "symptom:no_sealant_found", source: "not yet weighed", weights: {} },
+  { observation: "symptom:oil_short_at_drain", source: "not yet weighed", weights: {} },
+  { observation: "symptom:oil_normal_at_drain", source: "not yet weighed", weights: {} },
 ];
 
 export const RANKING_GATES: readonly RankingGate[] = [

@@ -16,6 +16,12 @@ const gaugeKpa = (what: string) =>
     .min(-SEA_LEVEL_KPA, { error: `${what} cannot be below a perfect vacuum (−101.3 kPa gauge)` })
     .max(16000, { error: `${what} above 16,000 kPa gauge is not a plausible reading` });
 
+/** How the compressor is driven and controlled: it decides what clutch behaviour can tell. */
+export const COMPRESSOR_TYPES = ["cycling_clutch", "variable_displacement", "electric"] as const;
+export type CompressorType = (typeof COMPRESSOR_TYPES)[number];
+
+const MAX_SOAK_MIN = 7 * 24 * 60;
+
 const tempC = (what: string, minC: number, maxC: number) =>
   z
     .number({ error: `${what} must be a number in °C` })
@@ -74,7 +80,26 @@ export const diagnosisInputSchema = z
       .min(0, { error: "air must be 0–100 %" })
       .max(100, { error: "air must be 0–100 %" })
       .optional(),
-    electricCompressor: z.boolean().optional(),
+    compressorType: z
+      .enum(COMPRESSOR_TYPES, {
+        error: "compressor type must be cycling_clutch, variable_displacement or electric",
+      })
+      .optional(),
+    staticSoakC: tempC("soak temperature", -30, 60).optional(),
+    staticSoakMin: z
+      .number()
+      .finite()
+      .min(0, { error: "soak time cannot be negative" })
+      .max(MAX_SOAK_MIN, { error: "soak time above a week is not a soak" })
+      .optional(),
+    lowCutOutKpaGauge: gaugeKpa("low side at cut-out").optional(),
+    lowCutInKpaGauge: gaugeKpa("low side at cut-in").optional(),
+    chargedG: z
+      .number()
+      .finite()
+      .min(0, { error: "charged mass cannot be negative" })
+      .max(6000, { error: "charged mass above 6,000 g is not plausible" })
+      .optional(),
     symptoms: z
       .array(z.enum(SYMPTOM_IDS, { error: "unknown symptom id" }))
       .max(SYMPTOM_IDS.length * 2)
@@ -83,7 +108,13 @@ export const diagnosisInputSchema = z
   .superRefine((input, ctx) => {
     const maxKpa = MAX_GAUGE_KPA[input.refrigerant];
     const deepestGaugeKpa = -standardBarometricKpa(input.altitudeM ?? 0);
-    for (const key of ["staticKpaGauge", "highKpaGauge", "lowKpaGauge"] as const) {
+    for (const key of [
+      "staticKpaGauge",
+      "highKpaGauge",
+      "lowKpaGauge",
+      "lowCutOutKpaGauge",
+      "lowCutInKpaGauge",
+    ] as const) {
       const value = input[key];
       if (value !== undefined && value < deepestGaugeKpa) {
         ctx.addIssue({
@@ -109,6 +140,17 @@ export const diagnosisInputSchema = z
         code: "custom",
         path: ["highKpaGauge"],
         message: "high side reads below low side while running: check that the hoses are on the right ports",
+      });
+    }
+    if (
+      input.lowCutOutKpaGauge !== undefined &&
+      input.lowCutInKpaGauge !== undefined &&
+      input.lowCutInKpaGauge < input.lowCutOutKpaGauge
+    ) {
+      ctx.addIssue({
+        code: "custom",
+        path: ["lowCutInKpaGauge"],
+        message: "the low side at cut-in reads below the low side at cut-out: the two look swapped",
       });
     }
     if (

@@ -17,6 +17,9 @@ export const BEHAVIOUR_SYMPTOM_IDS = [
   "oil_residue_at_fitting",
   "oil_pulled_during_recovery",
   "recent_service_elsewhere",
+  "part_replaced_no_oil_added",
+  "part_replaced_oil_added",
+  "sealant_found",
 ] as const;
 
 /** What the technician saw, heard or found: the behaviour questions, then the results of next checks. */
@@ -36,6 +39,9 @@ export const SYMPTOM_IDS = [
   "liquid_line_even_temperature",
   "leak_found",
   "no_leak_found",
+  "no_sealant_found",
+  "oil_short_at_drain",
+  "oil_normal_at_drain",
 ] as const;
 
 export type SymptomId = (typeof SYMPTOM_IDS)[number];
@@ -58,6 +64,9 @@ export const SYMPTOM_LABELS: Record<SymptomId, string> = {
   oil_residue_at_fitting: "Oily residue or dye at a fitting or component",
   oil_pulled_during_recovery: "Much oil came out during recovery",
   recent_service_elsewhere: "A/C was serviced elsewhere recently",
+  part_replaced_no_oil_added: "A component was replaced recently without adding oil",
+  part_replaced_oil_added: "A component was replaced recently and its oil was added",
+  sealant_found: "Leak sealant found at the service port or in the system",
   evaporator_airflow_drops: "Vent air very cold at first, then airflow weakens",
   pressures_equalise_fast: "Pressures equalise very fast at shut-off",
   clutch_or_belt_slipping: "Compressor clutch or drive belt slipping",
@@ -73,4 +82,7 @@ export const SYMPTOM_LABELS: Record<SymptomId, string> = {
   liquid_line_even_temperature: "Checked: liquid line temperature even from condenser to expansion device",
   leak_found: "Checked: leak found",
   no_leak_found: "Checked: no leak found at the detector's most sensitive setting",
+  no_sealant_found: "Checked: no sealant at the service ports",
+  oil_short_at_drain: "Checked: compressor oil drained and measured well short of its quantity",
+  oil_normal_at_drain: "Checked: compressor oil drained and measured at about its quantity",
 };

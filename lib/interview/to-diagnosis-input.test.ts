@@ -22,7 +22,6 @@ describe("toDiagnosisInput", () => {
     expect(toDiagnosisInput(exampleAnswers)).toEqual({
       refrigerant: "R-134a",
       expansionDevice: "orifice_tube",
-      electricCompressor: false,
       ambientC: 32,
       relativeHumidityPct: 55,
       staticKpaGauge: 715,
@@ -53,12 +52,20 @@ describe("toDiagnosisInput", () => {
     const input = toDiagnosisInput({ system: exampleAnswers.system, conditions: exampleAnswers.conditions });
     expect(Object.keys(input ?? {}).sort()).toEqual([
       "ambientC",
-      "electricCompressor",
       "expansionDevice",
       "labelChargeG",
       "refrigerant",
       "relativeHumidityPct",
     ]);
+  });
+
+  it("tells the engine the compressor is electric when the system answer says so", () => {
+    const electric: InterviewAnswers = {
+      ...exampleAnswers,
+      system: { ...exampleAnswers.system, electricCompressor: true },
+    };
+    expect(toDiagnosisInput(electric)?.compressorType).toBe("electric");
+    expect(toDiagnosisInput(exampleAnswers)).not.toHaveProperty("compressorType");
   });
 
   it("ignores a recovered mass when the charge was not recovered", () => {

@@ -29,7 +29,7 @@ export function toDiagnosisInput(answers: InterviewAnswers, shop?: ShopSettings)
     recoveredChargeG: charge?.recovered ? charge.recoveredChargeG : undefined,
     identifierPurityPct: answers.identification?.purityPct,
     identifierAirPct: answers.identification?.airPct,
-    electricCompressor: system.electricCompressor,
+    compressorType: system.electricCompressor ? "electric" : undefined,
     symptoms: symptomsFrom(answers),
   };
   // Absent, not undefined: the input is stored as JSON with the case and compared in tests.
