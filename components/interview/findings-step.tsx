@@ -4,7 +4,15 @@ import { useEffect, useMemo, useRef, useState } from "react";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useMutation } from "@tanstack/react-query";
-import { CAUSE_IDS, CAUSE_LABELS, diagnose, type CauseId, type DiagnosisInput } from "@/lib/diagnosis";
+import {
+  CAUSE_IDS,
+  CAUSE_LABELS,
+  diagnose,
+  formatMessage,
+  type CauseId,
+  type DiagnosisInput,
+  type ReaderUnits,
+} from "@/lib/diagnosis";
 import { cautionNamed } from "@/lib/cautions/catalog";
 import type { Caution as InterviewCaution } from "@/lib/interview/cautions";
 import { ApiError } from "@/lib/queries/api-fetch";
@@ -16,6 +24,8 @@ import type { SaveStatus } from "./use-autosave";
 interface Props {
   caseId: number;
   input: DiagnosisInput | null;
+  /** The technician's units: every number in the findings is shown in them. */
+  units?: ReaderUnits;
   interviewCautions: InterviewCaution[];
   /** whether submitting sends the case to a senior (lib/cases/rules.ts) rather than signing it off */
   waitsForSignOff: boolean;
@@ -27,6 +37,7 @@ interface Props {
 export function FindingsStep({
   caseId,
   input,
+  units,
   interviewCautions,
   waitsForSignOff,
   saveStatus,
@@ -126,7 +137,7 @@ export function FindingsStep({
         <ol className="mt-2 space-y-3">
           {findings.suspects.slice(0, 4).map((s, i) => (
             <li key={s.cause}>
-              <SuspectCard suspect={s} rank={i + 1} />
+              <SuspectCard suspect={s} rank={i + 1} units={units} />
             </li>
           ))}
         </ol>
@@ -138,7 +149,7 @@ export function FindingsStep({
             <ol className="mt-2 space-y-3" start={5}>
               {findings.suspects.slice(4).map((s, i) => (
                 <li key={s.cause}>
-                  <SuspectCard suspect={s} rank={i + 5} />
+                  <SuspectCard suspect={s} rank={i + 5} units={units} />
                 </li>
               ))}
             </ol>
@@ -161,8 +172,8 @@ export function FindingsStep({
 
       {findings.notes.length > 0 && (
         <ul className="list-disc space-y-1 pl-5 text-ink-soft">
-          {findings.notes.map((n) => (
-            <li key={n}>{n}</li>
+          {findings.notes.map((n, i) => (
+            <li key={i}>{formatMessage(n, units)}</li>
           ))}
         </ul>
       )}

@@ -163,6 +163,7 @@ export function Interview({
           <FindingsStep
             caseId={caseId}
             input={view.diagnosisInput}
+            units={units}
             interviewCautions={view.cautions}
             waitsForSignOff={waitsForSignOff}
             saveStatus={autosave.status}

@@ -1,11 +1,24 @@
-import { CAUSE_LABELS, type Suspect } from "@/lib/diagnosis";
+import { CAUSE_LABELS, formatMessage, type Message, type ReaderUnits, type Suspect } from "@/lib/diagnosis";
+
+/** Findings stored before evidence became quantities hold plain sentences. */
+export function evidenceText(item: Message | string, units?: ReaderUnits): string {
+  return typeof item === "string" ? item : formatMessage(item, units);
+}
 
 function confidenceWord(confidence: number): string {
   return confidence >= 0.75 ? "well measured" : confidence >= 0.4 ? "partly measured" : "little measured yet";
 }
 
 /** One suspect: how strongly the readings point to it, and why — in both directions. */
-export function SuspectCard({ suspect, rank }: { suspect: Suspect; rank: number }) {
+export function SuspectCard({
+  suspect,
+  rank,
+  units,
+}: {
+  suspect: Suspect;
+  rank: number;
+  units?: ReaderUnits;
+}) {
   const pct = Math.round(suspect.score * 100);
   return (
     <article
@@ -28,8 +41,8 @@ export function SuspectCard({ suspect, rank }: { suspect: Suspect; rank: number 
         <>
           <h4 className="mt-2 text-sm font-bold uppercase tracking-wide text-ink-soft">For</h4>
           <ul className="list-disc pl-5">
-            {suspect.evidenceFor.map((e) => (
-              <li key={e}>{e}</li>
+            {suspect.evidenceFor.map((e, i) => (
+              <li key={i}>{evidenceText(e, units)}</li>
             ))}
           </ul>
         </>
@@ -38,8 +51,8 @@ export function SuspectCard({ suspect, rank }: { suspect: Suspect; rank: number 
         <>
           <h4 className="mt-2 text-sm font-bold uppercase tracking-wide text-ink-soft">Against</h4>
           <ul className="list-disc pl-5">
-            {suspect.evidenceAgainst.map((e) => (
-              <li key={e}>{e}</li>
+            {suspect.evidenceAgainst.map((e, i) => (
+              <li key={i}>{evidenceText(e, units)}</li>
             ))}
           </ul>
         </>

@@ -1,5 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { diagnose } from "./diagnose";
+import { formatMessage, type Message } from "./messages";
+
+const said = (messages: readonly Message[]) => messages.map((m) => formatMessage(m)).join(" ");
 import type { DiagnosisInput } from "./schema";
 
 const rank = (input: DiagnosisInput, cause: string) =>
@@ -18,7 +21,7 @@ describe("trade check values (common practice)", () => {
           symptoms: ["high_pressure_cutout"],
         });
         expect(findings.suspects[0]?.cause).toBe("overcharge");
-        expect(findings.suspects[0]?.evidenceFor.join(" ")).toMatch(/200 g \(25 %\) over/);
+        expect(said(findings.suspects[0]?.evidenceFor ?? [])).toMatch(/200 g \(25 %\) over/);
       }
     }
   });
@@ -38,7 +41,7 @@ describe("trade check values (common practice)", () => {
       const air = findings.suspects.find((s) => s.cause === "non_condensables");
       expect(air?.score).toBeLessThan(0.1);
       expect(findings.suspects.findIndex((s) => s.cause === "non_condensables")).toBeGreaterThanOrEqual(2);
-      expect(air?.evidenceAgainst.join(" ")).toMatch(/0 % air/);
+      expect(said(air?.evidenceAgainst ?? [])).toMatch(/0 % air/);
     }
   });
 
@@ -251,7 +254,7 @@ describe("gates, next check and cautions", () => {
       liquidLineC: 40,
       ventC: 8,
     });
-    expect(findings.notes.join(" ")).toMatch(/transcritical/);
+    expect(said(findings.notes)).toMatch(/transcritical/);
     expect(Math.max(...findings.suspects.map((s) => s.confidence))).toBeLessThan(0.6);
     expect(findings.cautions.map((c) => c.id)).toContain("r744_pressure");
   });
@@ -264,7 +267,7 @@ describe("gates, next check and cautions", () => {
       staticKpaGauge: 660,
     });
     const air = findings.suspects.find((s) => s.cause === "non_condensables");
-    expect(air?.evidenceFor[0]).toMatch(
+    expect(said(air?.evidenceFor.slice(0, 1) ?? [])).toMatch(
       /^Static pressure 660 kPa gauge is 11[5-7] kPa above saturation at 24\.0 °C/,
     );
     for (const s of findings.suspects)

@@ -4,6 +4,7 @@ import { ENGINE_VERSION } from "./engine-version";
 import { extractEvidence } from "./evidence";
 import type { ComputedValues } from "./evidence-types";
 import { chooseNextCheck, type NextCheck } from "./next-check";
+import type { Message } from "./messages";
 import type { ObservationId } from "./observations";
 import type { DiagnosisInput } from "./schema";
 import { type EvidenceItem, logistic, readingCoverage, scoreCauses } from "./scoring";
@@ -14,8 +15,8 @@ export interface Suspect {
   score: number;
   /** 0–1: how much of this cause's key-reading evidence was measured (lower when readings are missing). */
   confidence: number;
-  evidenceFor: string[];
-  evidenceAgainst: string[];
+  evidenceFor: Message[];
+  evidenceAgainst: Message[];
   logOdds: number;
   /** Every item that moved this suspect's score, with its weight, for review. */
   evidence: EvidenceItem[];
@@ -28,7 +29,7 @@ export interface Findings {
   cautions: Caution[];
   computed: ComputedValues;
   /** Facts that moved no score but matter to the reader. */
-  notes: string[];
+  notes: Message[];
 }
 
 const CAUSE_ORDER = new Map<CauseId, number>(CAUSE_IDS.map((cause, i) => [cause, i]));
@@ -47,9 +48,9 @@ export function diagnose(input: DiagnosisInput): Findings {
   const suspects = scoreCauses(extraction.observations)
     .map((s): Suspect => {
       const evidence = s.items.sort(byStrength);
-      const evidenceFor: string[] = [];
-      const evidenceAgainst: string[] = [];
-      for (const item of evidence) (item.weight > 0 ? evidenceFor : evidenceAgainst).push(item.text);
+      const evidenceFor: Message[] = [];
+      const evidenceAgainst: Message[] = [];
+      for (const item of evidence) (item.weight > 0 ? evidenceFor : evidenceAgainst).push(item.message);
       return {
         cause: s.cause,
         score: logistic(s.logOdds),

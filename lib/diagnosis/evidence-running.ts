@@ -2,7 +2,8 @@ import { expectedBands, refrigerantInfo } from "@/lib/refrigerants";
 import { CONDENSING_ABOVE_AMBIENT_K, HUMIDITY_SHIFT_MAX_K } from "@/lib/refrigerants/expected-bands";
 import { saturationTemperatureOrNull as saturationOrNull, tempInTable } from "./saturation-guard";
 import type { Extraction, SaturationBand } from "./evidence-types";
-import { degC, kelvin, kpaGauge, plain } from "./format";
+import type { ReadingObservationId } from "./observations";
+import { gaugeKpa, kelvin, type Quantity, tempC } from "./quantities";
 import type { DiagnosisInput } from "./schema";
 import {
   FALLBACK_CONDENSING_OVER_AMBIENT_K,
@@ -46,17 +47,24 @@ function bandsFor(
   };
 }
 
-function bandText(band: SaturationBand): string {
-  const saturation = `${plain(band.minSaturationC, 1)}–${degC(band.maxSaturationC)} saturation`;
-  if (band.minKpaGauge === undefined || band.maxKpaGauge === undefined) return saturation;
-  return `${plain(band.minKpaGauge, 0)}–${kpaGauge(band.maxKpaGauge)} (${saturation})`;
+function bandValues(band: SaturationBand, ambientC: number): Record<string, Quantity> {
+  const values: Record<string, Quantity> = {
+    bandMinSat: tempC(band.minSaturationC),
+    bandMaxSat: tempC(band.maxSaturationC),
+    ambient: tempC(ambientC),
+  };
+  if (band.minKpaGauge !== undefined && band.maxKpaGauge !== undefined) {
+    values.bandMin = gaugeKpa(band.minKpaGauge);
+    values.bandMax = gaugeKpa(band.maxKpaGauge);
+  }
+  return values;
 }
 
 /** High side, low side, their lift, subcooling and superheat. Skipped when the refrigerant is not pure. */
 export function addRunningEvidence(input: DiagnosisInput, barometricKpa: number, out: Extraction): void {
   const { refrigerant, ambientC } = input;
   const bands = bandsFor(input, barometricKpa);
-  const at = `for ${degC(ambientC)} ambient`;
+  const words = { refrigerant };
   let condensingC: number | null = null;
   let evaporatingC: number | null = null;
 
@@ -66,33 +74,36 @@ export function addRunningEvidence(input: DiagnosisInput, barometricKpa: number,
     out.computed.expectedHigh = bands.high;
     const critical = refrigerantInfo(refrigerant).criticalPressureKpaAbs;
     condensingC = highKpaAbs < critical ? saturationOrNull(refrigerant, highKpaAbs) : null;
+    const high = gaugeKpa(input.highKpaGauge);
     if (condensingC === null) {
       if (highKpaAbs >= critical) {
         out.computed.highSideTranscritical = true;
-        out.notes.push(
-          `High side ${kpaGauge(input.highKpaGauge)} is above the critical pressure of ${refrigerant}: the gas cooler runs transcritical, so there is no condensing temperature or subcooling to judge.`,
-        );
+        out.notes.push({ key: "note:transcritical", values: { high }, words });
       } else {
-        out.notes.push(
-          `High side ${kpaGauge(input.highKpaGauge)} is outside the saturation table for ${refrigerant}; it was not graded.`,
-        );
+        out.notes.push({ key: "note:high_outside_table", values: { high }, words });
       }
       out.confidenceFactor *= 0.6;
     } else {
       out.computed.condensingC = condensingC;
       out.computed.condensingApproachK = condensingC - ambientC;
       out.observedGroups.add("high_side");
-      const lead = `High side ${kpaGauge(input.highKpaGauge)} (condensing at ${degC(condensingC)})`;
-      const expected = `the expected ${bandText(bands.high)} ${at}`;
-      if (condensingC < bands.high.minSaturationC - HIGH_SIDE_FAR_K.below)
-        out.observations.push({ id: "high_side:very_low", text: `${lead} is far below ${expected}.` });
-      else if (condensingC < bands.high.minSaturationC)
-        out.observations.push({ id: "high_side:low", text: `${lead} is below ${expected}.` });
-      else if (condensingC <= bands.high.maxSaturationC)
-        out.observations.push({ id: "high_side:normal", text: `${lead} is inside ${expected}.` });
-      else if (condensingC <= bands.high.maxSaturationC + HIGH_SIDE_FAR_K.above)
-        out.observations.push({ id: "high_side:high", text: `${lead} is above ${expected}.` });
-      else out.observations.push({ id: "high_side:very_high", text: `${lead} is far above ${expected}.` });
+      const id: ReadingObservationId =
+        condensingC < bands.high.minSaturationC - HIGH_SIDE_FAR_K.below
+          ? "high_side:very_low"
+          : condensingC < bands.high.minSaturationC
+            ? "high_side:low"
+            : condensingC <= bands.high.maxSaturationC
+              ? "high_side:normal"
+              : condensingC <= bands.high.maxSaturationC + HIGH_SIDE_FAR_K.above
+                ? "high_side:high"
+                : "high_side:very_high";
+      out.observations.push({
+        id,
+        message: {
+          key: id,
+          values: { high, condensing: tempC(condensingC), ...bandValues(bands.high, ambientC) },
+        },
+      });
     }
   }
 
@@ -102,27 +113,29 @@ export function addRunningEvidence(input: DiagnosisInput, barometricKpa: number,
     out.computed.expectedLow = bands.low;
     evaporatingC = saturationOrNull(refrigerant, lowKpaAbs);
     if (evaporatingC !== null) out.computed.evaporatingC = evaporatingC;
-    const expected = `the expected ${bandText(bands.low)}`;
+    const low = gaugeKpa(input.lowKpaGauge);
     if (input.lowKpaGauge <= 0) {
       out.observedGroups.add("low_side");
-      out.observations.push({
-        id: "low_side:vacuum",
-        text: `Low side ${kpaGauge(input.lowKpaGauge)} is at or below atmospheric pressure (vacuum) while running.`,
-      });
+      out.observations.push({ id: "low_side:vacuum", message: { key: "low_side:vacuum", values: { low } } });
     } else if (evaporatingC === null) {
-      out.notes.push(
-        `Low side ${kpaGauge(input.lowKpaGauge)} is outside the saturation table for ${refrigerant}; it was not graded.`,
-      );
+      out.notes.push({ key: "note:low_outside_table", values: { low }, words });
     } else {
       out.observedGroups.add("low_side");
-      const lead = `Low side ${kpaGauge(input.lowKpaGauge)} (evaporating at ${degC(evaporatingC)})`;
-      if (evaporatingC < bands.low.minSaturationC - LOW_SIDE_FAR_BELOW_K)
-        out.observations.push({ id: "low_side:very_low", text: `${lead} is far below ${expected}.` });
-      else if (evaporatingC < bands.low.minSaturationC)
-        out.observations.push({ id: "low_side:low", text: `${lead} is below ${expected}.` });
-      else if (evaporatingC <= bands.low.maxSaturationC)
-        out.observations.push({ id: "low_side:normal", text: `${lead} is inside ${expected}.` });
-      else out.observations.push({ id: "low_side:high", text: `${lead} is above ${expected}.` });
+      const id: ReadingObservationId =
+        evaporatingC < bands.low.minSaturationC - LOW_SIDE_FAR_BELOW_K
+          ? "low_side:very_low"
+          : evaporatingC < bands.low.minSaturationC
+            ? "low_side:low"
+            : evaporatingC <= bands.low.maxSaturationC
+              ? "low_side:normal"
+              : "low_side:high";
+      out.observations.push({
+        id,
+        message: {
+          key: id,
+          values: { low, evaporating: tempC(evaporatingC), ...bandValues(bands.low, ambientC) },
+        },
+      });
     }
   }
 
@@ -130,17 +143,14 @@ export function addRunningEvidence(input: DiagnosisInput, barometricKpa: number,
     const liftK = condensingC - evaporatingC;
     out.computed.liftK = liftK;
     const smallestNormalLiftK = bands.high.minSaturationC - bands.low.maxSaturationC;
-    if (liftK < smallestNormalLiftK - LIFT_CLOSE_MARGIN_K) {
-      out.observations.push({
-        id: "lift:close",
-        text: `High and low side are close together: the compressor lifts only ${kelvin(liftK)} of saturation temperature (at least ${kelvin(smallestNormalLiftK)} expected ${at}).`,
-      });
-    } else {
-      out.observations.push({
-        id: "lift:normal",
-        text: `The compressor lifts ${kelvin(liftK)} of saturation temperature, a normal spread between the sides.`,
-      });
-    }
+    const id = liftK < smallestNormalLiftK - LIFT_CLOSE_MARGIN_K ? "lift:close" : "lift:normal";
+    out.observations.push({
+      id,
+      message: {
+        key: id,
+        values: { lift: kelvin(liftK), minLift: kelvin(smallestNormalLiftK), ambient: tempC(ambientC) },
+      },
+    });
   }
 
   if (condensingC !== null && input.liquidLineC !== undefined)
@@ -165,32 +175,29 @@ function addSubcooling(
   out.computed.subcoolingK = subcoolingK;
   out.observedGroups.add("subcooling");
   const t = SUBCOOLING_K[input.expansionDevice];
-  const lead = `Subcooling ${kelvin(subcoolingK)} (liquid line ${degC(liquidLineC)} against ${degC(condensingC)} condensing)`;
-  if (subcoolingK <= t.none)
-    out.observations.push({
-      id: "subcooling:none",
-      text: `${lead}: no liquid leaves the condenser with a margin.`,
-    });
-  else if (subcoolingK < t.low)
-    out.observations.push({
-      id: "subcooling:low",
-      text: `${lead} is below the typical ${t.low}–${t.high} K.`,
-    });
-  else if (subcoolingK <= t.high)
-    out.observations.push({
-      id: "subcooling:normal",
-      text: `${lead} is within the typical ${t.low}–${t.high} K.`,
-    });
-  else if (subcoolingK <= t.veryHigh)
-    out.observations.push({
-      id: "subcooling:high",
-      text: `${lead} is above the typical ${t.low}–${t.high} K: liquid is backing up in the condenser.`,
-    });
-  else
-    out.observations.push({
-      id: "subcooling:very_high",
-      text: `${lead} is far above the typical ${t.low}–${t.high} K: liquid is backing up in the condenser.`,
-    });
+  const id: ReadingObservationId =
+    subcoolingK <= t.none
+      ? "subcooling:none"
+      : subcoolingK < t.low
+        ? "subcooling:low"
+        : subcoolingK <= t.high
+          ? "subcooling:normal"
+          : subcoolingK <= t.veryHigh
+            ? "subcooling:high"
+            : "subcooling:very_high";
+  out.observations.push({
+    id,
+    message: {
+      key: id,
+      values: {
+        subcooling: kelvin(subcoolingK),
+        liquid: tempC(liquidLineC),
+        condensing: tempC(condensingC),
+        typicalMin: kelvin(t.low),
+        typicalMax: kelvin(t.high),
+      },
+    },
+  });
 }
 
 function addSuperheat(
@@ -203,23 +210,24 @@ function addSuperheat(
   out.computed.superheatK = superheatK;
   out.observedGroups.add("superheat");
   const t = SUPERHEAT_K[input.expansionDevice];
-  const lead = `Superheat ${kelvin(superheatK)} (suction line ${degC(suctionLineC)} against ${degC(evaporatingC)} evaporating)`;
-  const device = input.expansionDevice === "txv" ? "an expansion-valve" : "an orifice-tube";
-  if (t.nearZero !== null && superheatK < t.nearZero)
-    out.observations.push({
-      id: "superheat:near_zero",
-      text: `${lead}: the evaporator is flooding, unusual for ${device} system.`,
-    });
-  else if (superheatK <= t.high)
-    out.observations.push({ id: "superheat:normal", text: `${lead} is normal for ${device} system.` });
-  else if (superheatK <= t.veryHigh)
-    out.observations.push({
-      id: "superheat:high",
-      text: `${lead} is high for ${device} system: the evaporator is starved.`,
-    });
-  else
-    out.observations.push({
-      id: "superheat:very_high",
-      text: `${lead} is very high for ${device} system: the evaporator is badly starved.`,
-    });
+  const id: ReadingObservationId =
+    t.nearZero !== null && superheatK < t.nearZero
+      ? "superheat:near_zero"
+      : superheatK <= t.high
+        ? "superheat:normal"
+        : superheatK <= t.veryHigh
+          ? "superheat:high"
+          : "superheat:very_high";
+  out.observations.push({
+    id,
+    message: {
+      key: id,
+      values: {
+        superheat: kelvin(superheatK),
+        suction: tempC(suctionLineC),
+        evaporating: tempC(evaporatingC),
+      },
+      words: { device: input.expansionDevice === "txv" ? "an expansion-valve" : "an orifice-tube" },
+    },
+  });
 }

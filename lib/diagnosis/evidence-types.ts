@@ -1,9 +1,10 @@
+import type { Message } from "./messages";
 import type { ObservationId, ReadingGroup } from "./observations";
 
 export interface Observation {
   id: ObservationId;
-  /** One short sentence with the numbers, in °C and kPa. */
-  text: string;
+  /** What was seen, with its numbers as quantities (formatMessage renders it). */
+  message: Message;
 }
 
 export interface SaturationBand {
@@ -37,7 +38,7 @@ export interface ComputedValues {
 export interface Extraction {
   observations: Observation[];
   /** Facts that moved no score but matter to the reader (a skipped check, a transcritical high side). */
-  notes: string[];
+  notes: Message[];
   computed: ComputedValues;
   /** Reading groups that were measured and usable. */
   observedGroups: Set<ReadingGroup>;

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { extractEvidence } from "./evidence";
+import { formatMessage } from "./messages";
 import type { DiagnosisInput } from "./schema";
 
 // Saturation values: R-134a from the Tillner-Roth & Baehr (1994) equation of state, J. Phys. Chem. Ref. Data 23, 657;
@@ -31,7 +32,7 @@ describe("static pressure against saturation at ambient", () => {
       staticKpaGauge: gauge(R134A_SAT_KPA_ABS[25]) + 160,
     });
     const observation = extraction.observations.find((o) => o.id === "static:very_high");
-    expect(observation?.text).toMatch(
+    expect(observation && formatMessage(observation.message)).toMatch(
       /^Static pressure 724 kPa gauge is 160 kPa above saturation at 25\.0 °C \(564 kPa gauge\)\.$/,
     );
   });
@@ -73,7 +74,8 @@ describe("running pressures, subcooling and superheat", () => {
       liquidLineC: 50,
     });
     expect(extraction.computed.subcoolingK).toBeCloseTo(10, 1);
-    expect(extraction.observations.find((o) => o.id.startsWith("subcooling:"))?.text).toMatch(
+    const subcooling = extraction.observations.find((o) => o.id.startsWith("subcooling:"));
+    expect(subcooling && formatMessage(subcooling.message)).toMatch(
       /^Subcooling 10\.0 K \(liquid line 50\.0 °C against 60\.0 °C condensing\)/,
     );
   });
@@ -109,7 +111,7 @@ describe("running pressures, subcooling and superheat", () => {
     });
     expect(extraction.computed.highSideTranscritical).toBe(true);
     expect(extraction.computed.subcoolingK).toBeUndefined();
-    expect(extraction.notes.join(" ")).toMatch(/transcritical/);
+    expect(extraction.notes.map((n) => formatMessage(n)).join(" ")).toMatch(/transcritical/);
     expect(extraction.confidenceFactor).toBeLessThan(1);
   });
 });
@@ -127,13 +129,14 @@ describe("identifier, charge and vent", () => {
     expect(failed.observations.some((o) => o.id.startsWith("static:") || o.id.startsWith("high_side:"))).toBe(
       false,
     );
-    expect(failed.notes.join(" ")).toMatch(/pure refrigerant/);
+    expect(failed.notes.map((n) => formatMessage(n)).join(" ")).toMatch(/pure refrigerant/);
   });
 
   it("states the charge deviation in grams and percent (25 % over for 850 g against 680 g)", () => {
     const extraction = extractEvidence({ ...r134aOrifice, labelChargeG: 680, recoveredChargeG: 850 });
     expect(extraction.computed.chargeDeltaPct).toBeCloseTo(25, 6);
-    expect(extraction.observations.find((o) => o.id === "charge:very_high")?.text).toBe(
+    const charge = extraction.observations.find((o) => o.id === "charge:very_high");
+    expect(charge && formatMessage(charge.message)).toBe(
       "Recovered 850 g against a label charge of 680 g: 170 g (25 %) over, a clear overcharge.",
     );
   });
@@ -150,7 +153,7 @@ describe("symptom sentences", () => {
     const texts = extractEvidence({
       ...r134aOrifice,
       symptoms: ["recent_service_elsewhere", "worse_at_idle", "leak_found"],
-    }).observations.map((o) => o.text);
+    }).observations.map((o) => formatMessage(o.message));
     expect(texts).toEqual(
       expect.arrayContaining([
         "Reported: A/C was serviced elsewhere recently.",

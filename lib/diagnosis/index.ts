@@ -8,3 +8,12 @@ export type { Caution, CautionId } from "./cautions";
 export type { ComputedValues } from "./evidence-types";
 export type { EvidenceItem } from "./scoring";
 export { CAUSE_PRIORS, LIKELIHOOD_TABLE, RANKING_GATES } from "./likelihood-table";
+export {
+  formatMessage,
+  type Message,
+  type MessageKey,
+  type ReaderUnits,
+  renderQuantity,
+  SI_UNITS,
+} from "./messages";
+export type { Quantity, QuantityKind } from "./quantities";

@@ -27,7 +27,8 @@ export interface RankingGate {
   when: readonly ObservationId[];
   leader: CauseId;
   marginLogOdds: number;
-  reason: string;
+  /** The sentence shown as the leader's first piece of evidence (message-templates.ts). */
+  message: "gate:mixed" | "gate:empty";
   source: string;
 }
 
@@ -849,8 +850,7 @@ export const RANKING_GATES: readonly RankingGate[] = [
     when: ["purity:fail", "symptom:identifier_flags_hydrocarbon"],
     leader: "contaminated_refrigerant",
     marginLogOdds: 0.5,
-    reason:
-      "The refrigerant failed identification: it must be dealt with before any other repair, and pressure–temperature checks are not valid on a mix.",
+    message: "gate:mixed",
     source:
       "SAE J2099 (≥98 % pure to recycle), SAE J2912 identifiers; identify before recovery (SAE J2843 equipment rules)",
   },
@@ -858,7 +858,7 @@ export const RANKING_GATES: readonly RankingGate[] = [
     when: ["static:empty", "charge:empty"],
     leader: "undercharge",
     marginLogOdds: 0.5,
-    reason: "The system is empty: find and repair the leak before running any test.",
+    message: "gate:empty",
     source:
       "common practice; EU: no refill after an abnormal leak until repaired (Directive 2006/40/EC Art. 7)",
   },

@@ -7,11 +7,12 @@ import {
   RANKING_GATES,
   type RankingGate,
 } from "./likelihood-table";
+import type { Message } from "./messages";
 import { groupOf, KEY_READING_GROUPS, type ObservationId, type ReadingGroup } from "./observations";
 
 export interface EvidenceItem {
   observation: ObservationId | "ranking_gate";
-  text: string;
+  message: Message;
   /** Natural-log likelihood ratio this item added to the suspect's log-odds. */
   weight: number;
 }
@@ -106,7 +107,7 @@ export function scoreCauses(
       const score = scores[i];
       if (weight === 0 || !score) continue;
       score.logOdds += weight;
-      score.items.push({ observation: observation.id, text: observation.text, weight });
+      score.items.push({ observation: observation.id, message: observation.message, weight });
     }
   }
   const present = new Set(observations.map((o) => o.id));
@@ -119,7 +120,7 @@ export function scoreCauses(
     const boost = bestOther + gate.marginLogOdds - leader.logOdds;
     if (boost > 0) {
       leader.logOdds += boost;
-      leader.items.unshift({ observation: "ranking_gate", text: gate.reason, weight: boost });
+      leader.items.unshift({ observation: "ranking_gate", message: { key: gate.message }, weight: boost });
     }
   }
   return scores;

@@ -1,0 +1,112 @@
+import type { ObservationId } from "./observations";
+import { SYMPTOM_IDS, SYMPTOM_LABELS, type SymptomId } from "./symptoms";
+
+/*
+ * Every sentence the engine can say. `{name}` is a quantity with its unit, `{name:n}` its number
+ * alone, `{@name}` a plain word, `[ … ]` a part said only when its values are present.
+ */
+
+const HIGH_LEAD = "High side {high} (condensing at {condensing})";
+const LOW_LEAD = "Low side {low} (evaporating at {evaporating})";
+const BAND =
+  "the expected {bandMinSat:n}–{bandMaxSat} saturation[ ({bandMin:n}–{bandMax})] for {ambient} ambient";
+const SUBCOOLING_LEAD = "Subcooling {subcooling} (liquid line {liquid} against {condensing} condensing)";
+const SUPERHEAT_LEAD = "Superheat {superheat} (suction line {suction} against {evaporating} evaporating)";
+const CHARGE_LEAD = "Recovered {recovered} against a label charge of {label}";
+const CHARGE_SHORT = `${CHARGE_LEAD}: {short} ({shortPct}) short`;
+const CHARGE_OVER = `${CHARGE_LEAD}: {over} ({overPct}) over`;
+const VENT_LEAD = "Centre vent {vent} at {ambient} ambient";
+
+const READING_TEMPLATES = {
+  "device:txv":
+    "Expansion-valve (TXV) system with receiver-drier: the valve, not a cycling switch, keeps the evaporator from flooding.",
+  "device:orifice_tube":
+    "Orifice-tube system with accumulator: a fixed orifice cannot stick open, and the cycling switch alone guards against icing.",
+  "purity:fail": "Identifier purity {purity} is below the {passMark} pass mark.",
+  "purity:pass": "Identifier purity {purity} passes ({passMark} or better).",
+  "air:none": "Identifier shows {air} air: no meaningful non-condensable gas.",
+  "air:some": "Identifier shows {air} air.",
+  "air:high": "Identifier shows {air} air, well above trace level.",
+  "charge:empty": `${CHARGE_SHORT}, the system is practically empty.`,
+  "charge:very_low": `${CHARGE_SHORT}.`,
+  "charge:low": `${CHARGE_SHORT} (recovery can leave some behind, so this is the least that is missing).`,
+  "charge:ok": `${CHARGE_LEAD}: within tolerance ({deltaPct}).`,
+  "charge:high": `${CHARGE_OVER}.`,
+  "charge:very_high": `${CHARGE_OVER}, a clear overcharge.`,
+  "vent:freezing": `${VENT_LEAD}: cold enough to freeze the evaporator.`,
+  "vent:cold": `${VENT_LEAD}: cooling well ({coldMax} or colder expected).`,
+  "vent:cool": `${VENT_LEAD}: cooling, but weaker than expected ({coldMax} or colder).`,
+  "vent:warm": `${VENT_LEAD}: poor cooling ({coldMax} or colder expected).`,
+  "high_side:very_low": `${HIGH_LEAD} is far below ${BAND}.`,
+  "high_side:low": `${HIGH_LEAD} is below ${BAND}.`,
+  "high_side:normal": `${HIGH_LEAD} is inside ${BAND}.`,
+  "high_side:high": `${HIGH_LEAD} is above ${BAND}.`,
+  "high_side:very_high": `${HIGH_LEAD} is far above ${BAND}.`,
+  "low_side:vacuum": "Low side {low} is at or below atmospheric pressure (vacuum) while running.",
+  "low_side:very_low": `${LOW_LEAD} is far below ${BAND}.`,
+  "low_side:low": `${LOW_LEAD} is below ${BAND}.`,
+  "low_side:normal": `${LOW_LEAD} is inside ${BAND}.`,
+  "low_side:high": `${LOW_LEAD} is above ${BAND}.`,
+  "lift:close":
+    "High and low side are close together: the compressor lifts only {lift} of saturation temperature (at least {minLift} expected for {ambient} ambient).",
+  "lift:normal": "The compressor lifts {lift} of saturation temperature, a normal spread between the sides.",
+  "subcooling:none": `${SUBCOOLING_LEAD}: no liquid leaves the condenser with a margin.`,
+  "subcooling:low": `${SUBCOOLING_LEAD} is below the typical {typicalMin:n}–{typicalMax}.`,
+  "subcooling:normal": `${SUBCOOLING_LEAD} is within the typical {typicalMin:n}–{typicalMax}.`,
+  "subcooling:high": `${SUBCOOLING_LEAD} is above the typical {typicalMin:n}–{typicalMax}: liquid is backing up in the condenser.`,
+  "subcooling:very_high": `${SUBCOOLING_LEAD} is far above the typical {typicalMin:n}–{typicalMax}: liquid is backing up in the condenser.`,
+  "superheat:near_zero": `${SUPERHEAT_LEAD}: the evaporator is flooding, unusual for {@device} system.`,
+  "superheat:normal": `${SUPERHEAT_LEAD} is normal for {@device} system.`,
+  "superheat:high": `${SUPERHEAT_LEAD} is high for {@device} system: the evaporator is starved.`,
+  "superheat:very_high": `${SUPERHEAT_LEAD} is very high for {@device} system: the evaporator is badly starved.`,
+  "static:empty": "Static pressure {static} at {ambient}: the system is empty or nearly so.",
+  "static:no_liquid":
+    "Static pressure {static} is {below} below saturation ({saturation}) at {ambient}: no liquid left, so the air check is not valid.",
+  "static:normal":
+    "Static pressure {static} matches saturation at {ambient} ({saturation}) within {tolerance}: no sign of air.",
+  "static:slightly_high":
+    "Static pressure {static} is {excess} above saturation at {ambient} ({saturation}).",
+  "static:high": "Static pressure {static} is {excess} above saturation at {ambient} ({saturation}).",
+  "static:very_high": "Static pressure {static} is {excess} above saturation at {ambient} ({saturation}).",
+} as const satisfies Partial<Record<ObservationId, string>>;
+
+const NOTE_TEMPLATES = {
+  "note:mixed_skips_pt":
+    "Pressure–temperature checks were skipped: the saturation tables hold only for pure refrigerant.",
+  "note:r744_limited":
+    "R-744 (CO2) systems are covered only as far as the saturation tables go; follow the vehicle maker's figures.",
+  "note:transcritical":
+    "High side {high} is above the critical pressure of {@refrigerant}: the gas cooler runs transcritical, so there is no condensing temperature or subcooling to judge.",
+  "note:high_outside_table":
+    "High side {high} is outside the saturation table for {@refrigerant}; it was not graded.",
+  "note:low_outside_table":
+    "Low side {low} is outside the saturation table for {@refrigerant}; it was not graded.",
+  "note:static_outside_table":
+    "Static pressure check not possible: {ambient} is outside the {@refrigerant} saturation table.",
+  "note:static_outside_table_co2":
+    "Static pressure check not possible: {ambient} is outside the R-744 saturation table (CO2 has no liquid above about {critical}).",
+  "gate:mixed":
+    "The refrigerant failed identification: it must be dealt with before any other repair, and pressure–temperature checks are not valid on a mix.",
+  "gate:empty": "The system is empty: find and repair the leak before running any test.",
+} as const;
+
+function symptomTemplate(symptom: SymptomId): string {
+  const label = SYMPTOM_LABELS[symptom];
+  if (label.startsWith("Checked: ")) return `${label}.`;
+  // Lower-case the first word unless it is an abbreviation ("A/C").
+  const first = /^[A-Z][a-z]/.test(label) ? label.charAt(0).toLowerCase() : label.charAt(0);
+  return `Reported: ${first}${label.slice(1)}.`;
+}
+
+const SYMPTOM_TEMPLATES = Object.fromEntries(
+  SYMPTOM_IDS.map((id) => [`symptom:${id}`, symptomTemplate(id)]),
+) as Record<`symptom:${SymptomId}`, string>;
+
+export type MessageKey =
+  keyof typeof READING_TEMPLATES | keyof typeof NOTE_TEMPLATES | keyof typeof SYMPTOM_TEMPLATES;
+
+export const MESSAGE_TEMPLATES: Readonly<Record<MessageKey, string>> = {
+  ...READING_TEMPLATES,
+  ...NOTE_TEMPLATES,
+  ...SYMPTOM_TEMPLATES,
+};
