@@ -1,11 +1,12 @@
-import { chargeDeviation } from "@/lib/refrigerants";
+import { chargeDeviationVerdict, type ChargeDeviationGrade } from "@/lib/service/charge";
 import { standardBarometricKpa } from "@/lib/units/barometric";
 import { addRunningEvidence } from "./evidence-running";
 import { addStaticEvidence } from "./evidence-static";
 import type { Extraction } from "./evidence-types";
 import type { DiagnosisInput } from "./schema";
 import { grams, percent, tempC } from "./quantities";
-import { AIR_PCT, CHARGE_PCT, PURITY_PASS_PCT, VENT_C } from "./grading";
+import { AIR_PCT, PURITY_PASS_PCT, VENT_C } from "./grading";
+import type { ReadingObservationId } from "./observations";
 
 /** Turn readings into graded observations, each with a message carrying its numbers as quantities. */
 export function extractEvidence(input: DiagnosisInput): Extraction {
@@ -65,11 +66,23 @@ function addIdentifierEvidence(input: DiagnosisInput, out: Extraction): boolean 
   return failed;
 }
 
+const CHARGE_OBSERVATION: Record<ChargeDeviationGrade, ReadingObservationId> = {
+  empty: "charge:empty",
+  very_short: "charge:very_low",
+  short: "charge:low",
+  possible_slow_leak: "charge:slightly_low",
+  within: "charge:ok",
+  over: "charge:high",
+  well_over: "charge:very_high",
+};
+
 function addChargeEvidence(input: DiagnosisInput, out: Extraction): void {
   if (input.labelChargeG === undefined || input.recoveredChargeG === undefined) return;
-  const { deltaG, deltaPct } = chargeDeviation({
+  // The service record's verdict: one rule for both.
+  const { deltaG, deltaPct, grade } = chargeDeviationVerdict({
     labelChargeG: input.labelChargeG,
     recoveredChargeG: input.recoveredChargeG,
+    refrigerant: input.refrigerant,
   });
   out.computed.chargeDeltaG = deltaG;
   out.computed.chargeDeltaPct = deltaPct;
@@ -83,18 +96,7 @@ function addChargeEvidence(input: DiagnosisInput, out: Extraction): void {
     overPct: percent(Math.round(deltaPct), 0),
     deltaPct: percent(Math.round(deltaPct), 0),
   };
-  const id =
-    deltaPct < CHARGE_PCT.empty
-      ? "charge:empty"
-      : deltaPct < CHARGE_PCT.veryLow
-        ? "charge:very_low"
-        : deltaPct < CHARGE_PCT.low
-          ? "charge:low"
-          : deltaPct <= CHARGE_PCT.high
-            ? "charge:ok"
-            : deltaPct <= CHARGE_PCT.veryHigh
-              ? "charge:high"
-              : "charge:very_high";
+  const id = CHARGE_OBSERVATION[grade];
   out.observations.push({ id, message: { key: id, values } });
 }
 

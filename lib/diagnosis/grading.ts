@@ -1,3 +1,6 @@
+import { REFRIGERANT_IDS } from "@/lib/refrigerants";
+import { CHARGE_DEVIATION_LIMITS, chargeTolerance } from "@/lib/service/charge";
+
 /**
  * Where each reading's grades begin. Part of the model: these are hashed into ENGINE_VERSION together
  * with the likelihood table, so moving a threshold changes the version stored with each case.
@@ -39,8 +42,12 @@ export const STATIC_EXCESS_KPA = { slight: 35, high: 70, veryHigh: 140 } as cons
 export const PURITY_PASS_PCT = 98;
 // Identifier air (NCG) grading, weight % (from memory).
 export const AIR_PCT = { some: 1, high: 3 } as const;
-// Charge deviation grading, % of label (common practice; recovery can leave some behind, SAE J2762).
-export const CHARGE_PCT = { empty: -85, veryLow: -35, low: -12, high: 8, veryHigh: 18 } as const;
+// Charge deviation: the service record's own table (lib/service/charge.ts), so both say the same about one
+// weighing; the machine's charge accuracy per refrigerant is part of it.
+export const CHARGE = {
+  limits: CHARGE_DEVIATION_LIMITS,
+  accuracyG: Object.fromEntries(REFRIGERANT_IDS.map((id) => [id, chargeTolerance(id).toleranceG])),
+} as const;
 // Centre-vent grading, °C (3–8 °C expected: common practice); allowed to rise 0.3 K per K above 32 °C ambient (from memory).
 export const VENT_C = { freezing: 2, cold: 8, warm: 15, hotAmbientC: 32, riseKPerK: 0.3 } as const;
 
@@ -57,6 +64,6 @@ export const GRADING = {
   STATIC_EXCESS_KPA,
   PURITY_PASS_PCT,
   AIR_PCT,
-  CHARGE_PCT,
+  CHARGE,
   VENT_C,
 } as const;

@@ -42,7 +42,7 @@ const SC_SH =
 const STATIC_NCG =
   "Static P–T check: Dalton's law of partial pressures (a thermodynamics textbook); container non-condensable check in TM 5-3810-307-24-1-2 ch. 9; in-vehicle use common practice; weights common practice";
 const CHARGE =
-  "Charge by weight is the only absolute charge check: TM 5-3805-291-23-1; recovery may leave 18–30 % behind: SAE J2762; weights common practice";
+  "Charge by weight is the only absolute charge check: TM 5-3805-291-23-1; grades shared with the service record (lib/service/charge.ts); recovery may leave 18–30 % behind: SAE J2762; weights common practice";
 const IDENTIFIER =
   "Identifier pass mark 98 %: SAE J2099 / J2912; NCG shown as weight %: SAE J2912; air-% grading from memory";
 const VENT = "Centre-vent 3–8 °C expected (common practice); warm threshold from memory";
@@ -497,6 +497,17 @@ export const LIKELIHOOD_TABLE: readonly LikelihoodRow[] = [
       weak_compressor: -0.3,
       metering_restriction: -0.3,
       no_refrigerant_fault: -0.8,
+    },
+  },
+  {
+    observation: "charge:slightly_low",
+    source:
+      CHARGE + "; 5–12 % short is a possible slow leak to test for, not a certain one (common practice)",
+    weights: {
+      undercharge: 0.5,
+      oil_loss: 0.1,
+      overcharge: -2.0,
+      no_refrigerant_fault: -0.3,
     },
   },
   {

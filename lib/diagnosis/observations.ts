@@ -11,7 +11,7 @@ export const READING_GRADES = {
   subcooling: ["none", "low", "normal", "high", "very_high"],
   superheat: ["near_zero", "normal", "high", "very_high"],
   static: ["empty", "no_liquid", "normal", "slightly_high", "high", "very_high"],
-  charge: ["empty", "very_low", "low", "ok", "high", "very_high"],
+  charge: ["empty", "very_low", "low", "slightly_low", "ok", "high", "very_high"],
   purity: ["fail", "pass"],
   air: ["none", "some", "high"],
   vent: ["freezing", "cold", "cool", "warm"],

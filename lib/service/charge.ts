@@ -23,13 +23,90 @@ export function chargeTolerance(refrigerant: RefrigerantId): ChargeTolerance {
   }
 }
 
+/**
+ * How far a recovered mass may sit from the label before it means something. One table for the
+ * findings engine and the service record, so both say the same about the same weighing.
+ */
+export const CHARGE_DEVIATION_LIMITS = {
+  /** SAE J2788 (and J2843, from memory): recovery equipment need take out only 95 %; a shortfall this size is what recovery leaves. */
+  recoveryShortfallPct: 5,
+  /** Short by more than recovery leaves but no more than this: a possible slow leak to test for (common practice). */
+  possibleSlowLeakPct: 12,
+  /** Short by more than this: a large loss (from memory). */
+  veryShortPct: 35,
+  /** Short by more than this: next to nothing came out (from memory). */
+  emptyPct: 85,
+  /** On top of the machine's charge accuracy before an excess is an overcharge: scale and hose losses (from memory). */
+  overMarginPct: 3,
+  /** An excess beyond this share of the label is a clear overcharge, as after a top-off (common practice). */
+  wellOverPct: 15,
+} as const;
+
 /** Recovery machines leave some refrigerant behind: SAE J2788 (and J2843, from memory) only require 95 % out. */
-export const DEFAULT_RECOVERY_SHORTFALL_PCT = 5;
+export const DEFAULT_RECOVERY_SHORTFALL_PCT = CHARGE_DEVIATION_LIMITS.recoveryShortfallPct;
+
+export type ChargeDeviationGrade =
+  "empty" | "very_short" | "short" | "possible_slow_leak" | "within" | "over" | "well_over";
+
+export interface ChargeDeviation {
+  /** recovered − label; negative means refrigerant is missing */
+  deltaG: number;
+  deltaPct: number;
+  grade: ChargeDeviationGrade;
+  /** an excess above this is an overcharge: the machine's accuracy plus the margin */
+  overAboveG: number;
+  /** a shortfall up to this is what recovery leaves behind */
+  allowedShortfallG: number;
+}
+
+/**
+ * The one verdict on a recovered mass against the label. An excess counts as an overcharge only beyond
+ * the machine's charge accuracy plus a margin; a shortfall within the recovery allowance is nothing, up
+ * to 12 % a possible slow leak to test for, beyond that a real shortage.
+ */
+export function chargeDeviationVerdict(input: {
+  labelChargeG: number;
+  recoveredChargeG: number;
+  refrigerant?: RefrigerantId;
+  shortfallAllowancePct?: number;
+}): ChargeDeviation {
+  const { labelChargeG, recoveredChargeG } = input;
+  assertMass("labelChargeG", labelChargeG, false);
+  assertMass("recoveredChargeG", recoveredChargeG, true);
+  const allowancePct = input.shortfallAllowancePct ?? CHARGE_DEVIATION_LIMITS.recoveryShortfallPct;
+  if (!Number.isFinite(allowancePct) || allowancePct < 0 || allowancePct >= 100) {
+    throw new RangeError(`shortfallAllowancePct must be between 0 and 100, got ${allowancePct}`);
+  }
+  const limits = CHARGE_DEVIATION_LIMITS;
+  const deltaG = recoveredChargeG - labelChargeG;
+  const deltaPct = (deltaG / labelChargeG) * 100;
+  const overAboveG =
+    chargeTolerance(input.refrigerant ?? "R-134a").toleranceG + (labelChargeG * limits.overMarginPct) / 100;
+  const allowedShortfallG = (labelChargeG * allowancePct) / 100;
+  const shortPct = -deltaPct;
+  const grade: ChargeDeviationGrade =
+    deltaG > overAboveG
+      ? deltaPct > limits.wellOverPct
+        ? "well_over"
+        : "over"
+      : -deltaG <= allowedShortfallG
+        ? "within"
+        : shortPct <= Math.max(limits.possibleSlowLeakPct, allowancePct)
+          ? "possible_slow_leak"
+          : shortPct <= limits.veryShortPct
+            ? "short"
+            : shortPct <= limits.emptyPct
+              ? "very_short"
+              : "empty";
+  return { deltaG, deltaPct, grade, overAboveG, allowedShortfallG };
+}
 
 export interface RecoveredAgainstLabel {
   deltaG: number;
   deltaPct: number;
   verdict: ChargeVerdict;
+  /** the shared verdict's finer grade (chargeDeviationVerdict) */
+  grade: ChargeDeviationGrade;
   /** the band inside which the recovered mass is not evidence of anything */
   allowedShortfallG: number;
   allowedExcessG: number;
@@ -51,40 +128,30 @@ function assertMass(name: string, valueG: number, allowZero: boolean): void {
   }
 }
 
-/**
- * Compare what came out of the system with the label charge. A shortfall up to the
- * recovery allowance is what any compliant machine leaves behind; an excess beyond the
- * charge accuracy means more went in than the label asks for.
- */
+/** The service record's sentence for the shared verdict on what came out of the system. */
 export function recoveredAgainstLabel(input: {
   labelChargeG: number;
   recoveredChargeG: number;
   refrigerant?: RefrigerantId;
   shortfallAllowancePct?: number;
 }): RecoveredAgainstLabel {
-  const { labelChargeG, recoveredChargeG } = input;
-  assertMass("labelChargeG", labelChargeG, false);
-  assertMass("recoveredChargeG", recoveredChargeG, true);
-  const shortfallPct = input.shortfallAllowancePct ?? DEFAULT_RECOVERY_SHORTFALL_PCT;
-  if (!Number.isFinite(shortfallPct) || shortfallPct < 0 || shortfallPct >= 100) {
-    throw new RangeError(`shortfallAllowancePct must be between 0 and 100, got ${shortfallPct}`);
-  }
+  const deviation = chargeDeviationVerdict(input);
+  const { deltaG, deltaPct, grade, overAboveG, allowedShortfallG } = deviation;
+  const shortfallPct = input.shortfallAllowancePct ?? CHARGE_DEVIATION_LIMITS.recoveryShortfallPct;
   const tolerance = chargeTolerance(input.refrigerant ?? "R-134a");
-  const deltaG = recoveredChargeG - labelChargeG;
-  const deltaPct = (deltaG / labelChargeG) * 100;
-  const allowedShortfallG = (labelChargeG * shortfallPct) / 100;
-  const allowedExcessG = tolerance.toleranceG;
   const verdict: ChargeVerdict =
-    deltaG > allowedExcessG ? "over" : deltaG < -allowedShortfallG ? "under" : "within";
+    grade === "over" || grade === "well_over" ? "over" : grade === "within" ? "within" : "under";
 
-  const label = formatGrams(labelChargeG);
-  const head = `Recovered ${formatGrams(recoveredChargeG)} against ${indefiniteArticle(label)} ${label} label`;
+  const label = formatGrams(input.labelChargeG);
+  const head = `Recovered ${formatGrams(input.recoveredChargeG)} against ${indefiniteArticle(label)} ${label} label`;
   const size = `${formatGrams(deltaG)} (${formatPercent(deltaPct)})`;
   let sentence: string;
   if (verdict === "over") {
-    sentence = `${head}: ${size} over — an overcharge.`;
+    sentence = `${head}: ${size} over — more than the machine's accuracy and recovery can explain: an overcharge.`;
+  } else if (grade === "possible_slow_leak") {
+    sentence = `${head}: ${size} under — more than recovery leaves behind (up to ${formatPercent(shortfallPct)}) but not by much: possibly a slow leak, so leak-test before recharging.`;
   } else if (verdict === "under") {
-    sentence = `${head}: ${size} under — more than recovery leaves behind (up to ${formatPercent(shortfallPct)}), so the system was short of refrigerant: look for a leak.`;
+    sentence = `${head}: ${size} under — more than recovery leaves behind (up to ${formatPercent(shortfallPct)}), so the system was short of refrigerant: find the leak before recharging.`;
   } else if (deltaG === 0) {
     sentence = `${head}: exactly the label charge.`;
   } else {
@@ -95,10 +162,16 @@ export function recoveredAgainstLabel(input: {
     deltaG,
     deltaPct,
     verdict,
+    grade,
     allowedShortfallG,
-    allowedExcessG,
+    allowedExcessG: overAboveG,
     sentence,
-    sources: [SERVICE_SOURCES.j2788Recovery, SERVICE_SOURCES.j2843Recovery, tolerance.source],
+    sources: [
+      SERVICE_SOURCES.j2788Recovery,
+      SERVICE_SOURCES.j2843Recovery,
+      tolerance.source,
+      "possible slow leak up to 12 % short: common practice; 3 % margin on top of the machine's accuracy: from memory",
+    ],
   };
 }
 

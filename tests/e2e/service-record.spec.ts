@@ -37,7 +37,9 @@ test("a technician completes a service record on the phone and the ledger shows 
   await expect(page.getByText("Could not read “lots” as a mass.", { exact: false })).toBeVisible();
   await record.fill({ "Recovered mass": "1 lb 2 oz", "Oil drained into the machine's bottle": "10 mL" });
   await record.chooseCylinder("Recovered into cylinder", "HL-REC-YF");
-  await expect(record.result("recovered-vs-label")).toContainText("30 g (6.3 %) over — an overcharge");
+  await expect(record.result("recovered-vs-label")).toContainText(
+    "30 g (6.3 %) over — more than the machine's accuracy and recovery can explain: an overcharge",
+  );
   await expect(page.getByText(/R-1234yf is mildly flammable/)).toBeVisible();
   await record.saveAndExpect("recovery");
   await expect(page.getByRole("status")).toContainText("1 ledger entry posted");
