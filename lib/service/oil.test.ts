@@ -57,10 +57,16 @@ describe("oilToAddBack", () => {
     expect(done.totalMl).toBe(82);
   });
 
-  it("uses the pulled-oil estimate when it is larger than the bottle reading, and says so", () => {
-    const r = oilToAddBack({ drainedDuringRecoveryMl: 8, estimatedPulledMl: 30 });
-    expect(r.totalMl).toBe(30);
-    expect(r.warnings).toHaveLength(1);
+  it("adds back the measured amount, never the estimate; warns only when the bottle holds far less than the estimate (TM 5-3810-307-24-1-2 ch. 9: add back what was drained)", () => {
+    const far = oilToAddBack({ drainedDuringRecoveryMl: 8, estimatedPulledMl: 30 });
+    expect(far.totalMl).toBe(8);
+    expect(far.warnings).toHaveLength(1);
+    expect(far.warnings[0]).toContain("oil separator");
+    const near = oilToAddBack({ drainedDuringRecoveryMl: 20, estimatedPulledMl: 30 });
+    expect(near.totalMl).toBe(20);
+    expect(near.warnings).toHaveLength(0);
+    expect(oilToAddBack({ drainedDuringRecoveryMl: 15, estimatedPulledMl: 30 }).warnings).toHaveLength(0);
+    expect(oilToAddBack({ drainedDuringRecoveryMl: 14.9, estimatedPulledMl: 30 }).warnings).toHaveLength(1);
     expect(oilToAddBack({ drainedDuringRecoveryMl: 40, estimatedPulledMl: 30 }).totalMl).toBe(40);
   });
 

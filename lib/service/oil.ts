@@ -76,10 +76,14 @@ function assertVolume(name: string, volumeMl: number): void {
     throw new RangeError(`${name} must be a non-negative volume in mL, got ${volumeMl}`);
 }
 
+/** A bottle reading under this share of the 4 % estimate is "far less" and earns a warning (from memory). */
+export const FAR_LESS_THAN_ESTIMATE_FRACTION = 0.5;
+
 /**
- * Oil to put back: what the recovery machine drained plus what each replaced part carried.
- * When the technician saw oil pulled out with liquid, the estimate from the liquid mass
- * stands in for the bottle reading if it is larger, so the compressor is not left short.
+ * Oil to put back: what the recovery machine drained (measured) plus what each replaced part carried.
+ * The 4 % estimate from the liquid mass never replaces the measurement (TM 5-3810-307-24-1-2 ch. 9:
+ * add back what was drained); when the bottle holds far less than the estimate, it says so, since the
+ * machine's separator may have kept some or the compressor may be left short.
  */
 export function oilToAddBack(input: {
   drainedDuringRecoveryMl: number;
@@ -92,21 +96,18 @@ export function oilToAddBack(input: {
   const allowances = { ...DEFAULT_PART_OIL_ALLOWANCES_ML, ...input.allowancesMl };
   const warnings: string[] = [];
   const lines: OilLine[] = [];
-  let recoveryMl = input.drainedDuringRecoveryMl;
-  let recoverySource: string = SERVICE_SOURCES.oilAddBack;
+  const recoveryMl = input.drainedDuringRecoveryMl;
   if (input.estimatedPulledMl !== undefined) {
     assertVolume("estimatedPulledMl", input.estimatedPulledMl);
-    if (input.estimatedPulledMl > input.drainedDuringRecoveryMl) {
-      recoveryMl = input.estimatedPulledMl;
-      recoverySource = SERVICE_SOURCES.oilCirculation;
+    if (input.drainedDuringRecoveryMl < input.estimatedPulledMl * FAR_LESS_THAN_ESTIMATE_FRACTION) {
       warnings.push(
-        `Oil was pulled out with liquid: the estimate (${formatMillilitres(input.estimatedPulledMl)}) is more than the ${formatMillilitres(
-          input.drainedDuringRecoveryMl,
-        )} measured in the recovery machine's bottle, so the record uses the estimate. Check the machine's oil separator.`,
+        `Only ${formatMillilitres(input.drainedDuringRecoveryMl)} drained into the recovery machine's bottle, far less than the ${formatMillilitres(
+          input.estimatedPulledMl,
+        )} the liquid would have carried out: check the machine's oil separator and drain it, then add back what you measure. The record asks for the measured amount.`,
       );
     }
   }
-  lines.push({ label: "Drained during recovery", volumeMl: recoveryMl, source: recoverySource });
+  lines.push({ label: "Drained during recovery", volumeMl: recoveryMl, source: SERVICE_SOURCES.oilAddBack });
 
   let complete = true;
   for (const { part, count = 1, measuredMl } of input.replacedParts ?? []) {

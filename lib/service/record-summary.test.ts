@@ -28,7 +28,7 @@ describe("summariseServiceRecord", () => {
     expect(s.addBack?.totalMl).toBe(20 + 25);
   });
 
-  it("uses the pulled-oil estimate when oil left with liquid (common practice: about 4 % oil in circulating refrigerant)", () => {
+  it("estimates the oil pulled out with liquid (common practice: about 4 % oil in circulating refrigerant) but asks for the measured amount", () => {
     const recoveredChargeG = 1500;
     const s = summariseServiceRecord({
       refrigerant: "R-134a",
@@ -39,7 +39,8 @@ describe("summariseServiceRecord", () => {
     const expectedMl = (recoveredChargeG * 0.04) / 0.99; // PAG about 0.99 g/mL, from memory
     expect(s.pulledOil?.oilMl).toBeCloseTo(expectedMl, 6);
     expect(s.pulledOil?.sumpComparison).toBe("about_a_sump"); // 60–90 mL sump, common practice
-    expect(s.addBack?.totalMl).toBeCloseTo(expectedMl, 6);
+    expect(s.addBack?.totalMl).toBe(20);
+    expect(s.addBack?.warnings.join(" ")).toContain("far less");
     expect(
       summariseServiceRecord({ refrigerant: "R-134a", recoveredChargeG, oilPulled: false, oilRemovedMl: 20 })
         .pulledOil,

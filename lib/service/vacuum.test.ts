@@ -11,33 +11,36 @@ import {
 } from "./vacuum";
 import { waterSaturationKpaAbs } from "./water-boiling";
 
-const FT_TO_M = 0.3048; // NIST SP 811 App. B: 1 ft = 0.3048 m exactly
-
 describe("evacuationTarget", () => {
-  it("is 28 inHg of vacuum at sea level, i.e. about 6.5 kPa absolute (TM 5-3805-296-23-4 WP 0248; NIST SP 811 inHg)", () => {
+  it("is below water's saturation pressure at the shop's temperature, 2.339 kPa absolute at the default 20 °C (ASHRAE Handbook—Fundamentals ch. 1 table 3)", () => {
     const t = evacuationTarget({ altitudeM: 0 });
-    expect(t.minimumVacuumInHg).toBeCloseTo(28, 6);
-    expect(t.preferredVacuumInHg).toBeCloseTo(29, 6);
-    expect(t.maxKpaAbs).toBeCloseTo(101.325 - 28 * 3.386389, 6);
+    expect(t.shopC).toBe(20);
+    expect(t.maxKpaAbs).toBeCloseTo(2.339, 2);
+    // 2.339 kPa absolute at sea level is 29.23 inHg of vacuum (NIST SP 811: 1 inHg = 3.386389 kPa).
+    expect(t.minimumVacuumInHg).toBeCloseTo((101.325 - t.maxKpaAbs) / 3.386389, 6);
   });
 
-  it.each([
-    [1000, 27],
-    [2000, 26],
-    [3000, 25],
-    [5000, 23],
-  ])(
-    "at %i ft it is about 1 inHg less per 1000 ft (TM 5-3805-296-23-4 WP 0248), within 0.25 inHg",
-    (feet, manualInHg) => {
-      expect(
-        Math.abs(evacuationTarget({ altitudeM: feet * FT_TO_M }).minimumVacuumInHg - manualInHg),
-      ).toBeLessThan(0.25);
-    },
-  );
+  it("says 28 inHg at sea level is not enough: about 6.5 kPa absolute, where water boils only at about 37 °C (ASHRAE ch. 1 table 3)", () => {
+    const kpaAt28InHg = 101.325 - 28 * 3.386389;
+    expect(kpaAt28InHg).toBeGreaterThan(evacuationTarget({ altitudeM: 0 }).maxKpaAbs);
+    expect(evaluateEvacuation({ deepestKpaAbs: kpaAt28InHg, altitudeM: 0 }).reached).toBe(false);
+  });
 
-  it("at 1500 m uses the standard atmosphere of 84.556 kPa (ASHRAE Handbook—Fundamentals ch. 1 table 1)", () => {
+  it("follows the shop's temperature: a warmer shop boils water at a higher pressure", () => {
+    expect(evacuationTarget({ shopC: 30 }).maxKpaAbs).toBeCloseTo(4.247, 2);
+    expect(evacuationTarget({ shopC: 10 }).maxKpaAbs).toBeLessThan(evacuationTarget({}).maxKpaAbs);
+  });
+
+  it("asks for 500 microns (0.0667 kPa absolute) when the shop has a micron gauge (common practice; NIST SP 811 mmHg)", () => {
+    const t = evacuationTarget({ micronGauge: true });
+    expect(t.maxKpaAbs).toBeCloseTo(0.0667, 4);
+    expect(t.preferredKpaAbs).toBeCloseTo(0.0667, 4);
+  });
+
+  it("is the same absolute pressure at any altitude; only the gauge reading moves (ASHRAE Fundamentals ch. 1 standard atmosphere: 84.556 kPa at 1500 m)", () => {
     const t = evacuationTarget({ altitudeM: 1500 });
     expect(t.barometricKpa).toBeCloseTo(84.556, 2);
+    expect(t.maxKpaAbs).toBeCloseTo(evacuationTarget({ altitudeM: 0 }).maxKpaAbs, 9);
     expect(t.minimumVacuumInHg).toBeCloseTo((84.556 - t.maxKpaAbs) / 3.386389, 2);
   });
 
@@ -86,20 +89,29 @@ describe("waterSaturationKpaAbs", () => {
 });
 
 describe("evaluateEvacuation", () => {
-  it("passes a vacuum deeper than the target and fails a shallow one", () => {
-    expect(evaluateEvacuation({ deepestKpaAbs: 3, altitudeM: 0 }).reached).toBe(true);
+  it("reaches the target only below water's saturation pressure (2.339 kPa at 20 °C, ASHRAE ch. 1 table 3)", () => {
+    expect(evaluateEvacuation({ deepestKpaAbs: 2.3, altitudeM: 0 }).reached).toBe(true);
+    expect(evaluateEvacuation({ deepestKpaAbs: 2.4, altitudeM: 0 }).reached).toBe(false);
     const shallow = evaluateEvacuation({ deepestKpaAbs: 10, altitudeM: 0 });
     expect(shallow.reached).toBe(false);
     expect(shallow.messages[0]).toContain("Keep evacuating");
+    expect(shallow.messages[0]).toContain("water boils below 2.34 kPa absolute");
   });
 
-  it("warns that moisture will not boil at 21 °C with 3 kPa absolute (water boils below ≈2.49 kPa, ASHRAE ch. 1)", () => {
+  it("judges by the shop's temperature when it is entered: 3 kPa is not enough at 21 °C (water boils below ≈2.49 kPa, ASHRAE ch. 1)", () => {
     const r = evaluateEvacuation({ deepestKpaAbs: 3, altitudeM: 0, ambientC: 21 });
-    expect(r.reached).toBe(true);
+    expect(r.reached).toBe(false);
     expect(r.waterBoils).toBe(false);
     expect(r.waterBoilsBelowKpaAbs).toBeCloseTo(2.487, 2);
-    expect(r.messages[1]).toContain("moisture will not leave");
-    expect(evaluateEvacuation({ deepestKpaAbs: 1.5, altitudeM: 0, ambientC: 21 }).waterBoils).toBe(true);
+    expect(evaluateEvacuation({ deepestKpaAbs: 1.5, altitudeM: 0, ambientC: 21 }).reached).toBe(true);
+  });
+
+  it("with a micron gauge asks for 500 microns even when water already boils", () => {
+    const r = evaluateEvacuation({ deepestKpaAbs: 1, micronGauge: true });
+    expect(r.waterBoils).toBe(true);
+    expect(r.reached).toBe(false);
+    expect(r.messages[0]).toContain("500 microns");
+    expect(evaluateEvacuation({ deepestKpaAbs: 0.05, micronGauge: true }).reached).toBe(true);
   });
 });
 
@@ -113,6 +125,8 @@ describe("vacuumHoldTest", () => {
     const start = 4;
     const pass = vacuumHoldTest({ startKpaAbs: start, endKpaAbs: start + 1.5 * 3.386389, minutes: 5 });
     expect(pass.verdict).toBe("pass");
+    expect(pass.message).toContain("no gross leak");
+    expect(pass.message).not.toContain("holds");
     const fail = vacuumHoldTest({ startKpaAbs: start, endKpaAbs: start + 2.5 * 3.386389, minutes: 5 });
     expect(fail.verdict).toBe("fail");
     expect(fail.message).toContain("a leak or moisture");

@@ -9,41 +9,54 @@ import { formatNumber } from "./format";
 import { SERVICE_SOURCES } from "./sources";
 import { waterSaturationKpaAbs } from "./water-boiling";
 
-const SEA_LEVEL_KPA = 101.325;
-/** US Army TM 5-3805-296-23-4 WP 0248: 28–29 inHg vacuum at sea level. */
-export const SEA_LEVEL_TARGET_VACUUM_INHG = { minimum: 28, preferred: 29 } as const;
+/** The shop's temperature when none is entered: a heated workshop (common practice). */
+export const DEFAULT_SHOP_C = 20;
+/** The deeper target a micron gauge can prove: 500 microns of mercury (stationary-HVAC practice, common practice). */
+export const MICRON_GAUGE_TARGET_MICRONS = 500;
+// 1 micron of mercury = 1/1000 mmHg = 0.000133322 kPa (NIST SP 811 App. B: 1 mmHg = 133.3224 Pa).
+const KPA_PER_MICRON = 0.0001333224;
 
 /** altitude and/or the shop's barometer reading; a measured barometer wins */
 export type Altitude = BarometricSource;
 
 export interface EvacuationTarget {
   barometricKpa: number;
-  /** the evacuation has reached its target at or below this absolute pressure */
+  /** the evacuation has reached its target only below this absolute pressure */
   maxKpaAbs: number;
+  /** the deeper target a micron gauge can show */
   preferredKpaAbs: number;
   /** what a vacuum gauge reads at that target here (inHg below the local atmosphere) */
   minimumVacuumInHg: number;
   preferredVacuumInHg: number;
+  /** the temperature the water-boiling target is for */
+  shopC: number;
   sources: string[];
 }
 
 /**
- * The sea-level target is an absolute pressure in disguise: 28 inHg below 29.92 inHg.
- * Keeping that absolute pressure at altitude reproduces the manual's allowance of roughly one
- * inch of mercury for every 1000 ft of altitude from the standard atmosphere, not a fixed rule.
+ * Evacuation exists to boil moisture out, so the target is an absolute pressure: below water's
+ * saturation pressure at the shop's temperature (2.34 kPa at 20 °C), not a fixed gauge reading — 28 inHg
+ * at sea level is about 6.5 kPa absolute, where water does not boil until 37 °C. With a micron gauge the
+ * target is the deeper 500 microns.
  */
-export function evacuationTarget(at: Altitude = {}): EvacuationTarget {
+export function evacuationTarget(
+  at: Altitude & { shopC?: number; micronGauge?: boolean } = {},
+): EvacuationTarget {
   const localKpa = barometricKpa(at);
-  const maxKpaAbs = SEA_LEVEL_KPA - pressureToKpa(SEA_LEVEL_TARGET_VACUUM_INHG.minimum, "inHg");
-  const preferredKpaAbs = SEA_LEVEL_KPA - pressureToKpa(SEA_LEVEL_TARGET_VACUUM_INHG.preferred, "inHg");
+  const shopC = at.shopC ?? DEFAULT_SHOP_C;
+  const waterBoilsBelowKpaAbs = waterSaturationKpaAbs(shopC);
+  const preferredKpaAbs = MICRON_GAUGE_TARGET_MICRONS * KPA_PER_MICRON;
+  const maxKpaAbs = at.micronGauge ? preferredKpaAbs : waterBoilsBelowKpaAbs;
   return {
     barometricKpa: localKpa,
     maxKpaAbs,
     preferredKpaAbs,
     minimumVacuumInHg: pressureFromKpa(localKpa - maxKpaAbs, "inHg"),
     preferredVacuumInHg: pressureFromKpa(localKpa - preferredKpaAbs, "inHg"),
+    shopC,
     sources: [
-      SERVICE_SOURCES.vacuumTarget,
+      SERVICE_SOURCES.waterBoiling,
+      "target below water's saturation pressure at the shop's temperature, 20 °C when none is entered (common practice); 500 microns with a micron gauge (common practice)",
       SERVICE_SOURCES.standardAtmosphere,
       SERVICE_SOURCES.inchOfMercury,
     ],
@@ -52,43 +65,41 @@ export function evacuationTarget(at: Altitude = {}): EvacuationTarget {
 
 export interface EvacuationCheck {
   reached: boolean;
-  /** null when no ambient temperature was given */
-  waterBoils: boolean | null;
-  waterBoilsBelowKpaAbs: number | null;
+  waterBoils: boolean;
+  waterBoilsBelowKpaAbs: number;
   messages: string[];
   sources: string[];
 }
 
-/** Deepest vacuum reached against the target, and whether moisture can boil off at it. */
+/** Deepest vacuum reached against the target: reached only where moisture can boil off. */
 export function evaluateEvacuation(
-  input: { deepestKpaAbs: number; ambientC?: number } & Altitude,
+  input: { deepestKpaAbs: number; ambientC?: number; micronGauge?: boolean } & Altitude,
 ): EvacuationCheck {
   const { deepestKpaAbs } = input;
   if (!Number.isFinite(deepestKpaAbs) || deepestKpaAbs < 0)
     throw new RangeError("deepestKpaAbs must be a non-negative absolute pressure");
-  const target = evacuationTarget(input);
-  const reached = deepestKpaAbs <= target.maxKpaAbs;
-  const messages: string[] = [];
+  const target = evacuationTarget({ ...input, shopC: input.ambientC });
+  const waterBoilsBelowKpaAbs = waterSaturationKpaAbs(target.shopC);
+  const waterBoils = deepestKpaAbs < waterBoilsBelowKpaAbs;
+  const reached = deepestKpaAbs < target.maxKpaAbs;
   const reachedInHg = formatNumber(pressureFromKpa(target.barometricKpa - deepestKpaAbs, "inHg"));
-  messages.push(
-    reached
-      ? `Reached ${reachedInHg} inHg of vacuum (${formatNumber(deepestKpaAbs, 2)} kPa absolute): at or past the target of ${formatNumber(target.minimumVacuumInHg)} inHg here.`
-      : `Reached only ${reachedInHg} inHg of vacuum (${formatNumber(deepestKpaAbs, 2)} kPa absolute); the target here is ${formatNumber(target.minimumVacuumInHg)} inHg. Keep evacuating; if it will not go deeper, look for a leak or a tired pump.`,
-  );
-  let waterBoils: boolean | null = null;
-  let waterBoilsBelowKpaAbs: number | null = null;
-  const sources = [...target.sources];
-  if (input.ambientC !== undefined) {
-    waterBoilsBelowKpaAbs = waterSaturationKpaAbs(input.ambientC);
-    waterBoils = deepestKpaAbs < waterBoilsBelowKpaAbs;
-    sources.push(SERVICE_SOURCES.waterBoiling);
-    if (!waterBoils) {
-      messages.push(
-        `At ${formatNumber(input.ambientC)} °C water only boils below ${formatNumber(waterBoilsBelowKpaAbs, 2)} kPa absolute: moisture will not leave at this vacuum. Go deeper, or warm the system and evacuate longer.`,
-      );
-    }
+  const at = `${formatNumber(deepestKpaAbs, 2)} kPa absolute`;
+  const where = `at ${formatNumber(target.shopC)} °C water boils below ${formatNumber(waterBoilsBelowKpaAbs, 2)} kPa absolute (about ${formatNumber(pressureFromKpa(target.barometricKpa - waterBoilsBelowKpaAbs, "inHg"))} inHg here)`;
+  const messages: string[] = [];
+  if (reached) {
+    messages.push(
+      input.micronGauge
+        ? `Reached ${at}: below the ${MICRON_GAUGE_TARGET_MICRONS}-micron target, so moisture can boil off.`
+        : `Reached ${reachedInHg} inHg of vacuum (${at}): ${where}, so moisture can boil off.`,
+    );
+  } else {
+    messages.push(
+      input.micronGauge && waterBoils
+        ? `Reached ${at}: moisture can boil off, but the micron gauge's target is ${MICRON_GAUGE_TARGET_MICRONS} microns (${formatNumber(target.maxKpaAbs, 3)} kPa absolute). Keep evacuating.`
+        : `Reached only ${reachedInHg} inHg of vacuum (${at}); ${where}. Keep evacuating; if it will not go deeper, look for a leak or a tired pump.`,
+    );
   }
-  return { reached, waterBoils, waterBoilsBelowKpaAbs, messages, sources };
+  return { reached, waterBoils, waterBoilsBelowKpaAbs, messages, sources: target.sources };
 }
 
 export interface HoldLimit {
@@ -132,7 +143,7 @@ export function vacuumHoldTest(input: {
   const riseText = `${formatNumber(Math.max(riseKpa, 0), 2)} kPa (${formatNumber(pressureFromKpa(Math.max(riseKpa, 0), "inHg"), 2)} inHg) in ${formatNumber(minutes)} min`;
   const message =
     verdict === "pass"
-      ? `Vacuum rose ${riseText}, within the shop's limit of ${limitText}: the system holds.`
+      ? `Vacuum rose ${riseText}, within the shop's limit of ${limitText}: no gross leak. A vacuum hold cannot prove a small leak: leak-test under pressure after charging.`
       : `Vacuum rose ${riseText}, faster than the shop's limit of ${limitText}: a leak or moisture boiling off. Find the leak with a detector (a vacuum does not locate leaks) or evacuate longer if moisture is suspected, then repeat the hold.`;
   const warnings: string[] = [];
   if (minutes < limit.perMinutes)
