@@ -109,6 +109,7 @@ describe("diagnose on any input the schema accepts (fast-check)", () => {
       ...input,
       ambientC,
       staticKpaGauge: 10,
+      staticSoakC: undefined,
       identifierPurityPct: undefined,
       symptoms: (input.symptoms ?? []).filter(
         (s) => s !== "identifier_flags_hydrocarbon" && s !== "leak_found" && s !== "no_leak_found",

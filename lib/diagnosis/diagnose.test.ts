@@ -265,16 +265,25 @@ describe("gates, next check and cautions", () => {
       expansionDevice: "orifice_tube",
       ambientC: 24,
       staticKpaGauge: 660,
+      staticSoakC: 24,
+      staticSoakMin: 180,
     });
     const air = findings.suspects.find((s) => s.cause === "non_condensables");
     expect(said(air?.evidenceFor.slice(0, 1) ?? [])).toMatch(
-      /^Static pressure 660 kPa gauge is 11[5-7] kPa above saturation at 24\.0 °C/,
+      /^Static pressure 660 kPa gauge sits 5\.\d K above saturation \(544 kPa gauge\) at the parts' soak temperature of 24\.0 °C after 180 min of soak\.$/,
     );
     for (const s of findings.suspects)
       expect(s.evidenceFor.length + s.evidenceAgainst.length).toBe(s.evidence.length);
     expect(
       rank(
-        { refrigerant: "R-134a", expansionDevice: "orifice_tube", ambientC: 24, staticKpaGauge: 660 },
+        {
+          refrigerant: "R-134a",
+          expansionDevice: "orifice_tube",
+          ambientC: 24,
+          staticKpaGauge: 660,
+          staticSoakC: 24,
+          staticSoakMin: 180,
+        },
         "non_condensables",
       ),
     ).toBe(0);

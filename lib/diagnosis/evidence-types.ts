@@ -5,6 +5,8 @@ export interface Observation {
   id: ObservationId;
   /** What was seen, with its numbers as quantities (formatMessage renders it). */
   message: Message;
+  /** How much of the table's weight this reading earns, (0, 1]; 1 when absent (a short soak weakens it). */
+  strength?: number;
 }
 
 export interface SaturationBand {
@@ -28,6 +30,10 @@ export interface ComputedValues {
   superheatK?: number;
   staticSaturationKpaAbs?: number;
   staticExcessKpa?: number;
+  /** Tsat(static) − the temperature the static is judged at, K */
+  staticExcessK?: number;
+  /** the parts' soak temperature, or the air's when that was not measured */
+  staticReferenceC?: number;
   expectedHigh?: SaturationBand;
   expectedLow?: SaturationBand;
   chargeDeltaG?: number;

@@ -2,6 +2,8 @@ import { describe, expect, it } from "vitest";
 import { extractEvidence } from "./evidence";
 import { formatMessage } from "./messages";
 import type { DiagnosisInput } from "./schema";
+import { saturationPressure } from "@/lib/refrigerants";
+import { STATIC_CHECK, STATIC_SOAK } from "./grading";
 
 // Saturation values: R-134a from the Tillner-Roth & Baehr (1994) equation of state, J. Phys. Chem. Ref. Data 23, 657;
 // R-1234yf from Richter, McLinden & Lemmon (2011), J. Chem. Eng. Data 56, 3254. Gauge = absolute − 101.325 kPa.
@@ -13,28 +15,74 @@ const gauge = (kpaAbs: number) => kpaAbs - SEA_LEVEL_KPA;
 const ids = (input: DiagnosisInput) => extractEvidence(input).observations.map((o) => o.id);
 const r134aOrifice = { refrigerant: "R-134a", expansionDevice: "orifice_tube", ambientC: 25 } as const;
 
-describe("static pressure against saturation at ambient", () => {
+describe("static pressure against saturation at the soak temperature", () => {
+  const soaked = { ...r134aOrifice, staticSoakC: 25, staticSoakMin: 120 } as const;
+  // A static reading whose saturation temperature sits `excessK` above the 25 °C soak.
+  const atExcess = (excessK: number) => ({
+    ...soaked,
+    staticKpaGauge: gauge(saturationPressure("R-134a", 25 + excessK)),
+  });
+
   it("grades a reading at R-134a saturation for 25 °C as normal (Tillner-Roth & Baehr 1994: 665.4 kPa abs)", () => {
-    const extraction = extractEvidence({ ...r134aOrifice, staticKpaGauge: gauge(R134A_SAT_KPA_ABS[25]) + 6 });
+    const extraction = extractEvidence({ ...soaked, staticKpaGauge: gauge(R134A_SAT_KPA_ABS[25]) + 6 });
     expect(extraction.computed.staticExcessKpa).toBeCloseTo(6, 0);
+    expect(extraction.computed.staticExcessK).toBeCloseTo(0.3, 1);
     expect(extraction.observations.map((o) => o.id)).toContain("static:normal");
   });
 
-  it("grades the excess in steps and says how far above saturation, in kPa and °C", () => {
-    expect(ids({ ...r134aOrifice, staticKpaGauge: gauge(R134A_SAT_KPA_ABS[25]) + 50 })).toContain(
-      "static:slightly_high",
-    );
-    expect(ids({ ...r134aOrifice, staticKpaGauge: gauge(R134A_SAT_KPA_ABS[25]) + 100 })).toContain(
-      "static:high",
-    );
+  it("grades the excess in kelvin on both sides of each step: 2, 4 and 7 K (grading table; saturation from Tillner-Roth & Baehr 1994)", () => {
+    expect(ids(atExcess(STATIC_CHECK.normalUpToK - 0.05))).toContain("static:normal");
+    expect(ids(atExcess(STATIC_CHECK.normalUpToK + 0.05))).toContain("static:slightly_high");
+    expect(ids(atExcess(STATIC_CHECK.highAboveK - 0.05))).toContain("static:slightly_high");
+    expect(ids(atExcess(STATIC_CHECK.highAboveK + 0.05))).toContain("static:high");
+    expect(ids(atExcess(STATIC_CHECK.veryHighAboveK - 0.05))).toContain("static:high");
+    expect(ids(atExcess(STATIC_CHECK.veryHighAboveK + 0.05))).toContain("static:very_high");
+    expect(ids(atExcess(-STATIC_CHECK.noLiquidBelowK + 0.05))).toContain("static:normal");
+    expect(ids(atExcess(-STATIC_CHECK.noLiquidBelowK - 0.05))).toContain("static:no_liquid");
+  });
+
+  it("reads the same 35 kPa excess as normal at a 40 °C soak (about 1.3 K) and as air at 15 °C (about 2.2 K) (Tillner-Roth & Baehr 1994 slope)", () => {
+    const at = (soakC: number) =>
+      extractEvidence({
+        ...r134aOrifice,
+        ambientC: soakC,
+        staticSoakC: soakC,
+        staticSoakMin: 120,
+        staticKpaGauge: gauge(saturationPressure("R-134a", soakC)) + 35,
+      });
+    expect(at(40).computed.staticExcessK).toBeCloseTo(1.3, 1);
+    expect(at(40).observations.map((o) => o.id)).toContain("static:normal");
+    expect(at(15).computed.staticExcessK).toBeCloseTo(2.2, 1);
+    expect(at(15).observations.map((o) => o.id)).toContain("static:slightly_high");
+  });
+
+  it("judges at the parts' soak temperature, not the air's, and says so", () => {
     const extraction = extractEvidence({
       ...r134aOrifice,
-      staticKpaGauge: gauge(R134A_SAT_KPA_ABS[25]) + 160,
+      ambientC: 32,
+      staticSoakC: 25,
+      staticSoakMin: 240,
+      staticKpaGauge: gauge(R134A_SAT_KPA_ABS[25]),
     });
-    const observation = extraction.observations.find((o) => o.id === "static:very_high");
+    expect(extraction.computed.staticReferenceC).toBe(25);
+    const observation = extraction.observations.find((o) => o.id === "static:normal");
     expect(observation && formatMessage(observation.message)).toMatch(
-      /^Static pressure 724 kPa gauge is 160 kPa above saturation at 25\.0 °C \(564 kPa gauge\)\.$/,
+      /^Static pressure 564 kPa gauge matches saturation \(564 kPa gauge\) at the parts' soak temperature of 25\.0 °C within 2\.0 K after 240 min of soak: no sign of air\.$/,
     );
+  });
+
+  it("counts a short or unmeasured soak for half, and says so (grading table: 60 min, from memory)", () => {
+    const high = atExcess(5);
+    const strength = (input: DiagnosisInput) =>
+      extractEvidence(input).observations.find((o) => o.id === "static:high")?.strength ?? 1;
+    expect(strength(high)).toBe(1);
+    expect(strength({ ...high, staticSoakMin: STATIC_SOAK.minMinutes - 1 })).toBe(STATIC_SOAK.weakFactor);
+    expect(strength({ ...high, staticSoakMin: STATIC_SOAK.minMinutes })).toBe(1);
+    expect(strength({ ...high, staticSoakMin: undefined })).toBe(STATIC_SOAK.weakFactor);
+    const short = extractEvidence({ ...high, staticSoakMin: 20 }).observations.find(
+      (o) => o.id === "static:high",
+    );
+    expect(short && formatMessage(short.message)).toMatch(/a short soak, so this counts for less/);
   });
 
   it("uses R-1234yf's own curve (Richter, McLinden & Lemmon 2011: 783.5 kPa abs at 30 °C)", () => {
@@ -42,15 +90,25 @@ describe("static pressure against saturation at ambient", () => {
       refrigerant: "R-1234yf",
       expansionDevice: "txv",
       ambientC: 30,
-      staticKpaGauge: gauge(R1234YF_SAT_KPA_ABS[30]) + 80,
+      staticKpaGauge: gauge(R1234YF_SAT_KPA_ABS[30]),
     });
-    expect(extraction.computed.staticExcessKpa).toBeCloseTo(80, 0);
-    expect(extraction.observations.map((o) => o.id)).toContain("static:high");
+    expect(extraction.computed.staticSaturationKpaAbs).toBeCloseTo(R1234YF_SAT_KPA_ABS[30], 0);
+    expect(extraction.computed.staticExcessK).toBeCloseTo(0, 1);
   });
 
-  it("calls a near-zero static reading empty and a reading far below saturation 'no liquid' (common practice)", () => {
-    expect(ids({ ...r134aOrifice, staticKpaGauge: 30 })).toContain("static:empty");
-    expect(ids({ ...r134aOrifice, staticKpaGauge: 250 })).toContain("static:no_liquid");
+  it("calls a static reading empty under 70 kPa gauge or under half of saturation, either one (common practice)", () => {
+    // 25 °C: half of 665.4 kPa abs is 332.7 kPa abs, 231 kPa gauge, well above 70 kPa gauge.
+    expect(ids({ ...soaked, staticKpaGauge: 69 })).toContain("static:empty");
+    expect(ids({ ...soaked, staticKpaGauge: 225 })).toContain("static:empty");
+    expect(ids({ ...soaked, staticKpaGauge: 240 })).toContain("static:no_liquid");
+    // At 5 °C half of saturation (349.2 kPa abs, EOS) is 73 kPa gauge: the 70 kPa condition alone still counts.
+    expect(ids({ ...r134aOrifice, ambientC: 5, staticKpaGauge: 69 })).toContain("static:empty");
+  });
+
+  it("does not judge a static reading below −5 °C, where full and nearly empty read alike (grading table)", () => {
+    const cold = extractEvidence({ ...r134aOrifice, ambientC: -10, staticKpaGauge: 60 });
+    expect(cold.observations.some((o) => o.id.startsWith("static:"))).toBe(false);
+    expect(cold.notes.map((n) => formatMessage(n)).join(" ")).toMatch(/warm to above −5\.0 °C/);
   });
 });
 

@@ -29,14 +29,24 @@ export const SUPERHEAT_K = {
   orifice_tube: { nearZero: null, high: 4, veryHigh: 12 },
 } as const;
 
-// A static reading under about 70 kPa gauge (10 psig), or under half the saturation pressure at
-// ambient, means next to no refrigerant is left (common practice).
-export const EMPTY_BELOW_KPA_GAUGE = 70;
-export const EMPTY_BELOW_FRACTION_OF_SATURATION = 0.5;
-// Static excess grading, kPa over saturation at ambient. About 1 K of thermometer error is ~20 kPa
-// for R-134a near 25 °C (saturation table slope) plus gauge error: 35 kPa is within tolerance
-// (from memory; the SAE J2211 container tolerance table itself was not available).
-export const STATIC_EXCESS_KPA = { slight: 35, high: 70, veryHigh: 140 } as const;
+// A static reading under about 70 kPa gauge (10 psig), or under half the saturation pressure at the soak
+// temperature, means next to no refrigerant is left: either condition (common practice).
+export const STATIC_EMPTY = { belowKpaGauge: 70, belowFractionOfSaturation: 0.5 } as const;
+// Static excess as a temperature difference: Tsat(static) − the temperature the parts soaked to, K. Within
+// 2 K is gauge and thermometer error (about ±1 K each way, from memory); 2/4/7 K are the former 35/70/140 kPa
+// grades at 25 °C, where R-134a saturation rises about 20 kPa per kelvin (Tillner-Roth & Baehr 1994).
+// More than 5 K below saturation no liquid can be left: a soaked system's coldest part is within a few
+// kelvin of the soak temperature (common practice). Below −5 °C a static reading says too little (judgement).
+export const STATIC_CHECK = {
+  normalUpToK: 2,
+  highAboveK: 4,
+  veryHighAboveK: 7,
+  noLiquidBelowK: 5,
+  minReferenceC: -5,
+} as const;
+// A soak of an hour or more with the parts' temperature measured counts in full; a shorter or unmeasured
+// soak counts for half (from memory: an engine bay takes about an hour to settle in a shop).
+export const STATIC_SOAK = { minMinutes: 60, weakFactor: 0.5 } as const;
 
 // SAE J2099 / J2912: below 98 % the refrigerant is not "pure" and must not be recycled.
 export const PURITY_PASS_PCT = 98;
@@ -59,9 +69,9 @@ export const GRADING = {
   FALLBACK_EVAPORATING_C,
   SUBCOOLING_K,
   SUPERHEAT_K,
-  EMPTY_BELOW_KPA_GAUGE,
-  EMPTY_BELOW_FRACTION_OF_SATURATION,
-  STATIC_EXCESS_KPA,
+  STATIC_EMPTY,
+  STATIC_CHECK,
+  STATIC_SOAK,
   PURITY_PASS_PCT,
   AIR_PCT,
   CHARGE,

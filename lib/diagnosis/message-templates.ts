@@ -60,15 +60,18 @@ const READING_TEMPLATES = {
   "superheat:normal": `${SUPERHEAT_LEAD} is normal for {@device} system.`,
   "superheat:high": `${SUPERHEAT_LEAD} is high for {@device} system: the evaporator is starved.`,
   "superheat:very_high": `${SUPERHEAT_LEAD} is very high for {@device} system: the evaporator is badly starved.`,
-  "static:empty": "Static pressure {static} at {ambient}: the system is empty or nearly so.",
+  "static:empty":
+    "Static pressure {static} at {reference}[, where saturation is {saturation}]: the system is empty or nearly so.",
   "static:no_liquid":
-    "Static pressure {static} is {below} below saturation ({saturation}) at {ambient}: no liquid left, so the air check is not valid.",
+    "Static pressure {static} sits {excess} below saturation ({saturation}) at the {@what} of {reference}: no liquid left, so the air check is not valid.",
   "static:normal":
-    "Static pressure {static} matches saturation at {ambient} ({saturation}) within {tolerance}: no sign of air.",
+    "Static pressure {static} matches saturation ({saturation}) at the {@what} of {reference} within {tolerance}[ after {soakTime} of soak]: no sign of air{@weak}.",
   "static:slightly_high":
-    "Static pressure {static} is {excess} above saturation at {ambient} ({saturation}).",
-  "static:high": "Static pressure {static} is {excess} above saturation at {ambient} ({saturation}).",
-  "static:very_high": "Static pressure {static} is {excess} above saturation at {ambient} ({saturation}).",
+    "Static pressure {static} sits {excess} above saturation ({saturation}) at the {@what} of {reference}[ after {soakTime} of soak]{@weak}.",
+  "static:high":
+    "Static pressure {static} sits {excess} above saturation ({saturation}) at the {@what} of {reference}[ after {soakTime} of soak]{@weak}.",
+  "static:very_high":
+    "Static pressure {static} sits {excess} above saturation ({saturation}) at the {@what} of {reference}[ after {soakTime} of soak]{@weak}.",
 } as const satisfies Partial<Record<ObservationId, string>>;
 
 const NOTE_TEMPLATES = {
@@ -84,6 +87,8 @@ const NOTE_TEMPLATES = {
     "Low side {low} is outside the saturation table for {@refrigerant}; it was not graded.",
   "note:static_outside_table":
     "Static pressure check not possible: {ambient} is outside the {@refrigerant} saturation table.",
+  "note:static_too_cold":
+    "Static pressure not judged: at {reference} the pressures of a full and a nearly empty system are too close; let the system warm to above {coldest} and read it again.",
   "note:static_outside_table_co2":
     "Static pressure check not possible: {ambient} is outside the R-744 saturation table (CO2 has no liquid above about {critical}).",
   "gate:mixed":

@@ -102,8 +102,9 @@ export function scoreCauses(
   for (const observation of observations) {
     const weights = WEIGHT_VECTORS.get(observation.id);
     if (!weights) continue;
+    const strength = observation.strength ?? 1;
     for (let i = 0; i < scores.length; i++) {
-      const weight = weights[i] ?? 0;
+      const weight = (weights[i] ?? 0) * strength;
       const score = scores[i];
       if (weight === 0 || !score) continue;
       score.logOdds += weight;

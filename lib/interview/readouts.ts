@@ -1,4 +1,4 @@
-import { STATIC_EXCESS_KPA, SUBCOOLING_K, SUPERHEAT_K } from "@/lib/diagnosis/grading";
+import { STATIC_CHECK, SUBCOOLING_K, SUPERHEAT_K } from "@/lib/diagnosis/grading";
 import type { RefrigerantId } from "@/lib/refrigerants/catalog";
 import { staticCheck } from "@/lib/refrigerants/derived";
 import { expectedBands } from "@/lib/refrigerants/expected-bands";
@@ -65,22 +65,25 @@ function expectedBandsOrNull(refrigerant: RefrigerantId, ambientC: number, relat
 function staticLines(
   refrigerant: RefrigerantId,
   staticKpaGauge: number,
-  ambientC: number,
+  referenceC: number,
+  where: string,
   barometricKpa: number,
 ) {
   return safely(() => {
-    const check = staticCheck({ refrigerant, staticKpaAbs: staticKpaGauge + barometricKpa, ambientC });
+    const staticKpaAbs = staticKpaGauge + barometricKpa;
+    const check = staticCheck({ refrigerant, staticKpaAbs, ambientC: referenceC });
     if (check.kind === "out_of_range") return [{ text: check.message, status: "unknown" }];
     const satGauge = check.saturationKpaAbs - barometricKpa;
     const lines: ReadoutLine[] = [
-      { text: `Saturation at ${fmt(ambientC)} °C ambient: ${fmt(satGauge, 0)} kPa gauge` },
+      { text: `Saturation at ${fmt(referenceC)} °C (${where}): ${fmt(satGauge, 0)} kPa gauge` },
     ];
     if (check.kind === "no_liquid") lines.push({ text: check.message, status: "below", verdict: "" });
-    // The same tolerance the findings engine grades against, so the screen and the findings agree.
+    // The same tolerance in kelvin the findings engine grades against, so the screen and the findings agree.
     else {
-      const air = check.excessKpa > STATIC_EXCESS_KPA.slight;
+      const excessK = saturationTemperature(refrigerant, staticKpaAbs) - referenceC;
+      const air = excessK > STATIC_CHECK.normalUpToK;
       lines.push({
-        text: `Static pressure is ${fmt(Math.abs(check.excessKpa), 0)} kPa ${check.excessKpa >= 0 ? "above" : "below"} saturation`,
+        text: `Static pressure is ${fmt(Math.abs(excessK))} K ${excessK >= 0 ? "above" : "below"} saturation`,
         status: air ? "above" : "inside",
         verdict: air ? "air or another gas is likely present" : "no sign of air",
       });
@@ -205,10 +208,15 @@ export function liveReadouts(
     return {};
   }
 
-  if (group === "static" && num(values.staticKpaGauge) && num(ambientC))
+  if (group === "static" && num(values.staticKpaGauge) && num(ambientC)) {
+    // Judged at the parts' soak temperature when it is given, as the findings engine judges it.
+    const soaked = num(values.staticSoakC);
+    const referenceC = soaked ? (values.staticSoakC as number) : ambientC;
+    const where = soaked ? "the soak temperature" : "ambient";
     return {
-      staticKpaGauge: staticLines(refrigerant, values.staticKpaGauge, ambientC, physics.barometricKpa),
+      staticKpaGauge: staticLines(refrigerant, values.staticKpaGauge, referenceC, where, physics.barometricKpa),
     };
+  }
   if (group === "running") return runningLines(values, { ...ctx, refrigerant }, physics);
   if (group === "chargeAudit" && num(values.recoveredChargeG) && num(ctx.labelChargeG))
     return { recoveredChargeG: chargeLines(refrigerant, ctx.labelChargeG, values.recoveredChargeG) };
