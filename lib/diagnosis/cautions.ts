@@ -8,6 +8,7 @@ export type CautionId =
   | "flammable_r1234yf"
   | "r744_pressure"
   | "high_voltage_compressor"
+  | "electric_never_without_charge"
   | "contaminated_do_not_recover"
   | "hydrocarbon_flammable"
   | "head_pressure_high"
@@ -41,7 +42,9 @@ export const CAUTION_TEXT: Record<CautionId, string> = {
   head_pressure_high:
     "High side near the cut-out: keep hands and hoses clear of belts and fans, and stop the test if the pressure keeps climbing.",
   empty_system:
-    "Do not run the compressor on an empty system; pressure-test only with dry nitrogen or an approved tracer gas, never compressed air or oxygen.",
+    "Do not run the compressor until the system is repaired and recharged by weight: without its liquid charge it runs short of oil, and a low-side leak pulls in air and moisture. Pressure-test only with dry nitrogen or an approved tracer gas, never compressed air or oxygen.",
+  electric_never_without_charge:
+    "Electric compressor: never energise it without a liquid charge or while the system is in vacuum, and after service follow the maker's insulation (isolation) check before handing the vehicle back.",
   recover_slowly_accumulator:
     "Recover slowly on orifice-tube/accumulator systems so oil is not pulled out; measure the oil removed and add the same amount of fresh, correct oil back.",
   charge_by_weight:
@@ -59,20 +62,21 @@ export function collectCautions(a: {
   observations: ReadonlySet<ObservationId>;
   leaders: readonly CauseId[];
   mixed: boolean;
-  systemEmpty: boolean;
+  doNotRun: boolean;
 }): Caution[] {
-  const { input, observations, leaders, mixed, systemEmpty } = a;
+  const { input, observations, leaders, mixed, doNotRun } = a;
   const ids: CautionId[] = ["eye_and_skin"];
   // CO2 release is governed by the maker's procedure rather than the HFC venting bans.
   if (input.refrigerant !== "R-744") ids.push("never_vent");
   if (input.refrigerant === "R-1234yf") ids.push("flammable_r1234yf");
   if (input.refrigerant === "R-744") ids.push("r744_pressure");
-  if (input.compressorType === "electric") ids.push("high_voltage_compressor");
+  if (input.compressorType === "electric")
+    ids.push("high_voltage_compressor", "electric_never_without_charge");
   if (mixed) ids.push("contaminated_do_not_recover");
   if (observations.has("symptom:identifier_flags_hydrocarbon")) ids.push("hydrocarbon_flammable");
   if (observations.has("high_side:very_high") || observations.has("symptom:high_pressure_cutout"))
     ids.push("head_pressure_high");
-  if (systemEmpty) ids.push("empty_system");
+  if (doNotRun) ids.push("empty_system");
   if (input.expansionDevice === "orifice_tube") ids.push("recover_slowly_accumulator");
   if (leaders.includes("overcharge") || leaders.includes("undercharge")) ids.push("charge_by_weight");
   if (leaders.includes("undercharge")) ids.push("repair_before_refill");

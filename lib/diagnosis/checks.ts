@@ -5,6 +5,7 @@ import type { SymptomId } from "./symptoms";
 
 export type CheckId =
   | "leak_test"
+  | "static_repeat"
   | "static_pressure"
   | "identify_refrigerant"
   | "running_pressures"
@@ -24,11 +25,15 @@ export interface CheckContext {
   symptoms: ReadonlySet<SymptomId>;
   /** The refrigerant failed identification: no pressure–temperature checks, no recovery into shop equipment. */
   mixed: boolean;
+  /** The "do not run" state: only checks that leave the compressor off. */
+  doNotRun: boolean;
 }
 
 export interface CheckDefinition {
   id: CheckId;
   instruction: string;
+  /** True when the check runs the compressor: never offered in the "do not run" state. */
+  runsSystem: boolean;
   available: (ctx: CheckContext) => boolean;
   /** Each possible result, as the observations it would add. */
   outcomes: (ctx: CheckContext) => ObservationId[][];
@@ -75,6 +80,7 @@ const ORIFICE_SUPERHEAT_OUTCOMES: ObservationId[][] = [
 export const CHECKS: readonly CheckDefinition[] = [
   {
     id: "static_pressure",
+    runsSystem: false,
     instruction:
       "Switch the engine off, let the system settle to the air temperature around it (in shade, pressures equalised), then read the static pressure and the air temperature beside the lines.",
     available: (ctx) => !ctx.mixed && ctx.input.staticKpaGauge === undefined,
@@ -82,6 +88,7 @@ export const CHECKS: readonly CheckDefinition[] = [
   },
   {
     id: "identify_refrigerant",
+    runsSystem: false,
     instruction:
       "Connect a refrigerant identifier (SAE J2912 type) to the low-side port and record purity and air percentages before connecting any recovery machine.",
     available: (ctx) => ctx.input.identifierPurityPct === undefined,
@@ -89,6 +96,7 @@ export const CHECKS: readonly CheckDefinition[] = [
   },
   {
     id: "condenser_fan",
+    runsSystem: true,
     instruction:
       "With the A/C on, check that the condenser fan runs and that nothing blocks the condenser face.",
     available: (ctx) => neither(ctx, "condenser_fan_running", "condenser_fan_not_running"),
@@ -96,6 +104,7 @@ export const CHECKS: readonly CheckDefinition[] = [
   },
   {
     id: "vent_temperature",
+    runsSystem: true,
     instruction:
       "Run at the usual test conditions for 5–10 minutes and read the centre-vent temperature with a probe thermometer.",
     available: (ctx) => ctx.input.ventC === undefined,
@@ -103,6 +112,7 @@ export const CHECKS: readonly CheckDefinition[] = [
   },
   {
     id: "running_pressures",
+    runsSystem: true,
     instruction:
       "Connect the gauges and run at the usual test conditions (engine warm, about 1,500 rpm, A/C max, blower high) for 5–10 minutes, then read the high and low side.",
     available: (ctx) =>
@@ -116,6 +126,7 @@ export const CHECKS: readonly CheckDefinition[] = [
   },
   {
     id: "liquid_line_temperature",
+    runsSystem: true,
     instruction:
       "Clamp a contact thermometer on the liquid line at the condenser outlet and read it together with the high side, to work out the subcooling.",
     available: (ctx) =>
@@ -124,6 +135,7 @@ export const CHECKS: readonly CheckDefinition[] = [
   },
   {
     id: "suction_line_temperature",
+    runsSystem: true,
     instruction:
       "Clamp a contact thermometer on the suction line at the evaporator outlet and read it together with the low side, to work out the superheat.",
     available: (ctx) => !ctx.mixed && ctx.input.suctionLineC === undefined,
@@ -132,6 +144,7 @@ export const CHECKS: readonly CheckDefinition[] = [
   },
   {
     id: "condenser_water_spray",
+    runsSystem: true,
     instruction:
       "With the system running and the gauges on, spray water gently across the condenser face and watch the high side.",
     available: (ctx) =>
@@ -140,6 +153,7 @@ export const CHECKS: readonly CheckDefinition[] = [
   },
   {
     id: "watch_low_side",
+    runsSystem: true,
     instruction:
       "Run at the usual test conditions for 15 minutes and note whether the low side stays steady or swings down toward vacuum and back.",
     available: (ctx) => !ctx.mixed && neither(ctx, "low_side_swings_to_vacuum", "low_side_steady"),
@@ -147,6 +161,7 @@ export const CHECKS: readonly CheckDefinition[] = [
   },
   {
     id: "txv_bulb_test",
+    runsSystem: true,
     instruction:
       "With the A/C on max, chill the expansion-valve bulb (the low side should fall), then warm it in your hand (the low side should rise).",
     available: (ctx) =>
@@ -157,6 +172,7 @@ export const CHECKS: readonly CheckDefinition[] = [
   },
   {
     id: "liquid_line_survey",
+    runsSystem: true,
     instruction:
       "Run the system and take contact-thermometer readings along the liquid line from the condenser outlet, across the drier, to the expansion device; look for a sharp drop.",
     available: (ctx) =>
@@ -165,6 +181,7 @@ export const CHECKS: readonly CheckDefinition[] = [
   },
   {
     id: "recover_and_weigh",
+    runsSystem: false,
     instruction:
       "Identify the refrigerant, then recover the charge with certified equipment (slowly on orifice-tube systems), weigh it against the label charge and measure the oil that came out.",
     available: (ctx) =>
@@ -173,6 +190,7 @@ export const CHECKS: readonly CheckDefinition[] = [
   },
   {
     id: "leak_test",
+    runsSystem: false,
     instruction:
       "Find the leak: pressurise with dry nitrogen or an approved tracer gas (SAE J2970) as the maker's procedure allows, or use an electronic detector at its most sensitive setting (SAE J2791/J2913) or UV dye (SAE J2297); confirm any hit a second way.",
     available: (ctx) => neither(ctx, "leak_found", "no_leak_found"),

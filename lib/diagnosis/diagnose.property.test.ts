@@ -3,47 +3,8 @@ import { describe, expect, it } from "vitest";
 import { CAUSE_IDS } from "./causes";
 import { diagnose } from "./diagnose";
 import { ENGINE_VERSION } from "./engine-version";
-import { COMPRESSOR_TYPES, type DiagnosisInput, diagnosisInputSchema } from "./schema";
-import { SYMPTOM_IDS } from "./symptoms";
-
-const optional = <T>(arb: fc.Arbitrary<T>) => fc.option(arb, { nil: undefined, freq: 3 });
-const real = (min: number, max: number) => fc.double({ min, max, noNaN: true, noDefaultInfinity: true });
-
-const candidateInput = fc
-  .constantFrom("R-134a" as const, "R-1234yf" as const, "R-744" as const)
-  .chain((refrigerant) => {
-    const maxKpa = refrigerant === "R-744" ? 16000 : 4500;
-    const pressure = fc.oneof(real(-101.3, 3000), real(-101.3, maxKpa));
-    return fc.record({
-      refrigerant: fc.constant(refrigerant),
-      expansionDevice: fc.constantFrom("orifice_tube" as const, "txv" as const),
-      ambientC: real(-30, 60),
-      relativeHumidityPct: optional(real(0, 100)),
-      altitudeM: optional(real(-500, 5000)),
-      staticKpaGauge: optional(pressure),
-      highKpaGauge: optional(pressure),
-      lowKpaGauge: optional(pressure),
-      liquidLineC: optional(real(-40, 110)),
-      suctionLineC: optional(real(-50, 80)),
-      ventC: optional(real(-30, 60)),
-      labelChargeG: optional(real(1, 5000)),
-      recoveredChargeG: optional(real(0, 6000)),
-      identifierPurityPct: optional(real(0, 100)),
-      identifierAirPct: optional(real(0, 100)),
-      compressorType: optional(fc.constantFrom(...COMPRESSOR_TYPES)),
-      staticSoakC: optional(real(-30, 60)),
-      staticSoakMin: optional(real(0, 1440)),
-      lowCutOutKpaGauge: optional(pressure),
-      lowCutInKpaGauge: optional(pressure),
-      chargedG: optional(real(0, 6000)),
-      symptoms: optional(fc.subarray([...SYMPTOM_IDS])),
-    });
-  });
-
-/** Inputs the schema accepts: the engine's contract covers exactly these. */
-const validInput: fc.Arbitrary<DiagnosisInput> = candidateInput.filter(
-  (c) => diagnosisInputSchema.safeParse(c).success,
-);
+import { type DiagnosisInput, diagnosisInputSchema } from "./schema";
+import { real, validInput } from "./test-inputs";
 
 describe("diagnose on any input the schema accepts (fast-check)", () => {
   it("returns every cause once, with scores and confidences in [0, 1], sorted, never NaN, and cautions ending in deference", () => {
@@ -104,12 +65,13 @@ describe("diagnose on any input the schema accepts (fast-check)", () => {
     );
   });
 
-  it("puts undercharge first and asks for a leak test when a pure system's static pressure is near zero at shop temperatures (common practice; SAE J2788 equipment range 10–50 °C)", () => {
+  it("puts undercharge first and sends a pure system with a near-zero static down the repair path, which finds the leak before anything runs (common practice; SAE J2788 equipment range 10–50 °C)", () => {
     const emptyInput = fc.tuple(validInput, real(10, 50)).map(([input, ambientC]): DiagnosisInput => ({
       ...input,
       ambientC,
       staticKpaGauge: 10,
       staticSoakC: undefined,
+      chargedG: undefined,
       identifierPurityPct: undefined,
       symptoms: (input.symptoms ?? []).filter(
         (s) => s !== "identifier_flags_hydrocarbon" && s !== "leak_found" && s !== "no_leak_found",
@@ -120,7 +82,9 @@ describe("diagnose on any input the schema accepts (fast-check)", () => {
         fc.pre(diagnosisInputSchema.safeParse(input).success);
         const findings = diagnose(input);
         expect(findings.suspects[0]?.cause).toBe("undercharge");
-        expect(findings.nextCheck.check).toBe("leak_test");
+        expect(findings.doNotRun.active).toBe(true);
+        expect(findings.nextCheck.check).toBe("repair_path");
+        expect(findings.nextCheck.runsSystem).toBe(false);
       }),
       { numRuns: 200 },
     );

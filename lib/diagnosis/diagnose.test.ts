@@ -186,7 +186,14 @@ describe("gates, next check and cautions", () => {
       symptoms: ["condenser_fan_not_running", "compressor_noise", "recent_service_elsewhere"],
     });
     expect(findings.suspects[0]?.cause).toBe("undercharge");
-    expect(findings.nextCheck.check).toBe("leak_test");
+    expect(findings.doNotRun).toEqual({ active: true, reasons: ["no_liquid"] });
+    expect(findings.nextCheck.check).toBe("repair_path");
+    expect(findings.nextCheck.instruction).toMatch(
+      /find the leak with dry nitrogen or an approved tracer gas/,
+    );
+    expect(findings.nextCheck.instruction).toMatch(
+      /recharge by weight to the label; only then run the test\.$/,
+    );
     expect(findings.cautions.map((c) => c.id)).toEqual(
       expect.arrayContaining(["empty_system", "flammable_r1234yf", "repair_before_refill"]),
     );

@@ -3,6 +3,7 @@ import { type Caution, collectCautions } from "./cautions";
 import { ENGINE_VERSION } from "./engine-version";
 import { extractEvidence } from "./evidence";
 import type { ComputedValues } from "./evidence-types";
+import { type DoNotRun, doNotRunState } from "./do-not-run";
 import { chooseNextCheck, type NextCheck } from "./next-check";
 import type { Message } from "./messages";
 import type { ObservationId } from "./observations";
@@ -25,6 +26,8 @@ export interface Suspect {
 export interface Findings {
   engineVersion: string;
   suspects: Suspect[];
+  /** The "do not run" state: while it holds, no next check runs the system. */
+  doNotRun: DoNotRun;
   nextCheck: NextCheck;
   cautions: Caution[];
   computed: ComputedValues;
@@ -43,7 +46,7 @@ export function diagnose(input: DiagnosisInput): Findings {
   const extraction = extractEvidence(input);
   const present = new Set<ObservationId>(extraction.observations.map((o) => o.id));
   const mixed = present.has("purity:fail") || present.has("symptom:identifier_flags_hydrocarbon");
-  const systemEmpty = present.has("static:empty") || present.has("charge:empty");
+  const doNotRun = doNotRunState(input);
 
   const suspects = scoreCauses(extraction.observations)
     .map((s): Suspect => {
@@ -67,12 +70,19 @@ export function diagnose(input: DiagnosisInput): Findings {
     .sort(byRank);
 
   const leaders = suspects.slice(0, 2).map((s) => s.cause);
-  const ctx = { input, extraction, symptoms: new Set(input.symptoms ?? []), mixed };
+  const ctx = {
+    input,
+    extraction,
+    symptoms: new Set(input.symptoms ?? []),
+    mixed,
+    doNotRun: doNotRun.active,
+  };
   return {
     engineVersion: ENGINE_VERSION,
     suspects,
-    nextCheck: chooseNextCheck(ctx, leaders, systemEmpty),
-    cautions: collectCautions({ input, observations: present, leaders, mixed, systemEmpty }),
+    doNotRun,
+    nextCheck: chooseNextCheck(ctx, leaders, doNotRun),
+    cautions: collectCautions({ input, observations: present, leaders, mixed, doNotRun: doNotRun.active }),
     computed: extraction.computed,
     notes: extraction.notes,
   };

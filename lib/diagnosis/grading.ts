@@ -48,6 +48,11 @@ export const STATIC_CHECK = {
 // soak counts for half (from memory: an engine bay takes about an hour to settle in a shop).
 export const STATIC_SOAK = { minMinutes: 60, weakFactor: 0.5 } as const;
 
+// The "do not run" state (do-not-run.ts): a mass charged back counts as a recharge from half the label up
+// (judgement: a partial charge for a leak test is not a recharge); an electric compressor waits for a static
+// reading within 2 K of saturation, the gauge and thermometer tolerance above (from memory).
+export const DO_NOT_RUN = { rechargedFromFractionOfLabel: 0.5, electricStaticBelowK: 2 } as const;
+
 // SAE J2099 / J2912: below 98 % the refrigerant is not "pure" and must not be recycled.
 export const PURITY_PASS_PCT = 98;
 // Identifier air (NCG) grading, weight % (from memory).
@@ -72,6 +77,7 @@ export const GRADING = {
   STATIC_EMPTY,
   STATIC_CHECK,
   STATIC_SOAK,
+  DO_NOT_RUN,
   PURITY_PASS_PCT,
   AIR_PCT,
   CHARGE,

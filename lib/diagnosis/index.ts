@@ -17,3 +17,4 @@ export {
   SI_UNITS,
 } from "./messages";
 export type { Quantity, QuantityKind } from "./quantities";
+export { type DoNotRun, type DoNotRunReason, doNotRunState, recharged, staticDeficits } from "./do-not-run";

@@ -67,6 +67,7 @@ describe("chooseNextCheck through diagnose", () => {
       identifierAirPct: 0,
       labelChargeG: 650,
       recoveredChargeG: 640,
+      chargedG: 650,
       ventC: 14,
       symptoms: [
         "suction_line_frosted",

@@ -1,10 +1,13 @@
 import { CAUSE_SHORT_NAMES, type CauseId } from "./causes";
 import { CHECKS, type CheckContext, type CheckId } from "./checks";
+import { type DoNotRun, staticDeficits } from "./do-not-run";
+import { DO_NOT_RUN, STATIC_CHECK } from "./grading";
+import { doNotRunReason, repairPath } from "./repair-path";
 import type { ObservationId } from "./observations";
 import { causeIndex, outcomeVector } from "./scoring";
 
 export interface NextCheck {
-  check: CheckId | "confirm";
+  check: CheckId | "confirm" | "repair_path";
   /** One instruction, addressed to the technician. */
   instruction: string;
   /** Why this check: the suspects it separates. */
@@ -12,6 +15,8 @@ export interface NextCheck {
   separates: CauseId[];
   /** Expected change, in log-odds, of the gap between the two leading suspects. */
   expectedShiftLogOdds: number;
+  /** Whether doing it runs the compressor; never true in the "do not run" state. */
+  runsSystem: boolean;
 }
 
 // Below this expected shift a check would not change the order in any useful way (common practice judgement).
@@ -74,11 +79,27 @@ export function expectedShift(
   return expected;
 }
 
-export function chooseNextCheck(
-  ctx: CheckContext,
-  leaders: readonly CauseId[],
-  systemEmpty: boolean,
-): NextCheck {
+const STATIC_REPEAT_COLD_PARTS =
+  "Leave the engine off and let the parts warm to the shop's temperature (an hour or more), then read the static pressure and the parts' temperature again before anything else.";
+
+// What a confirming step involves: running the system to prove the repair, or not.
+const CONFIRM_RUNS_SYSTEM: Record<CauseId, boolean> = {
+  overcharge: false,
+  undercharge: false,
+  non_condensables: false,
+  moisture: false,
+  metering_restriction: false,
+  high_side_restriction: false,
+  metering_stuck_open: false,
+  condenser_airflow: true,
+  weak_compressor: false,
+  evaporator_icing: false,
+  contaminated_refrigerant: false,
+  oil_loss: false,
+  no_refrigerant_fault: true,
+};
+
+export function chooseNextCheck(ctx: CheckContext, leaders: readonly CauseId[], state: DoNotRun): NextCheck {
   const [first, second] = leaders;
   if (first === undefined) throw new Error("chooseNextCheck needs at least one suspect");
   if (ctx.mixed) {
@@ -88,25 +109,52 @@ export function chooseNextCheck(
       reason: "The refrigerant failed identification: deal with it before any further test.",
       separates: ["contaminated_refrigerant"],
       expectedShiftLogOdds: 0,
+      runsSystem: false,
     };
   }
-  const leak = CHECKS.find((c) => c.id === "leak_test");
-  if (systemEmpty && leak && leak.available(ctx)) {
+  if (state.active) {
+    const staticCheck = CHECKS.find((c) => c.id === "static_pressure");
+    if (state.reasons.every((r) => r === "electric_static_unknown") && staticCheck?.available(ctx)) {
+      return {
+        check: "static_pressure",
+        instruction: staticCheck.instruction,
+        reason: `${doNotRunReason(state)} A static reading with liquid shows it has a charge.`,
+        separates: [first],
+        expectedShiftLogOdds: 0,
+        runsSystem: false,
+      };
+    }
+    // Low only against the air: the parts are colder than the shop, so the reading waits for them.
+    const deficits = staticDeficits(ctx.input);
+    const onlyStatic = state.reasons.every((r) => r === "no_liquid" || r === "electric_static_low");
+    const limitK =
+      ctx.input.compressorType === "electric" ? DO_NOT_RUN.electricStaticBelowK : STATIC_CHECK.noLiquidBelowK;
+    if (onlyStatic && deficits?.soakK != null && deficits.soakK <= limitK) {
+      return {
+        check: "static_repeat",
+        instruction: STATIC_REPEAT_COLD_PARTS,
+        reason: `${doNotRunReason(state)} The reading is low only against the air temperature: the parts are colder than the shop.`,
+        separates: [first],
+        expectedShiftLogOdds: 0,
+        runsSystem: false,
+      };
+    }
     return {
-      check: "leak_test",
-      instruction: leak.instruction,
-      reason: "The system is empty: the leak must be found and repaired before any running test.",
+      check: "repair_path",
+      instruction: repairPath(ctx.input, state, first),
+      reason: doNotRunReason(state),
       separates: [first],
       expectedShiftLogOdds: 0,
+      runsSystem: false,
     };
   }
   if (second !== undefined) {
-    let best: { id: CheckId; instruction: string; shift: number } | null = null;
+    let best: { id: CheckId; instruction: string; shift: number; runsSystem: boolean } | null = null;
     for (const check of CHECKS) {
       if (!check.available(ctx)) continue;
       const shift = expectedShift(check.outcomes(ctx), first, second);
       if (shift > MIN_USEFUL_SHIFT && (best === null || shift > best.shift + 1e-9))
-        best = { id: check.id, instruction: check.instruction, shift };
+        best = { id: check.id, instruction: check.instruction, shift, runsSystem: check.runsSystem };
     }
     if (best) {
       return {
@@ -115,6 +163,7 @@ export function chooseNextCheck(
         reason: `Best separates ${CAUSE_SHORT_NAMES[first]} from ${CAUSE_SHORT_NAMES[second]}.`,
         separates: [first, second],
         expectedShiftLogOdds: best.shift,
+        runsSystem: best.runsSystem,
       };
     }
   }
@@ -124,5 +173,6 @@ export function chooseNextCheck(
     reason: `No remaining check separates the leading suspects; confirm ${CAUSE_SHORT_NAMES[first]} directly.`,
     separates: [first],
     expectedShiftLogOdds: 0,
+    runsSystem: CONFIRM_RUNS_SYSTEM[first],
   };
 }
