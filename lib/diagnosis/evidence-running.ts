@@ -5,7 +5,9 @@ import type { Extraction, SaturationBand } from "./evidence-types";
 import type { ReadingObservationId } from "./observations";
 import { gaugeKpa, kelvin, type Quantity, tempC } from "./quantities";
 import type { DiagnosisInput } from "./schema";
+import { standardBarometricKpa } from "@/lib/units/barometric";
 import {
+  CYCLING,
   FALLBACK_CONDENSING_OVER_AMBIENT_K,
   FALLBACK_EVAPORATING_C,
   HIGH_SIDE_FAR_K,
@@ -119,7 +121,7 @@ export function addRunningEvidence(input: DiagnosisInput, barometricKpa: number,
       out.observations.push({ id: "low_side:vacuum", message: { key: "low_side:vacuum", values: { low } } });
     } else if (evaporatingC === null) {
       out.notes.push({ key: "note:low_outside_table", values: { low }, words });
-    } else {
+    } else if (!snapshotInSwing(input, evaporatingC)) {
       out.observedGroups.add("low_side");
       const id: ReadingObservationId =
         evaporatingC < bands.low.minSaturationC - LOW_SIDE_FAR_BELOW_K
@@ -129,13 +131,19 @@ export function addRunningEvidence(input: DiagnosisInput, barometricKpa: number,
             : evaporatingC <= bands.low.maxSaturationC
               ? "low_side:normal"
               : "low_side:high";
+      const cycling = input.compressorType === "cycling_clutch";
       out.observations.push({
         id,
+        // A cycling clutch swings the low side between cut-out and cut-in: one reading counts for half.
+        ...(cycling ? { strength: CYCLING.snapshotStrength } : {}),
         message: {
           key: id,
           values: { low, evaporating: tempC(evaporatingC), ...bandValues(bands.low, ambientC) },
         },
       });
+      if (cycling) out.notes.push({ key: "note:low_side_in_swing" });
+    } else {
+      out.notes.push({ key: "note:low_side_graded_at_cut_points" });
     }
   }
 
@@ -164,6 +172,19 @@ export function addRunningEvidence(input: DiagnosisInput, barometricKpa: number,
     addSuperheat(input, evaporatingC, input.suctionLineC, out);
   }
 }
+
+/**
+ * On a cycling clutch with its cut-out and cut-in recorded, a single low-side reading inside the swing
+ * says nothing more; one well below the cut-out does (the switch should have opened).
+ */
+function snapshotInSwing(input: DiagnosisInput, evaporatingC: number): boolean {
+  if (input.compressorType !== "cycling_clutch" || input.lowCutOutKpaGauge === undefined) return false;
+  if (input.lowCutInKpaGauge === undefined) return false;
+  const cutOutC = saturationOrNull(input.refrigerant, input.lowCutOutKpaGauge + barometricOf(input));
+  return cutOutC !== null && evaporatingC >= cutOutC - CYCLING.marginK;
+}
+
+const barometricOf = (input: DiagnosisInput) => standardBarometricKpa(input.altitudeM ?? 0);
 
 function addSubcooling(
   input: DiagnosisInput,

@@ -39,6 +39,9 @@ export interface ComputedValues {
   chargeDeltaG?: number;
   chargeDeltaPct?: number;
   highSideTranscritical?: boolean;
+  /** saturation temperatures of the low side at clutch cut-out and cut-in, °C */
+  cutOutC?: number;
+  cutInC?: number;
 }
 
 export interface Extraction {

@@ -1,6 +1,7 @@
 import { chargeDeviationVerdict, type ChargeDeviationGrade } from "@/lib/service/charge";
 import { standardBarometricKpa } from "@/lib/units/barometric";
 import { addRunningEvidence } from "./evidence-running";
+import { addClutchEvidence, CLUTCH_SYMPTOMS } from "./evidence-clutch";
 import { addStaticEvidence } from "./evidence-static";
 import type { Extraction } from "./evidence-types";
 import type { DiagnosisInput } from "./schema";
@@ -35,9 +36,11 @@ export function extractEvidence(input: DiagnosisInput): Extraction {
     out.notes.push({ key: "note:r744_limited" });
     out.confidenceFactor *= 0.7;
   }
+  addClutchEvidence(input, barometricKpa, out);
   addChargeEvidence(input, out);
   addVentEvidence(input, out);
   for (const symptom of symptoms) {
+    if (CLUTCH_SYMPTOMS.has(symptom)) continue;
     const id = `symptom:${symptom}` as const;
     out.observations.push({ id, message: { key: id } });
   }

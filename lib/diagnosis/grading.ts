@@ -53,6 +53,19 @@ export const STATIC_SOAK = { minMinutes: 60, weakFactor: 0.5 } as const;
 // reading within 2 K of saturation, the gauge and thermometer tolerance above (from memory).
 export const DO_NOT_RUN = { rechargedFromFractionOfLabel: 0.5, electricStaticBelowK: 2 } as const;
 
+// Cycling-clutch switch points as evaporating temperature, °C: opens near 22–25 psig and closes near
+// 45–47 psig R-134a, −4…−2 °C and 9.5…11 °C (common practice; R-1234yf at the same evaporator temperatures).
+// A reading more than 3 K outside is a switch or sensor fault (from memory). A clutch that never cycles
+// points to icing only up to 30 °C ambient (from memory: above it the load keeps the clutch in). On a cycling
+// clutch a single low-side reading is a point in the swing and counts for half (judgement).
+export const CYCLING = {
+  cutOutC: { min: -4, max: -2 },
+  cutInC: { min: 9.5, max: 11 },
+  marginK: 3,
+  mildAmbientMaxC: 30,
+  snapshotStrength: 0.5,
+} as const;
+
 // SAE J2099 / J2912: below 98 % the refrigerant is not "pure" and must not be recycled.
 export const PURITY_PASS_PCT = 98;
 // Identifier air (NCG) grading, weight % (from memory).
@@ -78,6 +91,7 @@ export const GRADING = {
   STATIC_CHECK,
   STATIC_SOAK,
   DO_NOT_RUN,
+  CYCLING,
   PURITY_PASS_PCT,
   AIR_PCT,
   CHARGE,

@@ -45,6 +45,8 @@ const CHARGE =
   "Charge by weight is the only absolute charge check: TM 5-3805-291-23-1; grades shared with the service record (lib/service/charge.ts); recovery may leave 18–30 % behind: SAE J2762; weights common practice";
 const IDENTIFIER =
   "Identifier pass mark 98 %: SAE J2099 / J2912; NCG shown as weight %: SAE J2912; air-% grading from memory";
+const CYCLING_SWITCH =
+  "Cycling switch opens near 22–25 psig and closes near 45–47 psig R-134a (common practice); weights common practice";
 const VENT = "Centre-vent 3–8 °C expected (common practice); warm threshold from memory";
 
 export const CAUSE_PRIORS: Record<CauseId, CausePrior> = {
@@ -616,6 +618,28 @@ export const LIKELIHOOD_TABLE: readonly LikelihoodRow[] = [
     },
   },
 
+  // Cycling clutch: the low side at cut-out and cut-in against a switch's usual points
+  {
+    observation: "cycling:opens_late",
+    source: CYCLING_SWITCH + "; a switch that opens late lets the evaporator ice",
+    weights: { evaporator_icing: 2.0, no_refrigerant_fault: -1.0 },
+  },
+  {
+    observation: "cycling:normal",
+    source: CYCLING_SWITCH,
+    weights: { evaporator_icing: -1.0, no_refrigerant_fault: 0.2 },
+  },
+  {
+    observation: "cycling:opens_early",
+    source: CYCLING_SWITCH + "; a switch that opens early cuts cooling short (cycling-control fault)",
+    weights: { evaporator_icing: 1.0, no_refrigerant_fault: -0.8 },
+  },
+  {
+    observation: "cycling:closes_late",
+    source: CYCLING_SWITCH + "; a switch that closes late leaves long warm pauses (cycling-control fault)",
+    weights: { evaporator_icing: 1.0, no_refrigerant_fault: -0.8 },
+  },
+
   // System design
   {
     observation: "device:orifice_tube",
@@ -655,7 +679,8 @@ export const LIKELIHOOD_TABLE: readonly LikelihoodRow[] = [
   },
   {
     observation: "symptom:clutch_not_cycling",
-    source: "Evaporator icing: the clutch fails to cycle off (common practice)",
+    source:
+      "Evaporator icing: the clutch fails to cycle off (common practice); counted only on a cycling clutch in mild weather with the low side below its cut-out",
     weights: { evaporator_icing: 1.5, undercharge: -0.5 },
   },
   {

@@ -72,6 +72,14 @@ const READING_TEMPLATES = {
     "Static pressure {static} sits {excess} above saturation ({saturation}) at the {@what} of {reference}[ after {soakTime} of soak]{@weak}.",
   "static:very_high":
     "Static pressure {static} sits {excess} above saturation ({saturation}) at the {@what} of {reference}[ after {soakTime} of soak]{@weak}.",
+  "cycling:opens_late":
+    "The clutch cuts out only at {cutOut} ({cutOutSat} saturation), below the {cutOutMin:n} to {cutOutMax} a cycling switch usually opens at: the evaporator can ice before it cuts out.",
+  "cycling:normal":
+    "The clutch cuts out at {cutOut} and back in at {cutIn} ({cutOutSat} and {cutInSat} saturation): the cycling switch works at its usual points.",
+  "cycling:opens_early":
+    "The clutch cuts out already at {cutOut} ({cutOutSat} saturation), above the {cutOutMin:n} to {cutOutMax} a cycling switch usually opens at: it stops cooling early.",
+  "cycling:closes_late":
+    "The clutch cuts back in only at {cutIn} ({cutInSat} saturation), above the {cutInMin:n} to {cutInMax} a cycling switch usually closes at: long pauses with little cooling.",
 } as const satisfies Partial<Record<ObservationId, string>>;
 
 const NOTE_TEMPLATES = {
@@ -91,6 +99,27 @@ const NOTE_TEMPLATES = {
     "Static pressure not judged: at {reference} the pressures of a full and a nearly empty system are too close; let the system warm to above {coldest} and read it again.",
   "note:static_outside_table_co2":
     "Static pressure check not possible: {ambient} is outside the R-744 saturation table (CO2 has no liquid above about {critical}).",
+  "clutch:never_cycles_icing":
+    "Reported: the clutch never switches off on a cycling-clutch system at {ambient}, with the low side below a switch's {cutOut} cut-out.",
+  "note:never_cycles_variable":
+    "A clutch that never switches off is normal on a variable-displacement compressor: it was not counted.",
+  "note:never_cycles_electric": "An electric compressor has no clutch to cycle: that answer was not counted.",
+  "note:never_cycles_type_unknown":
+    "A clutch that never switches off says something only on a cycling-clutch compressor, and the compressor type is not known: it was not counted.",
+  "note:never_cycles_high_load":
+    "At {ambient} the load keeps a cycling clutch engaged (it points to icing only up to about {mildMax}): a clutch that never switches off was not counted.",
+  "note:never_cycles_low_side_unknown":
+    "A clutch that never switches off points to icing only with the low side below its cut-out; without a low-side reading it was not counted.",
+  "note:never_cycles_low_side_above":
+    "The low side evaporates at {evaporating}, above a cycling switch's {cutOut} cut-out: a clutch that never switches off was not counted.",
+  "note:no_clutch_electric":
+    "An electric compressor has no clutch or belt: the answer about {@symptom} was not counted; its speed request and inverter data come from a scan tool.",
+  "note:cycling_points_not_cycling":
+    "The low side at cut-out and cut-in applies to a cycling clutch only: it was not graded.",
+  "note:low_side_in_swing":
+    "On a cycling clutch the low side swings between cut-out and cut-in, so one reading counts for half: record it at cut-out and at cut-in.",
+  "note:low_side_graded_at_cut_points":
+    "The low side was judged at the clutch's cut-out and cut-in, not at a single moment of the swing.",
   "gate:mixed":
     "The refrigerant failed identification: it must be dealt with before any other repair, and pressure–temperature checks are not valid on a mix.",
   "gate:empty": "The system is empty: find and repair the leak before running any test.",

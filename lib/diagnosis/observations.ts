@@ -16,6 +16,7 @@ export const READING_GRADES = {
   air: ["none", "some", "high"],
   vent: ["freezing", "cold", "cool", "warm"],
   device: ["orifice_tube", "txv"],
+  cycling: ["opens_late", "normal", "opens_early", "closes_late"],
 } as const;
 
 export type ReadingGroup = keyof typeof READING_GRADES;
