@@ -6,7 +6,7 @@ import { ENGINE_VERSION } from "./engine-version";
 import { type DiagnosisInput, diagnosisInputSchema } from "./schema";
 import { real, validInput } from "./test-inputs";
 
-describe("diagnose on any input the schema accepts (fast-check)", () => {
+describe("diagnose on any input the schema accepts (fast-check)", { timeout: 30_000 }, () => {
   it("returns every cause once, with scores and confidences in [0, 1], sorted, never NaN, and cautions ending in deference", () => {
     fc.assert(
       fc.property(validInput, (input) => {
@@ -91,7 +91,7 @@ describe("diagnose on any input the schema accepts (fast-check)", () => {
   });
 });
 
-describe("monotone where the physics says so (fast-check)", () => {
+describe("monotone where the physics says so (fast-check)", { timeout: 30_000 }, () => {
   const scoreOf = (input: DiagnosisInput, cause: string) =>
     diagnose(input).suspects.find((s) => s.cause === cause)?.score ?? Number.NaN;
 

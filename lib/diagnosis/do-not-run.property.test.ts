@@ -69,7 +69,7 @@ const nextReading: fc.Arbitrary<{ fields: Partial<DiagnosisInput>; symptom?: (ty
     fc.constantFrom(...SYMPTOM_IDS).map((symptom) => ({ fields: {}, symptom })),
   );
 
-describe("the do-not-run state (fast-check)", () => {
+describe("the do-not-run state (fast-check)", { timeout: 30_000 }, () => {
   it("never offers a check that runs the system while the state holds", () => {
     let held = 0;
     fc.assert(

@@ -15,6 +15,7 @@ import {
   LOW_SIDE_FAR_BELOW_K,
   SUBCOOLING_K,
   SUPERHEAT_K,
+  SUPERHEAT_LOAD,
 } from "./grading";
 
 function bandsFor(
@@ -28,6 +29,7 @@ function bandsFor(
         refrigerant: input.refrigerant,
         ambientC: input.ambientC,
         relativeHumidityPct: input.relativeHumidityPct,
+        meteringDevice: input.expansionDevice,
       })
     : null;
   if (bands) {
@@ -44,7 +46,10 @@ function bandsFor(
       minSaturationC: input.ambientC + FALLBACK_CONDENSING_OVER_AMBIENT_K.min,
       maxSaturationC: input.ambientC + FALLBACK_CONDENSING_OVER_AMBIENT_K.max,
     },
-    low: { minSaturationC: FALLBACK_EVAPORATING_C.min, maxSaturationC: FALLBACK_EVAPORATING_C.max },
+    low: {
+      minSaturationC: FALLBACK_EVAPORATING_C.min,
+      maxSaturationC: FALLBACK_EVAPORATING_C.max,
+    },
     fromTables: false,
   };
 }
@@ -231,12 +236,17 @@ function addSuperheat(
   out.computed.superheatK = superheatK;
   out.observedGroups.add("superheat");
   const t = SUPERHEAT_K[input.expansionDevice];
+  // At high load a fixed orifice cannot keep the evaporator fed, so its outlet superheats more.
+  const loadK =
+    input.expansionDevice === "orifice_tube"
+      ? Math.max(0, input.ambientC - SUPERHEAT_LOAD.fromC) * SUPERHEAT_LOAD.kPerK
+      : 0;
   const id: ReadingObservationId =
     t.nearZero !== null && superheatK < t.nearZero
       ? "superheat:near_zero"
-      : superheatK <= t.high
+      : superheatK <= t.high + loadK
         ? "superheat:normal"
-        : superheatK <= t.veryHigh
+        : superheatK <= t.veryHigh + loadK
           ? "superheat:high"
           : "superheat:very_high";
   out.observations.push({

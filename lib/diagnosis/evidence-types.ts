@@ -36,6 +36,9 @@ export interface ComputedValues {
   staticReferenceC?: number;
   expectedHigh?: SaturationBand;
   expectedLow?: SaturationBand;
+  /** the coldest a working system's centre vent should read for this air, and the air's wet bulb, °C */
+  ventColdMaxC?: number;
+  wetBulbC?: number;
   chargeDeltaG?: number;
   chargeDeltaPct?: number;
   highSideTranscritical?: boolean;

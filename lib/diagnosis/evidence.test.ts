@@ -1,9 +1,9 @@
 import { describe, expect, it } from "vitest";
-import { extractEvidence } from "./evidence";
+import { extractEvidence, ventColdLimitC } from "./evidence";
 import { formatMessage } from "./messages";
 import type { DiagnosisInput } from "./schema";
 import { saturationPressure } from "@/lib/refrigerants";
-import { STATIC_CHECK, STATIC_SOAK } from "./grading";
+import { STATIC_CHECK, STATIC_SOAK, SUBCOOLING_K, SUPERHEAT_K, SUPERHEAT_LOAD, VENT_C } from "./grading";
 
 // Saturation values: R-134a from the Tillner-Roth & Baehr (1994) equation of state, J. Phys. Chem. Ref. Data 23, 657;
 // R-1234yf from Richter, McLinden & Lemmon (2011), J. Chem. Eng. Data 56, 3254. Gauge = absolute − 101.325 kPa.
@@ -199,10 +199,46 @@ describe("identifier, charge and vent", () => {
     );
   });
 
-  it("grades the centre vent against 3–8 °C (common practice), allowing more at very hot ambient (from memory)", () => {
-    expect(ids({ ...r134aOrifice, ventC: 6 })).toContain("vent:cold");
-    expect(ids({ ...r134aOrifice, ventC: 18 })).toContain("vent:warm");
-    expect(ids({ ...r134aOrifice, ambientC: 42, ventC: 10 })).toContain("vent:cold");
+  it("grades the centre vent against 3–8 °C in mild weather (common practice)", () => {
+    expect(ids({ ...r134aOrifice, ambientC: 21, relativeHumidityPct: 50, ventC: 6 })).toContain("vent:cold");
+    expect(ids({ ...r134aOrifice, ambientC: 21, relativeHumidityPct: 50, ventC: 18 })).toContain("vent:warm");
+  });
+
+  it("raises the vent target with the air's wet bulb, humidity's latent load included (ASHRAE Fundamentals ch. 1 psychrometrics; 0.4 K per K from memory)", () => {
+    // 35 °C at 80 %: wet bulb about 31.9 °C (ASHRAE Fundamentals ch. 1), so 8 + 0.4 × 16.9 ≈ 14.7 °C.
+    const humid = extractEvidence({ ...r134aOrifice, ambientC: 35, relativeHumidityPct: 80, ventC: 13 });
+    expect(humid.computed.wetBulbC).toBeCloseTo(31.9, 0);
+    expect(humid.computed.ventColdMaxC).toBeCloseTo(14.7, 0);
+    expect(humid.observations.map((o) => o.id)).toContain("vent:cold");
+    const dry = extractEvidence({ ...r134aOrifice, ambientC: 35, relativeHumidityPct: 20, ventC: 13 });
+    expect(dry.observations.map((o) => o.id)).toContain("vent:cool");
+    const limit = (relativeHumidityPct: number) =>
+      ventColdLimitC({ ambientC: 30, relativeHumidityPct }).coldMaxC;
+    expect(limit(80)).toBeGreaterThan(limit(50));
+    expect(limit(50)).toBeGreaterThan(limit(20));
+    expect(ventColdLimitC({ ambientC: 12, relativeHumidityPct: 40 }).coldMaxC).toBe(VENT_C.coldBaseC);
+  });
+
+  it("treats about 10 K of subcooling as normal on a valve system, 4–12 K (from memory)", () => {
+    const valve = {
+      ...r134aOrifice,
+      expansionDevice: "txv",
+      ambientC: 32,
+      highKpaGauge: gauge(R134A_SAT_KPA_ABS[50]),
+    } as const;
+    expect(ids({ ...valve, liquidLineC: 40 })).toContain("subcooling:normal");
+    expect(ids({ ...valve, liquidLineC: 50 - SUBCOOLING_K.txv.high - 0.1 })).toContain("subcooling:high");
+    expect(ids({ ...valve, liquidLineC: 50 - SUBCOOLING_K.txv.low + 0.1 })).toContain("subcooling:low");
+  });
+
+  it("allows an orifice-tube evaporator more superheat at high load: 0.5 K per K above 30 °C (common practice; figures from memory)", () => {
+    const orifice = (ambientC: number, superheatK: number) =>
+      ids({ ...r134aOrifice, ambientC, lowKpaGauge: gauge(R134A_SAT_KPA_ABS[0]), suctionLineC: superheatK });
+    expect(orifice(30, 6)).toContain("superheat:high");
+    expect(orifice(42, 6)).toContain("superheat:normal");
+    expect(orifice(42, SUPERHEAT_K.orifice_tube.high + 12 * SUPERHEAT_LOAD.kPerK + 0.1)).toContain(
+      "superheat:high",
+    );
   });
 });
 

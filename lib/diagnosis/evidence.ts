@@ -1,4 +1,5 @@
 import { chargeDeviationVerdict, type ChargeDeviationGrade } from "@/lib/service/charge";
+import { wetBulbC } from "@/lib/psychro";
 import { standardBarometricKpa } from "@/lib/units/barometric";
 import { addRunningEvidence } from "./evidence-running";
 import { addClutchEvidence, CLUTCH_SYMPTOMS } from "./evidence-clutch";
@@ -103,12 +104,38 @@ function addChargeEvidence(input: DiagnosisInput, out: Extraction): void {
   out.observations.push({ id, message: { key: id, values } });
 }
 
+/** The coldest a working system's centre vent should read for this air: rises with the wet-bulb temperature. */
+export function ventColdLimitC(
+  input: Pick<DiagnosisInput, "ambientC" | "relativeHumidityPct" | "altitudeM">,
+): {
+  coldMaxC: number;
+  wetBulbC: number | null;
+} {
+  const relativeHumidityPct = Math.min(
+    100,
+    Math.max(1, input.relativeHumidityPct ?? VENT_C.unknownHumidityPct),
+  );
+  let wetBulb: number | null = null;
+  try {
+    wetBulb = wetBulbC({
+      dryBulbC: input.ambientC,
+      relativeHumidityPct,
+      pressureKpa: standardBarometricKpa(input.altitudeM ?? 0),
+    });
+  } catch (error) {
+    if (!(error instanceof RangeError)) throw error;
+  }
+  const riseK = wetBulb === null ? 0 : Math.max(0, wetBulb - VENT_C.wetBulbRefC) * VENT_C.riseKPerKWetBulb;
+  return { coldMaxC: VENT_C.coldBaseC + riseK, wetBulbC: wetBulb };
+}
+
 function addVentEvidence(input: DiagnosisInput, out: Extraction): void {
   if (input.ventC === undefined) return;
   out.observedGroups.add("vent");
-  const riseK = Math.max(0, input.ambientC - VENT_C.hotAmbientC) * VENT_C.riseKPerK;
-  const coldMaxC = VENT_C.cold + riseK;
-  const warmMinC = VENT_C.warm + riseK;
+  const { coldMaxC, wetBulbC: wetBulb } = ventColdLimitC(input);
+  out.computed.ventColdMaxC = coldMaxC;
+  if (wetBulb !== null) out.computed.wetBulbC = wetBulb;
+  const warmMinC = coldMaxC + VENT_C.warmAboveColdK;
   const id =
     input.ventC < VENT_C.freezing
       ? "vent:freezing"
@@ -121,7 +148,14 @@ function addVentEvidence(input: DiagnosisInput, out: Extraction): void {
     id,
     message: {
       key: id,
-      values: { vent: tempC(input.ventC), ambient: tempC(input.ambientC), coldMax: tempC(coldMaxC) },
+      values: {
+        vent: tempC(input.ventC),
+        ambient: tempC(input.ambientC),
+        coldMax: tempC(coldMaxC),
+        ...(input.relativeHumidityPct === undefined
+          ? {}
+          : { humidity: percent(input.relativeHumidityPct, 0) }),
+      },
     },
   });
 }

@@ -1,4 +1,10 @@
 import { REFRIGERANT_IDS } from "@/lib/refrigerants";
+import {
+  CONDENSING_ABOVE_AMBIENT_K,
+  EVAPORATING_C,
+  EVAPORATING_RISE,
+  HUMIDITY_SHIFT_MAX_K,
+} from "@/lib/refrigerants/expected-bands";
 import { CHARGE_DEVIATION_LIMITS, chargeTolerance } from "@/lib/service/charge";
 
 /**
@@ -17,17 +23,22 @@ export const LIFT_CLOSE_MARGIN_K = 5;
 export const FALLBACK_CONDENSING_OVER_AMBIENT_K = { min: 14, max: 30 } as const;
 export const FALLBACK_EVAPORATING_C = { min: -4, max: 8 } as const;
 
-// Typical ranges, K (from memory; the vehicle maker's figures win): TXV systems subcool 3–9 K and hold
-// superheat 2–10 K; orifice-tube evaporators flood into the accumulator, so near-zero superheat is normal there
-// (nearZero null: not a separate grade).
+// Typical ranges, K (from memory; the vehicle maker's figures win). Valve systems subcool about 4–12 K: wider
+// than the 3–8 K often quoted, since 10 K on a healthy valve system is common (stationary valve systems run
+// 10–15 °F, common practice); they hold superheat 2–10 K. Orifice-tube systems subcool modestly, and their
+// evaporators flood into the accumulator, so near-zero superheat is normal there (nearZero null: no grade).
 export const SUBCOOLING_K = {
-  txv: { none: 1, low: 3, high: 9, veryHigh: 15 },
+  txv: { none: 1, low: 4, high: 12, veryHigh: 18 },
   orifice_tube: { none: 0.5, low: 2, high: 8, veryHigh: 14 },
 } as const;
 export const SUPERHEAT_K = {
   txv: { nearZero: 2, high: 10, veryHigh: 20 },
   orifice_tube: { nearZero: null, high: 4, veryHigh: 12 },
 } as const;
+// At high load a fixed orifice cannot keep the evaporator fed and its outlet superheats: the orifice-tube
+// superheat grades rise 0.5 K per K of ambient above 30 °C (common practice for the rise, from memory for
+// the figures).
+export const SUPERHEAT_LOAD = { fromC: 30, kPerK: 0.5 } as const;
 
 // A static reading under about 70 kPa gauge (10 psig), or under half the saturation pressure at the soak
 // temperature, means next to no refrigerant is left: either condition (common practice).
@@ -76,8 +87,19 @@ export const CHARGE = {
   limits: CHARGE_DEVIATION_LIMITS,
   accuracyG: Object.fromEntries(REFRIGERANT_IDS.map((id) => [id, chargeTolerance(id).toleranceG])),
 } as const;
-// Centre-vent grading, °C (3–8 °C expected: common practice); allowed to rise 0.3 K per K above 32 °C ambient (from memory).
-export const VENT_C = { freezing: 2, cold: 8, warm: 15, hotAmbientC: 32, riseKPerK: 0.3 } as const;
+// Centre vent, °C. 3–8 °C is expected in mild weather (common practice); the target rises with the
+// evaporator's load, humid air's latent load included, which the inlet air's wet-bulb temperature tracks
+// (psychrometrics: ASHRAE Handbook—Fundamentals ch. 1; the coil's load follows the air's enthalpy, a
+// refrigeration textbook): 0.4 K per K of wet bulb above 15 °C, about 21 °C at 50 % (from memory). Humidity
+// unknown counts as 50 %. Warm is 7 K past the cold limit (from memory); below 2 °C the coil can freeze.
+export const VENT_C = {
+  freezing: 2,
+  coldBaseC: 8,
+  wetBulbRefC: 15,
+  riseKPerKWetBulb: 0.4,
+  warmAboveColdK: 7,
+  unknownHumidityPct: 50,
+} as const;
 
 export const GRADING = {
   HIGH_SIDE_FAR_K,
@@ -87,6 +109,8 @@ export const GRADING = {
   FALLBACK_EVAPORATING_C,
   SUBCOOLING_K,
   SUPERHEAT_K,
+  SUPERHEAT_LOAD,
+  EXPECTED_BANDS: { CONDENSING_ABOVE_AMBIENT_K, EVAPORATING_C, EVAPORATING_RISE, HUMIDITY_SHIFT_MAX_K },
   STATIC_EMPTY,
   STATIC_CHECK,
   STATIC_SOAK,

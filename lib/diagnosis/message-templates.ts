@@ -15,7 +15,7 @@ const SUPERHEAT_LEAD = "Superheat {superheat} (suction line {suction} against {e
 const CHARGE_LEAD = "Recovered {recovered} against a label charge of {label}";
 const CHARGE_SHORT = `${CHARGE_LEAD}: {short} ({shortPct}) short`;
 const CHARGE_OVER = `${CHARGE_LEAD}: {over} ({overPct}) over`;
-const VENT_LEAD = "Centre vent {vent} at {ambient} ambient";
+const VENT_LEAD = "Centre vent {vent} at {ambient} ambient[ and {humidity} humidity]";
 
 const READING_TEMPLATES = {
   "device:txv":

@@ -1,6 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { gaugeToAbsoluteKpa, pressureToKpa } from "@/lib/units";
+import { EVAPORATING_C, EVAPORATING_RISE } from "./expected-bands";
 import {
   EXPECTED_BANDS_MIN_AMBIENT_C,
   expectedBands,
@@ -87,8 +88,28 @@ describe("expected bands from the physics", () => {
     for (const side of ["high", "low"] as const) {
       expect(humid[side].maxKpaAbs).toBeGreaterThan(neutral[side].maxKpaAbs);
       expect(dry[side].maxKpaAbs).toBeLessThan(neutral[side].maxKpaAbs);
-      expect(humid[side].minSaturationC - neutral[side].minSaturationC).toBeLessThanOrEqual(2);
+      // Both edges move, by the humidity shift: +1.6 K at 90 %, −1.4 K at 15 % (±2 K at 100 % and 0 %).
+      for (const edge of ["minSaturationC", "maxSaturationC"] as const) {
+        expect(humid[side][edge] - neutral[side][edge]).toBeCloseTo(1.6, 9);
+        expect(dry[side][edge] - neutral[side][edge]).toBeCloseTo(-1.4, 9);
+      }
     }
+    expect(humid.high.minKpaAbs).toBeGreaterThan(neutral.high.minKpaAbs);
+    expect(dry.high.minKpaAbs).toBeLessThan(neutral.high.minKpaAbs);
+  });
+
+  it("lets an orifice-tube low side rise with load above 30 °C, 0.4 K per K (common practice; figures from memory), and holds a valve system's", () => {
+    const low = (ambientC: number, meteringDevice?: "orifice_tube" | "txv") =>
+      expectedBands({ refrigerant: "R-134a", ambientC, meteringDevice })!.low;
+    expect(low(30, "orifice_tube").maxSaturationC).toBeCloseTo(EVAPORATING_C.max, 9);
+    expect(low(45, "orifice_tube").maxSaturationC).toBeCloseTo(
+      EVAPORATING_C.max + 15 * EVAPORATING_RISE.kPerK,
+      9,
+    );
+    expect(low(45, "orifice_tube").minSaturationC).toBeCloseTo(EVAPORATING_C.min, 9);
+    expect(low(45, "txv").maxSaturationC).toBeCloseTo(EVAPORATING_C.max, 9);
+    expect(low(45).maxSaturationC).toBeCloseTo(EVAPORATING_C.max, 9);
+    expect(low(EVAPORATING_RISE.fromC - 1, "orifice_tube").maxSaturationC).toBeCloseTo(EVAPORATING_C.max, 9);
   });
 
   it("R-744: no bands once the high side would be above the critical point (Span & Wagner 1996)", () => {
@@ -108,14 +129,37 @@ describe("expected bands from the physics", () => {
         fc.double(),
         fc.option(fc.double(), { nil: undefined }),
         (refrigerant, ambientC, relativeHumidityPct) => {
-          const bands = expectedBands({ refrigerant, ambientC, relativeHumidityPct });
-          if (bands) {
-            expect(bands.high.minKpaAbs).toBeGreaterThan(bands.low.maxKpaAbs);
-            expect(bands.high.minSaturationC).toBeGreaterThan(ambientC);
-          }
+          expect(() => expectedBands({ refrigerant, ambientC, relativeHumidityPct })).not.toThrow();
+        },
+      ),
+      { numRuns: 500 },
+    );
+  });
+
+  it("keeps the high side above the low side and above the ambient wherever it gives bands (property over shop conditions)", () => {
+    let reached = 0;
+    fc.assert(
+      fc.property(
+        fc.constantFrom(...REFRIGERANT_IDS),
+        // Whole tenths, spread evenly: fc.double crowds its values near zero, where no bands exist.
+        fc.integer({ min: -300, max: 600 }).map((tenths) => tenths / 10),
+        fc.option(
+          fc.integer({ min: 0, max: 1000 }).map((tenths) => tenths / 10),
+          { nil: undefined },
+        ),
+        fc.constantFrom("orifice_tube" as const, "txv" as const, undefined),
+        (refrigerant, ambientC, relativeHumidityPct, meteringDevice) => {
+          const bands = expectedBands({ refrigerant, ambientC, relativeHumidityPct, meteringDevice });
+          if (!bands) return;
+          reached += 1;
+          expect(bands.high.minKpaAbs).toBeGreaterThan(bands.low.maxKpaAbs);
+          expect(bands.high.minSaturationC).toBeGreaterThan(ambientC);
+          expect(bands.low.maxSaturationC).toBeGreaterThan(bands.low.minSaturationC);
         },
       ),
       { numRuns: 2000 },
     );
+    // About 35 % of the conditions have bands (10 °C up to the top of the table, never R-744): make sure they are reached.
+    expect(reached).toBeGreaterThan(500);
   });
 });

@@ -30,6 +30,13 @@ export const EVAPORATING_C = { min: -4, max: 8 } as const;
  */
 export const EXPECTED_BANDS_MIN_AMBIENT_C = 10;
 
+/**
+ * A fixed orifice feeds a fixed flow, so on an orifice-tube system the evaporator's pressure follows the
+ * load: its upper edge rises this much per kelvin of ambient above EVAPORATING_RISE_FROM_C (common
+ * practice for the rise, from memory for the figures). An expansion valve holds the evaporator steadier.
+ */
+export const EVAPORATING_RISE = { fromC: 30, kPerK: 0.4 } as const;
+
 /** Humid air loads the evaporator with condensing moisture, raising both sides; dry air lowers them (common practice). */
 export const HUMIDITY_SHIFT_MAX_K = 2;
 const NEUTRAL_RELATIVE_HUMIDITY_PCT = 50;
@@ -48,9 +55,15 @@ export function expectedBands(a: {
   refrigerant: RefrigerantId;
   ambientC: number;
   relativeHumidityPct?: number;
+  /** orifice_tube lets the low side's upper edge rise with load; absent or txv holds it */
+  meteringDevice?: "orifice_tube" | "txv";
 }): { high: PressureBand; low: PressureBand } | null {
   if (!Number.isFinite(a.ambientC) || a.ambientC < EXPECTED_BANDS_MIN_AMBIENT_C) return null;
   const shiftK = humidityShiftK(a.relativeHumidityPct);
+  const loadRiseK =
+    a.meteringDevice === "orifice_tube"
+      ? Math.max(0, a.ambientC - EVAPORATING_RISE.fromC) * EVAPORATING_RISE.kPerK
+      : 0;
   try {
     return {
       high: band(
@@ -58,7 +71,7 @@ export function expectedBands(a: {
         a.ambientC + CONDENSING_ABOVE_AMBIENT_K.min + shiftK,
         a.ambientC + CONDENSING_ABOVE_AMBIENT_K.max + shiftK,
       ),
-      low: band(a.refrigerant, EVAPORATING_C.min + shiftK, EVAPORATING_C.max + shiftK),
+      low: band(a.refrigerant, EVAPORATING_C.min + shiftK, EVAPORATING_C.max + shiftK + loadRiseK),
     };
   } catch (error) {
     if (error instanceof SaturationRangeError) return null;
