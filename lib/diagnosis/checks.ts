@@ -27,6 +27,8 @@ export interface CheckContext {
   mixed: boolean;
   /** The "do not run" state: only checks that leave the compressor off. */
   doNotRun: boolean;
+  /** Log-odds of the leader over the runner-up. */
+  gapLogOdds: number;
 }
 
 export interface CheckDefinition {

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { diagnose } from "./diagnose";
 import { formatMessage, type Message } from "./messages";
+import { weightOf } from "./scoring";
 
 const said = (messages: readonly Message[]) => messages.map((m) => formatMessage(m)).join(" ");
 import type { DiagnosisInput } from "./schema";
@@ -109,6 +110,46 @@ describe("separating the known confusions", () => {
       diagnose({ ...highHead, staticKpaGauge: 672, symptoms: ["condenser_fan_not_running", "worse_at_idle"] })
         .suspects[0]?.cause,
     ).toBe("condenser_airflow");
+  });
+
+  it("does not let high subcooling count against air: air raises the head and the gauge's subcooling with it (Dalton's law; common practice)", () => {
+    for (const grade of ["subcooling:high", "subcooling:very_high"] as const)
+      expect(weightOf(grade, "non_condensables")).toBeGreaterThanOrEqual(0);
+    // A clearly high static counts against a plain overcharge, which leaves the static at saturation.
+    expect(weightOf("static:high", "overcharge")).toBeLessThan(0);
+    expect(weightOf("static:very_high", "overcharge")).toBeLessThan(weightOf("static:high", "overcharge"));
+  });
+
+  it("sends a close call between overcharge and air to the static check, then the identifier (common practice)", () => {
+    const close = diagnose({
+      ...highHead,
+      liquidLineC: 52,
+      lowKpaGauge: 360,
+      symptoms: ["gauge_needle_flutter"],
+    });
+    const leaders = close.suspects
+      .slice(0, 2)
+      .map((s) => s.cause)
+      .sort();
+    expect(leaders).toEqual(["non_condensables", "overcharge"]);
+    expect(close.nextCheck.check).toBe("static_pressure");
+    // A static a little over saturation leaves them level: the identifier's air reading is next.
+    const withStatic = diagnose({
+      ...highHead,
+      liquidLineC: 52,
+      lowKpaGauge: 360,
+      staticKpaGauge: 730,
+      staticSoakC: 30,
+      staticSoakMin: 120,
+      symptoms: ["gauge_needle_flutter"],
+    });
+    expect(
+      withStatic.suspects
+        .slice(0, 2)
+        .map((s) => s.cause)
+        .sort(),
+    ).toEqual(["non_condensables", "overcharge"]);
+    expect(withStatic.nextCheck.check).toBe("identify_refrigerant");
   });
 
   it("asks for the charge by weight before condemning a compressor, and follows the weight (common practice)", () => {

@@ -76,6 +76,7 @@ export function diagnose(input: DiagnosisInput): Findings {
     symptoms: new Set(input.symptoms ?? []),
     mixed,
     doNotRun: doNotRun.active,
+    gapLogOdds: (suspects[0]?.logOdds ?? 0) - (suspects[1]?.logOdds ?? 0),
   };
   return {
     engineVersion: ENGINE_VERSION,

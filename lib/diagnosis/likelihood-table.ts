@@ -39,6 +39,12 @@ const BANDS =
   "Expected bands: US Army TM 5-3805-291-23-1 WP 0018 Table 1 quick-check pressures; weights common practice";
 const SC_SH =
   "Subcooling and superheat as defined in a refrigeration textbook; their use to split charge from restriction (common practice); mobile target ranges from memory; weights common practice";
+// Air's partial pressure raises the gauge, so subcooling worked out from it reads high with air too.
+const AIR_INFLATES_SUBCOOLING =
+  "; high subcooling does not count against air: air raises the head, and subcooling worked out from the gauge with it (Dalton's law; common practice)";
+// An overcharge alone leaves the static at saturation: liquid's pressure depends on its temperature, not its amount.
+const STATIC_SPLITS_OVERCHARGE =
+  "; a static above saturation counts against a plain overcharge, which leaves the static at saturation (common practice: the static check separates the two)";
 const STATIC_NCG =
   "Static P–T check: Dalton's law of partial pressures (a thermodynamics textbook); container non-condensable check in TM 5-3810-307-24-1-2 ch. 9; in-vehicle use common practice; weights common practice";
 const CHARGE =
@@ -294,26 +300,24 @@ export const LIKELIHOOD_TABLE: readonly LikelihoodRow[] = [
   },
   {
     observation: "subcooling:high",
-    source: SC_SH,
+    source: SC_SH + AIR_INFLATES_SUBCOOLING,
     weights: {
       overcharge: 1.0,
       high_side_restriction: 1.0,
       metering_restriction: 1.0,
       undercharge: -1.5,
-      non_condensables: -0.5,
       condenser_airflow: -0.2,
       no_refrigerant_fault: -0.8,
     },
   },
   {
     observation: "subcooling:very_high",
-    source: SC_SH,
+    source: SC_SH + AIR_INFLATES_SUBCOOLING,
     weights: {
       overcharge: 1.4,
       high_side_restriction: 1.5,
       metering_restriction: 1.4,
       undercharge: -2.5,
-      non_condensables: -1.0,
       condenser_airflow: -0.5,
       weak_compressor: -0.5,
       no_refrigerant_fault: -1.5,
@@ -415,7 +419,7 @@ export const LIKELIHOOD_TABLE: readonly LikelihoodRow[] = [
   },
   {
     observation: "static:normal",
-    source: STATIC_NCG,
+    source: STATIC_NCG + STATIC_SPLITS_OVERCHARGE,
     weights: {
       non_condensables: -1.5,
       contaminated_refrigerant: -0.8,
@@ -425,8 +429,9 @@ export const LIKELIHOOD_TABLE: readonly LikelihoodRow[] = [
   },
   {
     observation: "static:slightly_high",
-    source: STATIC_NCG,
+    source: STATIC_NCG + STATIC_SPLITS_OVERCHARGE,
     weights: {
+      overcharge: -0.4,
       non_condensables: 0.9,
       contaminated_refrigerant: 0.4,
       undercharge: -0.3,
@@ -435,8 +440,9 @@ export const LIKELIHOOD_TABLE: readonly LikelihoodRow[] = [
   },
   {
     observation: "static:high",
-    source: STATIC_NCG,
+    source: STATIC_NCG + STATIC_SPLITS_OVERCHARGE,
     weights: {
+      overcharge: -0.8,
       non_condensables: 2.0,
       contaminated_refrigerant: 0.8,
       undercharge: -0.3,
@@ -445,8 +451,9 @@ export const LIKELIHOOD_TABLE: readonly LikelihoodRow[] = [
   },
   {
     observation: "static:very_high",
-    source: STATIC_NCG,
+    source: STATIC_NCG + STATIC_SPLITS_OVERCHARGE,
     weights: {
+      overcharge: -1.2,
       non_condensables: 2.6,
       contaminated_refrigerant: 1.2,
       undercharge: -0.3,

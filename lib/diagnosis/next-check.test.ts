@@ -5,9 +5,9 @@ import { expectedShift } from "./next-check";
 
 describe("expectedShift", () => {
   it("is zero for a check whose results weigh both suspects alike", () => {
-    // static:normal and static:slightly_high move neither overcharge nor condenser airflow.
+    // static:normal and static:slightly_high move neither moisture nor an expansion valve stuck open.
     expect(
-      expectedShift([["static:normal"], ["static:slightly_high"]], "overcharge", "condenser_airflow"),
+      expectedShift([["static:normal"], ["static:slightly_high"]], "moisture", "metering_stuck_open"),
     ).toBe(0);
   });
 

@@ -79,6 +79,11 @@ export function expectedShift(
   return expected;
 }
 
+// Leaders within this many log-odds of each other are "close" (judgement: a likelihood ratio under 3).
+const CLOSE_PAIR_LOG_ODDS = Math.log(3);
+const isPair = (a: CauseId, b: CauseId, x: CauseId, y: CauseId) =>
+  (a === x && b === y) || (a === y && b === x);
+
 const STATIC_REPEAT_COLD_PARTS =
   "Leave the engine off and let the parts warm to the shop's temperature (an hour or more), then read the static pressure and the parts' temperature again before anything else.";
 
@@ -147,6 +152,26 @@ export function chooseNextCheck(ctx: CheckContext, leaders: readonly CauseId[], 
       expectedShiftLogOdds: 0,
       runsSystem: false,
     };
+  }
+  // Air against overcharge: when the two are close, the static check or the identifier settles it.
+  if (
+    second !== undefined &&
+    isPair(first, second, "overcharge", "non_condensables") &&
+    ctx.gapLogOdds < CLOSE_PAIR_LOG_ODDS
+  ) {
+    const settling = CHECKS.find(
+      (c) => (c.id === "static_pressure" || c.id === "identify_refrigerant") && c.available(ctx),
+    );
+    if (settling) {
+      return {
+        check: settling.id,
+        instruction: settling.instruction,
+        reason: `Overcharge and air look alike on the gauges; ${settling.id === "static_pressure" ? "the static check" : "the identifier"} tells them apart.`,
+        separates: [first, second],
+        expectedShiftLogOdds: expectedShift(settling.outcomes(ctx), first, second),
+        runsSystem: settling.runsSystem,
+      };
+    }
   }
   if (second !== undefined) {
     let best: { id: CheckId; instruction: string; shift: number; runsSystem: boolean } | null = null;
