@@ -11,6 +11,7 @@ export type CautionId =
   | "electric_never_without_charge"
   | "contaminated_do_not_recover"
   | "hydrocarbon_flammable"
+  | "sealant_found"
   | "head_pressure_high"
   | "empty_system"
   | "recover_slowly_accumulator"
@@ -39,6 +40,8 @@ export const CAUTION_TEXT: Record<CautionId, string> = {
     "Refrigerant failed identification: do not recover it into the shop's recovery machine or stock; use dedicated contaminated-refrigerant equipment (SAE J2851 type) or a separate labelled cylinder, and tell the owner in writing.",
   hydrocarbon_flammable:
     "Hydrocarbon detected: treat the system as flammable, keep ignition sources away and ventilate.",
+  sealant_found:
+    "Sealant in the system: keep it out of the shop's recovery machine and stock; recover with dedicated equipment or into a separate labelled cylinder, and tell the owner in writing.",
   head_pressure_high:
     "High side near the cut-out: keep hands and hoses clear of belts and fans, and stop the test if the pressure keeps climbing.",
   empty_system:
@@ -74,6 +77,7 @@ export function collectCautions(a: {
     ids.push("high_voltage_compressor", "electric_never_without_charge");
   if (mixed) ids.push("contaminated_do_not_recover");
   if (observations.has("symptom:identifier_flags_hydrocarbon")) ids.push("hydrocarbon_flammable");
+  if (observations.has("symptom:sealant_found")) ids.push("sealant_found");
   if (observations.has("high_side:very_high") || observations.has("symptom:high_pressure_cutout"))
     ids.push("head_pressure_high");
   if (doNotRun) ids.push("empty_system");

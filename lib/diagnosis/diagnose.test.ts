@@ -202,6 +202,43 @@ describe("separating the known confusions", () => {
   });
 });
 
+describe("oil and sealant have evidence of their own", () => {
+  const running = {
+    refrigerant: "R-134a",
+    expansionDevice: "orifice_tube",
+    compressorType: "cycling_clutch",
+    ambientC: 28,
+    relativeHumidityPct: 50,
+    highKpaGauge: 1150,
+    lowKpaGauge: 200,
+    ventC: 8,
+  } as const;
+
+  it("puts oil loss first for a noisy compressor after a part was swapped without oil (TM 5-3810-307-24-1-2 ch. 9; common practice)", () => {
+    const leader = (symptoms: DiagnosisInput["symptoms"]) =>
+      diagnose({ ...running, symptoms }).suspects[0]?.cause;
+    expect(leader(["compressor_noise", "part_replaced_no_oil_added"])).toBe("oil_loss");
+    expect(leader(["compressor_noise", "oil_short_at_drain"])).toBe("oil_loss");
+    expect(leader(["compressor_noise", "part_replaced_oil_added", "oil_normal_at_drain"])).not.toBe(
+      "oil_loss",
+    );
+    expect(weightOf("symptom:part_replaced_no_oil_added", "oil_loss")).toBeGreaterThan(0);
+    expect(weightOf("symptom:oil_normal_at_drain", "oil_loss")).toBeLessThan(0);
+  });
+
+  it("puts contaminated refrigerant first when sealant is found, even past an identifier that cannot see it (common practice)", () => {
+    const findings = diagnose({
+      ...running,
+      identifierPurityPct: 99.4,
+      identifierAirPct: 0.2,
+      symptoms: ["sealant_found"],
+    });
+    expect(findings.suspects[0]?.cause).toBe("contaminated_refrigerant");
+    expect(findings.cautions.map((c) => c.id)).toContain("sealant_found");
+    expect(said(findings.notes)).toMatch(/cannot see sealant/);
+  });
+});
+
 describe("gates, next check and cautions", () => {
   it("puts contaminated refrigerant first on a failed identifier, with the do-not-recover caution (SAE J2099/J2912)", () => {
     const findings = diagnose({

@@ -56,10 +56,14 @@ function addIdentifierEvidence(input: DiagnosisInput, out: Extraction): boolean 
     out.observedGroups.add("purity");
     failed = input.identifierPurityPct < PURITY_PASS_PCT;
     const id = failed ? "purity:fail" : "purity:pass";
+    // Most identifiers cannot see sealant: a pass says nothing once sealant has been found (common practice).
+    const sealant = !failed && (input.symptoms ?? []).includes("sealant_found");
     out.observations.push({
       id,
+      ...(sealant ? { strength: 0 } : {}),
       message: { key: id, values: { purity: percent(input.identifierPurityPct), passMark } },
     });
+    if (sealant) out.notes.push({ key: "note:identifier_blind_to_sealant" });
   }
   if (input.identifierAirPct !== undefined) {
     out.observedGroups.add("air");

@@ -28,7 +28,7 @@ export interface RankingGate {
   leader: CauseId;
   marginLogOdds: number;
   /** The sentence shown as the leader's first piece of evidence (message-templates.ts). */
-  message: "gate:mixed" | "gate:empty";
+  message: "gate:mixed" | "gate:empty" | "gate:sealant";
   source: string;
 }
 
@@ -879,13 +879,41 @@ export const LIKELIHOOD_TABLE: readonly LikelihoodRow[] = [
     source: "Leak detection at 4 g/yr sensitivity (SAE J2791/J2913); common practice",
     weights: { undercharge: -1.0 },
   },
-  // Accepted from the interview and the next checks; weighed in a later change.
-  { observation: "symptom:part_replaced_no_oil_added", source: "not yet weighed", weights: {} },
-  { observation: "symptom:part_replaced_oil_added", source: "not yet weighed", weights: {} },
-  { observation: "symptom:sealant_found", source: "not yet weighed", weights: {} },
-  { observation: "symptom:no_sealant_found", source: "not yet weighed", weights: {} },
-  { observation: "symptom:oil_short_at_drain", source: "not yet weighed", weights: {} },
-  { observation: "symptom:oil_normal_at_drain", source: "not yet weighed", weights: {} },
+  // Oil has evidence of its own: oil that left with a part or at the drain and was not put back.
+  {
+    observation: "symptom:part_replaced_no_oil_added",
+    source:
+      "A replaced part takes its oil with it and the same must go back (TM 5-3810-307-24-1-2 ch. 9 for oil removed; part allowances common practice); weights common practice",
+    weights: { oil_loss: 2.0, weak_compressor: 0.3, no_refrigerant_fault: -0.8 },
+  },
+  {
+    observation: "symptom:part_replaced_oil_added",
+    source: "Oil put back with the part (common practice)",
+    weights: { oil_loss: -0.8 },
+  },
+  {
+    observation: "symptom:oil_short_at_drain",
+    source:
+      "Drain and measure the compressor's oil and restore the total to the maker's figure (common practice); weights common practice",
+    weights: { oil_loss: 2.5, weak_compressor: 0.3, no_refrigerant_fault: -1.0 },
+  },
+  {
+    observation: "symptom:oil_normal_at_drain",
+    source: "Drain and measure the compressor's oil (common practice)",
+    weights: { oil_loss: -2.0 },
+  },
+  // Sealant: contaminates the charge and the shop's equipment, and clumps into restrictions.
+  {
+    observation: "symptom:sealant_found",
+    source:
+      "Contaminated refrigerant includes sealant, which can clump with moisture and restrict flow; most identifiers cannot detect it (common practice); weights common practice",
+    weights: { contaminated_refrigerant: 3.5, metering_restriction: 0.5, no_refrigerant_fault: -1.0 },
+  },
+  {
+    observation: "symptom:no_sealant_found",
+    source: "A clean service port is weak evidence: sealant may sit further in (common practice)",
+    weights: { contaminated_refrigerant: -0.3 },
+  },
 ];
 
 export const RANKING_GATES: readonly RankingGate[] = [
@@ -896,6 +924,14 @@ export const RANKING_GATES: readonly RankingGate[] = [
     message: "gate:mixed",
     source:
       "SAE J2099 (≥98 % pure to recycle), SAE J2912 identifiers; identify before recovery (SAE J2843 equipment rules)",
+  },
+  {
+    when: ["symptom:sealant_found"],
+    leader: "contaminated_refrigerant",
+    marginLogOdds: 0.5,
+    message: "gate:sealant",
+    source:
+      "Sealant is refused or handled separately before any shop equipment is connected (common practice; SAE J2843 equipment rules for contaminated refrigerant)",
   },
   {
     when: ["static:empty", "charge:empty"],

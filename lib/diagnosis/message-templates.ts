@@ -120,8 +120,12 @@ const NOTE_TEMPLATES = {
     "On a cycling clutch the low side swings between cut-out and cut-in, so one reading counts for half: record it at cut-out and at cut-in.",
   "note:low_side_graded_at_cut_points":
     "The low side was judged at the clutch's cut-out and cut-in, not at a single moment of the swing.",
+  "note:identifier_blind_to_sealant":
+    "The identifier's pass does not count against contamination here: most identifiers cannot see sealant.",
   "gate:mixed":
     "The refrigerant failed identification: it must be dealt with before any other repair, and pressure–temperature checks are not valid on a mix.",
+  "gate:sealant":
+    "Sealant was found: it must be dealt with before the shop's equipment is connected, whatever else is wrong.",
   "gate:empty": "The system is empty: find and repair the leak before running any test.",
 } as const;
 
