@@ -112,6 +112,26 @@ describe("separating the known confusions", () => {
     ).toBe("condenser_airflow");
   });
 
+  it("lets physics outvote the priors: a high low side with a low high side all but excludes undercharge (common practice)", () => {
+    const notPumping = {
+      refrigerant: "R-134a",
+      expansionDevice: "orifice_tube",
+      ambientC: 30,
+      highKpaGauge: 800,
+      lowKpaGauge: 330,
+      ventC: 19,
+    } as const;
+    const findings = diagnose(notPumping);
+    expect(findings.suspects[0]?.cause).toBe("weak_compressor");
+    const under = findings.suspects.find((s) => s.cause === "undercharge");
+    expect(under?.evidenceAgainst.map((m) => m.key)).toContain("pattern:compressor_not_pumping");
+    expect(weightOf("pattern:compressor_not_pumping", "undercharge")).toBeLessThanOrEqual(-4);
+    // Even weighed 60 % short, the compressor stays ahead: the weight alone cannot make a short charge raise the low side.
+    expect(diagnose({ ...notPumping, labelChargeG: 700, recoveredChargeG: 280 }).suspects[0]?.cause).toBe(
+      "weak_compressor",
+    );
+  });
+
   it("does not let high subcooling count against air: air raises the head and the gauge's subcooling with it (Dalton's law; common practice)", () => {
     for (const grade of ["subcooling:high", "subcooling:very_high"] as const)
       expect(weightOf(grade, "non_condensables")).toBeGreaterThanOrEqual(0);
@@ -153,12 +173,13 @@ describe("separating the known confusions", () => {
   });
 
   it("asks for the charge by weight before condemning a compressor, and follows the weight (common practice)", () => {
+    // Pressures close together with the low side inside its band: a weak compressor or a severe undercharge.
     const close = {
       refrigerant: "R-134a",
       expansionDevice: "orifice_tube",
       ambientC: 30,
       highKpaGauge: 800,
-      lowKpaGauge: 330,
+      lowKpaGauge: 280,
       ventC: 19,
     } as const;
     expect(diagnose({ ...close, labelChargeG: 700 }).nextCheck.check).toBe("recover_and_weigh");

@@ -152,6 +152,19 @@ export function addRunningEvidence(input: DiagnosisInput, barometricKpa: number,
     }
   }
 
+  // Physics before priors: a short charge lowers both sides, so a high low side with a low high side is
+  // a compressor that is not pumping, whatever the odds of an undercharge.
+  const graded = new Set(out.observations.map((o) => o.id));
+  if (graded.has("low_side:high") && (graded.has("high_side:low") || graded.has("high_side:very_low"))) {
+    out.observations.push({
+      id: "pattern:compressor_not_pumping",
+      message: {
+        key: "pattern:compressor_not_pumping",
+        values: { high: gaugeKpa(input.highKpaGauge ?? 0), low: gaugeKpa(input.lowKpaGauge ?? 0) },
+      },
+    });
+  }
+
   if (condensingC !== null && evaporatingC !== null) {
     const liftK = condensingC - evaporatingC;
     out.computed.liftK = liftK;

@@ -242,6 +242,19 @@ export const LIKELIHOOD_TABLE: readonly LikelihoodRow[] = [
     },
   },
 
+  // Physics before priors: readings no amount of prior can explain for some causes
+  {
+    observation: "pattern:compressor_not_pumping",
+    source:
+      "Four gauge patterns: low side high with high side low is a compressor not pumping; a short charge lowers both sides and a restriction lowers the low side (common practice); −4 (about 1 in 55) is 'all but excludes'",
+    weights: {
+      undercharge: -4.0,
+      metering_restriction: -4.0,
+      high_side_restriction: -4.0,
+      weak_compressor: 0.5,
+    },
+  },
+
   // Absolute compression ratio while running
   {
     observation: "lift:close",

@@ -80,6 +80,8 @@ const READING_TEMPLATES = {
     "The clutch cuts out already at {cutOut} ({cutOutSat} saturation), above the {cutOutMin:n} to {cutOutMax} a cycling switch usually opens at: it stops cooling early.",
   "cycling:closes_late":
     "The clutch cuts back in only at {cutIn} ({cutInSat} saturation), above the {cutInMin:n} to {cutInMax} a cycling switch usually closes at: long pauses with little cooling.",
+  "pattern:compressor_not_pumping":
+    "Low side {low} above its band while the high side {high} is below its band: the compressor is not pumping. A short charge lowers both sides, so it cannot do this.",
 } as const satisfies Partial<Record<ObservationId, string>>;
 
 const NOTE_TEMPLATES = {

@@ -153,6 +153,18 @@ export function chooseNextCheck(ctx: CheckContext, leaders: readonly CauseId[], 
       runsSystem: false,
     };
   }
+  // Confirm the charge by weight before condemning a compressor (common practice).
+  const weigh = CHECKS.find((c) => c.id === "recover_and_weigh");
+  if (first === "weak_compressor" && weigh?.available(ctx)) {
+    return {
+      check: weigh.id,
+      instruction: weigh.instruction,
+      reason: "Confirm the charge by weight before condemning the compressor.",
+      separates: second === undefined ? [first] : [first, second],
+      expectedShiftLogOdds: second === undefined ? 0 : expectedShift(weigh.outcomes(ctx), first, second),
+      runsSystem: weigh.runsSystem,
+    };
+  }
   // Air against overcharge: when the two are close, the static check or the identifier settles it.
   if (
     second !== undefined &&

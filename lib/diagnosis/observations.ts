@@ -17,6 +17,8 @@ export const READING_GRADES = {
   vent: ["freezing", "cold", "cool", "warm"],
   device: ["orifice_tube", "txv"],
   cycling: ["opens_late", "normal", "opens_early", "closes_late"],
+  /** Combinations of readings the physics allows only for some causes. */
+  pattern: ["compressor_not_pumping"],
 } as const;
 
 export type ReadingGroup = keyof typeof READING_GRADES;
