@@ -4,6 +4,8 @@ import { SuspectCard } from "@/components/interview/suspect-card";
 interface Snapshot {
   engineVersion: string;
   suspects: Suspect[];
+  /** absent on findings stored before the engine stated what was measured */
+  measured?: { statement: string };
   nextCheck?: { instruction: string };
 }
 
@@ -33,6 +35,7 @@ export function FindingsSnapshot({
         </p>
       )}
       {conclusionNotes && <p className="italic">&ldquo;{conclusionNotes}&rdquo;</p>}
+      {findings.measured && <p className="text-ink-soft">{findings.measured.statement}</p>}
       <ol className="space-y-2">
         {findings.suspects.slice(0, 3).map((s, i) => (
           <li key={s.cause}>

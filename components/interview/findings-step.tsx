@@ -134,6 +134,9 @@ export function FindingsStep({
         <h2 id="suspects-heading" className="text-xl font-bold">
           Likely causes
         </h2>
+        <p className="mt-1 text-ink-soft" data-testid="measured">
+          {findings.measured.statement}
+        </p>
         <ol className="mt-2 space-y-3">
           {findings.suspects.slice(0, 4).map((s, i) => (
             <li key={s.cause}>

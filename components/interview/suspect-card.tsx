@@ -5,8 +5,9 @@ export function evidenceText(item: Message | string, units?: ReaderUnits): strin
   return typeof item === "string" ? item : formatMessage(item, units);
 }
 
-function confidenceWord(confidence: number): string {
-  return confidence >= 0.75 ? "well measured" : confidence >= 0.4 ? "partly measured" : "little measured yet";
+/** Findings stored before shares held an independent score per cause. */
+function shareOf(suspect: Suspect & { score?: number }): number {
+  return suspect.share ?? suspect.score ?? 0;
 }
 
 /** One suspect: how strongly the readings point to it, and why — in both directions. */
@@ -19,7 +20,8 @@ export function SuspectCard({
   rank: number;
   units?: ReaderUnits;
 }) {
-  const pct = Math.round(suspect.score * 100);
+  const assessed = suspect.assessed !== false;
+  const pct = Math.round(shareOf(suspect) * 100);
   return (
     <article
       className="rounded-card border border-paper-line bg-paper p-3"
@@ -29,14 +31,20 @@ export function SuspectCard({
         <h3 className="font-bold">
           {rank}. {CAUSE_LABELS[suspect.cause]}
         </h3>
-        <span className="font-mono text-lg font-bold">{pct} %</span>
+        <span className="font-mono text-lg font-bold">{assessed ? `${pct} %` : "not assessed"}</span>
       </div>
-      <div className="mt-1 h-2 rounded-full bg-paper-sunk" aria-hidden>
-        <div className="h-2 rounded-full bg-glacier-600" style={{ width: `${pct}%` }} />
-      </div>
-      <p className="mt-1 text-sm text-ink-soft">
-        Confidence {Math.round(suspect.confidence * 100)} % — {confidenceWord(suspect.confidence)}
-      </p>
+      {assessed ? (
+        <>
+          <div className="mt-1 h-2 rounded-full bg-paper-sunk" aria-hidden>
+            <div className="h-2 rounded-full bg-glacier-600" style={{ width: `${pct}%` }} />
+          </div>
+          <p className="mt-1 text-sm text-ink-soft">{pct} % of the likelihood across all causes</p>
+        </>
+      ) : (
+        <p className="mt-1 text-sm text-ink-soft">
+          Not assessed: readings taken on a mixed or contaminated charge say nothing about this cause.
+        </p>
+      )}
       {suspect.evidenceFor.length > 0 && (
         <>
           <h4 className="mt-2 text-sm font-bold uppercase tracking-wide text-ink-soft">For</h4>

@@ -4,20 +4,23 @@ import { CAUSE_IDS } from "./causes";
 import { diagnose } from "./diagnose";
 import { ENGINE_VERSION } from "./engine-version";
 import { type DiagnosisInput, diagnosisInputSchema } from "./schema";
-import { real, validInput } from "./test-inputs";
+import { real, shopInput, validInput } from "./test-inputs";
 
 describe("diagnose on any input the schema accepts (fast-check)", { timeout: 30_000 }, () => {
-  it("returns every cause once, with scores and confidences in [0, 1], sorted, never NaN, and cautions ending in deference", () => {
+  it("returns every cause once, with shares in [0, 1] that sum to 1, sorted, never NaN, and cautions ending in deference", () => {
     fc.assert(
       fc.property(validInput, (input) => {
         const findings = diagnose(input);
         expect(findings.engineVersion).toBe(ENGINE_VERSION);
         expect(findings.suspects.map((s) => s.cause).sort()).toEqual([...CAUSE_IDS].sort());
+        let total = 0;
         findings.suspects.forEach((s, i) => {
-          expect(s.score >= 0 && s.score <= 1).toBe(true);
-          expect(s.confidence >= 0 && s.confidence <= 1).toBe(true);
-          if (i > 0) expect(s.score).toBeLessThanOrEqual(findings.suspects[i - 1]?.score ?? 1);
+          expect(s.share >= 0 && s.share <= 1).toBe(true);
+          total += s.share;
+          if (i > 0) expect(s.share).toBeLessThanOrEqual(findings.suspects[i - 1]?.share ?? 1);
         });
+        expect(total).toBeCloseTo(1, 9);
+        expect(findings.measured.statement.length).toBeGreaterThan(10);
         expect(findings.cautions.length).toBeGreaterThanOrEqual(1);
         expect(findings.cautions.at(-1)?.id).toBe("defer_to_procedure");
         expect(findings.nextCheck.instruction.length).toBeGreaterThan(10);
@@ -46,8 +49,9 @@ describe("diagnose on any input the schema accepts (fast-check)", { timeout: 30_
         fc.pre(
           diagnosisInputSchema.safeParse(lower).success && diagnosisInputSchema.safeParse(higher).success,
         );
+        // The evidence for air (its log-odds), not its share: a share also moves with every other cause.
         const air = (i: DiagnosisInput) =>
-          diagnose(i).suspects.find((s) => s.cause === "non_condensables")?.score ?? Number.NaN;
+          diagnose(i).suspects.find((s) => s.cause === "non_condensables")?.logOdds ?? Number.NaN;
         expect(air(higher)).toBeGreaterThanOrEqual(air(lower));
       }),
       { numRuns: 400 },
@@ -95,9 +99,35 @@ describe("diagnose on any input the schema accepts (fast-check)", { timeout: 30_
   });
 });
 
+describe("shares (fast-check)", { timeout: 30_000 }, () => {
+  it("sum to 1 over all causes and rank the suspects, on shop-like inputs too", () => {
+    fc.assert(
+      fc.property(shopInput, (input) => {
+        const { suspects } = diagnose(input);
+        expect(suspects.reduce((sum, s) => sum + s.share, 0)).toBeCloseTo(1, 9);
+        for (let i = 1; i < suspects.length; i++)
+          expect(suspects[i]!.share).toBeLessThanOrEqual(suspects[i - 1]!.share);
+      }),
+      { numRuns: 400 },
+    );
+  });
+
+  it("give a failed identification the whole share and mark every other cause not assessed (SAE J2099 / J2912)", () => {
+    fc.assert(
+      fc.property(shopInput, real(0, 97.9), (input, purity) => {
+        const { suspects } = diagnose({ ...input, identifierPurityPct: purity });
+        expect(suspects[0]).toMatchObject({ cause: "contaminated_refrigerant", share: 1, assessed: true });
+        for (const s of suspects.slice(1)) expect(s).toMatchObject({ share: 0, assessed: false });
+      }),
+      { numRuns: 200 },
+    );
+  });
+});
+
 describe("monotone where the physics says so (fast-check)", { timeout: 30_000 }, () => {
+  // The evidence for a cause (its log-odds): a share also moves with every other cause.
   const scoreOf = (input: DiagnosisInput, cause: string) =>
-    diagnose(input).suspects.find((s) => s.cause === cause)?.score ?? Number.NaN;
+    diagnose(input).suspects.find((s) => s.cause === cause)?.logOdds ?? Number.NaN;
 
   it("never lowers overcharge nor raises undercharge as more refrigerant is recovered against the same label (charge by weight: TM 5-3805-291-23-1)", () => {
     const pair = fc.tuple(validInput, real(50, 3000), real(0, 1), real(0, 1));

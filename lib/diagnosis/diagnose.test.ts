@@ -40,7 +40,7 @@ describe("trade check values (common practice)", () => {
         symptoms: ["high_pressure_cutout", "gauge_needle_flutter"],
       });
       const air = findings.suspects.find((s) => s.cause === "non_condensables");
-      expect(air?.score).toBeLessThan(0.1);
+      expect(air?.share).toBeLessThan(0.1);
       expect(findings.suspects.findIndex((s) => s.cause === "non_condensables")).toBeGreaterThanOrEqual(2);
       expect(said(air?.evidenceAgainst ?? [])).toMatch(/0 % air/);
     }
@@ -314,27 +314,19 @@ describe("gates, next check and cautions", () => {
     );
   });
 
-  it("lowers confidence when key readings are missing", () => {
-    const full = diagnose({
-      refrigerant: "R-134a",
-      expansionDevice: "orifice_tube",
-      ambientC: 30,
-      highKpaGauge: 1900,
-      lowKpaGauge: 320,
-      staticKpaGauge: 800,
-      identifierPurityPct: 99.5,
-      identifierAirPct: 4,
-      liquidLineC: 60,
-      ventC: 14,
-    });
+  it("says in one plain statement how much of the case was measured", () => {
     const sparse = diagnose({
       refrigerant: "R-134a",
       expansionDevice: "orifice_tube",
       ambientC: 30,
       highKpaGauge: 1900,
     });
-    const conf = (f: typeof full) => f.suspects.find((s) => s.cause === "non_condensables")?.confidence ?? 0;
-    expect(conf(sparse)).toBeLessThan(conf(full));
+    expect(sparse.measured.groups).toEqual(["high_side"]);
+    expect(sparse.measured.statement).toBe(
+      "Measured 1 of the 9 key readings (high side); not yet measured: low side, subcooling, superheat, static pressure, recovered charge, identifier purity, identifier air and centre vent.",
+    );
+    const none = diagnose({ refrigerant: "R-134a", expansionDevice: "orifice_tube", ambientC: 30 });
+    expect(none.measured.statement).toMatch(/^None of the 9 key readings/);
   });
 
   it("phrases the next check as an instruction and names the two suspects it separates", () => {
@@ -350,7 +342,7 @@ describe("gates, next check and cautions", () => {
     expect(findings.nextCheck.expectedShiftLogOdds).toBeGreaterThan(0);
   });
 
-  it("handles R-744 running readings: says the high side is transcritical and lowers confidence", () => {
+  it("handles R-744 running readings: says the high side is transcritical and leaves it unmeasured", () => {
     const findings = diagnose({
       refrigerant: "R-744",
       expansionDevice: "txv",
@@ -361,7 +353,7 @@ describe("gates, next check and cautions", () => {
       ventC: 8,
     });
     expect(said(findings.notes)).toMatch(/transcritical/);
-    expect(Math.max(...findings.suspects.map((s) => s.confidence))).toBeLessThan(0.6);
+    expect(findings.measured.missing).toContain("high_side");
     expect(findings.cautions.map((c) => c.id)).toContain("r744_pressure");
   });
 

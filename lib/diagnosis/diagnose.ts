@@ -8,16 +8,18 @@ import { chooseNextCheck, type NextCheck } from "./next-check";
 import type { Message } from "./messages";
 import type { ObservationId } from "./observations";
 import type { DiagnosisInput } from "./schema";
-import { type EvidenceItem, logistic, readingCoverage, scoreCauses } from "./scoring";
+import { type Measured, measuredStatement } from "./measured";
+import { type EvidenceItem, scoreCauses } from "./scoring";
 
 export interface Suspect {
   cause: CauseId;
-  /** 0–1: logistic of the summed log-odds. Higher ranks first. */
-  score: number;
-  /** 0–1: how much of this cause's key-reading evidence was measured (lower when readings are missing). */
-  confidence: number;
+  /** This cause's share of the likelihood, 0–1: the shares of all causes sum to 1. Higher ranks first. */
+  share: number;
+  /** False when the readings cannot speak to this cause (a failed identifier): the screen says "not assessed". */
+  assessed: boolean;
   evidenceFor: Message[];
   evidenceAgainst: Message[];
+  /** Prior plus evidence, natural log-odds: for review, not for the screen. */
   logOdds: number;
   /** Every item that moved this suspect's score, with its weight, for review. */
   evidence: EvidenceItem[];
@@ -26,6 +28,8 @@ export interface Suspect {
 export interface Findings {
   engineVersion: string;
   suspects: Suspect[];
+  /** How much of the case was measured, in one plain statement. */
+  measured: Measured;
   /** The "do not run" state: while it holds, no next check runs the system. */
   doNotRun: DoNotRun;
   nextCheck: NextCheck;
@@ -39,7 +43,29 @@ const CAUSE_ORDER = new Map<CauseId, number>(CAUSE_IDS.map((cause, i) => [cause,
 const byStrength = (a: EvidenceItem, b: EvidenceItem) => Math.abs(b.weight) - Math.abs(a.weight);
 const byRank = (a: Suspect, b: Suspect) =>
   b.logOdds - a.logOdds || (CAUSE_ORDER.get(a.cause) ?? 0) - (CAUSE_ORDER.get(b.cause) ?? 0);
-const round = (value: number, decimals: number) => Math.round(value * 10 ** decimals) / 10 ** decimals;
+
+/**
+ * Each cause's share of the likelihood: exp(log-odds) normalised over all causes, so the shares sum to 1
+ * (the causes treated as rival explanations of one complaint). When the refrigerant failed identification
+ * the other causes cannot be assessed on a mixed charge: the contamination takes the whole share.
+ */
+function assignShares(suspects: Suspect[], mixed: boolean): void {
+  if (mixed) {
+    for (const s of suspects) {
+      const contaminated = s.cause === "contaminated_refrigerant";
+      s.share = contaminated ? 1 : 0;
+      s.assessed = contaminated;
+    }
+    return;
+  }
+  const top = Math.max(...suspects.map((s) => s.logOdds));
+  let total = 0;
+  for (const s of suspects) {
+    s.share = Math.exp(s.logOdds - top);
+    total += s.share;
+  }
+  for (const s of suspects) s.share /= total;
+}
 
 /** Rank the likely causes of a cooling complaint. Expects input already accepted by diagnosisInputSchema. */
 export function diagnose(input: DiagnosisInput): Findings {
@@ -56,11 +82,8 @@ export function diagnose(input: DiagnosisInput): Findings {
       for (const item of evidence) (item.weight > 0 ? evidenceFor : evidenceAgainst).push(item.message);
       return {
         cause: s.cause,
-        score: logistic(s.logOdds),
-        confidence: round(
-          readingCoverage(s.cause, extraction.observedGroups) * extraction.confidenceFactor,
-          3,
-        ),
+        share: 0,
+        assessed: true,
         evidenceFor,
         evidenceAgainst,
         logOdds: s.logOdds,
@@ -68,6 +91,7 @@ export function diagnose(input: DiagnosisInput): Findings {
       };
     })
     .sort(byRank);
+  assignShares(suspects, mixed);
 
   const leaders = suspects.slice(0, 2).map((s) => s.cause);
   const ctx = {
@@ -81,6 +105,7 @@ export function diagnose(input: DiagnosisInput): Findings {
   return {
     engineVersion: ENGINE_VERSION,
     suspects,
+    measured: measuredStatement(extraction.observedGroups, mixed),
     doNotRun,
     nextCheck: chooseNextCheck(ctx, leaders, doNotRun),
     cautions: collectCautions({ input, observations: present, leaders, mixed, doNotRun: doNotRun.active }),

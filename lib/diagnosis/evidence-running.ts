@@ -89,7 +89,6 @@ export function addRunningEvidence(input: DiagnosisInput, barometricKpa: number,
       } else {
         out.notes.push({ key: "note:high_outside_table", values: { high }, words });
       }
-      out.confidenceFactor *= 0.6;
     } else {
       out.computed.condensingC = condensingC;
       out.computed.condensingApproachK = condensingC - ambientC;

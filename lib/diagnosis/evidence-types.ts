@@ -54,6 +54,4 @@ export interface Extraction {
   computed: ComputedValues;
   /** Reading groups that were measured and usable. */
   observedGroups: Set<ReadingGroup>;
-  /** Multiplier in (0, 1] on every suspect's confidence, e.g. when the tables do not cover the case. */
-  confidenceFactor: number;
 }

@@ -18,7 +18,6 @@ export function extractEvidence(input: DiagnosisInput): Extraction {
     notes: [],
     computed: { barometricKpa },
     observedGroups: new Set(),
-    confidenceFactor: 1,
   };
   const symptoms = new Set(input.symptoms ?? []);
 
@@ -28,14 +27,12 @@ export function extractEvidence(input: DiagnosisInput): Extraction {
   const mixed = addIdentifierEvidence(input, out) || symptoms.has("identifier_flags_hydrocarbon");
   if (mixed) {
     out.notes.push({ key: "note:mixed_skips_pt" });
-    out.confidenceFactor *= 0.6;
   } else {
     addStaticEvidence(input, barometricKpa, out);
     addRunningEvidence(input, barometricKpa, out);
   }
   if (input.refrigerant === "R-744") {
     out.notes.push({ key: "note:r744_limited" });
-    out.confidenceFactor *= 0.7;
   }
   addClutchEvidence(input, barometricKpa, out);
   addChargeEvidence(input, out);

@@ -18,3 +18,4 @@ export {
 } from "./messages";
 export type { Quantity, QuantityKind } from "./quantities";
 export { type DoNotRun, type DoNotRunReason, doNotRunState, recharged, staticDeficits } from "./do-not-run";
+export { type Measured, READING_GROUP_LABELS } from "./measured";

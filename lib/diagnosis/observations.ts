@@ -27,7 +27,7 @@ export type ReadingObservationId = {
 }[ReadingGroup];
 export type ObservationId = ReadingObservationId | `symptom:${SymptomId}`;
 
-/** Groups that count as key readings: a missing one lowers confidence. */
+/** The key readings: the statement of what was measured counts these. */
 export const KEY_READING_GROUPS: readonly ReadingGroup[] = [
   "high_side",
   "low_side",

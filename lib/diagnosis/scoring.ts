@@ -8,7 +8,7 @@ import {
   type RankingGate,
 } from "./likelihood-table";
 import type { Message } from "./messages";
-import { groupOf, KEY_READING_GROUPS, type ObservationId, type ReadingGroup } from "./observations";
+import type { ObservationId } from "./observations";
 
 export interface EvidenceItem {
   observation: ObservationId | "ranking_gate";
@@ -62,32 +62,6 @@ export function outcomeVector(outcome: readonly ObservationId[]): OutcomeVector 
   }
   return vector;
 }
-
-/** Per cause, the largest |weight| each key reading group can give: what a missing reading costs. */
-const KEY_POTENTIAL: Record<CauseId, [ReadingGroup, number][]> = Object.fromEntries(
-  CAUSE_IDS.map((cause) => {
-    const potential = new Map<ReadingGroup, number>();
-    for (const row of LIKELIHOOD_TABLE) {
-      const group = groupOf(row.observation) as ReadingGroup;
-      if (!KEY_READING_GROUPS.includes(group)) continue;
-      potential.set(group, Math.max(potential.get(group) ?? 0, Math.abs(row.weights[cause] ?? 0)));
-    }
-    return [cause, [...potential.entries()].filter(([, value]) => value > 0)];
-  }),
-) as Record<CauseId, [ReadingGroup, number][]>;
-
-/** Share of this cause's possible key-reading evidence that was actually measured, 0–1. */
-export function readingCoverage(cause: CauseId, observedGroups: ReadonlySet<ReadingGroup>): number {
-  let total = 0;
-  let seen = 0;
-  for (const [group, potential] of KEY_POTENTIAL[cause]) {
-    total += potential;
-    if (observedGroups.has(group)) seen += potential;
-  }
-  return total === 0 ? 1 : seen / total;
-}
-
-export const logistic = (logOdds: number) => 1 / (1 + Math.exp(-logOdds));
 
 /** Sum prior and weights per cause, then apply the ranking gates (last gate first, so the first gate ends on top). */
 export function scoreCauses(

@@ -17,7 +17,7 @@ export interface SavedCaseRow {
   answers: { answers: Record<string, Record<string, unknown>>; skipped: string[] };
   findings: {
     engineVersion: string;
-    suspects: { cause: string; score: number }[];
+    suspects: { cause: string; share: number }[];
     input: Record<string, unknown>;
   } | null;
   engine_version: string | null;
