@@ -4,20 +4,23 @@ import type { DiagnosisInput } from "./schema";
 import type { SymptomId } from "./symptoms";
 
 export type CheckId =
-  | "leak_test"
-  | "static_repeat"
-  | "static_pressure"
+  | "look_for_sealant"
   | "identify_refrigerant"
+  | "static_pressure"
+  | "static_repeat"
+  | "condenser_fan"
+  | "vent_temperature"
   | "running_pressures"
+  | "cycling_points"
   | "liquid_line_temperature"
   | "suction_line_temperature"
-  | "recover_and_weigh"
-  | "vent_temperature"
-  | "condenser_fan"
   | "condenser_water_spray"
   | "watch_low_side"
   | "txv_bulb_test"
-  | "liquid_line_survey";
+  | "liquid_line_survey"
+  | "recover_and_weigh"
+  | "drain_compressor_oil"
+  | "leak_test";
 
 export interface CheckContext {
   input: DiagnosisInput;
@@ -33,11 +36,14 @@ export interface CheckContext {
 
 export interface CheckDefinition {
   id: CheckId;
-  instruction: string;
+  /** One instruction, phrased for the system in front of the technician. */
+  instruction: (ctx: CheckContext) => string;
   /** True when the check runs the compressor: never offered in the "do not run" state. */
   runsSystem: boolean;
+  /** True when it puts a hose on a service port: sealant is looked for first, and the refrigerant identified. */
+  connectsHose: boolean;
   available: (ctx: CheckContext) => boolean;
-  /** Each possible result, as the observations it would add. */
+  /** Each possible result, as the observations it would add; results the readings already exclude are left out. */
   outcomes: (ctx: CheckContext) => ObservationId[][];
 }
 
@@ -77,46 +83,86 @@ const ORIFICE_SUPERHEAT_OUTCOMES: ObservationId[][] = [
   ["superheat:high"],
   ["superheat:very_high"],
 ];
+// A running high side that condenses above the air temperature proves liquid is there: the static
+// cannot come back empty or without liquid, nor the recovery empty.
+const STATIC_WITH_LIQUID = grades("static").filter(
+  ([id]) => id !== "static:empty" && id !== "static:no_liquid",
+);
+const CHARGE_WITH_LIQUID = grades("charge").filter(([id]) => id !== "charge:empty");
+
+/** The running high side condenses above the ambient air: there is liquid in the system. */
+export function liquidProven(ctx: CheckContext): boolean {
+  const { condensingC } = ctx.extraction.computed;
+  return condensingC !== undefined && condensingC > ctx.input.ambientC;
+}
+
+/** The static check came back with liquid in the system. */
+const staticShowsLiquid = (ctx: CheckContext) =>
+  ctx.extraction.observations.some(
+    (o) => o.id.startsWith("static:") && o.id !== "static:empty" && o.id !== "static:no_liquid",
+  );
+
+const electric = (ctx: CheckContext) => ctx.input.compressorType === "electric";
+/** How to run the system for a test: a hybrid or electric car runs its compressor in ready mode, not on the engine. */
+const running = (ctx: CheckContext) =>
+  electric(ctx)
+    ? "in the vehicle's ready mode (high-voltage system on), A/C on max, blower high"
+    : "at the usual test conditions (engine warm, about 1,500 rpm, A/C on max, blower high)";
+const recovered = (ctx: CheckContext) => ctx.input.recoveredChargeG !== undefined;
 
 /** Ordered cheapest and least intrusive first: on a tie the earlier check wins. */
 export const CHECKS: readonly CheckDefinition[] = [
   {
-    id: "static_pressure",
+    id: "look_for_sealant",
+    instruction: () =>
+      "Before any hose goes on, look for leak sealant: residue at the service ports, a sealant-can label or sticker under the hood, or a sealant detector at the low-side port if the shop has one.",
     runsSystem: false,
-    instruction:
-      "Switch the engine off, let the system settle to the air temperature around it (in shade, pressures equalised), then read the static pressure and the air temperature beside the lines.",
-    available: (ctx) => !ctx.mixed && ctx.input.staticKpaGauge === undefined,
-    outcomes: () => grades("static"),
+    connectsHose: false,
+    available: (ctx) => neither(ctx, "sealant_found", "no_sealant_found"),
+    outcomes: () => either("sealant_found", "no_sealant_found"),
   },
   {
     id: "identify_refrigerant",
+    instruction: () =>
+      "Connect a refrigerant identifier (SAE J2912 type) to the low-side port and record purity and air percentages before connecting gauges or any recovery machine.",
     runsSystem: false,
-    instruction:
-      "Connect a refrigerant identifier (SAE J2912 type) to the low-side port and record purity and air percentages before connecting any recovery machine.",
-    available: (ctx) => ctx.input.identifierPurityPct === undefined,
+    connectsHose: true,
+    available: (ctx) => ctx.input.identifierPurityPct === undefined && !recovered(ctx),
     outcomes: () => IDENTIFIER_OUTCOMES,
   },
   {
+    id: "static_pressure",
+    instruction: (ctx) =>
+      `${electric(ctx) ? "With the vehicle switched off (not in ready mode)" : "With the engine off"}, let the system settle to the temperature around it (in shade, pressures equalised, an hour or more), then read the static pressure and the temperature of the parts beside the lines.`,
+    runsSystem: false,
+    connectsHose: true,
+    available: (ctx) => !ctx.mixed && ctx.input.staticKpaGauge === undefined && !recovered(ctx),
+    outcomes: (ctx) => (liquidProven(ctx) ? STATIC_WITH_LIQUID : grades("static")),
+  },
+  {
     id: "condenser_fan",
+    instruction: (ctx) =>
+      `With the system running ${running(ctx)}, check that the condenser fan runs and that nothing blocks the condenser face.`,
     runsSystem: true,
-    instruction:
-      "With the A/C on, check that the condenser fan runs and that nothing blocks the condenser face.",
+    connectsHose: false,
     available: (ctx) => neither(ctx, "condenser_fan_running", "condenser_fan_not_running"),
     outcomes: () => either("condenser_fan_running", "condenser_fan_not_running"),
   },
   {
     id: "vent_temperature",
+    instruction: (ctx) =>
+      `Run ${running(ctx)} for 5–10 minutes and read the centre-vent temperature with a probe thermometer.`,
     runsSystem: true,
-    instruction:
-      "Run at the usual test conditions for 5–10 minutes and read the centre-vent temperature with a probe thermometer.",
+    connectsHose: false,
     available: (ctx) => ctx.input.ventC === undefined,
     outcomes: () => grades("vent"),
   },
   {
     id: "running_pressures",
+    instruction: (ctx) =>
+      `Connect the gauges and run ${running(ctx)} for 5–10 minutes, then read the high and low side${electric(ctx) ? "; read the compressor's speed request and the inverter data with a scan tool" : ""}.`,
     runsSystem: true,
-    instruction:
-      "Connect the gauges and run at the usual test conditions (engine warm, about 1,500 rpm, A/C max, blower high) for 5–10 minutes, then read the high and low side.",
+    connectsHose: true,
     available: (ctx) =>
       !ctx.mixed && (ctx.input.highKpaGauge === undefined || ctx.input.lowKpaGauge === undefined),
     outcomes: (ctx) =>
@@ -127,45 +173,62 @@ export const CHECKS: readonly CheckDefinition[] = [
         : grades("low_side"),
   },
   {
-    id: "liquid_line_temperature",
+    id: "cycling_points",
+    instruction: (ctx) =>
+      `With the gauges on, run ${running(ctx)} and note the low side at the moment the clutch cuts out and again at the moment it cuts back in.`,
     runsSystem: true,
-    instruction:
+    connectsHose: true,
+    available: (ctx) =>
+      !ctx.mixed &&
+      ctx.input.compressorType === "cycling_clutch" &&
+      (ctx.input.lowCutOutKpaGauge === undefined || ctx.input.lowCutInKpaGauge === undefined),
+    outcomes: () => grades("cycling"),
+  },
+  {
+    id: "liquid_line_temperature",
+    instruction: () =>
       "Clamp a contact thermometer on the liquid line at the condenser outlet and read it together with the high side, to work out the subcooling.",
+    runsSystem: true,
+    connectsHose: true,
     available: (ctx) =>
       !ctx.mixed && ctx.input.liquidLineC === undefined && !ctx.extraction.computed.highSideTranscritical,
     outcomes: () => grades("subcooling"),
   },
   {
     id: "suction_line_temperature",
+    instruction: (ctx) =>
+      `Clamp a contact thermometer on the suction line at the ${ctx.input.expansionDevice === "txv" ? "evaporator outlet" : "accumulator outlet"} and read it together with the low side, to work out the superheat.`,
     runsSystem: true,
-    instruction:
-      "Clamp a contact thermometer on the suction line at the evaporator outlet and read it together with the low side, to work out the superheat.",
+    connectsHose: true,
     available: (ctx) => !ctx.mixed && ctx.input.suctionLineC === undefined,
     outcomes: (ctx) =>
       ctx.input.expansionDevice === "txv" ? grades("superheat") : ORIFICE_SUPERHEAT_OUTCOMES,
   },
   {
     id: "condenser_water_spray",
+    instruction: (ctx) =>
+      `With the gauges on and the system running ${running(ctx)}, spray water gently across the condenser face and watch the high side.`,
     runsSystem: true,
-    instruction:
-      "With the system running and the gauges on, spray water gently across the condenser face and watch the high side.",
+    connectsHose: true,
     available: (ctx) =>
       !ctx.mixed && neither(ctx, "water_spray_drops_head_pressure", "water_spray_no_change"),
     outcomes: () => either("water_spray_drops_head_pressure", "water_spray_no_change"),
   },
   {
     id: "watch_low_side",
+    instruction: (ctx) =>
+      `With the gauges on, run ${running(ctx)} for 15 minutes and note whether the low side stays steady or swings down toward vacuum and back.`,
     runsSystem: true,
-    instruction:
-      "Run at the usual test conditions for 15 minutes and note whether the low side stays steady or swings down toward vacuum and back.",
+    connectsHose: true,
     available: (ctx) => !ctx.mixed && neither(ctx, "low_side_swings_to_vacuum", "low_side_steady"),
     outcomes: () => either("low_side_swings_to_vacuum", "low_side_steady"),
   },
   {
     id: "txv_bulb_test",
+    instruction: (ctx) =>
+      `With the gauges on and the system running ${running(ctx)}, chill the expansion valve's sensing element (on most cars a block valve: its head and outlet passage; on a valve with a remote bulb, the bulb): the low side should fall. Then warm it by hand: the low side should rise.`,
     runsSystem: true,
-    instruction:
-      "With the A/C on max, chill the expansion-valve bulb (the low side should fall), then warm it in your hand (the low side should rise).",
+    connectsHose: true,
     available: (ctx) =>
       !ctx.mixed &&
       ctx.input.expansionDevice === "txv" &&
@@ -174,27 +237,38 @@ export const CHECKS: readonly CheckDefinition[] = [
   },
   {
     id: "liquid_line_survey",
+    instruction: (ctx) =>
+      `Run ${running(ctx)} and take contact-thermometer readings along the liquid line from the condenser outlet, across the drier, to the expansion device; look for a sharp drop.`,
     runsSystem: true,
-    instruction:
-      "Run the system and take contact-thermometer readings along the liquid line from the condenser outlet, across the drier, to the expansion device; look for a sharp drop.",
+    connectsHose: false,
     available: (ctx) =>
       !ctx.mixed && neither(ctx, "liquid_line_temperature_drop", "liquid_line_even_temperature"),
     outcomes: () => either("liquid_line_temperature_drop", "liquid_line_even_temperature"),
   },
   {
     id: "recover_and_weigh",
+    instruction: (ctx) =>
+      `Recover the charge with certified equipment${electric(ctx) ? " that injects no oil (dedicated to electric compressors)" : ""}${ctx.input.expansionDevice === "orifice_tube" ? ", slowly, so the accumulator's oil is not pulled out" : ""}; weigh it against the label charge and measure the oil that came out.`,
     runsSystem: false,
-    instruction:
-      "Identify the refrigerant, then recover the charge with certified equipment (slowly on orifice-tube systems), weigh it against the label charge and measure the oil that came out.",
-    available: (ctx) =>
-      !ctx.mixed && ctx.input.recoveredChargeG === undefined && ctx.input.labelChargeG !== undefined,
-    outcomes: () => grades("charge"),
+    connectsHose: true,
+    available: (ctx) => !ctx.mixed && !recovered(ctx) && ctx.input.labelChargeG !== undefined,
+    outcomes: (ctx) => (liquidProven(ctx) || staticShowsLiquid(ctx) ? CHARGE_WITH_LIQUID : grades("charge")),
+  },
+  {
+    id: "drain_compressor_oil",
+    instruction: () =>
+      "With the charge recovered, drain the compressor's oil into a graduated container and measure it against the maker's quantity for the compressor.",
+    runsSystem: false,
+    connectsHose: false,
+    available: (ctx) => recovered(ctx) && neither(ctx, "oil_short_at_drain", "oil_normal_at_drain"),
+    outcomes: () => either("oil_short_at_drain", "oil_normal_at_drain"),
   },
   {
     id: "leak_test",
-    runsSystem: false,
-    instruction:
+    instruction: () =>
       "Find the leak: pressurise with dry nitrogen or an approved tracer gas (SAE J2970) as the maker's procedure allows, or use an electronic detector at its most sensitive setting (SAE J2791/J2913) or UV dye (SAE J2297); confirm any hit a second way.",
+    runsSystem: false,
+    connectsHose: true,
     available: (ctx) => neither(ctx, "leak_found", "no_leak_found"),
     outcomes: () => either("leak_found", "no_leak_found"),
   },

@@ -336,10 +336,11 @@ describe("gates, next check and cautions", () => {
       ambientC: 30,
       highKpaGauge: 1900,
       lowKpaGauge: 320,
+      symptoms: ["no_sealant_found"],
     });
     expect(findings.nextCheck.separates).toEqual(findings.suspects.slice(0, 2).map((s) => s.cause));
     expect(findings.nextCheck.instruction).toMatch(/^[A-Z][a-z]+/);
-    expect(findings.nextCheck.expectedShiftLogOdds).toBeGreaterThan(0);
+    expect(findings.nextCheck.expectedGainNats).toBeGreaterThan(0);
   });
 
   it("handles R-744 running readings: says the high side is transcritical and leaves it unmeasured", () => {

@@ -107,7 +107,7 @@ export function diagnose(input: DiagnosisInput): Findings {
     suspects,
     measured: measuredStatement(extraction.observedGroups, mixed),
     doNotRun,
-    nextCheck: chooseNextCheck(ctx, leaders, doNotRun),
+    nextCheck: chooseNextCheck(ctx, suspects, doNotRun),
     cautions: collectCautions({ input, observations: present, leaders, mixed, doNotRun: doNotRun.active }),
     computed: extraction.computed,
     notes: extraction.notes,

@@ -77,6 +77,17 @@ export const CYCLING = {
   snapshotStrength: 0.5,
 } as const;
 
+// Next check: stop testing and confirm once the leader holds 80 % of the likelihood; leaders within a
+// likelihood ratio of 3 are "close"; a check expected to tell less than 0.01 nats is not worth doing
+// (judgement, all three).
+export const NEXT_CHECK = {
+  leaderClearShare: 0.8,
+  closePairLogOdds: Math.log(3),
+  minUsefulGainNats: 0.01,
+} as const;
+// Repair cautions and repair steps follow the leader, or a cause holding at least this share (judgement).
+export const REAL_SHARE = 0.2;
+
 // SAE J2099 / J2912: below 98 % the refrigerant is not "pure" and must not be recycled.
 export const PURITY_PASS_PCT = 98;
 // Identifier air (NCG) grading, weight % (from memory).
@@ -116,6 +127,8 @@ export const GRADING = {
   STATIC_SOAK,
   DO_NOT_RUN,
   CYCLING,
+  NEXT_CHECK,
+  REAL_SHARE,
   PURITY_PASS_PCT,
   AIR_PCT,
   CHARGE,

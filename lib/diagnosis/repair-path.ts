@@ -1,5 +1,6 @@
 import type { CauseId } from "./causes";
 import type { DoNotRun, DoNotRunReason } from "./do-not-run";
+import { REAL_SHARE } from "./grading";
 import type { DiagnosisInput } from "./schema";
 
 /** Why no running test: one plain sentence per reason. */
@@ -34,10 +35,23 @@ const PART_REPAIRS: Partial<Record<CauseId, string>> = {
  * weight, and only then the running test (common practice; Directive 2006/40/EC Art. 7 for repair before
  * refill; leak detection per SAE J2791/J2913, J2970).
  */
-export function repairPath(input: DiagnosisInput, state: DoNotRun, leader: CauseId): string {
+export function repairPath(
+  input: DiagnosisInput,
+  state: DoNotRun,
+  leader: CauseId,
+  ranking: readonly { cause: CauseId; share: number }[] = [],
+): string {
   const symptoms = new Set(input.symptoms ?? []);
   const steps: string[] = [];
   const recovered = input.recoveredChargeG !== undefined;
+  const hoseOn =
+    recovered ||
+    input.identifierPurityPct !== undefined ||
+    input.staticKpaGauge !== undefined ||
+    input.highKpaGauge !== undefined ||
+    input.lowKpaGauge !== undefined;
+  if (!hoseOn && !symptoms.has("sealant_found") && !symptoms.has("no_sealant_found"))
+    steps.push("look for sealant at the service ports before any hose goes on");
   if (input.identifierPurityPct === undefined && !recovered)
     steps.push("identify the refrigerant (SAE J2912 type) before any machine is connected");
   if (!recovered) steps.push("recover whatever is left with certified equipment and weigh it");
@@ -53,6 +67,14 @@ export function repairPath(input: DiagnosisInput, state: DoNotRun, leader: Cause
     );
   const part = PART_REPAIRS[leader];
   if (part) steps.push(part);
+  const real = (cause: CauseId) =>
+    cause === leader || (ranking.find((r) => r.cause === cause)?.share ?? 0) >= REAL_SHARE;
+  if (
+    (real("oil_loss") || real("weak_compressor")) &&
+    !symptoms.has("oil_short_at_drain") &&
+    !symptoms.has("oil_normal_at_drain")
+  )
+    steps.push("drain and measure the compressor's oil against the maker's quantity");
   steps.push(
     "replace the receiver-drier or accumulator if the system was opened or wet",
     "evacuate below water's boiling pressure and hold the vacuum",
