@@ -1,5 +1,6 @@
 import type { CauseId } from "./causes";
 import type { ObservationId } from "./observations";
+import { REAL_SHARE } from "./grading";
 import type { DiagnosisInput } from "./schema";
 
 export type CautionId =
@@ -51,23 +52,31 @@ export const CAUTION_TEXT: Record<CautionId, string> = {
   recover_slowly_accumulator:
     "Recover slowly on orifice-tube/accumulator systems so oil is not pulled out; measure the oil removed and add the same amount of fresh, correct oil back.",
   charge_by_weight:
-    "Charge by weight to the label specification through certified equipment; pressures are only a guide.",
+    "If the charge is to be corrected, charge by weight to the label specification through certified equipment; pressures are only a guide.",
   repair_before_refill:
-    "Repair the leak before refilling: topping off a leaking system brings it back (and in the EU it is not allowed after an abnormal leak).",
+    "If a leak is confirmed, repair it before refilling: topping off a leaking system brings it back (and in the EU it is not allowed after an abnormal leak).",
   moisture_and_acid:
-    "Moisture with PAG oil forms acid: replace the receiver-drier or accumulator and evacuate thoroughly.",
+    "If moisture is confirmed: with PAG oil it forms acid, so replace the receiver-drier or accumulator and evacuate thoroughly.",
   defer_to_procedure:
     "These cautions are general: the vehicle maker's service procedure, your local codes and regulations, and certified practice take precedence.",
 };
 
+/**
+ * The cautions for this case. Safety cautions follow the system and the state; repair cautions follow the
+ * leading cause or one holding a real share (REAL_SHARE), never a cause trailing at a few percent, and are
+ * worded as conditions.
+ */
 export function collectCautions(a: {
   input: DiagnosisInput;
   observations: ReadonlySet<ObservationId>;
-  leaders: readonly CauseId[];
+  ranking: readonly { cause: CauseId; share: number }[];
   mixed: boolean;
   doNotRun: boolean;
 }): Caution[] {
-  const { input, observations, leaders, mixed, doNotRun } = a;
+  const { input, observations, ranking, mixed, doNotRun } = a;
+  const leader = ranking[0]?.cause;
+  const real = (cause: CauseId) =>
+    !mixed && (cause === leader || (ranking.find((r) => r.cause === cause)?.share ?? 0) >= REAL_SHARE);
   const ids: CautionId[] = ["eye_and_skin"];
   // CO2 release is governed by the maker's procedure rather than the HFC venting bans.
   if (input.refrigerant !== "R-744") ids.push("never_vent");
@@ -82,9 +91,9 @@ export function collectCautions(a: {
     ids.push("head_pressure_high");
   if (doNotRun) ids.push("empty_system");
   if (input.expansionDevice === "orifice_tube") ids.push("recover_slowly_accumulator");
-  if (leaders.includes("overcharge") || leaders.includes("undercharge")) ids.push("charge_by_weight");
-  if (leaders.includes("undercharge")) ids.push("repair_before_refill");
-  if (leaders.includes("moisture")) ids.push("moisture_and_acid");
+  if (real("overcharge") || real("undercharge") || doNotRun) ids.push("charge_by_weight");
+  if (real("undercharge")) ids.push("repair_before_refill");
+  if (real("moisture")) ids.push("moisture_and_acid");
   ids.push("defer_to_procedure");
   return ids.map((id) => ({ id, text: CAUTION_TEXT[id] }));
 }

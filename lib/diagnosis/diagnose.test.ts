@@ -1,6 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { diagnose } from "./diagnose";
 import { formatMessage, type Message } from "./messages";
+import { HEALTHY_CASES } from "./fixtures/healthy";
+import { REAL_SHARE } from "./grading";
 import { weightOf } from "./scoring";
 
 const said = (messages: readonly Message[]) => messages.map((m) => formatMessage(m)).join(" ");
@@ -296,6 +298,33 @@ describe("gates, next check and cautions", () => {
     expect(findings.cautions.map((c) => c.id)).toEqual(
       expect.arrayContaining(["empty_system", "flammable_r1234yf", "repair_before_refill"]),
     );
+  });
+
+  it("shows repair cautions only for the leader or a cause with a real share, worded as conditions", () => {
+    const repairCautions = ["repair_before_refill", "moisture_and_acid", "charge_by_weight"];
+    for (const c of HEALTHY_CASES.filter((h) => !h.doNotRun)) {
+      const findings = diagnose(c.input);
+      expect(findings.suspects[0]?.cause, c.id).toBe("no_refrigerant_fault");
+      for (const id of repairCautions)
+        expect(
+          findings.cautions.map((x) => x.id),
+          c.id,
+        ).not.toContain(id);
+    }
+    const leak = diagnose({
+      refrigerant: "R-134a",
+      expansionDevice: "orifice_tube",
+      ambientC: 29,
+      highKpaGauge: 900,
+      lowKpaGauge: 120,
+      liquidLineC: 38,
+      symptoms: ["clutch_rapid_cycling"],
+    });
+    const refill = leak.cautions.find((c) => c.id === "repair_before_refill");
+    expect(refill?.text).toMatch(/^If a leak is confirmed, repair it before refilling/);
+    const trailing = leak.suspects.filter((s) => s.cause !== "undercharge" && s.share < REAL_SHARE);
+    expect(trailing.map((s) => s.cause)).toContain("moisture");
+    expect(leak.cautions.map((c) => c.id)).not.toContain("moisture_and_acid");
   });
 
   it("ends the cautions with deference to the maker's procedure, local codes and certified practice", () => {

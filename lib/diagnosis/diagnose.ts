@@ -93,7 +93,6 @@ export function diagnose(input: DiagnosisInput): Findings {
     .sort(byRank);
   assignShares(suspects, mixed);
 
-  const leaders = suspects.slice(0, 2).map((s) => s.cause);
   const ctx = {
     input,
     extraction,
@@ -108,7 +107,13 @@ export function diagnose(input: DiagnosisInput): Findings {
     measured: measuredStatement(extraction.observedGroups, mixed),
     doNotRun,
     nextCheck: chooseNextCheck(ctx, suspects, doNotRun),
-    cautions: collectCautions({ input, observations: present, leaders, mixed, doNotRun: doNotRun.active }),
+    cautions: collectCautions({
+      input,
+      observations: present,
+      ranking: suspects,
+      mixed,
+      doNotRun: doNotRun.active,
+    }),
     computed: extraction.computed,
     notes: extraction.notes,
   };
