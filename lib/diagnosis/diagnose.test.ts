@@ -3,7 +3,8 @@ import { diagnose } from "./diagnose";
 import { formatMessage, type Message } from "./messages";
 import { HEALTHY_CASES } from "./fixtures/healthy";
 import { REAL_SHARE } from "./grading";
-import { weightOf } from "./scoring";
+import { extractEvidence } from "./evidence";
+import { scoreCauses, weightOf } from "./scoring";
 
 const said = (messages: readonly Message[]) => messages.map((m) => formatMessage(m)).join(" ");
 import type { DiagnosisInput } from "./schema";
@@ -222,6 +223,34 @@ describe("separating the known confusions", () => {
         symptoms: ["cooling_fades_then_returns", "low_side_steady", "clutch_not_cycling"],
       }).suspects[0]?.cause,
     ).toBe("evaporator_icing");
+  });
+});
+
+describe("the weights move the ranking the way the signatures say (kills sign mutations the gates would hide)", () => {
+  const logOddsOf = (input: DiagnosisInput, cause: string, gates = true) =>
+    (gates
+      ? scoreCauses(extractEvidence(input).observations)
+      : scoreCauses(extractEvidence(input).observations, [])
+    ).find((s) => s.cause === cause)?.logOdds ?? Number.NaN;
+  const base = { refrigerant: "R-134a", expansionDevice: "orifice_tube", ambientC: 30 } as const;
+
+  it("a failed identifier raises contaminated refrigerant before any gate acts (SAE J2099 98 % mark)", () => {
+    expect(
+      logOddsOf({ ...base, identifierPurityPct: 90 }, "contaminated_refrigerant", false),
+    ).toBeGreaterThan(logOddsOf(base, "contaminated_refrigerant", false) + 1);
+  });
+
+  it("pressures close together raise a weak compressor against the same reading with a normal lift (common practice)", () => {
+    // 800 kPa gauge condenses at 35.6 °C and 280 kPa gauge evaporates at 7.5 °C (Tillner-Roth & Baehr 1994):
+    // a 28 K lift where the bands for 30 °C allow no less than 36 K.
+    const close = { ...base, highKpaGauge: 800, lowKpaGauge: 280 } as const;
+    const ids = extractEvidence(close).observations.map((o) => o.id);
+    expect(ids).toContain("lift:close");
+    const withoutLift = scoreCauses(
+      extractEvidence(close).observations.filter((o) => o.id !== "lift:close"),
+      [],
+    ).find((s) => s.cause === "weak_compressor")?.logOdds;
+    expect(logOddsOf(close, "weak_compressor", false)).toBeGreaterThan((withoutLift ?? 0) + 1);
   });
 });
 

@@ -5,7 +5,20 @@ import { CAUSE_PRIORS, LIKELIHOOD_TABLE, RANKING_GATES } from "./likelihood-tabl
 
 const current = { priors: CAUSE_PRIORS, rows: LIKELIHOOD_TABLE, gates: RANKING_GATES, grading: GRADING };
 
+/**
+ * The version stored with every case's findings, pinned. Any change to a prior, a weight, a gate or a
+ * grading threshold changes the hash and fails this test on purpose, so the change shows in review.
+ * To update it: confirm the change to the model is intended, note it in lib/diagnosis/README.md, bump
+ * ENGINE_SEMVER if the code now reads evidence differently, and paste the new version printed by
+ * `npx tsx -e 'import { ENGINE_VERSION } from "./lib/diagnosis"; console.log(ENGINE_VERSION)'`.
+ */
+const PINNED_ENGINE_VERSION = "2.0.0+0f1ea349";
+
 describe("ENGINE_VERSION", () => {
+  it("is pinned: a change to the scoring model must update this literal in review", () => {
+    expect(ENGINE_VERSION).toBe(PINNED_ENGINE_VERSION);
+  });
+
   it("is the semver plus the hash of the scoring table", () => {
     expect(ENGINE_VERSION).toBe(`${ENGINE_SEMVER}+${scoringTableHash(current)}`);
     expect(ENGINE_VERSION).toMatch(/^\d+\.\d+\.\d+\+[0-9a-f]{8}$/);
@@ -39,6 +52,21 @@ describe("ENGINE_VERSION", () => {
     ).not.toBe(base);
     expect(scoringTableHash({ ...current, gates: RANKING_GATES.slice(1) })).not.toBe(base);
     expect(scoringTableHash({ ...current, grading: { ...GRADING, PURITY_PASS_PCT: 97 } })).not.toBe(base);
+    expect(
+      scoringTableHash({
+        ...current,
+        grading: { ...GRADING, STATIC_CHECK: { ...GRADING.STATIC_CHECK, normalUpToK: 2.5 } },
+      }),
+    ).not.toBe(base);
+    expect(
+      scoringTableHash({
+        ...current,
+        grading: {
+          ...GRADING,
+          CHARGE: { ...GRADING.CHARGE, limits: { ...GRADING.CHARGE.limits, possibleSlowLeakPct: 10 } },
+        },
+      }),
+    ).not.toBe(base);
     expect(canonicalJson({ b: 1, a: [2, { d: 3, c: 4 }] })).toBe(
       canonicalJson({ a: [2, { c: 4, d: 3 }], b: 1 }),
     );

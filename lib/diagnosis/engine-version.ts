@@ -2,7 +2,7 @@ import { GRADING } from "./grading";
 import { CAUSE_PRIORS, LIKELIHOOD_TABLE, RANKING_GATES } from "./likelihood-table";
 
 /** Bump by hand when the engine's code changes how it reads evidence; table and threshold edits change the hash by themselves. */
-export const ENGINE_SEMVER = "1.0.0";
+export const ENGINE_SEMVER = "2.0.0";
 
 /** Key-sorted JSON, so the hash depends on content, not on the order keys were written in. */
 export function canonicalJson(value: unknown): string {

@@ -63,7 +63,10 @@ export function addClutchEvidence(input: DiagnosisInput, barometricKpa: number, 
       continue;
     }
     // A variable-displacement compressor cycles its clutch only for protection: half the weight.
-    const strength = symptom === "clutch_rapid_cycling" && type === "variable_displacement" ? 0.5 : 1;
+    const strength =
+      symptom === "clutch_rapid_cycling" && type === "variable_displacement"
+        ? CYCLING.variableRapidCyclingStrength
+        : 1;
     const id = `symptom:${symptom}` as const;
     out.observations.push({ id, message: { key: id }, ...(strength < 1 ? { strength } : {}) });
   }

@@ -1,12 +1,10 @@
+import { refrigerantInfo } from "@/lib/refrigerants";
 import type { Extraction } from "./evidence-types";
 import { saturationPressureOrNull, saturationTemperatureOrNull } from "./saturation-guard";
 import { gaugeKpa, kelvin, minutes, type Quantity, tempC } from "./quantities";
 import type { DiagnosisInput } from "./schema";
 import { STATIC_CHECK, STATIC_EMPTY, STATIC_SOAK } from "./grading";
 import type { ReadingObservationId } from "./observations";
-
-// CO2 has no liquid above its critical temperature, 30.98 °C (Span & Wagner 1996).
-const R744_CRITICAL_C = 30.98;
 
 export type SoakQuality = "measured" | "short" | "unmeasured";
 
@@ -79,7 +77,10 @@ export function addStaticEvidence(input: DiagnosisInput, barometricKpa: number, 
         : input.refrigerant === "R-744"
           ? {
               key: "note:static_outside_table_co2",
-              values: { ambient: reference, critical: { ...tempC(R744_CRITICAL_C), decimals: 0 } },
+              values: {
+                ambient: reference,
+                critical: { ...tempC(refrigerantInfo("R-744").criticalTempC), decimals: 0 },
+              },
             }
           : {
               key: "note:static_outside_table",

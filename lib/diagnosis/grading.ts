@@ -75,6 +75,8 @@ export const CYCLING = {
   marginK: 3,
   mildAmbientMaxC: 30,
   snapshotStrength: 0.5,
+  /** a variable-displacement compressor cycles its clutch only for protection: rapid cycling counts half */
+  variableRapidCyclingStrength: 0.5,
 } as const;
 
 // Next check: stop testing and confirm once the leader holds 80 % of the likelihood; leaders within a

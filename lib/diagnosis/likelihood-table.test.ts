@@ -59,6 +59,21 @@ describe("likelihood table", () => {
     }
   });
 
+  it("keeps the signs the physics gives (each would survive a flipped weight otherwise)", () => {
+    const w = (observation: string, cause: string) =>
+      LIKELIHOOD_TABLE.find((r) => r.observation === observation)?.weights[
+        cause as keyof typeof CAUSE_PRIORS
+      ] ?? 0;
+    // SAE J2099 / J2912: a failed identifier is evidence for contamination.
+    expect(w("purity:fail", "contaminated_refrigerant")).toBeGreaterThan(0);
+    expect(w("purity:pass", "contaminated_refrigerant")).toBeLessThan(0);
+    // Pressures close together point to a compressor that is not pumping (common practice).
+    expect(w("lift:close", "weak_compressor")).toBeGreaterThan(0);
+    expect(w("lift:normal", "weak_compressor")).toBeLessThan(0);
+    // Dalton's law: a static above saturation is air, never against it.
+    expect(w("static:very_high", "non_condensables")).toBeGreaterThan(0);
+  });
+
   it("makes every gate's trigger a known observation with a source", () => {
     for (const gate of RANKING_GATES) {
       for (const id of gate.when) expect(validObservations.has(id), id).toBe(true);

@@ -168,6 +168,17 @@ describe("chargeWithinTolerance", () => {
     expect(chargeWithinTolerance({ targetG: 680, chargedG: 690, refrigerant: "R-134a" }).within).toBe(true);
   });
 
+  it("holds exactly ±15 g as inside and anything past it as outside (SAE J2788 ½ oz, from memory)", () => {
+    expect(chargeWithinTolerance({ targetG: 600, chargedG: 615, refrigerant: "R-134a" }).within).toBe(true);
+    expect(chargeWithinTolerance({ targetG: 600, chargedG: 585, refrigerant: "R-134a" }).within).toBe(true);
+    expect(chargeWithinTolerance({ targetG: 600, chargedG: 615.1, refrigerant: "R-134a" }).within).toBe(
+      false,
+    );
+    expect(chargeWithinTolerance({ targetG: 600, chargedG: 584.9, refrigerant: "R-134a" }).within).toBe(
+      false,
+    );
+  });
+
   it("uses a shop's stricter tolerance when given and says so", () => {
     const r = chargeWithinTolerance({ targetG: 680, chargedG: 690, refrigerant: "R-134a", toleranceG: 5 });
     expect(r.within).toBe(false);
