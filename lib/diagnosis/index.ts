@@ -19,3 +19,4 @@ export {
 export type { Quantity, QuantityKind } from "./quantities";
 export { type DoNotRun, type DoNotRunReason, doNotRunState, recharged, staticDeficits } from "./do-not-run";
 export { type Measured, READING_GROUP_LABELS } from "./measured";
+export { INPUT_LIMITS, inputLimitMessage, type LimitedField } from "./input-limits";

@@ -124,6 +124,10 @@ const NOTE_TEMPLATES = {
     "The low side was judged at the clutch's cut-out and cut-in, not at a single moment of the swing.",
   "note:identifier_blind_to_sealant":
     "The identifier's pass does not count against contamination here: most identifiers cannot see sealant.",
+  "limit:above": "{@what} above {limit} is not plausible",
+  "limit:below": "{@what} below {limit} is not plausible",
+  "limit:negative": "{@what} cannot be negative",
+  "limit:vacuum": "{@what} cannot be below a perfect vacuum ({limit})",
   "gate:mixed":
     "The refrigerant failed identification: it must be dealt with before any other repair, and pressure–temperature checks are not valid on a mix.",
   "gate:sealant":

@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import { inputLimitMessage } from "./input-limits";
 import { diagnosisInputSchema } from "./schema";
 
 const base = { refrigerant: "R-134a", expansionDevice: "orifice_tube", ambientC: 27 } as const;
@@ -26,13 +27,29 @@ describe("diagnosisInputSchema", () => {
 
   it("rejects impossible values with a message naming the field", () => {
     expect(messages({ ...base, ambientC: 95 })[0]).toMatch(/^ambientC: .*above 60 °C/);
-    expect(messages({ ...base, relativeHumidityPct: 120 })[0]).toMatch(/relativeHumidityPct: .*0–100 %/);
+    expect(messages({ ...base, relativeHumidityPct: 120 })[0]).toBe(
+      "relativeHumidityPct: relative humidity above 100 % is not plausible",
+    );
     expect(messages({ ...base, recoveredChargeG: -5 })[0]).toMatch(/cannot be negative/);
     expect(messages({ ...base, labelChargeG: 0 })[0]).toMatch(/above 0 g/);
     expect(messages({ ...base, identifierPurityPct: 101 })[0]).toMatch(/purity/);
     expect(messages({ ...base, refrigerant: "R-22" })[0]).toMatch(/refrigerant must be/);
     expect(messages({ ...base, symptoms: ["smells_funny"] })[0]).toMatch(/unknown symptom/);
     expect(messages({ ...base, ventC: Number.NaN }).length).toBe(1);
+  });
+
+  it("keeps its limits as quantities, so a screen can say them in the reader's units (60 °C = 140 °F, NIST SP 811)", () => {
+    const imperial = { pressure: "psi", temperature: "F", mass: "oz", volume: "floz" } as const;
+    expect(inputLimitMessage("ambientC", "max")).toBe("ambient temperature above 60 °C is not plausible");
+    expect(inputLimitMessage("ambientC", "max", imperial)).toBe(
+      "ambient temperature above 140 °F is not plausible",
+    );
+    expect(inputLimitMessage("lowKpaGauge", "min", imperial)).toBe(
+      "low-side pressure cannot be below a perfect vacuum (−14.7 psig)",
+    );
+    expect(inputLimitMessage("recoveredChargeG", "max", imperial)).toBe(
+      "recovered mass above 211.6 oz is not plausible",
+    );
   });
 
   it("rejects HFC pressures past the relief-valve range but allows R-744 high sides (from memory: CO2 high sides run to ~13 MPa)", () => {
