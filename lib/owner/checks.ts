@@ -1,4 +1,4 @@
-import type { CheckId } from "@/lib/diagnosis/checks";
+import type { NextCheck } from "@/lib/diagnosis/next-check";
 
 /** The next check, told to an owner: what it is and why we do it. */
 export interface OwnerCheckText {
@@ -6,7 +6,27 @@ export interface OwnerCheckText {
   text: string;
 }
 
-export const OWNER_CHECKS: Readonly<Record<CheckId | "confirm", OwnerCheckText>> = {
+export const OWNER_CHECKS: Readonly<Record<NextCheck["check"], OwnerCheckText>> = {
+  look_for_sealant: {
+    title: "Look for leak sealant",
+    text: "Before we connect anything, we look for signs of leak sealant. Sealant can block the system and damage our machines.",
+  },
+  static_repeat: {
+    title: "Read the pressure at rest again",
+    text: "The first reading was taken too soon. We let the car stand longer and read the pressure again.",
+  },
+  cycling_points: {
+    title: "Watch the compressor switch on and off",
+    text: "We note the gauge at the moment the compressor switches off and again when it switches back on.",
+  },
+  drain_compressor_oil: {
+    title: "Measure the compressor oil",
+    text: "With the refrigerant out, we drain the oil from the compressor and measure it against the maker's amount.",
+  },
+  repair_path: {
+    title: "Repair before running",
+    text: "The system must not run as it is. We find and fix the problem, fill it with the right amount of refrigerant, and only then test it running.",
+  },
   static_pressure: {
     title: "Read the pressure at rest",
     text: "With the engine off and cooled down, we read the pressure inside the system. We compare it with the air around the car. That shows whether air has got in.",

@@ -1,6 +1,7 @@
 import type { CauseId } from "@/lib/diagnosis/causes";
-import type { CheckId } from "@/lib/diagnosis/checks";
+import { ventColdLimitC } from "@/lib/diagnosis/evidence";
 import { VENT_C } from "@/lib/diagnosis/grading";
+import type { NextCheck } from "@/lib/diagnosis/next-check";
 import type {
   OwnerAnswer,
   OwnerFactLine,
@@ -53,9 +54,11 @@ export function ownerCause(conclusionCause: string | null, findings: unknown): C
   return isCauseId(first?.cause) ? first.cause : null;
 }
 
-function nextCheckId(findings: unknown): CheckId | "confirm" | null {
+function nextCheckId(findings: unknown): NextCheck["check"] | null {
   const check = (findings as { nextCheck?: { check?: unknown } } | null)?.nextCheck?.check;
-  return typeof check === "string" && Object.hasOwn(OWNER_CHECKS, check) ? (check as CheckId) : null;
+  return typeof check === "string" && Object.hasOwn(OWNER_CHECKS, check)
+    ? (check as NextCheck["check"])
+    : null;
 }
 
 function chargeFacts(
@@ -107,11 +110,11 @@ function ventFact(facts: OwnerFacts): OwnerFactLine | null {
   const { ventC, ambientC, units } = facts;
   if (ventC === undefined || ambientC === undefined) return null;
   // The engine's own vent grading (its thresholds and their source live in lib/diagnosis/grading).
-  const rise = ambientC > VENT_C.hotAmbientC ? (ambientC - VENT_C.hotAmbientC) * VENT_C.riseKPerK : 0;
+  const { coldMaxC } = ventColdLimitC({ ambientC });
   const meaning =
-    ventC <= VENT_C.cold + rise
+    ventC <= coldMaxC
       ? "That is as cold as a working system should be."
-      : ventC <= VENT_C.warm + rise
+      : ventC <= coldMaxC + VENT_C.warmAboveColdK
         ? "That is a little warmer than it should be."
         : "That is much warmer than a working system gives.";
   return {
@@ -125,7 +128,7 @@ function serviceFacts(facts: OwnerFacts): OwnerFactLine[] {
   if (facts.holdPassed && facts.holdMinutes !== undefined) {
     lines.push({
       fact: `We pumped the system to a vacuum, and it held for ${Math.round(facts.holdMinutes)} minutes.`,
-      meaning: "That shows the system is sealed and dry.",
+      meaning: "That shows there is no large leak, and that the system is dry enough to fill.",
     });
   }
   if (facts.oilAddedMl !== undefined && facts.oilAddedMl > 0) {
