@@ -94,7 +94,8 @@ export function scoreCauses(
     const bestOther = Math.max(...scores.filter((s) => s.cause !== gate.leader).map((s) => s.logOdds));
     const boost = bestOther + gate.marginLogOdds - leader.logOdds;
     if (boost > 0) {
-      leader.logOdds += boost;
+      // Set, not added: the gate puts the leader exactly its margin ahead, free of rounding.
+      leader.logOdds = bestOther + gate.marginLogOdds;
       leader.items.unshift({ observation: "ranking_gate", message: { key: gate.message }, weight: boost });
     }
   }
