@@ -9,6 +9,7 @@ import * as m1001 from "./20261203-1001-create-owner-summary-tables";
 import * as m2001 from "./20261203-2001-create-sign-in-throttle";
 import * as m2002 from "./20261203-2002-add-spec-entry-match-key";
 import * as m2003 from "./20261203-2003-create-user-invitations";
+import * as m3001 from "./20261203-3001-add-compressor-type";
 import * as m4001 from "./20261203-4001-drop-case-computed";
 import * as m5001 from "./20261203-5001-add-shop-locale";
 import * as m5002 from "./20261203-5002-name-service-record-figures-once";
@@ -26,6 +27,7 @@ export const migrations: RunnableMigration<QueryInterface>[] = [
   { name: "20261203-2001-create-sign-in-throttle", ...m2001 },
   { name: "20261203-2002-add-spec-entry-match-key", ...m2002 },
   { name: "20261203-2003-create-user-invitations", ...m2003 },
+  { name: "20261203-3001-add-compressor-type", ...m3001 },
   { name: "20261203-4001-drop-case-computed", ...m4001 },
   { name: "20261203-5001-add-shop-locale", ...m5001 },
   { name: "20261203-5002-name-service-record-figures-once", ...m5002 },

@@ -9,6 +9,7 @@ import {
 } from "sequelize";
 import { REFRIGERANT_IDS, type RefrigerantId } from "@/lib/refrigerants/catalog";
 import { specMatchKey } from "@/lib/specs/schema";
+import { COMPRESSOR_TYPES, type CompressorType } from "@/lib/diagnosis/schema";
 import type { Shop } from "./shop";
 
 /** One row of a shop's spec table: what a vehicle variant carries (grams, millilitres). */
@@ -27,6 +28,7 @@ export class SpecEntry extends Model<InferAttributes<SpecEntry>, InferCreationAt
   declare totalOilMl: CreationOptional<number | null>;
   /** specMatchKey of the row, set on every save; unique per shop (spec_entry_shop_match_key). */
   declare matchKey: CreationOptional<string>;
+  declare compressorType: CreationOptional<CompressorType | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -45,6 +47,7 @@ export class SpecEntry extends Model<InferAttributes<SpecEntry>, InferCreationAt
         oilType: { type: DataTypes.STRING(60), allowNull: false },
         totalOilMl: { type: DataTypes.INTEGER, allowNull: true },
         matchKey: { type: DataTypes.STRING(720), allowNull: false },
+        compressorType: { type: DataTypes.ENUM(...COMPRESSOR_TYPES), allowNull: true },
         createdAt: DataTypes.DATE(3),
         updatedAt: DataTypes.DATE(3),
       },

@@ -7,6 +7,7 @@ import {
   type InferCreationAttributes,
   type Sequelize,
 } from "sequelize";
+import { COMPRESSOR_TYPES, type CompressorType } from "@/lib/diagnosis/schema";
 import type { Customer } from "./customer";
 import { REFRIGERANT_IDS, type RefrigerantId } from "@/lib/refrigerants/catalog";
 import { EXPANSION_DEVICE_IDS, type ExpansionDevice } from "@/lib/vehicles/expansion-devices";
@@ -26,6 +27,8 @@ export class Vehicle extends Model<InferAttributes<Vehicle>, InferCreationAttrib
   declare refrigerant: RefrigerantId;
   declare expansionDevice: ExpansionDevice;
   declare electricCompressor: CreationOptional<boolean>;
+  /** null when not known; electricCompressor stays true exactly when this is "electric" */
+  declare compressorType: CreationOptional<CompressorType | null>;
   declare labelChargeG: CreationOptional<number | null>;
   declare oilType: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
@@ -43,6 +46,7 @@ export class Vehicle extends Model<InferAttributes<Vehicle>, InferCreationAttrib
         refrigerant: { type: DataTypes.ENUM(...REFRIGERANT_IDS), allowNull: false },
         expansionDevice: { type: DataTypes.ENUM(...EXPANSION_DEVICE_IDS), allowNull: false },
         electricCompressor: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+        compressorType: { type: DataTypes.ENUM(...COMPRESSOR_TYPES), allowNull: true },
         labelChargeG: { type: DataTypes.INTEGER, allowNull: true },
         oilType: { type: DataTypes.STRING(60), allowNull: true },
         createdAt: DataTypes.DATE(3),

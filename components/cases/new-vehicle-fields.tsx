@@ -3,6 +3,7 @@
 import { useEffect, useState } from "react";
 import { SERVICE_REFRIGERANT_OPTIONS } from "@/lib/refrigerants/catalog";
 import { EXPANSION_DEVICE_OPTIONS } from "@/lib/vehicles/expansion-devices";
+import { COMPRESSOR_TYPE_LABELS, COMPRESSOR_TYPES, type CompressorType } from "@/lib/diagnosis/schema";
 import { normaliseVin, vinCheckDigitMatches, vinFormatError } from "@/lib/vehicles/vin";
 
 export interface NewVehicleDraft {
@@ -15,6 +16,8 @@ export interface NewVehicleDraft {
     vin?: string;
     refrigerant: string;
     expansionDevice: string;
+    /** absent when the technician does not know it */
+    compressorType?: CompressorType;
     electricCompressor: boolean;
   };
 }
@@ -29,7 +32,7 @@ const EMPTY = {
   vin: "",
   refrigerant: "R-1234yf",
   expansionDevice: "txv",
-  electric: false,
+  compressorType: "",
 };
 
 /** The customer and vehicle for a first visit. Server-side validation has the final word. */
@@ -52,7 +55,8 @@ export function NewVehicleFields({
         vin: f.vin || undefined,
         refrigerant: f.refrigerant,
         expansionDevice: f.expansionDevice,
-        electricCompressor: f.electric,
+        compressorType: f.compressorType === "" ? undefined : (f.compressorType as CompressorType),
+        electricCompressor: f.compressorType === "electric",
       },
     });
   }, [f, onChange]);
@@ -134,15 +138,24 @@ export function NewVehicleFields({
           ))}
         </select>
       </div>
-      <label className="flex min-h-glove items-center gap-3 sm:col-span-2">
-        <input
-          type="checkbox"
-          className="h-6 w-6"
-          checked={f.electric}
-          onChange={(e) => setF({ ...f, electric: e.target.checked })}
-        />
-        <span className="font-bold">Electric (high-voltage) compressor</span>
-      </label>
+      <div className="sm:col-span-2">
+        <label htmlFor="nv-compressor" className="field-label">
+          Compressor
+        </label>
+        <select
+          id="nv-compressor"
+          className="field-input"
+          value={f.compressorType}
+          onChange={(e) => setF({ ...f, compressorType: e.target.value })}
+        >
+          <option value="">Not known yet</option>
+          {COMPRESSOR_TYPES.map((t) => (
+            <option key={t} value={t}>
+              {COMPRESSOR_TYPE_LABELS[t]}
+            </option>
+          ))}
+        </select>
+      </div>
     </div>
   );
 }

@@ -10,6 +10,7 @@ import { readMassG, readVolumeMl } from "@/lib/service/entry";
 import { LABEL_CHARGE_RANGE_G, TOTAL_OIL_RANGE_ML } from "@/lib/specs";
 import { type MassUnit, type VolumeUnit, formatMass, formatVolume } from "@/lib/units";
 import { EntryInput } from "@/components/service/entry-input";
+import { COMPRESSOR_TYPE_LABELS, COMPRESSOR_TYPES, type CompressorType } from "@/lib/diagnosis/schema";
 
 type FormText = {
   yearFrom: string;
@@ -22,6 +23,7 @@ type FormText = {
   charge: string;
   oilType: string;
   totalOil: string;
+  compressorType: string;
 };
 
 function initial(row: SpecEntryDto | null, mass: MassUnit, volume: VolumeUnit): FormText {
@@ -36,6 +38,7 @@ function initial(row: SpecEntryDto | null, mass: MassUnit, volume: VolumeUnit): 
     charge: row ? formatMass(row.labelChargeG, mass) : "",
     oilType: row?.oilType ?? "",
     totalOil: row?.totalOilMl ? formatVolume(row.totalOilMl, volume) : "",
+    compressorType: row?.compressorType ?? "",
   };
 }
 
@@ -106,6 +109,7 @@ export function SpecForm({
       labelChargeG: "value" in charge ? charge.value : 0,
       oilType: form.oilType,
       totalOilMl: "value" in oil ? oil.value : null,
+      compressorType: form.compressorType === "" ? null : (form.compressorType as CompressorType),
     });
   }
 
@@ -192,6 +196,24 @@ export function SpecForm({
         onChange={set("totalOil")}
         error={errors.totalOilMl}
       />
+      <div>
+        <label htmlFor="spec-compressor" className="field-label">
+          Compressor (optional)
+        </label>
+        <select
+          id="spec-compressor"
+          className="field-input"
+          value={form.compressorType}
+          onChange={(e) => set("compressorType")(e.target.value)}
+        >
+          <option value="">Not stated</option>
+          {COMPRESSOR_TYPES.map((t) => (
+            <option key={t} value={t}>
+              {COMPRESSOR_TYPE_LABELS[t]}
+            </option>
+          ))}
+        </select>
+      </div>
       {status && (
         <p role="alert" className="field-error">
           {status}

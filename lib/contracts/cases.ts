@@ -3,6 +3,7 @@ import type { Role } from "@/lib/auth/roles";
 import { CASE_STATUSES, type CaseStatus } from "@/lib/cases/statuses";
 import { SERVICE_REFRIGERANT_IDS } from "@/lib/refrigerants/catalog";
 import { EXPANSION_DEVICE_IDS } from "@/lib/vehicles/expansion-devices";
+import { COMPRESSOR_TYPES } from "@/lib/diagnosis/schema";
 
 export { CASE_STATUSES, type CaseStatus };
 
@@ -65,6 +66,10 @@ export const newVehicleSchema = z.object({
   }),
   expansionDevice: z.enum(EXPANSION_DEVICE_IDS, { message: "Choose orifice tube or TXV." }),
   electricCompressor: z.boolean().default(false),
+  /** how the compressor is driven; when given it decides electricCompressor */
+  compressorType: z
+    .enum(COMPRESSOR_TYPES, { message: "Choose the compressor type or leave it unknown." })
+    .optional(),
   labelChargeG: z
     .number()
     .int()

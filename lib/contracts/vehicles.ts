@@ -1,5 +1,6 @@
 import { z } from "zod";
 import type { ExpansionDevice } from "@/lib/vehicles/expansion-devices";
+import type { CompressorType } from "@/lib/diagnosis/schema";
 
 export const vehicleListQuerySchema = z.object({
   q: z.string().max(80, "Search with fewer than 80 characters.").optional(),
@@ -14,6 +15,7 @@ export interface VehicleChoice {
   refrigerant: string;
   expansionDevice: ExpansionDevice;
   electricCompressor: boolean;
+  compressorType: CompressorType | null;
   labelChargeG: number | null;
 }
 

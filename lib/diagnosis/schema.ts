@@ -18,6 +18,11 @@ const limited = (field: LimitedField, type: string) =>
 /** How the compressor is driven and controlled: it decides what clutch behaviour can tell. */
 export const COMPRESSOR_TYPES = ["cycling_clutch", "variable_displacement", "electric"] as const;
 export type CompressorType = (typeof COMPRESSOR_TYPES)[number];
+export const COMPRESSOR_TYPE_LABELS: Record<CompressorType, string> = {
+  cycling_clutch: "Fixed displacement, cycling clutch",
+  variable_displacement: "Variable displacement",
+  electric: "Electric (high-voltage)",
+};
 
 export const diagnosisInputSchema = z
   .object({

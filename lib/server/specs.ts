@@ -35,6 +35,7 @@ function toDto(r: SpecEntryRow): SpecEntryDto {
     labelChargeG: r.labelChargeG,
     oilType: r.oilType,
     totalOilMl: r.totalOilMl ?? null,
+    compressorType: r.compressorType ?? null,
     updatedAt: new Date(r.updatedAt).toISOString(),
   };
 }

@@ -1,3 +1,4 @@
+import type { CompressorType } from "@/lib/diagnosis/schema";
 import "server-only";
 import { Op } from "sequelize";
 import { getModels } from "@/models";
@@ -46,6 +47,7 @@ export async function listVehicleChoices({
       refrigerant: string;
       expansionDevice: ExpansionDevice;
       electricCompressor: boolean | number;
+      compressorType: CompressorType | null;
       labelChargeG: number | null;
       Customer: { name: string };
     };
@@ -57,6 +59,7 @@ export async function listVehicleChoices({
       refrigerant: v.refrigerant,
       expansionDevice: v.expansionDevice,
       electricCompressor: Boolean(v.electricCompressor),
+      compressorType: v.compressorType ?? (v.electricCompressor ? "electric" : null),
       labelChargeG: v.labelChargeG,
     };
   });

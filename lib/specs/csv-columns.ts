@@ -15,7 +15,8 @@ export type SpecField =
   | "oilType"
   | "totalOil"
   | "oilUnit"
-  | "units";
+  | "units"
+  | "compressorType";
 
 export const FIELD_COLUMN_NAMES: Readonly<Record<SpecField, string>> = {
   yearFrom: "year_from",
@@ -33,6 +34,7 @@ export const FIELD_COLUMN_NAMES: Readonly<Record<SpecField, string>> = {
   totalOil: "total_oil",
   oilUnit: "oil_unit",
   units: "units",
+  compressorType: "compressor_type",
 };
 
 const ALIASES: Readonly<Record<string, SpecField>> = {
@@ -73,6 +75,8 @@ const ALIASES: Readonly<Record<string, SpecField>> = {
   oil_unit: "oilUnit",
   total_oil_unit: "oilUnit",
   units: "units",
+  compressor_type: "compressorType",
+  compressor: "compressorType",
 };
 
 const MASS_SUFFIXES: Readonly<Record<string, MassUnit>> = {

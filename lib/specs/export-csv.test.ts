@@ -17,6 +17,7 @@ const sample: SpecRow[] = [
     labelChargeG: 1130,
     oilType: "PAG 46",
     totalOilMl: 270,
+    compressorType: "variable_displacement",
   },
   {
     yearFrom: 2021,
@@ -37,10 +38,12 @@ describe("specRowsToCsv", () => {
     const csv = specRowsToCsv(sample);
     const lines = csv.split("\r\n");
     expect(lines[0]).toBe(
-      "year_from,year_to,make,model,variant,rear_ac,refrigerant,label_charge_g,oil_type,total_oil_ml",
+      "year_from,year_to,make,model,variant,rear_ac,refrigerant,label_charge_g,oil_type,total_oil_ml,compressor_type",
     );
-    expect(lines[1]).toBe('2016,2019,Ford,Explorer,"3.5L V6, tow",yes,R-134a,1130,PAG 46,270');
-    expect(lines[2]).toBe(`2021,2024,Toyota,"'=Corolla",,no,R-1234yf,440,PAG 46,`);
+    expect(lines[1]).toBe(
+      '2016,2019,Ford,Explorer,"3.5L V6, tow",yes,R-134a,1130,PAG 46,270,variable displacement',
+    );
+    expect(lines[2]).toBe(`2021,2024,Toyota,"'=Corolla",,no,R-1234yf,440,PAG 46,,`);
   });
 
   it("writes ounces and fluid ounces when asked (NIST SP 811: 1 oz = 28.349523125 g)", () => {

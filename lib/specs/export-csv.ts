@@ -42,6 +42,7 @@ export function specRowsToCsv(
     `label_charge_${SUFFIX[chargeUnit]}`,
     "oil_type",
     `total_oil_${SUFFIX[oilUnit]}`,
+    "compressor_type",
   ];
   const data = rows.map((r) => [
     r.yearFrom,
@@ -54,6 +55,7 @@ export function specRowsToCsv(
     rounded(massFromG(r.labelChargeG, chargeUnit), chargeUnit),
     r.oilType,
     r.totalOilMl === null ? "" : rounded(volumeFromMl(r.totalOilMl, oilUnit), oilUnit),
+    r.compressorType ? r.compressorType.replace("_", " ") : "",
   ]);
   return Papa.unparse({ fields, data }, { escapeFormulae: true, newline: "\r\n" });
 }

@@ -10,6 +10,28 @@ const ML_PER_FLOZ = 29.5735295625;
 const HEADER =
   "year_from,year_to,make,model,variant,rear_ac,refrigerant,label_charge_g,oil_type,total_oil_ml";
 
+describe("parseSpecCsv: the optional compressor_type column", () => {
+  it("reads cycling clutch, variable and electric, leaves an empty cell out, and names an unknown word", () => {
+    const csv = [
+      `${HEADER},compressor_type`,
+      "2016,2019,Ford,Explorer,3.5L V6,no,R-134a,765,PAG 46,210,cycling clutch",
+      "2016,2019,Ford,Explorer,3.5L V6,yes,R-134a,1130,PAG 46,270,Variable displacement",
+      "2021,2024,Toyota,Prius,,no,R-1234yf,440,POE,,electric",
+      "2021,2024,Toyota,Corolla,,no,R-1234yf,440,PAG 46,,",
+      "2021,2024,Toyota,Camry,,no,R-1234yf,440,PAG 46,,turbo",
+    ].join("\n");
+    const r = parseSpecCsv(csv);
+    expect(r.rows.map((x) => x.values?.compressorType)).toEqual([
+      "cycling_clutch",
+      "variable_displacement",
+      "electric",
+      undefined,
+      undefined,
+    ]);
+    expect(r.rows[4]?.problems.join(" ")).toMatch(/compressor_type "turbo"/);
+  });
+});
+
 describe("parseSpecCsv: good rows", () => {
   it("reads every column of well-formed rows with their line numbers", () => {
     const csv = [

@@ -1,3 +1,4 @@
+import type { CompressorType } from "@/lib/diagnosis/schema";
 import Papa from "papaparse";
 import { isServiceRefrigerant, SERVICE_REFRIGERANTS_IN_WORDS } from "@/lib/refrigerants/catalog";
 import type { MassUnit, VolumeUnit } from "@/lib/units";
@@ -223,6 +224,12 @@ function readValues(
     }
   }
 
+  const compressorType = parseCompressorType(get("compressorType"));
+  if (compressorType === undefined)
+    problems.push(
+      `compressor_type "${get("compressorType")}" should be cycling clutch, variable displacement or electric (or empty)`,
+    );
+
   if (
     problems.length > before ||
     yearFrom === null ||
@@ -244,10 +251,25 @@ function readValues(
     labelChargeG,
     oilType: get("oilType"),
     totalOilMl,
+    ...(compressorType ? { compressorType } : {}),
   });
   if (!parsed.success) {
     for (const issue of parsed.error.issues) problems.push(issue.message);
     return undefined;
   }
   return parsed.data;
+}
+
+/** "cycling clutch", "variable", "electric", "" → the engine's compressor type; null when empty, undefined when unknown. */
+function parseCompressorType(cell: string): CompressorType | null | undefined {
+  const word = cell
+    .trim()
+    .toLowerCase()
+    .replace(/[\s_-]+/g, " ");
+  if (word === "") return null;
+  if (word.startsWith("cycling") || word === "fixed" || word.startsWith("fixed displacement"))
+    return "cycling_clutch";
+  if (word.startsWith("variable")) return "variable_displacement";
+  if (word.startsWith("electric") || word === "hv" || word.startsWith("high voltage")) return "electric";
+  return undefined;
 }

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { SERVICE_REFRIGERANT_IDS } from "@/lib/refrigerants/catalog";
+import { COMPRESSOR_TYPES } from "@/lib/diagnosis/schema";
 
 /** Label charges outside this band are almost surely a unit mistake for a car or light truck (common practice). */
 export const LABEL_CHARGE_RANGE_G = { min: 100, max: 3000 } as const;
@@ -58,6 +59,11 @@ export const specRowSchema = z
       .min(TOTAL_OIL_RANGE_ML.min, "That total oil is too little for a car or light truck: check the unit.")
       .max(TOTAL_OIL_RANGE_ML.max, "That total oil is too much for a car or light truck: check the unit.")
       .nullable(),
+    /** how the compressor is driven and controlled; null when the row does not say */
+    compressorType: z
+      .enum(COMPRESSOR_TYPES, { message: "Choose how the compressor is driven, or leave it blank." })
+      .nullable()
+      .optional(),
   })
   .refine((r) => r.yearFrom <= r.yearTo, { message: "The first year is after the last.", path: ["yearTo"] });
 

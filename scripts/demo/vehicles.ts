@@ -1,5 +1,6 @@
 import type { ServiceRefrigerantId } from "@/lib/refrigerants/catalog";
 import type { ExpansionDevice } from "@/lib/vehicles/expansion-devices";
+import type { CompressorType } from "@/lib/diagnosis/schema";
 
 // Real makes and models with invented VINs left empty. Label charges and oils here are
 // illustrative demo values, not a reference: the shop's spec table and the under-hood label decide.
@@ -14,6 +15,7 @@ export type DemoVehicle = {
   refrigerant: ServiceRefrigerantId;
   expansionDevice: ExpansionDevice;
   electricCompressor: boolean;
+  compressorType: CompressorType;
   labelChargeG: number | null;
   oilType: string | null;
 };
@@ -29,6 +31,7 @@ export const demoVehicles: DemoVehicle[] = [
     refrigerant: "R-134a",
     expansionDevice: "orifice_tube",
     electricCompressor: false,
+    compressorType: "cycling_clutch",
     labelChargeG: 570,
     oilType: "PAG 46",
   },
@@ -42,6 +45,7 @@ export const demoVehicles: DemoVehicle[] = [
     refrigerant: "R-1234yf",
     expansionDevice: "txv",
     electricCompressor: false,
+    compressorType: "variable_displacement",
     labelChargeG: 450,
     oilType: "PAG 46",
   },
@@ -55,6 +59,7 @@ export const demoVehicles: DemoVehicle[] = [
     refrigerant: "R-134a",
     expansionDevice: "orifice_tube",
     electricCompressor: false,
+    compressorType: "cycling_clutch",
     labelChargeG: 1130,
     oilType: "PAG 150",
   },
@@ -68,6 +73,7 @@ export const demoVehicles: DemoVehicle[] = [
     refrigerant: "R-1234yf",
     expansionDevice: "txv",
     electricCompressor: true,
+    compressorType: "electric",
     labelChargeG: 480,
     oilType: "POE (dielectric)",
   },
@@ -81,6 +87,7 @@ export const demoVehicles: DemoVehicle[] = [
     refrigerant: "R-134a",
     expansionDevice: "orifice_tube",
     electricCompressor: false,
+    compressorType: "cycling_clutch",
     labelChargeG: 630,
     oilType: "PAG 46",
   },
@@ -94,6 +101,7 @@ export const demoVehicles: DemoVehicle[] = [
     refrigerant: "R-134a",
     expansionDevice: "txv",
     electricCompressor: false,
+    compressorType: "variable_displacement",
     labelChargeG: 450,
     oilType: "PAG 46",
   },
