@@ -98,7 +98,7 @@ describe("interview paths", () => {
       actor,
       {
         ...exampleAnswers,
-        system: { ...exampleAnswers.system, electricCompressor: true, expansionDevice: "txv" },
+        system: { ...exampleAnswers.system, compressorType: "electric", expansionDevice: "txv" },
       },
       2,
     );

@@ -29,7 +29,7 @@ const answersArb: fc.Arbitrary<InterviewAnswers> = fc
   .map(({ refrigerant, expansionDevice, ambientC, altitudeM, staticKpaGauge, purityPct, skip }) => {
     const answers: InterviewAnswers = {
       ...exampleAnswers,
-      system: { refrigerant, expansionDevice, electricCompressor: false },
+      system: { refrigerant, expansionDevice, compressorType: "variable_displacement" },
       conditions: { ambientC, altitudeM },
       static: { staticKpaGauge: refrigerant === "R-744" ? staticKpaGauge : Math.min(staticKpaGauge, 4000) },
       identification: { purityPct },

@@ -1,9 +1,12 @@
-import { SYMPTOM_LABELS } from "@/lib/diagnosis";
+import { COMPRESSOR_TYPE_LABELS, SYMPTOM_LABELS } from "@/lib/diagnosis";
 import {
   behaviourSymptomIds,
+  compressorOilChoices,
+  compressorTypeChoices,
   leakMethodChoices,
   leakPlaceChoices,
   oilTypeChoices,
+  partReplacedChoices,
 } from "@/lib/interview/choices";
 import type { StepId } from "@/lib/interview/steps";
 import type { ChoiceOption } from "./field-defs";
@@ -13,13 +16,15 @@ export const STEP_LEADS: Readonly<Record<StepId, string>> = {
   complaint: "What the owner says, in their words.",
   system: "From the under-hood label and what you can see.",
   conditions: "Where and how the readings are taken.",
-  static: "Engine off for a while, pressures equalised, system at the air temperature.",
+  static:
+    "Look for sealant before any hose goes on. Engine off for an hour or more, pressures equalised: read the static and the parts' temperature beside the lines.",
   running:
     "A/C at maximum, recirculation, blower high, doors open, after 5–10 minutes at a steady engine speed.",
   behaviour: "Tick everything you noticed. Leave it empty if nothing stood out.",
   leakFinding: "The system has lost its charge: find the leak before anything is run or charged.",
   identification: "Run the identifier before anything goes into the recovery machine.",
-  chargeAudit: "If you recovered the charge, what came out and how much oil with it.",
+  chargeAudit:
+    "If you recovered the charge, what came out and how much oil with it; and what you know of the oil.",
   recoveryHeld: "This refrigerant must not go into the shop's recovery machine.",
   findings: "The likely causes, ranked, with the evidence for and against each.",
 };
@@ -53,10 +58,28 @@ const PLACE_LABELS: Record<(typeof leakPlaceChoices)[number], string> = {
   not_found_yet: "Not found yet",
 };
 
+const COMPRESSOR_LABELS: Record<(typeof compressorTypeChoices)[number], string> = {
+  ...COMPRESSOR_TYPE_LABELS,
+  unknown: "Not known",
+};
+const PART_REPLACED_LABELS: Record<(typeof partReplacedChoices)[number], string> = {
+  none: "No part replaced",
+  with_oil: "Replaced, its oil put back",
+  without_oil: "Replaced, no oil added",
+};
+const COMPRESSOR_OIL_LABELS: Record<(typeof compressorOilChoices)[number], string> = {
+  not_drained: "Not drained",
+  about_right: "About the maker's quantity",
+  short: "Well short",
+};
+
 const options = <T extends string>(values: readonly T[], labels: Record<T, string>): ChoiceOption[] =>
   values.map((value) => ({ value, label: labels[value] }));
 
 export const OIL_OPTIONS = options(oilTypeChoices, OIL_LABELS);
+export const COMPRESSOR_OPTIONS = options(compressorTypeChoices, COMPRESSOR_LABELS);
+export const PART_REPLACED_OPTIONS = options(partReplacedChoices, PART_REPLACED_LABELS);
+export const COMPRESSOR_OIL_OPTIONS = options(compressorOilChoices, COMPRESSOR_OIL_LABELS);
 export const METHOD_OPTIONS = options(leakMethodChoices, METHOD_LABELS);
 export const PLACE_OPTIONS = options(leakPlaceChoices, PLACE_LABELS);
 export const SYMPTOM_OPTIONS: ChoiceOption[] = behaviourSymptomIds.map((id) => ({

@@ -5,11 +5,13 @@ import { useQuery } from "@tanstack/react-query";
 import { clsx } from "clsx";
 import type { SpecMatchDto } from "@/lib/contracts/specs";
 import { specMatchesQuery } from "@/lib/queries/spec-matches";
+import { COMPRESSOR_TYPE_LABELS } from "@/lib/diagnosis/schema";
 
 export interface SpecPick {
   refrigerant?: string;
   labelChargeG?: number;
   oilType?: string;
+  compressorType?: string;
 }
 
 const OIL_FAMILIES = ["pag", "poe", "pao", "mineral"] as const;
@@ -58,6 +60,7 @@ export function SpecMatches({ vehicleId, onPick }: { vehicleId: number; onPick: 
                   refrigerant: match.row.refrigerant,
                   labelChargeG: match.row.labelChargeG,
                   oilType: oilChoice(match.row.oilType),
+                  ...(match.row.compressorType ? { compressorType: match.row.compressorType } : {}),
                 });
               }}
               className={clsx(
@@ -72,6 +75,9 @@ export function SpecMatches({ vehicleId, onPick }: { vehicleId: number; onPick: 
                 {match.row.refrigerant} · {match.row.labelChargeG} g
                 {match.row.oilType ? ` · ${match.row.oilType}` : ""}
                 {match.row.totalOilMl ? ` · ${match.row.totalOilMl} mL oil in total` : ""}
+                {match.row.compressorType
+                  ? ` · ${COMPRESSOR_TYPE_LABELS[match.row.compressorType].toLowerCase()}`
+                  : ""}
               </span>
             </button>
           </li>

@@ -6,7 +6,7 @@ import type { GroupId } from "@/lib/interview/steps";
 import type { AnswerIssue } from "@/lib/interview/validate";
 import type { ShopSettings } from "@/lib/interview/branches";
 import { GroupForm } from "./group-form";
-import { GROUP_FIELDS } from "./group-fields";
+import { fieldsFor } from "./group-fields";
 import { liveReadouts, type PhysicsContext, type ReadoutLine } from "@/lib/interview/readouts";
 import { answerValuesOf, formValuesOf } from "./form-values";
 import { otherSystem } from "./quantities";
@@ -68,7 +68,9 @@ export const StepForm = forwardRef<StepFormHandle, Props>(function StepForm(
   { group, saved, answers, issues, units, setUnit, physics, shop, onValues },
   ref,
 ) {
-  const fields = GROUP_FIELDS[group];
+  const compressorType = answers.system?.compressorType;
+  // eslint-disable-next-line react-hooks/exhaustive-deps -- only the compressor type decides which fields show
+  const fields = useMemo(() => fieldsFor(group, answers), [group, compressorType]);
   const form = useGroupForm({ group, fields, saved, otherAnswers: answers, units, shop, onValues });
   const values = form.watch() as FormValues;
 

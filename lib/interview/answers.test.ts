@@ -37,22 +37,28 @@ describe("question group schemas", () => {
     ]);
   });
 
-  it("require refrigerant, device and the electric-compressor answer; label charge and oil are optional", () => {
+  it("require refrigerant, device and the compressor type; label charge and oil are optional", () => {
     expect(
       systemAnswersSchema.safeParse({
         refrigerant: "R-1234yf",
         expansionDevice: "txv",
-        electricCompressor: true,
+        compressorType: "electric",
       }).success,
     ).toBe(true);
     const missing = systemAnswersSchema.safeParse({ refrigerant: "R-1234yf", expansionDevice: "txv" });
-    expect(messages(missing)).toEqual(["Say whether the compressor is electric (high-voltage)"]);
+    expect(messages(missing)).toEqual(["Choose the compressor type, or 'not known'"]);
+    // Answers saved before the question was asked said only whether the compressor was electric.
+    const older = { refrigerant: "R-1234yf", expansionDevice: "txv", electricCompressor: true };
+    expect(systemAnswersSchema.parse(older)).toMatchObject({ compressorType: "electric" });
+    expect(systemAnswersSchema.parse({ ...older, electricCompressor: false })).toMatchObject({
+      compressorType: "unknown",
+    });
     expect(
       messages(
         systemAnswersSchema.safeParse({
           refrigerant: "R-22",
           expansionDevice: "txv",
-          electricCompressor: false,
+          compressorType: "unknown",
         }),
       ),
     ).toEqual(["Choose the refrigerant on the label"]);

@@ -2,10 +2,13 @@ import { z } from "zod";
 import { FULL_VACUUM_KPA_GAUGE, MAX_READING_KPA_GAUGE } from "@/lib/refrigerants/gauge-limits";
 import {
   behaviourSymptomIds,
+  compressorOilChoices,
+  compressorTypeChoices,
   expansionDeviceChoices,
   leakMethodChoices,
   leakPlaceChoices,
   oilTypeChoices,
+  partReplacedChoices,
   refrigerantChoices,
 } from "./choices";
 
@@ -44,17 +47,31 @@ export const complaintAnswersSchema = z.object({
     .max(2000, { error: "Keep the complaint under 2000 characters" }),
 });
 
-export const systemAnswersSchema = z.object({
-  refrigerant: z.enum(refrigerantChoices, { error: "Choose the refrigerant on the label" }),
-  expansionDevice: z.enum(expansionDeviceChoices, { error: "Choose orifice tube or TXV" }),
-  electricCompressor: z.boolean({ error: "Say whether the compressor is electric (high-voltage)" }),
-  labelChargeG: z
-    .number({ error: "Label charge: enter a number" })
-    .min(50, { error: "Label charge: under 50 g is not a vehicle charge — check the unit" })
-    .max(5000, { error: "Label charge: over 5 kg is not a light-vehicle charge — check the unit" })
-    .optional(),
-  oilType: z.enum(oilTypeChoices, { error: "Choose the oil type or leave it blank" }).optional(),
-});
+/** Answers saved before the compressor type was asked said only whether it was electric. */
+function compressorTypeFromOlderAnswer(value: unknown): unknown {
+  if (typeof value !== "object" || value === null) return value;
+  const v = value as Record<string, unknown>;
+  if (v.compressorType !== undefined || typeof v.electricCompressor !== "boolean") return value;
+  const { electricCompressor, ...rest } = v;
+  return { ...rest, compressorType: electricCompressor ? "electric" : "unknown" };
+}
+
+export const systemAnswersSchema = z.preprocess(
+  compressorTypeFromOlderAnswer,
+  z.object({
+    refrigerant: z.enum(refrigerantChoices, { error: "Choose the refrigerant on the label" }),
+    expansionDevice: z.enum(expansionDeviceChoices, { error: "Choose orifice tube or TXV" }),
+    compressorType: z.enum(compressorTypeChoices, {
+      error: "Choose the compressor type, or 'not known'",
+    }),
+    labelChargeG: z
+      .number({ error: "Label charge: enter a number" })
+      .min(50, { error: "Label charge: under 50 g is not a vehicle charge — check the unit" })
+      .max(5000, { error: "Label charge: over 5 kg is not a light-vehicle charge — check the unit" })
+      .optional(),
+    oilType: z.enum(oilTypeChoices, { error: "Choose the oil type or leave it blank" }).optional(),
+  }),
+);
 
 export const conditionsAnswersSchema = z.object({
   ambientC: tempC("Ambient temperature", -30, 55),
@@ -77,7 +94,16 @@ export const conditionsAnswersSchema = z.object({
 });
 
 export const staticAnswersSchema = z.object({
+  /** Looked for before any hose goes on. */
+  sealantSeen: z.boolean({ error: "Say whether you saw sealant at the ports" }).optional(),
   staticKpaGauge: gaugeKpa("Static pressure").optional(),
+  /** The temperature the parts soaked to, measured beside the lines. */
+  staticSoakC: tempC("Soak temperature", -30, 60).optional(),
+  staticSoakMin: z
+    .number({ error: "Soak time: enter a number of minutes" })
+    .min(0, { error: "Soak time cannot be negative" })
+    .max(10080, { error: "Soak time: over a week is not a soak — check the unit" })
+    .optional(),
 });
 
 // Two service gauges on equalised pressures can disagree by a few psi; 50 kPa leaves room for that (common practice).
@@ -90,8 +116,22 @@ export const runningAnswersSchema = z
     liquidLineC: tempC("Liquid line", -40, 110).optional(),
     suctionLineC: tempC("Suction line", -40, 80).optional(),
     ventC: tempC("Vent", -30, 60).optional(),
+    /** Cycling-clutch systems: the low side when the clutch cuts out and when it cuts back in. */
+    lowCutOutKpaGauge: gaugeKpa("Low side at cut-out").optional(),
+    lowCutInKpaGauge: gaugeKpa("Low side at cut-in").optional(),
   })
   .superRefine((r, ctx) => {
+    if (
+      r.lowCutOutKpaGauge !== undefined &&
+      r.lowCutInKpaGauge !== undefined &&
+      r.lowCutInKpaGauge < r.lowCutOutKpaGauge
+    ) {
+      ctx.addIssue({
+        code: "custom",
+        path: ["lowCutInKpaGauge"],
+        message: "The clutch cuts back in at a higher low side than it cuts out — the two look swapped",
+      });
+    }
     const { highKpaGauge, lowKpaGauge } = r;
     if (
       highKpaGauge !== undefined &&
@@ -136,6 +176,12 @@ export const chargeAuditAnswersSchema = z
       .number({ error: "Oil removed: enter a number" })
       .min(0, { error: "Oil removed cannot be negative" })
       .max(1000, { error: "Oil removed: over 1 litre is not one vehicle's oil — check the unit" })
+      .optional(),
+    partReplaced: z
+      .enum(partReplacedChoices, { error: "Say whether a part was replaced, and its oil" })
+      .optional(),
+    compressorOil: z
+      .enum(compressorOilChoices, { error: "Choose what the compressor's oil measured" })
       .optional(),
   })
   .superRefine((a, ctx) => {

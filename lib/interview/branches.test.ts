@@ -3,6 +3,7 @@ import { saturationPressure } from "@/lib/refrigerants";
 import { STATIC_SOAK_SPREAD_K } from "@/lib/refrigerants/derived";
 import { EMPTY_STATIC_MAX_KPA_GAUGE } from "@/lib/refrigerants/static-charge";
 import { PURITY_PASS_PCT } from "@/lib/service/identifier";
+import { doNotRunState } from "@/lib/diagnosis/do-not-run";
 import { barometricKpa } from "@/lib/units";
 import type { InterviewAnswers } from "./answers";
 import { pressureLeft, purityFailed, refrigerantContaminated, systemLooksEmpty } from "./branches";
@@ -15,7 +16,7 @@ function soaked(
   staticKpaGauge?: number,
 ): InterviewAnswers {
   return {
-    system: { refrigerant, expansionDevice: "txv", electricCompressor: false },
+    system: { refrigerant, expansionDevice: "txv", compressorType: "variable_displacement" },
     conditions: { ambientC },
     static: staticKpaGauge === undefined ? {} : { staticKpaGauge },
   };
@@ -39,14 +40,34 @@ describe("systemLooksEmpty", () => {
     expect(systemLooksEmpty(soaked("R-744", 20, 5729 - SEA_LEVEL_KPA))).toBe(false);
   });
 
-  it("is true at or below about 0 kPa gauge whatever else is known (common practice), false just above", () => {
-    expect(systemLooksEmpty({ static: { staticKpaGauge: 0 } })).toBe(true);
-    expect(systemLooksEmpty({ static: { staticKpaGauge: EMPTY_STATIC_MAX_KPA_GAUGE } })).toBe(true);
-    expect(systemLooksEmpty({ static: { staticKpaGauge: -60 } })).toBe(true);
-    expect(systemLooksEmpty({ static: { staticKpaGauge: EMPTY_STATIC_MAX_KPA_GAUGE + 1 } })).toBe(false);
+  it("follows the engine's do-not-run rule: empty under 70 kPa gauge or under half of saturation (common practice)", () => {
+    expect(systemLooksEmpty(soaked("R-134a", 25, 0))).toBe(true);
+    expect(systemLooksEmpty(soaked("R-134a", 25, EMPTY_STATIC_MAX_KPA_GAUGE + 1))).toBe(true);
+    expect(systemLooksEmpty(soaked("R-134a", 25, -60))).toBe(true);
+    expect(systemLooksEmpty(soaked("R-134a", 5, 69))).toBe(true);
+    // The same answers the findings engine sees: one rule for the interview's branch and the findings.
+    const answers = soaked("R-134a", 25, 300);
+    expect(systemLooksEmpty(answers)).toBe(
+      doNotRunState({
+        refrigerant: "R-134a",
+        expansionDevice: "txv",
+        compressorType: "variable_displacement",
+        ambientC: 25,
+        staticKpaGauge: 300,
+      }).active,
+    );
   });
 
-  it("is false when the static pressure was not taken", () => {
+  it("keeps an electric compressor off the running readings until a static shows its charge (from memory)", () => {
+    const electric = (staticKpaGauge?: number): InterviewAnswers => ({
+      ...soaked("R-1234yf", 25, staticKpaGauge),
+      system: { refrigerant: "R-1234yf", expansionDevice: "txv", compressorType: "electric" },
+    });
+    expect(systemLooksEmpty(electric())).toBe(true);
+    expect(systemLooksEmpty(electric(682.6 - SEA_LEVEL_KPA))).toBe(false);
+  });
+
+  it("is false when the static pressure was not taken on a belt-driven compressor", () => {
     expect(systemLooksEmpty(soaked("R-134a", 25))).toBe(false);
     expect(systemLooksEmpty({})).toBe(false);
   });

@@ -4,17 +4,20 @@ import {
   staticPressureLeft,
   staticShowsNoCharge,
 } from "@/lib/refrigerants/static-charge";
+import { doNotRunState } from "@/lib/diagnosis/do-not-run";
 import type { InterviewAnswers } from "./answers";
+import { altitudeFor, type ShopSettings, toDiagnosisInput } from "./engine-input";
 
-export interface ShopSettings {
-  altitudeM?: number;
-}
+export { altitudeFor, type ShopSettings } from "./engine-input";
 
-export function altitudeFor(answers: InterviewAnswers, shop?: ShopSettings): number | undefined {
-  return answers.conditions?.altitudeM ?? shop?.altitudeM;
-}
-
-/** The static reading in the shape the shared "empty system" test (and the findings engine) reads; null until taken. */
+/**
+ * The system must not be run: the findings engine's do-not-run rule (lib/diagnosis/do-not-run.ts), which
+ * applies the shared empty-system test (lib/refrigerants/static-charge.ts) among its reasons, on what is
+ * known when the branch is taken — the system, the conditions and the static check. So no liquid left,
+ * or an electric compressor whose charge the static has not shown, sends the interview to the leak search
+ * instead of the running readings. One rule for the interview and the findings.
+ */
+/** The static reading in the shape the shared "empty system" test reads; null until taken. */
 export function staticReadingOf(answers: InterviewAnswers, shop?: ShopSettings): StaticReading | null {
   const staticKpaGauge = answers.static?.staticKpaGauge;
   if (staticKpaGauge === undefined) return null;
@@ -30,13 +33,15 @@ export function staticReadingOf(answers: InterviewAnswers, shop?: ShopSettings):
   return reading;
 }
 
-/**
- * Empty or near-empty: the static gauge reads about zero, or too far below saturation at ambient for
- * liquid to remain. The interview's one call to the shared test (lib/refrigerants/static-charge.ts).
- */
 export function systemLooksEmpty(answers: InterviewAnswers, shop?: ShopSettings): boolean {
+  // Before the system step is complete the engine cannot be asked; the gauge-zero test still can.
   const reading = staticReadingOf(answers, shop);
-  return reading !== null && staticShowsNoCharge(reading);
+  if (reading !== null && staticShowsNoCharge(reading)) return true;
+  const input = toDiagnosisInput(
+    { system: answers.system, conditions: answers.conditions, static: answers.static },
+    shop,
+  );
+  return input !== null && doNotRunState(input).active;
 }
 
 /** Some refrigerant vapour is still in the system, so it must be identified before anything is recovered. */

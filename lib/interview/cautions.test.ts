@@ -20,7 +20,7 @@ describe("cautionsFor", () => {
   it("gives every caution a level, plain text and the basis it rests on", () => {
     for (const caution of cautionsFor({
       ...contaminatedAnswers,
-      system: { ...contaminatedAnswers.system, electricCompressor: true },
+      system: { ...contaminatedAnswers.system, compressorType: "electric" },
     })) {
       expect(caution.text.length).toBeGreaterThan(20);
       expect(caution.source.length).toBeGreaterThan(5);
@@ -41,10 +41,10 @@ describe("cautionsFor", () => {
   });
 
   it("adds high-voltage and dielectric-oil cautions for an electric compressor only", () => {
-    expect(ids(withSystem({ electricCompressor: true }))).toEqual(
+    expect(ids(withSystem({ compressorType: "electric" }))).toEqual(
       expect.arrayContaining(["high_voltage_compressor", "dielectric_oil"]),
     );
-    const belt = ids(withSystem({ electricCompressor: false }));
+    const belt = ids(withSystem({ compressorType: "variable_displacement" }));
     expect(belt).not.toContain("high_voltage_compressor");
     expect(belt).not.toContain("dielectric_oil");
   });

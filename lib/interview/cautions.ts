@@ -19,7 +19,7 @@ export function cautionsFor(
   const system = answers.system;
   if (ventingBanApplies(system?.refrigerant)) ids.push("never_vent");
   if (system?.refrigerant) ids.push(...refrigerantCautionIds(system.refrigerant));
-  if (system?.electricCompressor) ids.push("high_voltage_compressor", "dielectric_oil");
+  if (system?.compressorType === "electric") ids.push("high_voltage_compressor", "dielectric_oil");
   if (system?.expansionDevice === "orifice_tube") ids.push("recover_slowly_accumulator");
 
   const empty = systemLooksEmpty(answers, options.shop);

@@ -1,3 +1,4 @@
+import { COMPRESSOR_TYPES } from "@/lib/diagnosis/schema";
 import { BEHAVIOUR_SYMPTOM_IDS } from "@/lib/diagnosis/symptoms";
 import { SERVICE_REFRIGERANT_IDS } from "@/lib/refrigerants/catalog";
 import { EXPANSION_DEVICE_IDS } from "@/lib/vehicles/expansion-devices";
@@ -6,6 +7,12 @@ import { EXPANSION_DEVICE_IDS } from "@/lib/vehicles/expansion-devices";
 export const refrigerantChoices = SERVICE_REFRIGERANT_IDS;
 export const expansionDeviceChoices = EXPANSION_DEVICE_IDS;
 export const oilTypeChoices = ["pag", "poe", "pao", "mineral", "other"] as const;
+/** The engine's compressor types, or "unknown" when the technician cannot tell. */
+export const compressorTypeChoices = [...COMPRESSOR_TYPES, "unknown"] as const;
+/** Was a part replaced recently, and was its oil put back? */
+export const partReplacedChoices = ["none", "with_oil", "without_oil"] as const;
+/** The compressor's oil, drained and measured against the maker's quantity. */
+export const compressorOilChoices = ["not_drained", "about_right", "short"] as const;
 
 /** The behaviour step asks for these; the rest of the engine's symptom list records next-check results. */
 export const behaviourSymptomIds = BEHAVIOUR_SYMPTOM_IDS;

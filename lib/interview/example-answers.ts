@@ -9,7 +9,7 @@ export const exampleAnswers = {
   system: {
     refrigerant: "R-134a",
     expansionDevice: "orifice_tube",
-    electricCompressor: false,
+    compressorType: "variable_displacement",
     labelChargeG: 570,
     oilType: "pag",
   },

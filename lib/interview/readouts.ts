@@ -75,7 +75,7 @@ function staticLines(
     if (check.kind === "out_of_range") return [{ text: check.message, status: "unknown" }];
     const satGauge = check.saturationKpaAbs - barometricKpa;
     const lines: ReadoutLine[] = [
-      { text: `Saturation at ${fmt(referenceC)} °C (${where}): ${fmt(satGauge, 0)} kPa gauge` },
+      { text: `Saturation at ${fmt(referenceC)} °C ${where}: ${fmt(satGauge, 0)} kPa gauge` },
     ];
     if (check.kind === "no_liquid") lines.push({ text: check.message, status: "below", verdict: "" });
     // The same tolerance in kelvin the findings engine grades against, so the screen and the findings agree.
@@ -212,7 +212,7 @@ export function liveReadouts(
     // Judged at the parts' soak temperature when it is given, as the findings engine judges it.
     const soaked = num(values.staticSoakC);
     const referenceC = soaked ? (values.staticSoakC as number) : ambientC;
-    const where = soaked ? "the soak temperature" : "ambient";
+    const where = soaked ? "the parts' soak temperature" : "ambient";
     return {
       staticKpaGauge: staticLines(refrigerant, values.staticKpaGauge, referenceC, where, physics.barometricKpa),
     };

@@ -22,6 +22,7 @@ describe("toDiagnosisInput", () => {
     expect(toDiagnosisInput(exampleAnswers)).toEqual({
       refrigerant: "R-134a",
       expansionDevice: "orifice_tube",
+      compressorType: "variable_displacement",
       ambientC: 32,
       relativeHumidityPct: 55,
       staticKpaGauge: 715,
@@ -52,6 +53,7 @@ describe("toDiagnosisInput", () => {
     const input = toDiagnosisInput({ system: exampleAnswers.system, conditions: exampleAnswers.conditions });
     expect(Object.keys(input ?? {}).sort()).toEqual([
       "ambientC",
+      "compressorType",
       "expansionDevice",
       "labelChargeG",
       "refrigerant",
@@ -62,10 +64,46 @@ describe("toDiagnosisInput", () => {
   it("tells the engine the compressor is electric when the system answer says so", () => {
     const electric: InterviewAnswers = {
       ...exampleAnswers,
-      system: { ...exampleAnswers.system, electricCompressor: true },
+      system: { ...exampleAnswers.system, compressorType: "electric" },
     };
     expect(toDiagnosisInput(electric)?.compressorType).toBe("electric");
-    expect(toDiagnosisInput(exampleAnswers)).not.toHaveProperty("compressorType");
+    const unknown: InterviewAnswers = {
+      ...exampleAnswers,
+      system: { ...exampleAnswers.system, compressorType: "unknown" },
+    };
+    expect(toDiagnosisInput(unknown)).not.toHaveProperty("compressorType");
+  });
+
+  it("carries the soak, the clutch points, the sealant look and what is known of the oil to the engine", () => {
+    const answers: InterviewAnswers = {
+      ...exampleAnswers,
+      static: { staticKpaGauge: 715, staticSoakC: 30, staticSoakMin: 90, sealantSeen: false },
+      running: { ...exampleAnswers.running, lowCutOutKpaGauge: 150, lowCutInKpaGauge: 310 },
+      chargeAudit: {
+        recovered: true,
+        recoveredChargeG: 530,
+        partReplaced: "without_oil",
+        compressorOil: "short",
+      },
+    };
+    const input = toDiagnosisInput(answers);
+    expect(input).toMatchObject({
+      staticSoakC: 30,
+      staticSoakMin: 90,
+      lowCutOutKpaGauge: 150,
+      lowCutInKpaGauge: 310,
+    });
+    expect(input?.symptoms).toEqual(
+      expect.arrayContaining(["no_sealant_found", "part_replaced_no_oil_added", "oil_short_at_drain"]),
+    );
+    const withOil: InterviewAnswers = {
+      ...answers,
+      static: { ...answers.static, sealantSeen: true },
+      chargeAudit: { recovered: false, partReplaced: "with_oil", compressorOil: "about_right" },
+    };
+    expect(toDiagnosisInput(withOil)?.symptoms).toEqual(
+      expect.arrayContaining(["sealant_found", "part_replaced_oil_added", "oil_normal_at_drain"]),
+    );
   });
 
   it("ignores a recovered mass when the charge was not recovered", () => {
@@ -108,7 +146,7 @@ describe("toDiagnosisInput", () => {
       system: fc.record({
         refrigerant: fc.constantFrom("R-134a", "R-1234yf", "R-744"),
         expansionDevice: fc.constantFrom("orifice_tube", "txv"),
-        electricCompressor: fc.boolean(),
+        compressorType: fc.constantFrom("cycling_clutch", "variable_displacement", "electric", "unknown"),
         labelChargeG: opt(num(50, 5000)),
       }),
       conditions: fc.record({

@@ -44,7 +44,7 @@ export function ownerFactsFromCase({
     units,
     refrigerant: isServiceRefrigerant(refrigerant) ? refrigerant : undefined,
     expansionDevice: isExpansionDevice(device) ? device : undefined,
-    electricCompressor: system.electricCompressor === true,
+    electricCompressor: system.compressorType === "electric" || system.electricCompressor === true,
     labelChargeG: num(sr?.labelChargeG) ?? num(system.labelChargeG),
     foundChargeG:
       num(sr?.recoveredChargeG) ?? (audit.recovered === true ? num(audit.recoveredChargeG) : undefined),

@@ -36,7 +36,7 @@ describe("demo data", () => {
       expect(c.answers.system, c.key).toMatchObject({
         refrigerant: vehicle?.refrigerant,
         expansionDevice: vehicle?.expansionDevice,
-        electricCompressor: vehicle?.electricCompressor,
+        compressorType: vehicle?.compressorType,
         labelChargeG: vehicle?.labelChargeG,
       });
     }

@@ -18,7 +18,7 @@ const focus: DemoCase = {
     system: {
       refrigerant: "R-134a",
       expansionDevice: "orifice_tube",
-      electricCompressor: false,
+      compressorType: "cycling_clutch",
       labelChargeG: 570,
       oilType: "pag",
     },
@@ -86,7 +86,7 @@ const crv: DemoCase = {
     system: {
       refrigerant: "R-1234yf",
       expansionDevice: "txv",
-      electricCompressor: false,
+      compressorType: "variable_displacement",
       labelChargeG: 450,
       oilType: "pag",
     },
@@ -153,7 +153,7 @@ const silverado: DemoCase = {
     system: {
       refrigerant: "R-134a",
       expansionDevice: "orifice_tube",
-      electricCompressor: false,
+      compressorType: "cycling_clutch",
       labelChargeG: 1130,
       oilType: "pag",
     },
@@ -219,7 +219,7 @@ const rav4: DemoCase = {
     system: {
       refrigerant: "R-1234yf",
       expansionDevice: "txv",
-      electricCompressor: true,
+      compressorType: "electric",
       labelChargeG: 480,
       oilType: "poe",
     },

@@ -18,7 +18,7 @@ export const mazdaOvercharge: DemoCase = {
     system: {
       refrigerant: "R-134a",
       expansionDevice: "txv",
-      electricCompressor: false,
+      compressorType: "variable_displacement",
       labelChargeG: 450,
       oilType: "pag",
     },

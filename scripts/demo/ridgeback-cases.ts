@@ -16,7 +16,7 @@ export const ridgebackCases: DemoCase[] = [
       system: {
         refrigerant: "R-134a",
         expansionDevice: "orifice_tube",
-        electricCompressor: false,
+        compressorType: "cycling_clutch",
         labelChargeG: 630,
         oilType: "pag",
       },

@@ -65,7 +65,8 @@ export async function createCase({
           vin: v.vin ?? null,
           refrigerant: v.refrigerant,
           expansionDevice: v.expansionDevice,
-          electricCompressor: v.electricCompressor,
+          electricCompressor: v.compressorType ? v.compressorType === "electric" : v.electricCompressor,
+          compressorType: v.compressorType ?? (v.electricCompressor ? "electric" : null),
           labelChargeG: v.labelChargeG ?? null,
         },
         { transaction },
@@ -86,7 +87,7 @@ export async function createCase({
     const system: JsonObject = lastSystem ?? {
       refrigerant: vehicle.refrigerant,
       expansionDevice: vehicle.expansionDevice,
-      electricCompressor: Boolean(vehicle.electricCompressor),
+      compressorType: vehicle.compressorType ?? (vehicle.electricCompressor ? "electric" : "unknown"),
       ...(vehicle.labelChargeG ? { labelChargeG: vehicle.labelChargeG } : {}),
     };
     const created = await Case.create(
