@@ -79,13 +79,13 @@ export const GROUP_FIELDS: GroupFields = {
     { name: "ventC", label: "Centre vent", kind: "temperature" },
     {
       name: "lowCutOutKpaGauge",
-      label: "Low side when the clutch cuts out",
+      label: "Pressure at clutch cut-out (low-side gauge)",
       kind: "pressure",
       showWhen: cyclingClutch,
     },
     {
       name: "lowCutInKpaGauge",
-      label: "Low side when the clutch cuts back in",
+      label: "Pressure at clutch cut-in (low-side gauge)",
       kind: "pressure",
       showWhen: cyclingClutch,
     },

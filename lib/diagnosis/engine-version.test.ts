@@ -12,11 +12,25 @@ const current = { priors: CAUSE_PRIORS, rows: LIKELIHOOD_TABLE, gates: RANKING_G
  * ENGINE_SEMVER if the code now reads evidence differently, and paste the new version printed by
  * `npx tsx -e 'import { ENGINE_VERSION } from "./lib/diagnosis"; console.log(ENGINE_VERSION)'`.
  */
-const PINNED_ENGINE_VERSION = "2.0.0+0f1ea349";
+const PINNED_ENGINE_VERSION = "2.0.0+a1e3280e";
 
 describe("ENGINE_VERSION", () => {
   it("is pinned: a change to the scoring model must update this literal in review", () => {
     expect(ENGINE_VERSION).toBe(PINNED_ENGINE_VERSION);
+  });
+
+  it("hashes only numbers written as short decimals, so every JavaScript engine gets the same version", () => {
+    // Math.log(3) is 1.0986122886681096 in Node 20 and 1.0986122886681098 in Chromium: a computed value in the
+    // table would give the browser and the server different engine versions.
+    const numbers: number[] = [];
+    const walk = (value: unknown): void => {
+      if (typeof value === "number") numbers.push(value);
+      else if (Array.isArray(value)) value.forEach(walk);
+      else if (value && typeof value === "object") Object.values(value).forEach(walk);
+    };
+    walk(current);
+    expect(numbers.length).toBeGreaterThan(100);
+    for (const n of numbers) expect(Number(n.toPrecision(8)), String(n)).toBe(n);
   });
 
   it("is the semver plus the hash of the scoring table", () => {

@@ -80,11 +80,12 @@ export const CYCLING = {
 } as const;
 
 // Next check: stop testing and confirm once the leader holds 80 % of the likelihood; leaders within a
-// likelihood ratio of 3 are "close"; a check expected to tell less than 0.01 nats is not worth doing
-// (judgement, all three).
+// likelihood ratio of 3 (ln 3 ≈ 1.0986) are "close"; a check expected to tell less than 0.01 nats is not
+// worth doing (judgement, all three). Written as a decimal, not Math.log(3): the last bit of Math.log differs
+// between JavaScript engines (Node and Chromium), and that would give the browser another engine version.
 export const NEXT_CHECK = {
   leaderClearShare: 0.8,
-  closePairLogOdds: Math.log(3),
+  closePairLogOdds: 1.0986,
   minUsefulGainNats: 0.01,
 } as const;
 // Repair cautions and repair steps follow the leader, or a cause holding at least this share (judgement).
