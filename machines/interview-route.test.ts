@@ -39,7 +39,8 @@ const answersArb: fc.Arbitrary<InterviewAnswers> = fc
     return answers;
   });
 
-describe("machine and routeFor agree", () => {
+// Each walk asks the do-not-run rule at every branch: seconds on a shared machine, so a generous limit.
+describe("machine and routeFor agree", { timeout: 30_000 }, () => {
   it("NEXT (or SKIP) walks exactly the route routeFor gives, and BACK walks it in reverse", () => {
     fc.assert(
       fc.property(answersArb, (answers) => {

@@ -214,7 +214,13 @@ export function liveReadouts(
     const referenceC = soaked ? (values.staticSoakC as number) : ambientC;
     const where = soaked ? "the parts' soak temperature" : "ambient";
     return {
-      staticKpaGauge: staticLines(refrigerant, values.staticKpaGauge, referenceC, where, physics.barometricKpa),
+      staticKpaGauge: staticLines(
+        refrigerant,
+        values.staticKpaGauge,
+        referenceC,
+        where,
+        physics.barometricKpa,
+      ),
     };
   }
   if (group === "running") return runningLines(values, { ...ctx, refrigerant }, physics);
