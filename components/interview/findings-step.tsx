@@ -13,7 +13,6 @@ import {
   type DiagnosisInput,
   type ReaderUnits,
 } from "@/lib/diagnosis";
-import { cautionNamed } from "@/lib/cautions/catalog";
 import type { Caution as InterviewCaution } from "@/lib/interview/cautions";
 import { ApiError } from "@/lib/queries/api-fetch";
 import { submitCase, type CaseSubmitResult } from "@/lib/queries/case-submit";
@@ -88,10 +87,9 @@ export function FindingsStep({
   }
 
   const chosen = cause || findings.suspects[0]?.cause || "";
-  // The engine names its cautions by the catalogue's ids: one caution, one wording and level on screen.
+  // The engine's cautions are the catalogue's (a repair in its conditional wording): one caution, one level.
   const cautions: CautionItem[] = [...interviewCautions];
-  for (const c of findings.cautions)
-    if (!cautions.some((x) => x.id === c.id)) cautions.push(cautionNamed(c.id, c.text));
+  for (const c of findings.cautions) if (!cautions.some((x) => x.id === c.id)) cautions.push(c);
 
   function submit(event: React.FormEvent) {
     event.preventDefault();

@@ -30,6 +30,11 @@ interface CautionEntry {
   title: string;
   text: string;
   source: string;
+  /**
+   * The wording while the fault is only the findings' leading suspect, not yet confirmed: a repair the
+   * findings name is a condition ("if … is confirmed"), never an order.
+   */
+  ifSuspected?: string;
 }
 
 const ENTRIES = {
@@ -89,6 +94,18 @@ const ENTRIES = {
     level: "warning",
     title: "Engine running",
     text: "Keep hands, hoses and sleeves clear of the fan and belts. An electric fan can start on its own, even with the engine off.",
+    source: "common practice",
+  },
+  electric_never_without_charge: {
+    level: "danger",
+    title: "Never energise without charge",
+    text: "Electric compressor: never energise it without a liquid charge or while the system is in vacuum, and after service follow the maker's insulation (isolation) check before handing the vehicle back.",
+    source: "the vehicle maker's service procedure; from memory",
+  },
+  sealant_in_system: {
+    level: "warning",
+    title: "Sealant in the system",
+    text: "Keep a system with sealant in it out of the shop's recovery machine and stock: recover with dedicated equipment or into a separate, labelled cylinder, and tell the owner in writing.",
     source: "common practice",
   },
   head_pressure_high: {
@@ -151,18 +168,24 @@ const ENTRIES = {
     title: "Charge by weight",
     text: "Charge by weight to the label figure, as liquid through certified equipment: pressures are only a guide. Never pour liquid into the compressor's suction side by hand.",
     source: "SAE J2788 (recharge from the liquid phase); US Army TM 5-2420-230-24-1",
+    ifSuspected:
+      "If the charge is to be corrected, charge by weight to the label figure, as liquid through certified equipment: pressures are only a guide.",
   },
   repair_before_refill: {
     level: "notice",
     title: "Repair before refilling",
     text: "Do not refill a system that has leaked until the leak is repaired: topping it off brings the fault back, and in the EU refilling after an abnormal leak before the repair is forbidden.",
     source: "Directive 2006/40/EC, Article 7",
+    ifSuspected:
+      "If a leak is confirmed, repair it before refilling: topping off a leaking system brings the fault back, and in the EU refilling after an abnormal leak before the repair is forbidden.",
   },
   moisture_and_acid: {
     level: "notice",
     title: "Moisture makes acid",
     text: "Moisture with PAG oil forms acid: replace the receiver-drier or accumulator and evacuate thoroughly.",
     source: "common practice",
+    ifSuspected:
+      "If moisture is confirmed: with PAG oil it forms acid, so replace the receiver-drier or accumulator and evacuate thoroughly.",
   },
   defer_to_procedure: {
     level: "notice",

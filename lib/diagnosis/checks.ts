@@ -27,7 +27,7 @@ export interface CheckContext {
   extraction: Extraction;
   symptoms: ReadonlySet<SymptomId>;
   /** The refrigerant failed identification: no pressure–temperature checks, no recovery into shop equipment. */
-  mixed: boolean;
+  refrigerantContaminated: boolean;
   /** The "do not run" state: only checks that leave the compressor off. */
   doNotRun: boolean;
   /** Log-odds of the leader over the runner-up. */
@@ -136,7 +136,8 @@ export const CHECKS: readonly CheckDefinition[] = [
       `${electric(ctx) ? "With the vehicle switched off (not in ready mode)" : "With the engine off"}, let the system settle to the temperature around it (in shade, pressures equalised, an hour or more), then read the static pressure and the temperature of the parts beside the lines.`,
     runsSystem: false,
     connectsHose: true,
-    available: (ctx) => !ctx.mixed && ctx.input.staticKpaGauge === undefined && !recovered(ctx),
+    available: (ctx) =>
+      !ctx.refrigerantContaminated && ctx.input.staticKpaGauge === undefined && !recovered(ctx),
     outcomes: (ctx) => (liquidProven(ctx) ? STATIC_WITH_LIQUID : grades("static")),
   },
   {
@@ -164,7 +165,8 @@ export const CHECKS: readonly CheckDefinition[] = [
     runsSystem: true,
     connectsHose: true,
     available: (ctx) =>
-      !ctx.mixed && (ctx.input.highKpaGauge === undefined || ctx.input.lowKpaGauge === undefined),
+      !ctx.refrigerantContaminated &&
+      (ctx.input.highKpaGauge === undefined || ctx.input.lowKpaGauge === undefined),
     outcomes: (ctx) =>
       ctx.input.highKpaGauge === undefined
         ? ctx.input.lowKpaGauge === undefined
@@ -179,7 +181,7 @@ export const CHECKS: readonly CheckDefinition[] = [
     runsSystem: true,
     connectsHose: true,
     available: (ctx) =>
-      !ctx.mixed &&
+      !ctx.refrigerantContaminated &&
       ctx.input.compressorType === "cycling_clutch" &&
       (ctx.input.lowCutOutKpaGauge === undefined || ctx.input.lowCutInKpaGauge === undefined),
     outcomes: () => grades("cycling"),
@@ -191,7 +193,9 @@ export const CHECKS: readonly CheckDefinition[] = [
     runsSystem: true,
     connectsHose: true,
     available: (ctx) =>
-      !ctx.mixed && ctx.input.liquidLineC === undefined && !ctx.extraction.computed.highSideTranscritical,
+      !ctx.refrigerantContaminated &&
+      ctx.input.liquidLineC === undefined &&
+      !ctx.extraction.computed.highSideTranscritical,
     outcomes: () => grades("subcooling"),
   },
   {
@@ -200,7 +204,7 @@ export const CHECKS: readonly CheckDefinition[] = [
       `Clamp a contact thermometer on the suction line at the ${ctx.input.expansionDevice === "txv" ? "evaporator outlet" : "accumulator outlet"} and read it together with the low side, to work out the superheat.`,
     runsSystem: true,
     connectsHose: true,
-    available: (ctx) => !ctx.mixed && ctx.input.suctionLineC === undefined,
+    available: (ctx) => !ctx.refrigerantContaminated && ctx.input.suctionLineC === undefined,
     outcomes: (ctx) =>
       ctx.input.expansionDevice === "txv" ? grades("superheat") : ORIFICE_SUPERHEAT_OUTCOMES,
   },
@@ -211,7 +215,8 @@ export const CHECKS: readonly CheckDefinition[] = [
     runsSystem: true,
     connectsHose: true,
     available: (ctx) =>
-      !ctx.mixed && neither(ctx, "water_spray_drops_head_pressure", "water_spray_no_change"),
+      !ctx.refrigerantContaminated &&
+      neither(ctx, "water_spray_drops_head_pressure", "water_spray_no_change"),
     outcomes: () => either("water_spray_drops_head_pressure", "water_spray_no_change"),
   },
   {
@@ -220,7 +225,8 @@ export const CHECKS: readonly CheckDefinition[] = [
       `With the gauges on, run ${running(ctx)} for 15 minutes and note whether the low side stays steady or swings down toward vacuum and back.`,
     runsSystem: true,
     connectsHose: true,
-    available: (ctx) => !ctx.mixed && neither(ctx, "low_side_swings_to_vacuum", "low_side_steady"),
+    available: (ctx) =>
+      !ctx.refrigerantContaminated && neither(ctx, "low_side_swings_to_vacuum", "low_side_steady"),
     outcomes: () => either("low_side_swings_to_vacuum", "low_side_steady"),
   },
   {
@@ -230,7 +236,7 @@ export const CHECKS: readonly CheckDefinition[] = [
     runsSystem: true,
     connectsHose: true,
     available: (ctx) =>
-      !ctx.mixed &&
+      !ctx.refrigerantContaminated &&
       ctx.input.expansionDevice === "txv" &&
       neither(ctx, "txv_bulb_test_responds", "txv_bulb_test_no_response"),
     outcomes: () => either("txv_bulb_test_responds", "txv_bulb_test_no_response"),
@@ -242,7 +248,8 @@ export const CHECKS: readonly CheckDefinition[] = [
     runsSystem: true,
     connectsHose: false,
     available: (ctx) =>
-      !ctx.mixed && neither(ctx, "liquid_line_temperature_drop", "liquid_line_even_temperature"),
+      !ctx.refrigerantContaminated &&
+      neither(ctx, "liquid_line_temperature_drop", "liquid_line_even_temperature"),
     outcomes: () => either("liquid_line_temperature_drop", "liquid_line_even_temperature"),
   },
   {
@@ -251,7 +258,8 @@ export const CHECKS: readonly CheckDefinition[] = [
       `Recover the charge with certified equipment${electric(ctx) ? " that injects no oil (dedicated to electric compressors)" : ""}${ctx.input.expansionDevice === "orifice_tube" ? ", slowly, so the accumulator's oil is not pulled out" : ""}; weigh it against the label charge and measure the oil that came out.`,
     runsSystem: false,
     connectsHose: true,
-    available: (ctx) => !ctx.mixed && !recovered(ctx) && ctx.input.labelChargeG !== undefined,
+    available: (ctx) =>
+      !ctx.refrigerantContaminated && !recovered(ctx) && ctx.input.labelChargeG !== undefined,
     outcomes: (ctx) => (liquidProven(ctx) || staticShowsLiquid(ctx) ? CHARGE_WITH_LIQUID : grades("charge")),
   },
   {

@@ -286,7 +286,7 @@ describe("oil and sealant have evidence of their own", () => {
       symptoms: ["sealant_found"],
     });
     expect(findings.suspects[0]?.cause).toBe("contaminated_refrigerant");
-    expect(findings.cautions.map((c) => c.id)).toContain("sealant_found");
+    expect(findings.cautions.map((c) => c.id)).toContain("sealant_in_system");
     expect(said(findings.notes)).toMatch(/cannot see sealant/);
   });
 });

@@ -49,8 +49,8 @@ const byRank = (a: Suspect, b: Suspect) =>
  * (the causes treated as rival explanations of one complaint). When the refrigerant failed identification
  * the other causes cannot be assessed on a mixed charge: the contamination takes the whole share.
  */
-function assignShares(suspects: Suspect[], mixed: boolean): void {
-  if (mixed) {
+function assignShares(suspects: Suspect[], refrigerantContaminated: boolean): void {
+  if (refrigerantContaminated) {
     for (const s of suspects) {
       const contaminated = s.cause === "contaminated_refrigerant";
       s.share = contaminated ? 1 : 0;
@@ -71,7 +71,8 @@ function assignShares(suspects: Suspect[], mixed: boolean): void {
 export function diagnose(input: DiagnosisInput): Findings {
   const extraction = extractEvidence(input);
   const present = new Set<ObservationId>(extraction.observations.map((o) => o.id));
-  const mixed = present.has("purity:fail") || present.has("symptom:identifier_flags_hydrocarbon");
+  const refrigerantContaminated =
+    present.has("purity:fail") || present.has("symptom:identifier_flags_hydrocarbon");
   const doNotRun = doNotRunState(input);
 
   const suspects = scoreCauses(extraction.observations)
@@ -91,27 +92,27 @@ export function diagnose(input: DiagnosisInput): Findings {
       };
     })
     .sort(byRank);
-  assignShares(suspects, mixed);
+  assignShares(suspects, refrigerantContaminated);
 
   const ctx = {
     input,
     extraction,
     symptoms: new Set(input.symptoms ?? []),
-    mixed,
+    refrigerantContaminated,
     doNotRun: doNotRun.active,
     gapLogOdds: (suspects[0]?.logOdds ?? 0) - (suspects[1]?.logOdds ?? 0),
   };
   return {
     engineVersion: ENGINE_VERSION,
     suspects,
-    measured: measuredStatement(extraction.observedGroups, mixed),
+    measured: measuredStatement(extraction.observedGroups, refrigerantContaminated),
     doNotRun,
     nextCheck: chooseNextCheck(ctx, suspects, doNotRun),
     cautions: collectCautions({
       input,
       observations: present,
       ranking: suspects,
-      mixed,
+      refrigerantContaminated,
       doNotRun: doNotRun.active,
     }),
     computed: extraction.computed,

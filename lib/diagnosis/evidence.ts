@@ -24,8 +24,9 @@ export function extractEvidence(input: DiagnosisInput): Extraction {
   const device = input.expansionDevice === "txv" ? "device:txv" : "device:orifice_tube";
   out.observations.push({ id: device, message: { key: device } });
 
-  const mixed = addIdentifierEvidence(input, out) || symptoms.has("identifier_flags_hydrocarbon");
-  if (mixed) {
+  const refrigerantContaminated =
+    addIdentifierEvidence(input, out) || symptoms.has("identifier_flags_hydrocarbon");
+  if (refrigerantContaminated) {
     out.notes.push({ key: "note:mixed_skips_pt" });
   } else {
     addStaticEvidence(input, barometricKpa, out);

@@ -32,7 +32,10 @@ function list(groups: readonly ReadingGroup[]): string {
 }
 
 /** How much of the case was measured: the key readings taken and those still missing. */
-export function measuredStatement(observed: ReadonlySet<ReadingGroup>, mixed: boolean): Measured {
+export function measuredStatement(
+  observed: ReadonlySet<ReadingGroup>,
+  refrigerantContaminated: boolean,
+): Measured {
   const groups = KEY_READING_GROUPS.filter((g) => observed.has(g));
   const missing = KEY_READING_GROUPS.filter((g) => !observed.has(g));
   const count = `${groups.length} of the ${KEY_READING_GROUPS.length} key readings`;
@@ -42,7 +45,7 @@ export function measuredStatement(observed: ReadonlySet<ReadingGroup>, mixed: bo
       : missing.length === 0
         ? `All ${KEY_READING_GROUPS.length} key readings were measured.`
         : `Measured ${count} (${list(groups)}); not yet measured: ${list(missing)}.`;
-  if (mixed)
+  if (refrigerantContaminated)
     statement +=
       " The refrigerant failed identification, so its pressures and temperatures were not assessed.";
   return { groups, missing, statement };

@@ -118,7 +118,7 @@ describe("chooseNextCheck through diagnose", () => {
       input: highHead,
       extraction: extractEvidence(highHead),
       symptoms: new Set(highHead.symptoms ?? []),
-      mixed: false,
+      refrigerantContaminated: false,
       doNotRun: false,
       gapLogOdds: 0,
     };
@@ -185,7 +185,7 @@ describe("chooseNextCheck through diagnose", () => {
       input,
       extraction: extractEvidence(input),
       symptoms: new Set(input.symptoms ?? []),
-      mixed: false,
+      refrigerantContaminated: false,
       doNotRun: false,
       gapLogOdds: 0,
     });

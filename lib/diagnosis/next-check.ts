@@ -191,11 +191,11 @@ export function chooseNextCheck(ctx: CheckContext, ranking: readonly Ranked[], s
   if (first === undefined) throw new Error("chooseNextCheck needs at least one suspect");
   const pair = second === undefined ? [first] : [first, second];
 
-  if (ctx.mixed || ctx.symptoms.has("sealant_found")) {
+  if (ctx.refrigerantContaminated || ctx.symptoms.has("sealant_found")) {
     return ruled(
       "confirm",
       confirmingStep("contaminated_refrigerant", ctx),
-      ctx.mixed
+      ctx.refrigerantContaminated
         ? "The refrigerant failed identification: deal with it before any further test."
         : "Sealant was found: deal with it before any further test.",
       ["contaminated_refrigerant"],
