@@ -9,7 +9,7 @@ import {
 } from "sequelize";
 import { REFRIGERANT_IDS, type RefrigerantId } from "@/lib/refrigerants/catalog";
 import { specMatchKey } from "@/lib/specs/schema";
-import { COMPRESSOR_TYPES, type CompressorType } from "@/lib/diagnosis/schema";
+import { COMPRESSOR_TYPES, type CompressorType } from "@/lib/vehicles/compressor-types";
 import type { Shop } from "./shop";
 
 /** One row of a shop's spec table: what a vehicle variant carries (grams, millilitres). */

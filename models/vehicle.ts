@@ -7,7 +7,7 @@ import {
   type InferCreationAttributes,
   type Sequelize,
 } from "sequelize";
-import { COMPRESSOR_TYPES, type CompressorType } from "@/lib/diagnosis/schema";
+import { COMPRESSOR_TYPES, type CompressorType } from "@/lib/vehicles/compressor-types";
 import type { Customer } from "./customer";
 import { REFRIGERANT_IDS, type RefrigerantId } from "@/lib/refrigerants/catalog";
 import { EXPANSION_DEVICE_IDS, type ExpansionDevice } from "@/lib/vehicles/expansion-devices";

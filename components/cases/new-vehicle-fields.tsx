@@ -3,7 +3,11 @@
 import { useEffect, useState } from "react";
 import { SERVICE_REFRIGERANT_OPTIONS } from "@/lib/refrigerants/catalog";
 import { EXPANSION_DEVICE_OPTIONS } from "@/lib/vehicles/expansion-devices";
-import { COMPRESSOR_TYPE_LABELS, COMPRESSOR_TYPES, type CompressorType } from "@/lib/diagnosis/schema";
+import {
+  COMPRESSOR_TYPE_LABELS,
+  COMPRESSOR_TYPES,
+  type CompressorType,
+} from "@/lib/vehicles/compressor-types";
 import { normaliseVin, vinCheckDigitMatches, vinFormatError } from "@/lib/vehicles/vin";
 
 export interface NewVehicleDraft {

@@ -1,4 +1,5 @@
-import { COMPRESSOR_TYPE_LABELS, SYMPTOM_LABELS } from "@/lib/diagnosis";
+import { SYMPTOM_LABELS } from "@/lib/diagnosis";
+import { COMPRESSOR_TYPE_LABELS } from "@/lib/vehicles/compressor-types";
 import {
   behaviourSymptomIds,
   compressorOilChoices,

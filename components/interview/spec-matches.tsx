@@ -5,7 +5,7 @@ import { useQuery } from "@tanstack/react-query";
 import { clsx } from "clsx";
 import type { SpecMatchDto } from "@/lib/contracts/specs";
 import { specMatchesQuery } from "@/lib/queries/spec-matches";
-import { COMPRESSOR_TYPE_LABELS } from "@/lib/diagnosis/schema";
+import { COMPRESSOR_TYPE_LABELS } from "@/lib/vehicles/compressor-types";
 
 export interface SpecPick {
   refrigerant?: string;

@@ -10,7 +10,11 @@ import { readMassG, readVolumeMl } from "@/lib/service/entry";
 import { LABEL_CHARGE_RANGE_G, TOTAL_OIL_RANGE_ML } from "@/lib/specs";
 import { type MassUnit, type VolumeUnit, formatMass, formatVolume } from "@/lib/units";
 import { EntryInput } from "@/components/service/entry-input";
-import { COMPRESSOR_TYPE_LABELS, COMPRESSOR_TYPES, type CompressorType } from "@/lib/diagnosis/schema";
+import {
+  COMPRESSOR_TYPE_LABELS,
+  COMPRESSOR_TYPES,
+  type CompressorType,
+} from "@/lib/vehicles/compressor-types";
 
 type FormText = {
   yearFrom: string;

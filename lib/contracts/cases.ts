@@ -3,7 +3,7 @@ import type { Role } from "@/lib/auth/roles";
 import { CASE_STATUSES, type CaseStatus } from "@/lib/cases/statuses";
 import { SERVICE_REFRIGERANT_IDS } from "@/lib/refrigerants/catalog";
 import { EXPANSION_DEVICE_IDS } from "@/lib/vehicles/expansion-devices";
-import { COMPRESSOR_TYPES } from "@/lib/diagnosis/schema";
+import { COMPRESSOR_TYPES } from "@/lib/vehicles/compressor-types";
 
 export { CASE_STATUSES, type CaseStatus };
 

@@ -1,6 +1,6 @@
 import { z } from "zod";
 import type { ExpansionDevice } from "@/lib/vehicles/expansion-devices";
-import type { CompressorType } from "@/lib/diagnosis/schema";
+import type { CompressorType } from "@/lib/vehicles/compressor-types";
 
 export const vehicleListQuerySchema = z.object({
   q: z.string().max(80, "Search with fewer than 80 characters.").optional(),

@@ -1,7 +1,13 @@
 import { describe, expect, it } from "vitest";
 import { saturationPressure } from "@/lib/refrigerants";
+import {
+  EMPTY_STATIC_MAX_KPA_GAUGE,
+  NEARLY_EMPTY_STATIC,
+  staticShowsNoCharge,
+} from "@/lib/refrigerants/static-charge";
 import { diagnose } from "./diagnose";
 import { doNotRunState, recharged } from "./do-not-run";
+import { GRADING } from "./grading";
 import type { DiagnosisInput } from "./schema";
 
 // Saturation from the Tillner-Roth & Baehr (1994) R-134a equation of state, as bundled; gauge at sea level.
@@ -13,6 +19,19 @@ describe("the do-not-run state (common practice; Directive 2006/40/EC Art. 7; el
     expect(doNotRunState({ ...base, staticKpaGauge: gaugeAt(19.9) }).reasons).toEqual(["no_liquid"]);
     expect(doNotRunState({ ...base, staticKpaGauge: gaugeAt(20.1) }).active).toBe(false);
     expect(doNotRunState({ ...base, staticKpaGauge: 30 }).reasons).toEqual(["no_liquid"]);
+  });
+
+  it("holds wherever the interview's shared empty-system test holds, a gauge at zero in the cold included", () => {
+    // Below −5 °C the engine does not judge a static reading, but a gauge at zero is empty at any temperature.
+    const cold = { ...base, ambientC: -10 };
+    expect(staticShowsNoCharge({ refrigerant: "R-134a", staticKpaGauge: 0, ambientC: -10 })).toBe(true);
+    expect(doNotRunState({ ...cold, staticKpaGauge: 0 }).reasons).toEqual(["no_liquid"]);
+    expect(doNotRunState({ ...cold, staticKpaGauge: gaugeAt(-10) }).active).toBe(false);
+    expect(staticShowsNoCharge({ refrigerant: "R-134a", staticKpaGauge: EMPTY_STATIC_MAX_KPA_GAUGE })).toBe(
+      true,
+    );
+    // The engine's "empty" grade is the shared module's line, not a copy of it.
+    expect(GRADING.STATIC_EMPTY).toBe(NEARLY_EMPTY_STATIC);
   });
 
   it("holds once a recovered mass is entered, until the system is recharged with at least half the label", () => {

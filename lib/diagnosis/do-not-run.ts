@@ -1,3 +1,4 @@
+import { staticShowsNoCharge } from "@/lib/refrigerants/static-charge";
 import { chargeDeviationVerdict } from "@/lib/service/charge";
 import { standardBarometricKpa } from "@/lib/units/barometric";
 import { DO_NOT_RUN, STATIC_CHECK, STATIC_EMPTY, SUBCOOLING_K } from "./grading";
@@ -109,7 +110,16 @@ export function doNotRunState(input: DiagnosisInput): DoNotRun {
   const barometricKpa = standardBarometricKpa(input.altitudeM ?? 0);
   const reasons: DoNotRunReason[] = [];
   const deficitK = worstDeficitK(staticDeficits(input));
-  const noLiquid = deficitK !== null && deficitK > STATIC_CHECK.noLiquidBelowK;
+  // The shared empty-system test (the interview's branch) as well as the deficit at the soak temperature:
+  // they draw the same line at the air temperature, and the shared one also reads a gauge at zero in the cold.
+  const noLiquid =
+    (deficitK !== null && deficitK > STATIC_CHECK.noLiquidBelowK) ||
+    staticShowsNoCharge({
+      refrigerant: input.refrigerant,
+      staticKpaGauge: input.staticKpaGauge,
+      ambientC: input.ambientC,
+      altitudeM: input.altitudeM,
+    });
   if (noLiquid) reasons.push("no_liquid");
   if (input.recoveredChargeG !== undefined) reasons.push("recovered_not_recharged");
   const symptoms = input.symptoms ?? [];

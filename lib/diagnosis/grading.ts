@@ -5,7 +5,10 @@ import {
   EVAPORATING_RISE,
   HUMIDITY_SHIFT_MAX_K,
 } from "@/lib/refrigerants/expected-bands";
+import { STATIC_SOAK_SPREAD_K } from "@/lib/refrigerants/derived";
+import { NEARLY_EMPTY_STATIC } from "@/lib/refrigerants/static-charge";
 import { CHARGE_DEVIATION_LIMITS, chargeTolerance } from "@/lib/service/charge";
+import { PURITY_PASS_PCT } from "@/lib/service/identifier";
 
 /**
  * Where each reading's grades begin. Part of the model: these are hashed into ENGINE_VERSION together
@@ -40,19 +43,20 @@ export const SUPERHEAT_K = {
 // the figures).
 export const SUPERHEAT_LOAD = { fromC: 30, kPerK: 0.5 } as const;
 
-// A static reading under about 70 kPa gauge (10 psig), or under half the saturation pressure at the soak
-// temperature, means next to no refrigerant is left: either condition (common practice).
-export const STATIC_EMPTY = { belowKpaGauge: 70, belowFractionOfSaturation: 0.5 } as const;
+// Next to no refrigerant left (the "empty" grade): the shared empty-system module's line, under about
+// 70 kPa gauge or under half the saturation pressure at the soak temperature (lib/refrigerants/static-charge.ts).
+export { NEARLY_EMPTY_STATIC as STATIC_EMPTY };
 // Static excess as a temperature difference: Tsat(static) − the temperature the parts soaked to, K. Within
 // 2 K is gauge and thermometer error (about ±1 K each way, from memory); 2/4/7 K are the former 35/70/140 kPa
 // grades at 25 °C, where R-134a saturation rises about 20 kPa per kelvin (Tillner-Roth & Baehr 1994).
 // More than 5 K below saturation no liquid can be left: a soaked system's coldest part is within a few
-// kelvin of the soak temperature (common practice). Below −5 °C a static reading says too little (judgement).
+// kelvin of the soak temperature (common practice; the physics core's STATIC_SOAK_SPREAD_K, the same line
+// the interview's empty-system test draws). Below −5 °C a static reading says too little (judgement).
 export const STATIC_CHECK = {
   normalUpToK: 2,
   highAboveK: 4,
   veryHighAboveK: 7,
-  noLiquidBelowK: 5,
+  noLiquidBelowK: STATIC_SOAK_SPREAD_K,
   minReferenceC: -5,
 } as const;
 // A soak of an hour or more with the parts' temperature measured counts in full; a shorter or unmeasured
@@ -91,8 +95,9 @@ export const NEXT_CHECK = {
 // Repair cautions and repair steps follow the leader, or a cause holding at least this share (judgement).
 export const REAL_SHARE = 0.2;
 
-// SAE J2099 / J2912: below 98 % the refrigerant is not "pure" and must not be recycled.
-export const PURITY_PASS_PCT = 98;
+// SAE J2099 / J2912: below 98 % the refrigerant is not "pure" and must not be recycled (the identifier's
+// one pass mark, lib/service/identifier.ts).
+export { PURITY_PASS_PCT };
 // Identifier air (NCG) grading, weight % (from memory).
 export const AIR_PCT = { some: 1, high: 3 } as const;
 // Charge deviation: the service record's own table (lib/service/charge.ts), so both say the same about one
@@ -125,7 +130,7 @@ export const GRADING = {
   SUPERHEAT_K,
   SUPERHEAT_LOAD,
   EXPECTED_BANDS: { CONDENSING_ABOVE_AMBIENT_K, EVAPORATING_C, EVAPORATING_RISE, HUMIDITY_SHIFT_MAX_K },
-  STATIC_EMPTY,
+  STATIC_EMPTY: NEARLY_EMPTY_STATIC,
   STATIC_CHECK,
   STATIC_SOAK,
   DO_NOT_RUN,

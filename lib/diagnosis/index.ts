@@ -1,12 +1,6 @@
 export { CAUSE_IDS, CAUSE_LABELS, CAUSE_SHORT_NAMES, type CauseId } from "./causes";
 export { SYMPTOM_IDS, SYMPTOM_LABELS, type SymptomId } from "./symptoms";
-export {
-  COMPRESSOR_TYPE_LABELS,
-  COMPRESSOR_TYPES,
-  type CompressorType,
-  diagnosisInputSchema,
-  type DiagnosisInput,
-} from "./schema";
+export { diagnosisInputSchema, type DiagnosisInput } from "./schema";
 export { diagnose, type Findings, type Suspect } from "./diagnose";
 export { ENGINE_VERSION, ENGINE_SEMVER } from "./engine-version";
 export type { NextCheck } from "./next-check";

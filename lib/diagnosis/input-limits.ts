@@ -1,8 +1,6 @@
+import { FULL_VACUUM_KPA_GAUGE, MAX_READING_KPA_GAUGE } from "@/lib/refrigerants/gauge-limits";
 import { formatMessage, type ReaderUnits, SI_UNITS } from "./messages";
 import { gaugeKpa, grams, minutes, percent, type Quantity, tempC } from "./quantities";
-
-// Standard atmosphere at sea level (ICAO/ISO 2533): a gauge can read no lower than this below zero.
-export const SEA_LEVEL_KPA = 101.325;
 
 const whole = (q: Quantity): Quantity => ({ ...q, decimals: 0 });
 
@@ -13,13 +11,33 @@ const whole = (q: Quantity): Quantity => ({ ...q, decimals: 0 });
 export const INPUT_LIMITS = {
   ambientC: { what: "ambient temperature", min: whole(tempC(-30)), max: whole(tempC(60)) },
   relativeHumidityPct: { what: "relative humidity", min: whole(percent(0)), max: whole(percent(100)) },
-  staticKpaGauge: { what: "static pressure", min: gaugeKpa(-SEA_LEVEL_KPA), max: gaugeKpa(16000) },
+  staticKpaGauge: {
+    what: "static pressure",
+    min: gaugeKpa(FULL_VACUUM_KPA_GAUGE),
+    max: gaugeKpa(MAX_READING_KPA_GAUGE),
+  },
   staticSoakC: { what: "soak temperature", min: whole(tempC(-30)), max: whole(tempC(60)) },
   staticSoakMin: { what: "soak time", min: minutes(0), max: minutes(7 * 24 * 60) },
-  highKpaGauge: { what: "high-side pressure", min: gaugeKpa(-SEA_LEVEL_KPA), max: gaugeKpa(16000) },
-  lowKpaGauge: { what: "low-side pressure", min: gaugeKpa(-SEA_LEVEL_KPA), max: gaugeKpa(16000) },
-  lowCutOutKpaGauge: { what: "low side at cut-out", min: gaugeKpa(-SEA_LEVEL_KPA), max: gaugeKpa(16000) },
-  lowCutInKpaGauge: { what: "low side at cut-in", min: gaugeKpa(-SEA_LEVEL_KPA), max: gaugeKpa(16000) },
+  highKpaGauge: {
+    what: "high-side pressure",
+    min: gaugeKpa(FULL_VACUUM_KPA_GAUGE),
+    max: gaugeKpa(MAX_READING_KPA_GAUGE),
+  },
+  lowKpaGauge: {
+    what: "low-side pressure",
+    min: gaugeKpa(FULL_VACUUM_KPA_GAUGE),
+    max: gaugeKpa(MAX_READING_KPA_GAUGE),
+  },
+  lowCutOutKpaGauge: {
+    what: "low side at cut-out",
+    min: gaugeKpa(FULL_VACUUM_KPA_GAUGE),
+    max: gaugeKpa(MAX_READING_KPA_GAUGE),
+  },
+  lowCutInKpaGauge: {
+    what: "low side at cut-in",
+    min: gaugeKpa(FULL_VACUUM_KPA_GAUGE),
+    max: gaugeKpa(MAX_READING_KPA_GAUGE),
+  },
   liquidLineC: { what: "liquid-line temperature", min: whole(tempC(-40)), max: whole(tempC(110)) },
   suctionLineC: { what: "suction-line temperature", min: whole(tempC(-50)), max: whole(tempC(80)) },
   ventC: { what: "vent temperature", min: whole(tempC(-30)), max: whole(tempC(60)) },

@@ -1,3 +1,4 @@
+import { EXPANSION_DEVICE_IDS } from "@/lib/vehicles/expansion-devices";
 import type { SymptomId } from "./symptoms";
 
 /**
@@ -15,7 +16,7 @@ export const READING_GRADES = {
   purity: ["fail", "pass"],
   air: ["none", "some", "high"],
   vent: ["freezing", "cold", "cool", "warm"],
-  device: ["orifice_tube", "txv"],
+  device: EXPANSION_DEVICE_IDS,
   cycling: ["opens_late", "normal", "opens_early", "closes_late"],
   /** Combinations of readings the physics allows only for some causes. */
   pattern: ["compressor_not_pumping"],

@@ -1,11 +1,11 @@
 import { z } from "zod";
+import { MAX_KPA_GAUGE_BY_REFRIGERANT } from "@/lib/refrigerants/gauge-limits";
+import { SERVICE_REFRIGERANT_IDS, SERVICE_REFRIGERANTS_IN_WORDS } from "@/lib/refrigerants/catalog";
 import { standardBarometricKpa } from "@/lib/units/barometric";
+import { COMPRESSOR_TYPES } from "@/lib/vehicles/compressor-types";
+import { EXPANSION_DEVICE_IDS } from "@/lib/vehicles/expansion-devices";
 import { INPUT_LIMITS, inputLimitMessage, type LimitedField } from "./input-limits";
 import { SYMPTOM_IDS } from "./symptoms";
-
-// Above ~4 MPa gauge an HFC mobile system is past its relief valve (SAE J639 systems, relief
-// about 3.1–3.8 MPa, from memory); R-744 systems run to about 13 MPa on the high side (from memory).
-const MAX_GAUGE_KPA = { "R-134a": 4500, "R-1234yf": 4500, "R-744": 16000 } as const;
 
 /** A number between the field's limits (input-limits.ts), with the limit messages said in SI. */
 const limited = (field: LimitedField, type: string) =>
@@ -15,22 +15,13 @@ const limited = (field: LimitedField, type: string) =>
     .min(INPUT_LIMITS[field].min.value, { error: inputLimitMessage(field, "min") })
     .max(INPUT_LIMITS[field].max.value, { error: inputLimitMessage(field, "max") });
 
-/** How the compressor is driven and controlled: it decides what clutch behaviour can tell. */
-export const COMPRESSOR_TYPES = ["cycling_clutch", "variable_displacement", "electric"] as const;
-export type CompressorType = (typeof COMPRESSOR_TYPES)[number];
-export const COMPRESSOR_TYPE_LABELS: Record<CompressorType, string> = {
-  cycling_clutch: "Fixed displacement, cycling clutch",
-  variable_displacement: "Variable displacement",
-  electric: "Electric (high-voltage)",
-};
-
 export const diagnosisInputSchema = z
   .object({
-    refrigerant: z.enum(["R-134a", "R-1234yf", "R-744"], {
-      error: "refrigerant must be R-134a, R-1234yf or R-744",
+    refrigerant: z.enum(SERVICE_REFRIGERANT_IDS, {
+      error: `refrigerant must be ${SERVICE_REFRIGERANTS_IN_WORDS}`,
     }),
-    expansionDevice: z.enum(["orifice_tube", "txv"], {
-      error: "expansion device must be orifice_tube or txv",
+    expansionDevice: z.enum(EXPANSION_DEVICE_IDS, {
+      error: `expansion device must be ${EXPANSION_DEVICE_IDS.join(" or ")}`,
     }),
     ambientC: limited("ambientC", "°C"),
     relativeHumidityPct: limited("relativeHumidityPct", "%").optional(),
@@ -54,7 +45,7 @@ export const diagnosisInputSchema = z
     identifierAirPct: limited("identifierAirPct", "%").optional(),
     compressorType: z
       .enum(COMPRESSOR_TYPES, {
-        error: "compressor type must be cycling_clutch, variable_displacement or electric",
+        error: `compressor type must be ${COMPRESSOR_TYPES.slice(0, -1).join(", ")} or ${COMPRESSOR_TYPES.at(-1)}`,
       })
       .optional(),
     staticSoakC: limited("staticSoakC", "°C").optional(),
@@ -68,7 +59,7 @@ export const diagnosisInputSchema = z
       .optional(),
   })
   .superRefine((input, ctx) => {
-    const maxKpa = MAX_GAUGE_KPA[input.refrigerant];
+    const maxKpa = MAX_KPA_GAUGE_BY_REFRIGERANT[input.refrigerant];
     const deepestGaugeKpa = -standardBarometricKpa(input.altitudeM ?? 0);
     for (const key of [
       "staticKpaGauge",

@@ -1,6 +1,7 @@
 // fast-check generators of engine inputs, shared by the property tests (a helper, not a test file).
 import fc from "fast-check";
-import { COMPRESSOR_TYPES, type DiagnosisInput, diagnosisInputSchema } from "./schema";
+import { COMPRESSOR_TYPES } from "@/lib/vehicles/compressor-types";
+import { type DiagnosisInput, diagnosisInputSchema } from "./schema";
 import { SYMPTOM_IDS } from "./symptoms";
 
 export const optional = <T>(arb: fc.Arbitrary<T>) => fc.option(arb, { nil: undefined, freq: 3 });

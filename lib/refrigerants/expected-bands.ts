@@ -1,6 +1,7 @@
 import type { RefrigerantId } from "./catalog";
 import { SaturationRangeError } from "./range-error";
 import { saturationPressure } from "./saturation";
+import type { ExpansionDevice } from "@/lib/vehicles/expansion-devices";
 
 export interface PressureBand {
   minKpaAbs: number;
@@ -56,7 +57,7 @@ export function expectedBands(a: {
   ambientC: number;
   relativeHumidityPct?: number;
   /** orifice_tube lets the low side's upper edge rise with load; absent or txv holds it */
-  meteringDevice?: "orifice_tube" | "txv";
+  meteringDevice?: ExpansionDevice;
 }): { high: PressureBand; low: PressureBand } | null {
   if (!Number.isFinite(a.ambientC) || a.ambientC < EXPECTED_BANDS_MIN_AMBIENT_C) return null;
   const shiftK = humidityShiftK(a.relativeHumidityPct);

@@ -15,6 +15,14 @@ import { staticCheck } from "./derived";
  */
 export const EMPTY_STATIC_MAX_KPA_GAUGE = 7;
 
+/**
+ * Next to nothing left, as the findings engine grades a static reading "empty": under about 70 kPa gauge
+ * (10 psig), or under half the saturation pressure at the temperature the parts soaked to; either
+ * condition (common practice). The 70 kPa line holds even where the tables end (R-744 near its critical
+ * point). A system this empty also reads "no charge" above, except where the air is far below freezing.
+ */
+export const NEARLY_EMPTY_STATIC = { belowKpaGauge: 70, belowFractionOfSaturation: 0.5 } as const;
+
 /** A static reading as the findings engine's input carries it, so the engine can pass its own input. */
 export interface StaticReading {
   refrigerant: RefrigerantId;

@@ -1,4 +1,4 @@
-import type { CompressorType } from "@/lib/diagnosis/schema";
+import type { CompressorType } from "@/lib/vehicles/compressor-types";
 import "server-only";
 import { Op } from "sequelize";
 import { getModels } from "@/models";

@@ -1,4 +1,4 @@
-import type { CompressorType } from "@/lib/diagnosis/schema";
+import type { CompressorType } from "@/lib/vehicles/compressor-types";
 import Papa from "papaparse";
 import { isServiceRefrigerant, SERVICE_REFRIGERANTS_IN_WORDS } from "@/lib/refrigerants/catalog";
 import type { MassUnit, VolumeUnit } from "@/lib/units";

@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { SERVICE_REFRIGERANT_IDS } from "@/lib/refrigerants/catalog";
-import { COMPRESSOR_TYPES } from "@/lib/diagnosis/schema";
+import { COMPRESSOR_TYPES } from "@/lib/vehicles/compressor-types";
 
 /** Label charges outside this band are almost surely a unit mistake for a car or light truck (common practice). */
 export const LABEL_CHARGE_RANGE_G = { min: 100, max: 3000 } as const;

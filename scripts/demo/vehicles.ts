@@ -1,6 +1,6 @@
 import type { ServiceRefrigerantId } from "@/lib/refrigerants/catalog";
 import type { ExpansionDevice } from "@/lib/vehicles/expansion-devices";
-import type { CompressorType } from "@/lib/diagnosis/schema";
+import type { CompressorType } from "@/lib/vehicles/compressor-types";
 
 // Real makes and models with invented VINs left empty. Label charges and oils here are
 // illustrative demo values, not a reference: the shop's spec table and the under-hood label decide.

@@ -3,6 +3,7 @@ import { extname, join, relative, sep } from "node:path";
 import { CAUTION_IDS } from "@/lib/cautions/catalog";
 import { CASE_STATUSES } from "@/lib/cases/statuses";
 import { REFRIGERANT_IDS } from "@/lib/refrigerants/catalog";
+import { COMPRESSOR_TYPES } from "@/lib/vehicles/compressor-types";
 import { EXPANSION_DEVICE_IDS } from "@/lib/vehicles/expansion-devices";
 
 /*
@@ -34,6 +35,7 @@ const alternatives = (words: readonly string[]) =>
   words.map((w) => w.replace(/[.*+?^${}()|[\]\\-]/g, "\\$&")).join("|");
 const REFRIGERANT = `(?:${alternatives(REFRIGERANT_IDS)})`;
 const DEVICE = `(?:${alternatives(EXPANSION_DEVICE_IDS)})`;
+const COMPRESSOR = `(?:${alternatives(COMPRESSOR_TYPES)})`;
 const STATUS = `(?:${alternatives(CASE_STATUSES)})`;
 const CAUTION = `(?:${alternatives(CAUTION_IDS)})`;
 const quoted = (word: string) => `["'\`]${word}["'\`]`;
@@ -60,6 +62,15 @@ export const VOCABULARY_RULES: readonly VocabularyRule[] = [
       // A label table: a device id with a name (a capitalised phrase without a full stop).
       new RegExp(`\\b${DEVICE}:\\s*"[A-Z][^".]{0,40}"`),
       /\b(?:TXV|orifice tube)\s*(?:\+|and|with)\s*(?:receiver-drier|accumulator)\b/i,
+    ],
+  },
+  {
+    id: "compressor-type-list",
+    what: "the compressor types and the one way each is named",
+    homes: ["lib/vehicles/compressor-types.ts"],
+    patterns: [
+      new RegExp(`${quoted(COMPRESSOR)}${NEXT_ITEM}${quoted(COMPRESSOR)}`),
+      new RegExp(`\\b${COMPRESSOR}:\\s*"[A-Z][^".]{0,40}"`),
     ],
   },
   {
