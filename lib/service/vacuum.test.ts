@@ -26,7 +26,7 @@ describe("evacuationTarget", () => {
     expect(evaluateEvacuation({ deepestKpaAbs: kpaAt28InHg, altitudeM: 0 }).reached).toBe(false);
   });
 
-  it("follows the shop's temperature: a warmer shop boils water at a higher pressure", () => {
+  it("follows the shop's temperature: a warmer shop boils water at a higher pressure (4.247 kPa at 30 °C, ASHRAE ch. 1 table 3)", () => {
     expect(evacuationTarget({ shopC: 30 }).maxKpaAbs).toBeCloseTo(4.247, 2);
     expect(evacuationTarget({ shopC: 10 }).maxKpaAbs).toBeLessThan(evacuationTarget({}).maxKpaAbs);
   });
