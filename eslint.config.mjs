@@ -21,6 +21,7 @@ const PURE_LIB = [
   "repairs",
   "cases",
   "cautions",
+  "casebook",
 ];
 const PURE_LIB_PATHS = [
   ...PURE_LIB.map((folder) => `./lib/${folder}`),

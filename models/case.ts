@@ -51,6 +51,8 @@ export class Case extends Model<InferAttributes<Case>, InferCreationAttributes<C
   declare confirmedRepair: CreationOptional<string | null>;
   declare version: CreationOptional<number>;
   declare submittedAt: CreationOptional<Date | null>;
+  declare closedAt: CreationOptional<Date | null>;
+  declare repairNote: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -70,6 +72,8 @@ export class Case extends Model<InferAttributes<Case>, InferCreationAttributes<C
         confirmedRepair: { type: DataTypes.TEXT, allowNull: true },
         version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
         submittedAt: { type: DataTypes.DATE(3), allowNull: true },
+        closedAt: { type: DataTypes.DATE(3), allowNull: true },
+        repairNote: { type: DataTypes.TEXT, allowNull: true },
         createdAt: DataTypes.DATE(3),
         updatedAt: DataTypes.DATE(3),
       },

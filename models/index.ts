@@ -20,10 +20,13 @@ import { Attachment } from "./attachment";
 import { OutboundEmail } from "./outbound-email";
 import { RepairProposal } from "./repair-proposal";
 import { ShareLink } from "./share-link";
+import { CaseConfirmedCause, CaseRepair } from "./case-outcome";
+import { CaseFeatures, CasebookEntry, CasebookSymptom } from "./casebook-entry";
 
 export { AuditEvent, Case, Customer, ReadingSet, Session, Shop, SignInAttempt, SignOff, User, Vehicle };
 export { Cylinder, PartOilAllowance, RefrigerantMovement, ServiceRecord, SpecEntry, UserInvitation };
 export { Attachment, OutboundEmail, RepairProposal, ShareLink };
+export { CaseConfirmedCause, CaseRepair, CaseFeatures, CasebookEntry, CasebookSymptom };
 export type { CylinderKind } from "./cylinder";
 export type { PartReplacedJson } from "./service-record";
 export type { CaseStatus, JsonObject, JsonValue } from "./case";
@@ -55,6 +58,11 @@ const MODELS = {
   Attachment,
   OutboundEmail,
   UserInvitation,
+  CaseConfirmedCause,
+  CaseRepair,
+  CasebookEntry,
+  CasebookSymptom,
+  CaseFeatures,
 };
 
 function initModels(sequelize: Sequelize) {
@@ -152,6 +160,29 @@ function initModels(sequelize: Sequelize) {
   Case.hasMany(OutboundEmail, { foreignKey: "caseId", as: "emails" });
   OutboundEmail.belongsTo(Case, { foreignKey: "caseId" });
   OutboundEmail.belongsTo(ShareLink, { foreignKey: "shareLinkId" });
+
+  // The outcome a case is closed with, and the rows the casebook derives from each case.
+  Shop.hasMany(CaseConfirmedCause, shopScoped);
+  CaseConfirmedCause.belongsTo(Shop, shopScoped);
+  Shop.hasMany(CaseRepair, shopScoped);
+  CaseRepair.belongsTo(Shop, shopScoped);
+  Shop.hasMany(CasebookEntry, shopScoped);
+  CasebookEntry.belongsTo(Shop, shopScoped);
+  Shop.hasMany(CasebookSymptom, shopScoped);
+  CasebookSymptom.belongsTo(Shop, shopScoped);
+  Shop.hasMany(CaseFeatures, shopScoped);
+  CaseFeatures.belongsTo(Shop, shopScoped);
+  const caseOwned = { foreignKey: { name: "caseId", allowNull: false }, onDelete: "CASCADE" } as const;
+  Case.hasMany(CaseConfirmedCause, { ...caseOwned, as: "confirmedCauses" });
+  CaseConfirmedCause.belongsTo(Case, caseOwned);
+  Case.hasMany(CaseRepair, { ...caseOwned, as: "repairs" });
+  CaseRepair.belongsTo(Case, caseOwned);
+  Case.hasOne(CasebookEntry, { ...caseOwned, as: "casebookEntry" });
+  CasebookEntry.belongsTo(Case, caseOwned);
+  Case.hasMany(CasebookSymptom, { ...caseOwned, as: "casebookSymptoms" });
+  CasebookSymptom.belongsTo(Case, caseOwned);
+  Case.hasOne(CaseFeatures, { ...caseOwned, as: "features" });
+  CaseFeatures.belongsTo(Case, caseOwned);
 
   return { sequelize, ...MODELS };
 }

@@ -18,6 +18,8 @@ export class Shop extends Model<InferAttributes<Shop>, InferCreationAttributes<S
   declare timeZone: CreationOptional<string>;
   /** BCP 47 tag for dates and times the shop reads, with timeZone */
   declare locale: CreationOptional<string>;
+  /** A case opened this many days or fewer after the vehicle's last closed case is a comeback. */
+  declare comebackWindowDays: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -30,6 +32,7 @@ export class Shop extends Model<InferAttributes<Shop>, InferCreationAttributes<S
         altitudeM: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         timeZone: { type: DataTypes.STRING(64), allowNull: false, defaultValue: "UTC" },
         locale: { type: DataTypes.STRING(35), allowNull: false, defaultValue: "en" },
+        comebackWindowDays: { type: DataTypes.SMALLINT, allowNull: false, defaultValue: 90 },
         createdAt: DataTypes.DATE(3),
         updatedAt: DataTypes.DATE(3),
       },

@@ -43,6 +43,8 @@ export type DemoCase = {
   submittedMinutesIn: number | null;
   /** For a closed case: when it was closed, after the repair. */
   closedMinutesIn?: number;
+  /** For a closed case: what the repair confirmed (cause ids or none_found) and the repairs done. */
+  outcome?: { causes: string[]; repairIds: string[]; note?: string };
   readingSets: DemoReadingSet[];
   signOffs: DemoSignOff[];
 };

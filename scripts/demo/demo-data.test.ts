@@ -4,6 +4,8 @@ import { demoCases } from "./cases";
 import { demoCustomers, demoShops } from "./people";
 import { newUserId } from "./seed-demo";
 import { demoVehicles } from "./vehicles";
+import { CONFIRMED_CAUSE_IDS } from "@/lib/contracts/casebook";
+import { REPAIR_IDS } from "@/lib/repairs/catalog";
 
 // The demo must hang together: the seed refuses bad references at run time, these catch them before.
 
@@ -53,6 +55,14 @@ describe("demo data", () => {
       expect(c.diagnosed, c.key).toBe(c.interviewStep === "findings");
       expect(c.status === "draft", c.key).toBe(c.submittedMinutesIn === null);
       expect(c.status === "closed", c.key).toBe(c.closedMinutesIn !== undefined);
+    }
+  });
+
+  it("closes every closed case with confirmed causes and repairs from the lists, and no other", () => {
+    for (const c of demoCases) {
+      expect(c.outcome !== undefined, c.key).toBe(c.status === "closed");
+      for (const cause of c.outcome?.causes ?? []) expect(CONFIRMED_CAUSE_IDS, c.key).toContain(cause);
+      for (const repair of c.outcome?.repairIds ?? []) expect(REPAIR_IDS, c.key).toContain(repair);
     }
   });
 

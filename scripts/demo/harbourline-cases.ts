@@ -39,6 +39,11 @@ const focus: DemoCase = {
   // The repair itself (recovery, new condenser, vacuum hold, recharge, final readings) is the
   // service record the service-side demo adds, between sign-off and closing.
   closedMinutesIn: 215,
+  outcome: {
+    causes: ["undercharge"],
+    repairIds: ["leak_repair", "replace_condenser", "recover_evacuate_recharge"],
+    note: "Leak at the condenser core.",
+  },
   readingSets: [
     {
       kind: "static",

@@ -6,6 +6,7 @@ import type { JsonObject, JsonValue, Models } from "@/models";
 import { demoCases, type DemoCase } from "./cases";
 import { demoCustomers, demoShops, type DemoShop } from "./people";
 import { demoVehicles } from "./vehicles";
+import { refreshCasebookEntry } from "@/lib/db/casebook-refresh";
 
 const minuteMs = 60_000;
 const dayMs = 24 * 60 * minuteMs;
@@ -94,17 +95,22 @@ async function seedShop(
     const vehicle = await models.Vehicle.create({ ...v, shopId: shop.id, customerId }, { transaction });
     vehicles.set(key, { id: vehicle.id, customerId });
   }
+  const caseIds: number[] = [];
   for (const demoCase of demoCases.filter((c) => c.shopKey === demo.key)) {
-    await seedCase(models, {
-      shopId: shop.id,
-      altitudeM: demo.altitudeM,
-      demoCase,
-      userIds,
-      vehicles,
-      now,
-      transaction,
-    });
+    caseIds.push(
+      await seedCase(models, {
+        shopId: shop.id,
+        altitudeM: demo.altitudeM,
+        demoCase,
+        userIds,
+        vehicles,
+        now,
+        transaction,
+      }),
+    );
   }
+  // The casebook's search rows, readings and comeback links, once every case of the shop is in.
+  for (const caseId of caseIds) await refreshCasebookEntry({ shopId: shop.id, caseId, transaction });
 }
 
 type SeedCaseInput = {
@@ -165,7 +171,9 @@ async function seedCase(
       conclusionCause: d.conclusionCause,
       conclusionNotes: d.conclusionNotes,
       confirmedRepair: d.confirmedRepair,
+      repairNote: d.outcome?.note ?? null,
       submittedAt: d.submittedMinutesIn === null ? null : at(d.submittedMinutesIn),
+      closedAt: d.status === "closed" ? at(d.closedMinutesIn ?? lastMinute) : null,
       createdAt: at(0),
       updatedAt: at(lastMinute),
     },
@@ -200,6 +208,17 @@ async function seedCase(
     await audit(reviewerId, s.verdict, s.minutesIn);
   }
   if (d.status === "closed") await audit(technicianId, "close", lastMinute);
+  if (d.outcome) {
+    await models.CaseConfirmedCause.bulkCreate(
+      d.outcome.causes.map((cause) => ({ shopId, caseId, cause, createdAt: at(lastMinute) })),
+      { transaction },
+    );
+    await models.CaseRepair.bulkCreate(
+      d.outcome.repairIds.map((repairId) => ({ shopId, caseId, repairId, createdAt: at(lastMinute) })),
+      { transaction },
+    );
+  }
+  return caseId;
 }
 
 /** 13:00 UTC on the case's day (morning in the demo shops' zones), never later than three hours ago. */

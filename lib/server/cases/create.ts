@@ -4,6 +4,7 @@ import type { InferAttributes } from "sequelize";
 import { AppError } from "@/lib/errors";
 import type { CreateCaseInput } from "@/lib/contracts/cases";
 import { recordAudit } from "../audit";
+import { refreshCasebookEntry } from "../casebook/refresh";
 
 /**
  * Opens a case for a picked or new customer and vehicle. The interview's system answers are
@@ -110,6 +111,8 @@ export async function createCase({
       action: "create",
       transaction,
     });
+    // The casebook finds the case by its complaint from the start, and flags a comeback at once.
+    await refreshCasebookEntry({ shopId, caseId: created.id, transaction });
     return { id: created.id };
   });
 }

@@ -14,6 +14,7 @@ import { updateCaseAtVersion, type CaseChanges } from "@/lib/db/versioned-update
 import { recordAudit } from "../audit";
 import { getShop, type ShopSummary } from "../shops";
 import { caseForAction } from "./load";
+import { refreshCasebookEntry } from "../casebook/refresh";
 
 /**
  * Applies the change only at the version the client last saw; otherwise says plainly what happened,
@@ -131,6 +132,8 @@ export async function submitCase({
         submittedAt: new Date(),
       },
     });
+    // Findings, leading suspect, symptoms and readings for the casebook and similar cases.
+    await refreshCasebookEntry({ shopId: user.shopId, caseId, transaction });
     await recordAudit({
       shopId: user.shopId,
       actorId: user.id,

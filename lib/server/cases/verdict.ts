@@ -7,6 +7,7 @@ import type { SignOffInput, SignOffResponse } from "@/lib/contracts/cases";
 import { updateCaseAtVersion } from "@/lib/db/versioned-update";
 import { recordAudit } from "../audit";
 import { caseForAction } from "./load";
+import { refreshCasebookEntry } from "../casebook/refresh";
 
 /** A second person's verdict on a submitted diagnosis: appended, never edited. */
 export async function recordSignOff({
@@ -47,6 +48,8 @@ export async function recordSignOff({
       detail: { comment: comment ?? null },
       transaction,
     });
+    // The senior's comment is searchable, and the status facet follows the verdict.
+    await refreshCasebookEntry({ shopId: user.shopId, caseId, transaction });
     return { status, version };
   });
 }

@@ -1,0 +1,26 @@
+import { CAUSE_LABELS, CAUSE_SHORT_NAMES, type CauseId } from "@/lib/diagnosis/causes";
+import type { CasebookCompressorType } from "@/lib/contracts/casebook";
+
+const isCause = (id: string): id is CauseId => id in CAUSE_LABELS;
+
+export function confirmedCauseLabel(id: string): string {
+  if (id === "none_found") return "No fault found";
+  return isCause(id) ? CAUSE_LABELS[id] : id;
+}
+
+/** For sentences: "confirmed as poor condenser airflow". */
+export function confirmedCauseShortName(id: string): string {
+  if (id === "none_found") return "no fault found";
+  return isCause(id) ? CAUSE_SHORT_NAMES[id] : id;
+}
+
+export const METERING_DEVICE_LABELS: Record<string, string> = {
+  orifice_tube: "Orifice tube",
+  txv: "TXV",
+};
+
+export const COMPRESSOR_TYPE_LABELS: Record<CasebookCompressorType, string> = {
+  cycling_clutch: "Cycling clutch",
+  variable_displacement: "Variable displacement",
+  electric: "Electric (high voltage)",
+};

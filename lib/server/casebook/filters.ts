@@ -1,0 +1,124 @@
+import "server-only";
+import { QueryTypes } from "sequelize";
+import { getModels } from "@/models";
+import type { CasebookFilters, CasebookTextMode } from "@/lib/contracts/casebook";
+import { searchWords, wholeWordPattern } from "@/lib/casebook/words";
+
+// The WHERE clause every casebook query shares (search, count, facets, export), always starting with
+// the shop: the indexes on casebook_entry all begin with shop_id.
+
+export type Replacements = Record<string, string | number | boolean | Date | string[] | number[]>;
+
+export interface CasebookWhere {
+  sql: string;
+  replacements: Replacements;
+  /** The natural-language MATCH expression, when the search has words the index holds. */
+  relevanceSql: string | null;
+  textMode: CasebookTextMode;
+}
+
+export const MATCH_SQL = "MATCH(e.search_text) AGAINST (:words IN NATURAL LANGUAGE MODE)";
+
+let minTokenSize: Promise<number> | undefined;
+
+/** innodb_ft_min_token_size of the server we talk to (3 unless its configuration says otherwise). */
+export function fullTextMinTokenSize(): Promise<number> {
+  minTokenSize ??= getModels()
+    .sequelize.query<{ size: number }>("SELECT @@innodb_ft_min_token_size AS size", {
+      type: QueryTypes.SELECT,
+    })
+    .then(([row]) => Number(row?.size ?? 3))
+    .catch((error: unknown) => {
+      minTokenSize = undefined;
+      throw error;
+    });
+  return minTokenSize;
+}
+
+const dayMs = 24 * 60 * 60 * 1000;
+
+/** Builds the shared WHERE; `omit` leaves one facet's own filter out (for that facet's counts). */
+export async function casebookWhere(
+  shopId: number,
+  f: CasebookFilters,
+  omit?: keyof CasebookFilters,
+): Promise<CasebookWhere> {
+  const parts = ["e.shop_id = :shopId"];
+  const replacements: Replacements = { shopId };
+  const filter = <K extends keyof CasebookFilters>(key: K) => (key === omit ? undefined : f[key]);
+  const equal = (column: string, name: string, value: string | number | undefined) => {
+    if (value === undefined) return;
+    parts.push(`${column} = :${name}`);
+    replacements[name] = value;
+  };
+  equal("e.refrigerant", "refrigerant", filter("refrigerant"));
+  equal("e.metering_device", "device", filter("device"));
+  equal("e.compressor_type", "compressor", filter("compressor"));
+  equal("e.leading_suspect", "suspect", filter("suspect"));
+  equal("e.make", "make", filter("make"));
+  equal("e.model", "model", filter("model"));
+  equal("e.technician_id", "technician", filter("technician"));
+  equal("e.status", "status", filter("status"));
+  const yearFrom = filter("yearFrom");
+  const yearTo = filter("yearTo");
+  if (yearFrom !== undefined) {
+    parts.push("e.year >= :yearFrom");
+    replacements.yearFrom = yearFrom;
+  }
+  if (yearTo !== undefined) {
+    parts.push("e.year <= :yearTo");
+    replacements.yearTo = yearTo;
+  }
+  const from = filter("from");
+  const to = filter("to");
+  if (from) {
+    parts.push("e.opened_at >= :from");
+    replacements.from = new Date(`${from}T00:00:00Z`);
+  }
+  if (to) {
+    parts.push("e.opened_at < :to");
+    replacements.to = new Date(Date.parse(`${to}T00:00:00Z`) + dayMs);
+  }
+  if (filter("comeback")) parts.push("e.comeback = 1");
+  (filter("symptoms") ?? []).forEach((symptom, i) => {
+    parts.push(
+      `e.case_id IN (SELECT s${i}.case_id FROM casebook_symptom s${i} WHERE s${i}.shop_id = :shopId AND s${i}.symptom = :symptom${i})`,
+    );
+    replacements[`symptom${i}`] = symptom;
+  });
+  const cause = filter("cause");
+  if (cause) {
+    parts.push(
+      "e.case_id IN (SELECT cc.case_id FROM case_confirmed_cause cc WHERE cc.shop_id = :shopId AND cc.cause = :cause)",
+    );
+    replacements.cause = cause;
+  }
+
+  let relevanceSql: string | null = null;
+  let textMode: CasebookTextMode = "none";
+  const q = filter("q");
+  if (q) {
+    const words = searchWords(q, await fullTextMinTokenSize());
+    if (words.indexed.length > 0) {
+      // A comparison, not a bare MATCH: the optimizer then walks the shop's rows through a shop_id index
+      // and asks the full-text result about each, instead of reading every shop's matches first.
+      parts.push(`${MATCH_SQL} > 0`);
+      replacements.words = words.indexed.join(" ");
+      relevanceSql = MATCH_SQL;
+    }
+    // Words under innodb_ft_min_token_size are not in the index: each must appear as a whole word.
+    words.short.forEach((word, i) => {
+      parts.push(`e.search_text REGEXP :short${i}`);
+      replacements[`short${i}`] = wholeWordPattern(word);
+    });
+    textMode =
+      words.indexed.length > 0 && words.short.length > 0
+        ? "fulltext+pattern"
+        : words.indexed.length > 0
+          ? "fulltext"
+          : words.short.length > 0
+            ? "pattern"
+            : "none";
+  }
+  return { sql: parts.join("\n   AND "), replacements, relevanceSql, textMode };
+}
