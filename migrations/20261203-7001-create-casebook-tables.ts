@@ -110,6 +110,9 @@ export async function up({ context: qi }: Params) {
       came_back_case_id: { type: DataTypes.INTEGER, allowNull: true },
       comeback: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
       search_text: { type: DataTypes.TEXT, allowNull: false },
+      // The words of search_text with the shop in front of each (lib/casebook/words.ts): what the full-text
+      // index holds, so a search reads its own shop's matches only.
+      search_terms: { type: DataTypes.TEXT, allowNull: false },
       updated_at: createdAt(),
     },
     tableOptions,
@@ -133,7 +136,7 @@ export async function up({ context: qi }: Params) {
     ["casebook_entry_shop_comeback", ["shop_id", "comeback", "opened_at"]],
   ];
   for (const [name, fields] of entryIndexes) await qi.addIndex("casebook_entry", fields, { name });
-  await qi.addIndex("casebook_entry", ["search_text"], { type: "FULLTEXT", name: "casebook_entry_text" });
+  await qi.addIndex("casebook_entry", ["search_terms"], { type: "FULLTEXT", name: "casebook_entry_terms" });
 
   await qi.createTable(
     "casebook_symptom",

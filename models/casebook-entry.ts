@@ -37,6 +37,7 @@ export class CasebookEntry extends Model<
   declare cameBackCaseId: number | null;
   declare comeback: boolean;
   declare searchText: string;
+  declare searchTerms: string;
   declare updatedAt: CreationOptional<Date>;
 
   static initModel(sequelize: Sequelize) {
@@ -60,6 +61,7 @@ export class CasebookEntry extends Model<
         cameBackCaseId: { type: DataTypes.INTEGER, allowNull: true },
         comeback: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         searchText: { type: DataTypes.TEXT, allowNull: false },
+        searchTerms: { type: DataTypes.TEXT, allowNull: false },
         updatedAt: DataTypes.DATE(3),
       },
       {

@@ -10,6 +10,7 @@ export interface NavItem {
 export const NAV_ITEMS: readonly NavItem[] = [
   { href: "/cases", label: "Cases", permission: "cases:read" },
   { href: "/signoff", label: "Sign-off", permission: "signoff:review" },
+  { href: "/casebook", label: "Casebook", permission: "casebook:search" },
   { href: "/specs", label: "Spec table", permission: "specs:read" },
   { href: "/ledger", label: "Ledger", permission: "ledger:read" },
   { href: "/settings/users", label: "People", permission: "users:manage" },

@@ -43,5 +43,6 @@ export function casebookCsv(rows: readonly CasebookRow[], { header }: { header: 
     { fields: header ? [...CASEBOOK_CSV_FIELDS] : [], data: rows.map(cells) },
     { escapeFormulae: true, newline: "\r\n", header },
   );
-  return text.length > 0 ? `${text}\r\n` : "";
+  const lines = text.replace(/(\r\n)+$/, "");
+  return lines.length > 0 ? `${lines}\r\n` : "";
 }

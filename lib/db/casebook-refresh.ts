@@ -5,6 +5,7 @@ import { CAUSE_IDS } from "@/lib/diagnosis/causes";
 import { CASEBOOK_COMPRESSOR_TYPES } from "@/lib/contracts/casebook";
 import { caseFeaturesFrom, presentFeatures } from "@/lib/casebook/features";
 import { caseSearchText } from "@/lib/casebook/search-text";
+import { shopIndexTerms } from "@/lib/casebook/words";
 
 const dayMs = 24 * 60 * 60 * 1000;
 const causeIds = new Set<string>(CAUSE_IDS);
@@ -117,6 +118,20 @@ export async function refreshCasebookEntry({
       : null,
   ]);
 
+  const searchText = caseSearchText({
+    complaint: row.complaint,
+    make: vehicle?.make ?? null,
+    model: vehicle?.model ?? null,
+    conclusionCause: row.conclusionCause ?? null,
+    conclusionNotes: row.conclusionNotes ?? null,
+    reviewNotes: reviews.map((r) => r.comment ?? "").filter(Boolean),
+    serviceNotes: [record?.notes, record?.slowRecoveryNote].filter(Boolean).join("\n") || null,
+    confirmedCauses,
+    repairIds,
+    confirmedRepair: row.confirmedRepair ?? null,
+    repairNote: row.repairNote ?? null,
+  });
+
   await CasebookEntry.upsert(
     {
       caseId,
@@ -140,19 +155,8 @@ export async function refreshCasebookEntry({
       comebackOfCaseId: before?.id ?? null,
       cameBackCaseId: after?.id ?? null,
       comeback: Boolean(before || after),
-      searchText: caseSearchText({
-        complaint: row.complaint,
-        make: vehicle?.make ?? null,
-        model: vehicle?.model ?? null,
-        conclusionCause: row.conclusionCause ?? null,
-        conclusionNotes: row.conclusionNotes ?? null,
-        reviewNotes: reviews.map((r) => r.comment ?? "").filter(Boolean),
-        serviceNotes: [record?.notes, record?.slowRecoveryNote].filter(Boolean).join("\n") || null,
-        confirmedCauses,
-        repairIds,
-        confirmedRepair: row.confirmedRepair ?? null,
-        repairNote: row.repairNote ?? null,
-      }),
+      searchText,
+      searchTerms: shopIndexTerms(searchText, shopId),
       updatedAt: new Date(),
     },
     { transaction },

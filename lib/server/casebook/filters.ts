@@ -1,8 +1,6 @@
 import "server-only";
-import { QueryTypes } from "sequelize";
-import { getModels } from "@/models";
 import type { CasebookFilters, CasebookTextMode } from "@/lib/contracts/casebook";
-import { searchWords, wholeWordPattern } from "@/lib/casebook/words";
+import { searchWords, shopQueryTerms, wholeWordPattern } from "@/lib/casebook/words";
 
 // The WHERE clause every casebook query shares (search, count, facets, export), always starting with
 // the shop: the indexes on casebook_entry all begin with shop_id.
@@ -17,32 +15,16 @@ export interface CasebookWhere {
   textMode: CasebookTextMode;
 }
 
-export const MATCH_SQL = "MATCH(e.search_text) AGAINST (:words IN NATURAL LANGUAGE MODE)";
-
-let minTokenSize: Promise<number> | undefined;
-
-/** innodb_ft_min_token_size of the server we talk to (3 unless its configuration says otherwise). */
-export function fullTextMinTokenSize(): Promise<number> {
-  minTokenSize ??= getModels()
-    .sequelize.query<{ size: number }>("SELECT @@innodb_ft_min_token_size AS size", {
-      type: QueryTypes.SELECT,
-    })
-    .then(([row]) => Number(row?.size ?? 3))
-    .catch((error: unknown) => {
-      minTokenSize = undefined;
-      throw error;
-    });
-  return minTokenSize;
-}
+export const MATCH_SQL = "MATCH(e.search_terms) AGAINST (:words IN NATURAL LANGUAGE MODE)";
 
 const dayMs = 24 * 60 * 60 * 1000;
 
 /** Builds the shared WHERE; `omit` leaves one facet's own filter out (for that facet's counts). */
-export async function casebookWhere(
+export function casebookWhere(
   shopId: number,
   f: CasebookFilters,
   omit?: keyof CasebookFilters,
-): Promise<CasebookWhere> {
+): CasebookWhere {
   const parts = ["e.shop_id = :shopId"];
   const replacements: Replacements = { shopId };
   const filter = <K extends keyof CasebookFilters>(key: K) => (key === omit ? undefined : f[key]);
@@ -98,17 +80,18 @@ export async function casebookWhere(
   let textMode: CasebookTextMode = "none";
   const q = filter("q");
   if (q) {
-    const words = searchWords(q, await fullTextMinTokenSize());
+    const words = searchWords(q);
     if (words.indexed.length > 0) {
-      // A comparison, not a bare MATCH: the optimizer then walks the shop's rows through a shop_id index
-      // and asks the full-text result about each, instead of reading every shop's matches first.
-      parts.push(`${MATCH_SQL} > 0`);
-      replacements.words = words.indexed.join(" ");
+      // The shop's own terms (lib/casebook/words.ts): the full-text index reads this shop's matches only.
+      parts.push(MATCH_SQL);
+      replacements.words = shopQueryTerms(words.indexed, shopId);
       relevanceSql = MATCH_SQL;
     }
-    // Words under innodb_ft_min_token_size are not in the index: each must appear as a whole word.
+    // Words under the index's minimum length are not in it: each must appear as a whole word.
+    // LIKE first: a cheap substring test that spares the pattern most rows.
     words.short.forEach((word, i) => {
-      parts.push(`e.search_text REGEXP :short${i}`);
+      parts.push(`e.search_text LIKE :shortLike${i} AND e.search_text REGEXP :short${i}`);
+      replacements[`shortLike${i}`] = `%${word}%`;
       replacements[`short${i}`] = wholeWordPattern(word);
     });
     textMode =

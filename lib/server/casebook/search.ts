@@ -46,13 +46,13 @@ export function pageSql(
 ): string {
   const relevance = where.relevanceSql ? `${where.relevanceSql} AS relevance` : "0 AS relevance";
   return `SELECT p.case_id, p.opened_at, p.closed_at, p.status, p.make, p.model, p.year, p.refrigerant,
-       p.metering_device, p.leading_suspect, p.comeback_of_case_id, p.came_back_case_id, p.relevance,
+       p.metering_device, p.leading_suspect, p.comeback_of_case_id, p.came_back_case_id, p.relevance, p.total,
        LEFT(c.complaint, ${Math.trunc(complaintChars)}) AS complaint, u.name AS technician,
        (SELECT GROUP_CONCAT(cc.cause ORDER BY cc.id SEPARATOR ',') FROM case_confirmed_cause cc
          WHERE cc.shop_id = :shopId AND cc.case_id = p.case_id) AS causes
   FROM (SELECT e.case_id, e.opened_at, e.closed_at, e.status, e.make, e.model, e.year, e.refrigerant,
                e.metering_device, e.leading_suspect, e.comeback_of_case_id, e.came_back_case_id,
-               e.technician_id, ${relevance}
+               e.technician_id, ${relevance}, COUNT(*) OVER () AS total
           FROM casebook_entry e
          WHERE ${where.sql}
          ORDER BY ${orderBy(sort, dir)}
@@ -68,6 +68,8 @@ export function countSql(where: CasebookWhere): string {
 
 type PageRow = {
   case_id: number;
+  /** How many rows match in all (the same on every row of the page). */
+  total?: number;
   opened_at: Date;
   closed_at: Date | null;
   status: CaseStatus;
@@ -120,16 +122,27 @@ export async function searchCasebook({
   const { sort, dir } = resolveSort(query, where);
   const offset = (query.page - 1) * query.pageSize;
   const replacements: Replacements = { ...where.replacements, limit: query.pageSize, offset };
-  const [rows, [count]] = await Promise.all([
-    sequelize.query<PageRow>(pageSql(where, sort, dir), { replacements, type: QueryTypes.SELECT }),
-    sequelize.query<{ total: number }>(countSql(where), {
-      replacements: where.replacements,
-      type: QueryTypes.SELECT,
-    }),
-  ]);
+  const rows = await sequelize.query<PageRow>(pageSql(where, sort, dir), {
+    replacements,
+    type: QueryTypes.SELECT,
+  });
+  // The page carries the total; a page past the end has no rows to carry it, so count on its own then.
+  const total =
+    rows.length > 0
+      ? Number(rows[0]?.total ?? 0)
+      : offset === 0
+        ? 0
+        : Number(
+            (
+              await sequelize.query<{ total: number }>(countSql(where), {
+                replacements: where.replacements,
+                type: QueryTypes.SELECT,
+              })
+            )[0]?.total ?? 0,
+          );
   return {
     rows: rows.map(toCasebookRow),
-    total: Number(count?.total ?? 0),
+    total,
     page: query.page,
     pageSize: query.pageSize,
     sort,

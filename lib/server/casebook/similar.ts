@@ -20,7 +20,37 @@ import { neighbourSummary } from "@/lib/casebook/summary";
 import type { Replacements } from "./filters";
 import { vehicleLabel } from "./search";
 
-type NeighbourRow = { case_id: number; distance: number } & Record<string, number | null>;
+type FeatureRow = Partial<Record<(typeof FEATURE_COLUMNS)[keyof typeof FEATURE_COLUMNS], number | null>> & {
+  features_case_id?: number | null;
+};
+type NeighbourRow = { case_id: number; distance: number } & FeatureRow;
+
+const FEATURE_SELECT = [
+  "f.case_id AS features_case_id",
+  ...Object.values(FEATURE_COLUMNS).map((c) => `f.${c}`),
+].join(", ");
+
+function featuresOf(row: FeatureRow): CaseFeatureValues {
+  const values = {} as CaseFeatureValues;
+  for (const [key, column] of Object.entries(FEATURE_COLUMNS) as [
+    keyof CaseFeatureValues,
+    keyof FeatureRow,
+  ][])
+    values[key] = row[column] === null || row[column] === undefined ? null : Number(row[column]);
+  return values;
+}
+
+/** A case without stored readings (a draft): what its interview holds so far. */
+async function draftFeatures(shopId: number, caseId: number): Promise<CaseFeatureValues> {
+  const row = await getModels().Case.findOne({
+    where: { id: caseId, shopId },
+    attributes: ["computed", "findings", "answers"],
+    raw: true,
+  });
+  const ambient = (row?.answers as { answers?: { conditions?: { ambientC?: unknown } } } | null)?.answers
+    ?.conditions?.ambientC;
+  return caseFeaturesFrom(row?.computed, row?.findings ?? { input: { ambientC: ambient } });
+}
 
 /**
  * The nearest closed cases as SQL: the same refrigerant and metering device through the index
@@ -70,41 +100,41 @@ export async function similarCases({
   caseId: number;
   k?: number;
 }): Promise<SimilarCasesResponse> {
-  const { sequelize, Case, Vehicle } = getModels();
-  const row = await Case.findOne({
-    where: { id: caseId, shopId },
-    attributes: ["id", "vehicleId", "computed", "findings", "answers"],
-    raw: true,
-  });
-  if (!row) throw new AppError("not_found:case", "No such case in this shop.");
-  const vehicle = row.vehicleId
-    ? await Vehicle.findOne({
-        where: { id: row.vehicleId, shopId },
-        attributes: ["refrigerant", "expansionDevice"],
-        raw: true,
-      })
-    : null;
+  const { sequelize, Case } = getModels();
+  // The case's system and stored readings in one read; a draft has no stored readings yet.
+  const [own] = await sequelize.query<
+    { refrigerant: string | null; metering_device: string | null } & FeatureRow
+  >(
+    `SELECT e.refrigerant, e.metering_device, ${FEATURE_SELECT}
+       FROM casebook_entry e LEFT JOIN case_features f ON f.shop_id = e.shop_id AND f.case_id = e.case_id
+      WHERE e.shop_id = :shopId AND e.case_id = :caseId`,
+    { replacements: { shopId, caseId }, type: QueryTypes.SELECT },
+  );
+  if (!own) {
+    // Not in the casebook's rows (yet): the case itself says whether it exists in this shop.
+    const exists = await Case.count({ where: { id: caseId, shopId } });
+    if (!exists) throw new AppError("not_found:case", "No such case in this shop.");
+  }
+  const refrigerant = own?.refrigerant ?? null;
+  const meteringDevice = own?.metering_device ?? null;
   const empty = (unavailable: string, features: CaseFeatureValues | null = null): SimilarCasesResponse => ({
     unavailable,
-    refrigerant: vehicle?.refrigerant ?? null,
-    meteringDevice: vehicle?.expansionDevice ?? null,
+    refrigerant,
+    meteringDevice,
     features,
     neighbours: [],
     summary: null,
   });
-  if (!vehicle) return empty("The case has no vehicle, so its system is not known.");
-  // A draft has no findings yet: its ambient is still in the interview's answers.
-  const draftAmbient = (row.answers as { answers?: { conditions?: { ambientC?: unknown } } } | null)?.answers
-    ?.conditions?.ambientC;
-  const features = caseFeaturesFrom(row.computed, row.findings ?? { input: { ambientC: draftAmbient } });
+  if (!refrigerant || !meteringDevice) return empty("The case has no vehicle, so its system is not known.");
+  const features = own?.features_case_id ? featuresOf(own) : await draftFeatures(shopId, caseId);
   if (presentFeatures(features).length === 0)
     return empty("Similar cases appear once the running readings are in.", features);
 
   const base: Replacements = {
     shopId,
     caseId,
-    refrigerant: vehicle.refrigerant,
-    device: vehicle.expansionDevice,
+    refrigerant,
+    device: meteringDevice,
     k,
   };
   const run = async (bounded: boolean) => {
@@ -120,53 +150,42 @@ export async function similarCases({
   if (nearest.length === 0) return { ...empty("", features), unavailable: null };
 
   const ids = nearest.map((n) => n.case_id);
-  const [entries, causes, repairs] = await Promise.all([
-    sequelize.query<{
-      case_id: number;
-      opened_at: Date;
-      closed_at: Date | null;
-      make: string | null;
-      model: string | null;
-      year: number | null;
-    }>(
-      "SELECT case_id, opened_at, closed_at, make, model, year FROM casebook_entry WHERE shop_id = :shopId AND case_id IN (:ids)",
-      { replacements: { shopId, ids }, type: QueryTypes.SELECT },
-    ),
-    sequelize.query<{ case_id: number; cause: string }>(
-      "SELECT case_id, cause FROM case_confirmed_cause WHERE shop_id = :shopId AND case_id IN (:ids) ORDER BY id",
-      { replacements: { shopId, ids }, type: QueryTypes.SELECT },
-    ),
-    sequelize.query<{ case_id: number; repair_id: string }>(
-      "SELECT case_id, repair_id FROM case_repair WHERE shop_id = :shopId AND case_id IN (:ids) ORDER BY id",
-      { replacements: { shopId, ids }, type: QueryTypes.SELECT },
-    ),
-  ]);
-  const entryById = new Map(entries.map((e) => [e.case_id, e]));
+  const outcomes = await sequelize.query<{
+    case_id: number;
+    opened_at: Date;
+    closed_at: Date | null;
+    make: string | null;
+    model: string | null;
+    year: number | null;
+    causes: string | null;
+    repairs: string | null;
+  }>(
+    `SELECT e.case_id, e.opened_at, e.closed_at, e.make, e.model, e.year,
+            (SELECT GROUP_CONCAT(cc.cause ORDER BY cc.id SEPARATOR ',') FROM case_confirmed_cause cc
+              WHERE cc.shop_id = e.shop_id AND cc.case_id = e.case_id) AS causes,
+            (SELECT GROUP_CONCAT(cr.repair_id ORDER BY cr.id SEPARATOR ',') FROM case_repair cr
+              WHERE cr.shop_id = e.shop_id AND cr.case_id = e.case_id) AS repairs
+       FROM casebook_entry e WHERE e.shop_id = :shopId AND e.case_id IN (:ids)`,
+    { replacements: { shopId, ids }, type: QueryTypes.SELECT },
+  );
+  const byId = new Map(outcomes.map((e) => [e.case_id, e]));
   const neighbours: SimilarCase[] = nearest.map((n) => {
-    const e = entryById.get(n.case_id);
+    const e = byId.get(n.case_id);
     return {
       caseId: n.case_id,
       distance: Math.round(Number(n.distance) * 1000) / 1000,
       vehicle: e ? vehicleLabel(e) : null,
       openedAt: e ? new Date(e.opened_at).toISOString() : "",
       closedAt: e?.closed_at ? new Date(e.closed_at).toISOString() : null,
-      confirmedCauses: causes.filter((c) => c.case_id === n.case_id).map((c) => c.cause as ConfirmedCauseId),
-      repairIds: repairs.filter((r) => r.case_id === n.case_id).map((r) => r.repair_id),
-      features: {
-        condensingC: n.condensing_c ?? null,
-        evaporatingC: n.evaporating_c ?? null,
-        subcoolingK: n.subcooling_k ?? null,
-        superheatK: n.superheat_k ?? null,
-        approachK: n.approach_k ?? null,
-        ambientC: n.ambient_c ?? null,
-        chargeDeviationPct: n.charge_deviation_pct ?? null,
-      },
+      confirmedCauses: (e?.causes ? e.causes.split(",") : []) as ConfirmedCauseId[],
+      repairIds: e?.repairs ? e.repairs.split(",") : [],
+      features: featuresOf(n),
     };
   });
   return {
     unavailable: null,
-    refrigerant: vehicle.refrigerant,
-    meteringDevice: vehicle.expansionDevice,
+    refrigerant,
+    meteringDevice,
     features,
     neighbours,
     summary: neighbourSummary(neighbours),

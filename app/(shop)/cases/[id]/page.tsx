@@ -14,6 +14,9 @@ import { ownerPanelData } from "@/lib/server/owner-panel";
 import { OwnerSummaryPanel } from "@/components/owner/owner-summary-panel";
 import { ProposalPanel } from "@/components/owner/proposal-panel";
 import { CasePhotos } from "@/components/photos/case-photos";
+import { caseComebackLinks } from "@/lib/server/casebook/case-flags";
+import { ComebackBadge } from "@/components/casebook/comeback-badge";
+import { SimilarCasesPanel } from "@/components/casebook/similar-cases-panel";
 
 export const metadata: Metadata = { title: "Case" };
 
@@ -27,7 +30,10 @@ export default async function CasePage({ params }: { params: Promise<{ id: strin
   });
   const record = (detail.answers ?? {}) as { answers?: Record<string, never> };
   const may = caseAbilities(user, detail);
-  const owner = await ownerPanelData({ user, caseId: detail.id });
+  const [owner, comeback] = await Promise.all([
+    ownerPanelData({ user, caseId: detail.id }),
+    caseComebackLinks({ shopId: user.shopId, caseId: detail.id }),
+  ]);
   const findings = detail.findings as Parameters<typeof FindingsSnapshot>[0]["findings"] | null;
   return (
     <article className="space-y-4">
@@ -35,7 +41,10 @@ export default async function CasePage({ params }: { params: Promise<{ id: strin
         <h1 className="text-2xl font-bold">
           Case {detail.id}: {detail.vehicle ?? "vehicle not recorded"}
         </h1>
-        <StatusBadge status={detail.status} />
+        <span className="flex flex-wrap items-center gap-2">
+          <StatusBadge status={detail.status} />
+          <ComebackBadge {...comeback} linked />
+        </span>
       </header>
       {may.edit && (
         <Link href={`/cases/${detail.id}/interview`} className="btn-primary min-h-glove w-full text-lg">
@@ -92,6 +101,7 @@ export default async function CasePage({ params }: { params: Promise<{ id: strin
           </section>
         )
       )}
+      {can(user.role, "casebook:search") && <SimilarCasesPanel caseId={detail.id} />}
       <CasePhotos caseId={detail.id} mayAct={owner.mayAct} attachments={owner.attachments} />
       <ProposalPanel
         caseId={detail.id}

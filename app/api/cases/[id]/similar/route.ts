@@ -1,0 +1,10 @@
+import { handler } from "@/lib/server/handler";
+import { similarCases } from "@/lib/server/casebook/similar";
+import { caseParamsSchema } from "@/lib/contracts/cases";
+import { similarCasesQuerySchema } from "@/lib/contracts/casebook";
+
+/** The shop's closed cases nearest to this one in their readings, and what each turned out to be. */
+export const GET = handler(
+  { permission: "casebook:search", params: caseParamsSchema, query: similarCasesQuerySchema },
+  async ({ user, params, query }) => similarCases({ shopId: user.shopId, caseId: params.id, k: query.k }),
+);
