@@ -4,12 +4,13 @@ import { CASE_STATUSES, type CaseStatus } from "@/lib/cases/statuses";
 import { SERVICE_REFRIGERANT_IDS } from "@/lib/refrigerants/catalog";
 import { EXPANSION_DEVICE_IDS } from "@/lib/vehicles/expansion-devices";
 import { COMPRESSOR_TYPES } from "@/lib/vehicles/compressor-types";
+import { pageQuery, type PageInfo } from "./paging";
 
 export { CASE_STATUSES, type CaseStatus };
 
-export const caseListQuerySchema = z.object({
-  status: z.enum(CASE_STATUSES, { message: "Unknown case status." }).optional(),
-});
+export const caseListQuerySchema = z
+  .object({ status: z.enum(CASE_STATUSES, { message: "Unknown case status." }).optional() })
+  .and(pageQuery({ defaultLimit: 50, maxLimit: 100 }));
 
 export const caseParamsSchema = z.object({
   id: z.coerce
@@ -115,6 +116,11 @@ export interface CaseListItem {
   customer: string | null;
   technician: string;
   updatedAt: string;
+}
+
+/** GET /api/cases: one page, most recently changed first. */
+export interface CaseListResponse extends PageInfo {
+  cases: CaseListItem[];
 }
 
 /** One case with its interview record, findings and sign-offs (GET /api/cases/[id]). */

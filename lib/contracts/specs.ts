@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { pageQuery, type PageInfo } from "./paging";
 import { specRowSchema, type SpecCsvParse, type SpecMatch, type SpecRow } from "@/lib/specs";
 import { partOilAllowancesSchema, type ReplacedPartId } from "@/lib/service/oil";
 
@@ -9,9 +10,9 @@ export const specParamsSchema = z.object({
     .positive("A spec row id is positive."),
 });
 
-export const specListQuerySchema = z.object({
-  q: z.string().trim().max(80, "Search with at most 80 characters.").optional(),
-});
+export const specListQuerySchema = z
+  .object({ q: z.string().trim().max(80, "Search with at most 80 characters.").optional() })
+  .and(pageQuery({ defaultLimit: 500, maxLimit: 1000 }));
 
 /** The row as a form sends it: grams and millilitres, converted from the typed units in the browser. */
 export const specInputSchema = specRowSchema;
@@ -60,7 +61,7 @@ export interface SpecEntryDto extends SpecRow {
 }
 
 /** GET /api/specs. */
-export interface SpecListResponse {
+export interface SpecListResponse extends PageInfo {
   specs: SpecEntryDto[];
 }
 

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { pageQuery, type PageInfo } from "./paging";
 import { ROLES, type Role } from "@/lib/auth/roles";
 
 export const updateUserSchema = z
@@ -23,7 +24,9 @@ export interface ShopUser {
 }
 
 /** GET /api/users. */
-export interface UserListResponse {
+export const userListQuerySchema = pageQuery({ defaultLimit: 100, maxLimit: 200 });
+
+export interface UserListResponse extends PageInfo {
   users: ShopUser[];
 }
 

@@ -1,10 +1,11 @@
 import { z } from "zod";
 import type { ExpansionDevice } from "@/lib/vehicles/expansion-devices";
 import type { CompressorType } from "@/lib/vehicles/compressor-types";
+import { pageQuery, type PageInfo } from "./paging";
 
-export const vehicleListQuerySchema = z.object({
-  q: z.string().max(80, "Search with fewer than 80 characters.").optional(),
-});
+export const vehicleListQuerySchema = z
+  .object({ q: z.string().max(80, "Search with fewer than 80 characters.").optional() })
+  .and(pageQuery({ defaultLimit: 30, maxLimit: 50 }));
 
 /** A vehicle the shop has seen, offered when a new case is opened. */
 export interface VehicleChoice {
@@ -20,6 +21,6 @@ export interface VehicleChoice {
 }
 
 /** GET /api/vehicles. */
-export interface VehicleChoiceListResponse {
+export interface VehicleChoiceListResponse extends PageInfo {
   vehicles: VehicleChoice[];
 }

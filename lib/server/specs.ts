@@ -1,4 +1,5 @@
 import "server-only";
+import { pageOf } from "./paging";
 import { Op } from "sequelize";
 import { getModels } from "@/models";
 import { AppError } from "@/lib/errors";
@@ -18,6 +19,7 @@ import type {
   SpecInput,
   SpecMatchDto,
   SpecMatchesResponse,
+  SpecListResponse,
 } from "@/lib/contracts/specs";
 
 type SpecEntryRow = SpecRow & { id: number; updatedAt: Date };
@@ -46,11 +48,13 @@ const escapeLike = (t: string) => t.replace(/[%_\\]/g, (c) => `\\${c}`);
 export async function listSpecs({
   shopId,
   q,
-  limit = 1000,
+  limit = 500,
+  offset = 0,
 }: {
   shopId: number;
   q?: string;
   limit?: number;
+  offset?: number;
 }): Promise<SpecEntryDto[]> {
   const { SpecEntry } = getModels();
   const words = (q ?? "").split(/\s+/).filter(Boolean).slice(0, 6);
@@ -73,11 +77,29 @@ export async function listSpecs({
       ["yearFrom", "ASC"],
       ["variant", "ASC"],
       ["rearAc", "ASC"],
+      ["id", "ASC"],
     ],
     limit,
+    offset,
     raw: true,
   });
   return (rows as unknown as SpecEntryRow[]).map(toDto);
+}
+
+/** One page of the spec table for GET /api/specs. */
+export async function listSpecPage({
+  shopId,
+  q,
+  limit,
+  offset,
+}: {
+  shopId: number;
+  q?: string;
+  limit: number;
+  offset: number;
+}): Promise<SpecListResponse> {
+  const page = pageOf(await listSpecs({ shopId, q, limit: limit + 1, offset }), { limit, offset });
+  return { specs: page.items, nextOffset: page.nextOffset };
 }
 
 async function allRows(shopId: number): Promise<SpecEntryDto[]> {

@@ -1,8 +1,9 @@
 import "server-only";
+import { pageOf } from "./paging";
 import { getModels } from "@/models";
 import { AppError } from "@/lib/errors";
 import type { Role } from "@/lib/auth/roles";
-import type { ShopUser } from "@/lib/contracts/users";
+import type { ShopUser, UserListResponse } from "@/lib/contracts/users";
 import { recordAudit } from "./audit";
 
 const PUBLIC_ATTRIBUTES = ["id", "email", "name", "role", "active"] as const;
@@ -17,15 +18,29 @@ function toShopUser(row: {
   return { id: row.id, email: row.email, name: row.name, role: row.role, active: Boolean(row.active) };
 }
 
-export async function listUsers({ shopId }: { shopId: number }): Promise<ShopUser[]> {
+export async function listUsers({
+  shopId,
+  limit = 100,
+  offset = 0,
+}: {
+  shopId: number;
+  limit?: number;
+  offset?: number;
+}): Promise<UserListResponse> {
   const { User } = getModels();
   const rows = await User.findAll({
     where: { shopId },
     attributes: [...PUBLIC_ATTRIBUTES],
-    order: [["name", "ASC"]],
+    order: [
+      ["name", "ASC"],
+      ["id", "ASC"],
+    ],
+    limit: limit + 1,
+    offset,
     raw: true,
   });
-  return rows.map(toShopUser);
+  const page = pageOf(rows, { limit, offset });
+  return { users: page.items.map(toShopUser), nextOffset: page.nextOffset };
 }
 
 export async function updateUser({

@@ -2,19 +2,22 @@ import type { CompressorType } from "@/lib/vehicles/compressor-types";
 import "server-only";
 import { Op } from "sequelize";
 import { getModels } from "@/models";
-import type { VehicleChoice } from "@/lib/contracts/vehicles";
 import type { ExpansionDevice } from "@/lib/vehicles/expansion-devices";
+import type { VehicleChoiceListResponse } from "@/lib/contracts/vehicles";
+import { pageOf } from "./paging";
 
 /** The shop's vehicles, most recently seen first, optionally filtered by customer, make, model or VIN. */
 export async function listVehicleChoices({
   shopId,
   search,
   limit = 30,
+  offset = 0,
 }: {
   shopId: number;
   search?: string;
   limit?: number;
-}): Promise<VehicleChoice[]> {
+  offset?: number;
+}): Promise<VehicleChoiceListResponse> {
   const { Vehicle, Customer } = getModels();
   const term = search?.trim();
   const like = term ? `%${term.replace(/[%_\\]/g, (c) => `\\${c}`)}%` : undefined;
@@ -33,10 +36,15 @@ export async function listVehicleChoices({
         : {}),
     },
     include: [{ model: Customer, attributes: ["id", "name"] }],
-    order: [["updatedAt", "DESC"]],
-    limit,
+    order: [
+      ["updatedAt", "DESC"],
+      ["id", "DESC"],
+    ],
+    limit: limit + 1,
+    offset,
   });
-  return rows.map((row) => {
+  const page = pageOf(rows, { limit, offset });
+  const vehicles = page.items.map((row) => {
     const v = row.get({ plain: true }) as unknown as {
       id: number;
       customerId: number;
@@ -63,4 +71,5 @@ export async function listVehicleChoices({
       labelChargeG: v.labelChargeG,
     };
   });
+  return { vehicles, nextOffset: page.nextOffset };
 }

@@ -7,9 +7,17 @@ import { CaseList } from "@/components/cases/case-list";
 
 export const metadata: Metadata = { title: "Cases" };
 
-export default async function CasesPage() {
+const PAGE_SIZE = 50;
+
+export default async function CasesPage({ searchParams }: { searchParams: Promise<{ page?: string }> }) {
   const user = await requireUser("cases:read");
-  const cases = await listCases({ shopId: user.shopId });
+  const requested = Number((await searchParams).page ?? 1);
+  const page = Number.isInteger(requested) && requested >= 1 && requested <= 2000 ? requested : 1;
+  const { cases, nextOffset } = await listCases({
+    shopId: user.shopId,
+    limit: PAGE_SIZE,
+    offset: (page - 1) * PAGE_SIZE,
+  });
   return (
     <>
       <div className="mb-4 flex flex-wrap items-center justify-between gap-3">
@@ -20,7 +28,26 @@ export default async function CasesPage() {
           </Link>
         )}
       </div>
-      <CaseList cases={cases} empty="No cases yet." />
+      <CaseList cases={cases} empty={page === 1 ? "No cases yet." : "No cases on this page."} />
+      {(page > 1 || nextOffset !== null) && (
+        <nav aria-label="Pages" className="mt-4 flex flex-wrap items-center justify-between gap-2">
+          {page > 1 ? (
+            <Link href={page === 2 ? "/cases" : `/cases?page=${page - 1}`} className="btn-quiet">
+              Newer cases
+            </Link>
+          ) : (
+            <span />
+          )}
+          <span>Page {page}</span>
+          {nextOffset !== null ? (
+            <Link href={`/cases?page=${page + 1}`} className="btn-quiet">
+              Older cases
+            </Link>
+          ) : (
+            <span />
+          )}
+        </nav>
+      )}
     </>
   );
 }

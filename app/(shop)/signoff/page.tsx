@@ -7,7 +7,7 @@ export const metadata: Metadata = { title: "Sign-off" };
 
 export default async function SignOffQueuePage() {
   const user = await requireUser("signoff:review");
-  const waiting = await listCases({ shopId: user.shopId, status: "awaiting_signoff" });
+  const { cases: waiting } = await listCases({ shopId: user.shopId, status: "awaiting_signoff", limit: 100 });
   return (
     <>
       <h1 className="mb-1 text-2xl font-bold">Waiting for sign-off</h1>

@@ -5,7 +5,7 @@ import { caseListQuerySchema, createCaseSchema } from "@/lib/contracts/cases";
 export const GET = handler(
   { permission: "cases:read", query: caseListQuerySchema },
   async ({ user, query }) => {
-    return { cases: await listCases({ shopId: user.shopId, status: query.status }) };
+    return listCases({ shopId: user.shopId, status: query.status, limit: query.limit, offset: query.offset });
   },
 );
 

@@ -1,11 +1,11 @@
 import { handler } from "@/lib/server/handler";
-import { createSpec, listSpecs } from "@/lib/server/specs";
+import { createSpec, listSpecPage } from "@/lib/server/specs";
 import { specInputSchema, specListQuerySchema } from "@/lib/contracts/specs";
 
 export const GET = handler(
   { permission: "specs:read", query: specListQuerySchema },
   async ({ user, query }) => {
-    return { specs: await listSpecs({ shopId: user.shopId, q: query.q }) };
+    return listSpecPage({ shopId: user.shopId, q: query.q, limit: query.limit, offset: query.offset });
   },
 );
 

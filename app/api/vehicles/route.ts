@@ -5,6 +5,11 @@ import { vehicleListQuerySchema } from "@/lib/contracts/vehicles";
 export const GET = handler(
   { permission: "cases:read", query: vehicleListQuerySchema },
   async ({ user, query }) => {
-    return { vehicles: await listVehicleChoices({ shopId: user.shopId, search: query.q }) };
+    return listVehicleChoices({
+      shopId: user.shopId,
+      search: query.q,
+      limit: query.limit,
+      offset: query.offset,
+    });
   },
 );

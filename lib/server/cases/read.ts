@@ -1,6 +1,7 @@
 import "server-only";
 import { getModels } from "@/models";
-import type { CaseDetail, CaseListItem, CaseStatus } from "@/lib/contracts/cases";
+import type { CaseDetail, CaseListItem, CaseListResponse, CaseStatus } from "@/lib/contracts/cases";
+import { pageOf } from "./paging";
 import { AppError } from "@/lib/errors";
 import type { Role } from "@/lib/auth/roles";
 
@@ -26,38 +27,48 @@ function includes() {
   ];
 }
 
+/** One page of the shop's cases, most recently changed first (index service_case_shop_updated). */
 export async function listCases({
   shopId,
   status,
   limit = 50,
+  offset = 0,
 }: {
   shopId: number;
   status?: CaseStatus;
   limit?: number;
-}): Promise<CaseListItem[]> {
+  offset?: number;
+}): Promise<CaseListResponse> {
   const { Case } = getModels();
   const rows = await Case.findAll({
     where: { shopId, ...(status ? { status } : {}) },
     include: includes(),
-    order: [["updatedAt", "DESC"]],
-    limit,
+    order: [
+      ["updatedAt", "DESC"],
+      ["id", "DESC"],
+    ],
+    limit: limit + 1,
+    offset,
   });
-  return rows.map((row) => {
-    const c = row.get({ plain: true }) as unknown as Record<string, unknown> & {
-      Vehicle: VehicleRow;
-      Customer: { name: string } | null;
-      technician: { name: string };
-    };
-    return {
-      id: c.id as number,
-      status: c.status as CaseStatus,
-      complaint: c.complaint as string,
-      vehicle: describeVehicle(c.Vehicle),
-      customer: c.Customer?.name ?? null,
-      technician: c.technician.name,
-      updatedAt: (c.updatedAt as Date).toISOString(),
-    };
-  });
+  const page = pageOf(rows, { limit, offset });
+  return { cases: page.items.map(toListItem), nextOffset: page.nextOffset };
+}
+
+function toListItem(row: { get(options: { plain: true }): unknown }): CaseListItem {
+  const c = row.get({ plain: true }) as Record<string, unknown> & {
+    Vehicle: VehicleRow;
+    Customer: { name: string } | null;
+    technician: { name: string };
+  };
+  return {
+    id: c.id as number,
+    status: c.status as CaseStatus,
+    complaint: c.complaint as string,
+    vehicle: describeVehicle(c.Vehicle),
+    customer: c.Customer?.name ?? null,
+    technician: c.technician.name,
+    updatedAt: (c.updatedAt as Date).toISOString(),
+  };
 }
 
 export async function getCase({ shopId, caseId }: { shopId: number; caseId: number }): Promise<CaseDetail> {

@@ -11,7 +11,10 @@ export const metadata: Metadata = { title: "New case" };
 export default async function NewCasePage() {
   const user = await requireUser("cases:write");
   const queryClient = getQueryClient();
-  queryClient.setQueryData(vehicleKeys.choices(""), await listVehicleChoices({ shopId: user.shopId }));
+  queryClient.setQueryData(
+    vehicleKeys.choices(""),
+    (await listVehicleChoices({ shopId: user.shopId })).vehicles,
+  );
   return (
     <>
       <h1 className="mb-4 text-2xl font-bold">New case</h1>

@@ -12,7 +12,7 @@ export const metadata: Metadata = { title: "People" };
 export default async function UsersPage() {
   const user = await requireUser("users:manage");
   const queryClient = getQueryClient();
-  queryClient.setQueryData(userKeys.list(), await listUsers({ shopId: user.shopId }));
+  queryClient.setQueryData(userKeys.list(), (await listUsers({ shopId: user.shopId })).users);
   queryClient.setQueryData(invitationKeys.list(), await listInvitations({ shopId: user.shopId }));
   return (
     <>
