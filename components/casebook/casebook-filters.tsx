@@ -96,7 +96,7 @@ export function CasebookFilters({
         <summary className="flex min-h-touch cursor-pointer items-center font-bold">
           Filters{chips.length > 0 ? ` (${chips.length} in use)` : ""}
         </summary>
-        <div className="mt-3 grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
+        <div className="mt-3 grid grid-cols-1 gap-4 sm:grid-cols-2 lg:grid-cols-3 [&>*]:min-w-0">
           <div>
             <label htmlFor="facet-symptoms" className="field-label">
               {FACET_TITLES.symptoms}

@@ -111,10 +111,16 @@ export function CasebookView() {
           Export CSV{exportCapped ? ` (first ${CASEBOOK_EXPORT_MAX_ROWS.toLocaleString("en")})` : ""}
         </a>
       </div>
-      {search.isError && (
-        <p role="alert" className="card border-ember-500 text-ember-700">
-          {search.error.message} {data ? "The last results stay in view." : ""}
+      {search.fetchStatus === "paused" ? (
+        <p role="alert" className="card border-caution-500 bg-caution-50">
+          No connection: the search runs again when it is back. The last results stay in view.
         </p>
+      ) : (
+        search.isError && (
+          <p role="alert" className="card border-ember-500 text-ember-700">
+            {search.error.message} {data ? "The last results stay in view." : ""}
+          </p>
+        )
       )}
       {data && <CasebookResults data={data} params={params} onChange={(next) => go(next)} />}
     </div>

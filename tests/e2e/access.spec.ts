@@ -846,6 +846,52 @@ const ownerRoutes: typeof table = [
 ];
 table.push(...ownerRoutes);
 
+// The casebook: every role of the shop searches its own cases; another shop's case is not found.
+const signedIn = (status: number): Expectation => ({ ...everyone(status), anonymous: 401 });
+const casebookRoutes: typeof table = [
+  {
+    name: "GET /casebook (page; no session goes to sign-in)",
+    call: (c) => c.get("/casebook?q=warm&status=closed", { maxRedirects: 0 }),
+    expect: { ...everyone(200), anonymous: 307 },
+  },
+  {
+    name: "GET /api/casebook",
+    call: (c) => c.get("/api/casebook?q=warm&refrigerant=R-134a&device=orifice_tube"),
+    expect: signedIn(200),
+  },
+  {
+    name: "GET /api/casebook (malformed: unknown refrigerant, page size)",
+    call: (c) => c.get("/api/casebook?refrigerant=R-999&pageSize=7"),
+    expect: signedIn(400),
+  },
+  {
+    name: "GET /api/casebook/facets",
+    call: (c) => c.get("/api/casebook/facets?cause=condenser_airflow"),
+    expect: signedIn(200),
+  },
+  {
+    name: "GET /api/casebook/facets (malformed dates)",
+    call: (c) => c.get("/api/casebook/facets?from=2026-13-40"),
+    expect: signedIn(400),
+  },
+  {
+    name: "GET /api/casebook/export",
+    call: (c) => c.get("/api/casebook/export?status=closed"),
+    expect: signedIn(200),
+  },
+  {
+    name: "GET /api/cases/:id/similar (a Harbourline case)",
+    call: (c) => c.get(`/api/cases/${harbourlineCaseId}/similar`),
+    expect: { ...signedIn(200), otherShopOwner: 404 },
+  },
+  {
+    name: "GET /api/cases/:id/similar (not a number)",
+    call: (c) => c.get("/api/cases/abc/similar"),
+    expect: signedIn(400),
+  },
+];
+table.push(...casebookRoutes);
+
 for (const row of table) {
   test(`role × route: ${row.name}`, async () => {
     const got: Partial<Expectation> = {};

@@ -3,12 +3,12 @@ import AxeBuilder from "@axe-core/playwright";
 import { DEMO_USERS, SignInPage, type DemoRole } from "./pages/sign-in-page";
 
 const EXPECTED_NAV: Record<DemoRole, string[]> = {
-  owner: ["Cases", "Sign-off", "Spec table", "Ledger", "People"],
-  senior: ["Cases", "Sign-off", "Spec table", "Ledger"],
-  technician: ["Cases", "Spec table", "Ledger"],
-  apprentice: ["Cases", "Spec table"],
+  owner: ["Cases", "Sign-off", "Casebook", "Spec table", "Ledger", "People"],
+  senior: ["Cases", "Sign-off", "Casebook", "Spec table", "Ledger"],
+  technician: ["Cases", "Casebook", "Spec table", "Ledger"],
+  apprentice: ["Cases", "Casebook", "Spec table"],
 };
-const ALL_NAV = ["Cases", "Sign-off", "Spec table", "Ledger", "People"];
+const ALL_NAV = ["Cases", "Sign-off", "Casebook", "Spec table", "Ledger", "People"];
 const REFUSED_PAGES: Record<DemoRole, string[]> = {
   owner: [],
   senior: ["/settings/users"],

@@ -141,7 +141,7 @@ export async function searchCasebook({
             )[0]?.total ?? 0,
           );
   return {
-    rows: rows.map(toCasebookRow),
+    rows: rows.map((r) => toCasebookRow(r)),
     total,
     page: query.page,
     pageSize: query.pageSize,
