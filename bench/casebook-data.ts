@@ -13,6 +13,7 @@ import { QueryTypes, type Sequelize } from "sequelize";
 import { CAUSE_IDS, type CauseId } from "@/lib/diagnosis/causes";
 import { SYMPTOM_IDS } from "@/lib/diagnosis/symptoms";
 import { REPAIR_IDS } from "@/lib/repairs/catalog";
+import type { ExpansionDevice } from "@/lib/vehicles/expansion-devices";
 import { caseFeaturesFrom } from "@/lib/casebook/features";
 import { caseSearchText } from "@/lib/casebook/search-text";
 import { shopIndexTerms } from "@/lib/casebook/words";
@@ -178,7 +179,7 @@ const SENIOR_WORDS = [
   "Check the cycling switch before replacing parts.",
   "Nice work on the leak search.",
 ];
-const MODELS: { make: string; model: string; device: "orifice_tube" | "txv" }[] = [
+const MODELS: { make: string; model: string; device: ExpansionDevice }[] = [
   { make: "Ford", model: "F-150", device: "orifice_tube" },
   { make: "Ford", model: "Transit", device: "orifice_tube" },
   { make: "Ford", model: "Escape", device: "txv" },
@@ -446,6 +447,7 @@ export async function fillCasebookDatabase(
         ? {
             suspects: [{ cause: leading }],
             input: { ambientC, refrigerant: v.refrigerant, expansionDevice: v.device },
+            ...(computed ? { computed } : {}),
           }
         : null;
       const conclusionNotes = submitted ? sentence([rng.pick(NOTE_WORDS), rng.pick(NOTE_WORDS)]) : null;
@@ -475,7 +477,6 @@ export async function fillCasebookDatabase(
         symptoms,
         submitted ? "findings" : "running",
         { answers: {} },
-        computed,
         findings,
         submitted ? "bench" : null,
         submitted ? leading : null,
@@ -529,7 +530,7 @@ export async function fillCasebookDatabase(
       ]);
       for (const symptom of symptoms) symptomRows.push([c.shopId, symptom, c.id]);
       if (computed && findings) {
-        const f = caseFeaturesFrom(computed, findings);
+        const f = caseFeaturesFrom(findings);
         featureRows.push([
           c.id,
           c.shopId,
@@ -563,7 +564,6 @@ export async function fillCasebookDatabase(
         "symptom_tags",
         "interview_step",
         "answers",
-        "computed",
         "findings",
         "engine_version",
         "conclusion_cause",

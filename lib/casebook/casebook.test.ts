@@ -2,7 +2,8 @@ import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import Papa from "papaparse";
 import { searchWords, shopIndexTerms, shopQueryTerms, shopTermPrefix, wholeWordPattern } from "./words";
-import { caseFeaturesFrom, featureDistance, FEATURE_KEYS } from "./features";
+import { diagnose } from "@/lib/diagnosis";
+import { caseFeaturesFrom, draftFeaturesFrom, featureDistance, FEATURE_KEYS } from "./features";
 import { neighbourSummary, neighbourSummaryLine } from "./summary";
 import { casebookCsv } from "./csv";
 import { casebookSearchString, readCasebookParams, withParams } from "./url";
@@ -44,8 +45,8 @@ describe("search words", () => {
 
 describe("similar-case features", () => {
   it("reads the engine's computed values and the ambient from a findings snapshot", () => {
-    const f = caseFeaturesFrom(
-      {
+    const f = caseFeaturesFrom({
+      computed: {
         condensingC: 55.123,
         evaporatingC: 1.2,
         subcoolingK: 6,
@@ -53,8 +54,8 @@ describe("similar-case features", () => {
         condensingApproachK: 25,
         chargeDeltaPct: -12.34,
       },
-      { input: { ambientC: 30 } },
-    );
+      input: { ambientC: 30 },
+    });
     expect(f).toEqual({
       condensingC: 55.12,
       evaporatingC: 1.2,
@@ -64,11 +65,31 @@ describe("similar-case features", () => {
       ambientC: 30,
       chargeDeviationPct: -12.3,
     });
-    expect(caseFeaturesFrom(null, null).condensingC).toBeNull();
+    expect(caseFeaturesFrom(null).condensingC).toBeNull();
+  });
+
+  it("gives a draft the same readings the engine computes at submit, without the charge deviation", () => {
+    const readings = {
+      refrigerant: "R-134a",
+      expansionDevice: "orifice_tube",
+      ambientC: 32,
+      highKpaGauge: 1450,
+      lowKpaGauge: 240,
+      liquidLineC: 48,
+      suctionLineC: 9,
+    } as const;
+    const draft = draftFeaturesFrom(readings);
+    const submitted = caseFeaturesFrom({ computed: diagnose(readings).computed, input: readings });
+    expect(draft.condensingC).not.toBeNull();
+    expect(draft.superheatK).not.toBeNull();
+    expect(draft).toEqual({ ...submitted, chargeDeviationPct: null });
+    expect(draftFeaturesFrom(null)).toEqual(caseFeaturesFrom(null));
+    // An altitude outside the standard atmosphere is no reading at all, not an error.
+    expect(draftFeaturesFrom({ ...readings, altitudeM: 1e6 }).condensingC).toBeNull();
   });
 
   it("measures distance in typical spreads, zero for the same readings, a penalty for a missing one", () => {
-    const a = caseFeaturesFrom({ condensingC: 55, evaporatingC: 2 }, { input: { ambientC: 30 } });
+    const a = caseFeaturesFrom({ computed: { condensingC: 55, evaporatingC: 2 }, input: { ambientC: 30 } });
     expect(featureDistance(a, a)).toBe(0);
     const b = { ...a, condensingC: 61 }; // one spread (6 K) away on one of three readings
     expect(featureDistance(a, b)).toBeCloseTo(Math.sqrt(1 / 3), 6);

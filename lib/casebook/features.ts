@@ -1,4 +1,5 @@
 import type { CaseFeatureValues } from "@/lib/contracts/casebook";
+import { runningPhysics, type RunningPhysics, type RunningReadings } from "@/lib/refrigerants/readings";
 
 export const FEATURE_KEYS = [
   "condensingC",
@@ -48,12 +49,17 @@ const round = (v: number | null, decimals = 2) =>
   v === null ? null : Math.round(v * 10 ** decimals) / 10 ** decimals;
 
 /**
- * The readings a case is compared on, from its stored findings: the engine's computed values (saturation
- * temperatures, subcooling, superheat, approach, charge deviation) and the ambient it was given.
+ * The readings a case is compared on, from its stored findings snapshot: the engine's computed values
+ * (findings.computed: saturation temperatures, subcooling, superheat, approach, charge deviation) and the
+ * ambient it was given (findings.input).
  */
-export function caseFeaturesFrom(computed: unknown, findings: unknown): CaseFeatureValues {
-  const c = (computed ?? {}) as Record<string, unknown>;
-  const input = ((findings ?? {}) as { input?: Record<string, unknown> }).input ?? {};
+export function caseFeaturesFrom(findings: unknown): CaseFeatureValues {
+  const snapshot = (findings ?? {}) as {
+    computed?: Record<string, unknown>;
+    input?: Record<string, unknown>;
+  };
+  const c = snapshot.computed ?? {};
+  const input = snapshot.input ?? {};
   // A transcritical R-744 high side has no condensing temperature; the engine leaves it out.
   return {
     condensingC: round(finite(c.condensingC)),
@@ -64,6 +70,25 @@ export function caseFeaturesFrom(computed: unknown, findings: unknown): CaseFeat
     ambientC: round(finite(input.ambientC)),
     chargeDeviationPct: round(finite(c.chargeDeltaPct), 1),
   };
+}
+
+/**
+ * The readings of a case not yet submitted (no findings snapshot), from its running readings through the
+ * same physics the interview's readouts and the engine use. No charge deviation: that needs the charge audit
+ * the engine does at submit. Readings off the tables, or an altitude outside the standard atmosphere, give
+ * nothing rather than an error.
+ */
+export function draftFeaturesFrom(readings: RunningReadings | null): CaseFeatureValues {
+  const none = caseFeaturesFrom(null);
+  if (!readings) return none;
+  let physics: RunningPhysics;
+  try {
+    physics = runningPhysics(readings);
+  } catch (error) {
+    if (error instanceof RangeError) return none;
+    throw error;
+  }
+  return caseFeaturesFrom({ computed: physics, input: { ambientC: readings.ambientC } });
 }
 
 export function presentFeatures(features: CaseFeatureValues): FeatureKey[] {

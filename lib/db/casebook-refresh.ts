@@ -188,7 +188,7 @@ export async function refreshCasebookEntry({
       { transaction },
     );
 
-  const features = caseFeaturesFrom(row.computed, row.findings);
+  const features = caseFeaturesFrom(row.findings);
   if (row.findings && refrigerant && meteringDevice && presentFeatures(features).length > 0) {
     await CaseFeatures.upsert(
       {

@@ -109,7 +109,7 @@ describe("the casebook search", () => {
     const years = await search(harbourline, { yearFrom: "2016", yearTo: "2016" });
     expect(caseIds(years)).toContain(ids.sierra);
     expect(years.rows.every((r) => r.vehicle?.startsWith("2016 "))).toBe(true);
-    const closed = await search(harbourline, { status: "closed", sort: "opened", dir: "asc" });
+    const closed = await search(harbourline, { status: "closed", sort: "opened_at", dir: "asc" });
     expect(caseIds(closed).slice(0, 2)).toEqual([ids.fanRelay, ids.sierra]);
     const comebacks = await search(harbourline, { comeback: "1" });
     expect(new Set(caseIds(comebacks))).toEqual(new Set([ids.warmAgain, ids.fanRelay]));
@@ -117,7 +117,7 @@ describe("the casebook search", () => {
     const all = await search(harbourline, { pageSize: "100" });
     expect(all.total).toBe(inShop);
     expect(all.rows).toHaveLength(inShop);
-    const first = await search(harbourline, { pageSize: "10", sort: "opened", dir: "asc" });
+    const first = await search(harbourline, { pageSize: "10", sort: "opened_at", dir: "asc" });
     const past = await search(harbourline, { pageSize: "10", page: "9" });
     expect(first.rows.map((r) => r.openedAt)).toEqual([...first.rows.map((r) => r.openedAt)].sort());
     expect(past.rows).toEqual([]);
@@ -217,7 +217,7 @@ describe("similar cases", () => {
       meteringDevice: "orifice_tube",
     });
     expect(Boolean(stored?.closed)).toBe(true);
-    const expected = caseFeaturesFrom(row?.computed, row?.findings);
+    const expected = caseFeaturesFrom(row?.findings);
     expect(stored?.condensingC).toBeCloseTo(expected.condensingC ?? Number.NaN, 1);
     expect(stored?.ambientC).toBe(33);
   });
@@ -374,7 +374,7 @@ describe("EXPLAIN", () => {
   it("reads the nearest closed cases from case_features_nearest", async () => {
     const { Case } = getModels();
     const row = await Case.findByPk(ids.warmAgain, { raw: true });
-    const features = caseFeaturesFrom(row?.computed, row?.findings);
+    const features = caseFeaturesFrom(row?.findings);
     for (const bounded of [true, false]) {
       const { sql, replacements } = nearestSql(features, bounded);
       const plan = await explain(sql, {

@@ -13,9 +13,11 @@ import {
   FEATURE_COLUMNS,
   FEATURE_SCALES,
   MISSING_FEATURE_PENALTY,
-  caseFeaturesFrom,
+  draftFeaturesFrom,
   presentFeatures,
 } from "@/lib/casebook/features";
+import { sortSavedAnswers } from "@/lib/interview/validate";
+import { diagnosisInputFor } from "@/lib/interview/to-diagnosis-input";
 import { neighbourSummary } from "@/lib/casebook/summary";
 import type { Replacements } from "./filters";
 import { vehicleLabel } from "./search";
@@ -40,16 +42,17 @@ function featuresOf(row: FeatureRow): CaseFeatureValues {
   return values;
 }
 
-/** A case without stored readings (a draft): what its interview holds so far. */
+/** A case without stored readings (a draft): what its interview holds so far, on its route. */
 async function draftFeatures(shopId: number, caseId: number): Promise<CaseFeatureValues> {
-  const row = await getModels().Case.findOne({
-    where: { id: caseId, shopId },
-    attributes: ["computed", "findings", "answers"],
-    raw: true,
-  });
-  const ambient = (row?.answers as { answers?: { conditions?: { ambientC?: unknown } } } | null)?.answers
-    ?.conditions?.ambientC;
-  return caseFeaturesFrom(row?.computed, row?.findings ?? { input: { ambientC: ambient } });
+  const { Case, Shop } = getModels();
+  const [row, shop] = await Promise.all([
+    Case.findOne({ where: { id: caseId, shopId }, attributes: ["answers"], raw: true }),
+    Shop.findByPk(shopId, { attributes: ["altitudeM"], raw: true }),
+  ]);
+  const saved = (row?.answers as { answers?: unknown } | null)?.answers;
+  const settings = { altitudeM: shop?.altitudeM ?? undefined };
+  const input = saved ? diagnosisInputFor(sortSavedAnswers(saved, settings).answers, settings) : null;
+  return draftFeaturesFrom(input);
 }
 
 /**
