@@ -18,7 +18,7 @@ const confirmedNames = (row: CasebookRow) =>
 
 /** Columns the server can sort by; the others show what the case holds. */
 const SORT_OF: Partial<Record<string, CasebookSort>> = {
-  opened: "opened",
+  opened: "opened_at",
   vehicle: "vehicle",
   status: "status",
 };
@@ -60,8 +60,8 @@ const columns: ColumnDef<typeof features, CasebookRow>[] = [
 
 const SORT_LABELS: Record<CasebookSort, string> = {
   relevance: "Best match",
-  opened: "Date opened",
-  closed: "Date closed",
+  opened_at: "Date opened",
+  closed_at: "Date closed",
   vehicle: "Vehicle",
   status: "Status",
 };
@@ -79,8 +79,8 @@ export function CasebookResults({
   const table = useTable({ features, columns, data: data.rows });
   const pages = Math.max(1, Math.ceil(data.total / data.pageSize));
   const sorts: CasebookSort[] = params.q
-    ? ["relevance", "opened", "closed", "vehicle", "status"]
-    : ["opened", "closed", "vehicle", "status"];
+    ? ["relevance", "opened_at", "closed_at", "vehicle", "status"]
+    : ["opened_at", "closed_at", "vehicle", "status"];
 
   if (data.rows.length === 0)
     return (

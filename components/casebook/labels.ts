@@ -1,8 +1,8 @@
 import { CAUSE_LABELS, type CauseId } from "@/lib/diagnosis/causes";
 import { SYMPTOM_LABELS, type SymptomId } from "@/lib/diagnosis/symptoms";
-import { COMPRESSOR_TYPE_LABELS, METERING_DEVICE_LABELS, confirmedCauseLabel } from "@/lib/casebook/labels";
+import { COMPRESSOR_TYPE_LABELS, confirmedCauseLabel, meteringDeviceLabel } from "@/lib/casebook/labels";
 import type { CasebookFacet } from "@/lib/contracts/casebook";
-import { STATUS_LABELS } from "@/components/cases/status-badge";
+import { CASE_STATUS_LABELS } from "@/lib/cases/statuses";
 
 /** How each facet's values read on screen. */
 export function facetValueLabel(facet: CasebookFacet, value: string, label?: string): string {
@@ -10,7 +10,7 @@ export function facetValueLabel(facet: CasebookFacet, value: string, label?: str
     case "symptoms":
       return SYMPTOM_LABELS[value as SymptomId] ?? value;
     case "device":
-      return METERING_DEVICE_LABELS[value] ?? value;
+      return meteringDeviceLabel(value);
     case "compressor":
       return COMPRESSOR_TYPE_LABELS[value as keyof typeof COMPRESSOR_TYPE_LABELS] ?? value;
     case "suspect":
@@ -18,7 +18,7 @@ export function facetValueLabel(facet: CasebookFacet, value: string, label?: str
     case "cause":
       return confirmedCauseLabel(value);
     case "status":
-      return STATUS_LABELS[value as keyof typeof STATUS_LABELS] ?? value;
+      return CASE_STATUS_LABELS[value as keyof typeof CASE_STATUS_LABELS] ?? value;
     case "technician":
       return label ?? value;
     case "comeback":

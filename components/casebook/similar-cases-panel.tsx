@@ -4,7 +4,7 @@ import Link from "next/link";
 import { useQuery } from "@tanstack/react-query";
 import { similarCasesQuery } from "@/lib/queries/casebook";
 import { neighbourSummaryLine } from "@/lib/casebook/summary";
-import { confirmedCauseShortName, METERING_DEVICE_LABELS } from "@/lib/casebook/labels";
+import { confirmedCauseShortName, meteringDeviceLabel } from "@/lib/casebook/labels";
 import { REPAIR_CATALOG, isRepairId } from "@/lib/repairs/catalog";
 import type { SimilarCasesResponse } from "@/lib/contracts/casebook";
 import { shortDate } from "./labels";
@@ -30,7 +30,7 @@ export function SimilarCasesPanel({ caseId, initial }: { caseId: number; initial
         <>
           <p className="mt-1 text-sm text-ink-soft">
             Same refrigerant ({data.refrigerant ?? "—"}) and metering device (
-            {data.meteringDevice ? (METERING_DEVICE_LABELS[data.meteringDevice] ?? data.meteringDevice) : "—"}
+            {data.meteringDevice ? meteringDeviceLabel(data.meteringDevice) : "—"}
             ), nearest first in condensing and evaporating temperature, subcooling, superheat, approach,
             ambient and charge. What they turned out to be is a lead to check, not a diagnosis.
           </p>

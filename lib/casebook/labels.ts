@@ -1,5 +1,6 @@
 import { CAUSE_LABELS, CAUSE_SHORT_NAMES, type CauseId } from "@/lib/diagnosis/causes";
 import type { CasebookCompressorType } from "@/lib/contracts/casebook";
+import { EXPANSION_DEVICE_LABELS, isExpansionDevice } from "@/lib/vehicles/expansion-devices";
 
 const isCause = (id: string): id is CauseId => id in CAUSE_LABELS;
 
@@ -14,10 +15,10 @@ export function confirmedCauseShortName(id: string): string {
   return isCause(id) ? CAUSE_SHORT_NAMES[id] : id;
 }
 
-export const METERING_DEVICE_LABELS: Record<string, string> = {
-  orifice_tube: "Orifice tube",
-  txv: "TXV",
-};
+/** The metering device's one wording (lib/vehicles/expansion-devices.ts), or the stored value as it is. */
+export function meteringDeviceLabel(id: string): string {
+  return isExpansionDevice(id) ? EXPANSION_DEVICE_LABELS[id] : id;
+}
 
 export const COMPRESSOR_TYPE_LABELS: Record<CasebookCompressorType, string> = {
   cycling_clutch: "Cycling clutch",

@@ -1,7 +1,8 @@
 import { z } from "zod";
 import { CAUSE_IDS } from "@/lib/diagnosis/causes";
 import { SYMPTOM_IDS } from "@/lib/diagnosis/symptoms";
-import { expansionDeviceChoices, refrigerantChoices } from "@/lib/interview/choices";
+import { REFRIGERANT_IDS } from "@/lib/refrigerants/catalog";
+import { EXPANSION_DEVICE_IDS } from "@/lib/vehicles/expansion-devices";
 import { REPAIR_IDS } from "@/lib/repairs/catalog";
 import { CASE_STATUSES, type CaseStatus } from "./cases";
 
@@ -9,15 +10,16 @@ import { CASE_STATUSES, type CaseStatus } from "./cases";
 export const CONFIRMED_CAUSE_IDS = [...CAUSE_IDS, "none_found"] as const;
 export type ConfirmedCauseId = (typeof CONFIRMED_CAUSE_IDS)[number];
 
-// The vehicle table also keeps R-12 for old systems that were never converted.
-export const CASEBOOK_REFRIGERANTS = [...refrigerantChoices, "R-12"] as const;
-export const CASEBOOK_METERING_DEVICES = expansionDeviceChoices;
+// Every refrigerant a vehicle record can hold: a search finds past cases, it offers no refrigerant for
+// service (the facet lists only the values the shop's cases have).
+export const CASEBOOK_REFRIGERANTS = REFRIGERANT_IDS;
+export const CASEBOOK_METERING_DEVICES = EXPANSION_DEVICE_IDS;
 // How the compressor is driven. Main's vehicle record says only whether it is electric; a case's findings
 // input may name the type as the findings engine learns it.
 export const CASEBOOK_COMPRESSOR_TYPES = ["cycling_clutch", "variable_displacement", "electric"] as const;
 export type CasebookCompressorType = (typeof CASEBOOK_COMPRESSOR_TYPES)[number];
 
-export const CASEBOOK_SORTS = ["relevance", "opened", "closed", "vehicle", "status"] as const;
+export const CASEBOOK_SORTS = ["relevance", "opened_at", "closed_at", "vehicle", "status"] as const;
 export type CasebookSort = (typeof CASEBOOK_SORTS)[number];
 export const CASEBOOK_PAGE_SIZES = [10, 25, 50, 100] as const;
 export const CASEBOOK_MAX_PAGE = 400;

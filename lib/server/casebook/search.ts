@@ -17,7 +17,7 @@ function orderBy(sort: CasebookSort, dir: "asc" | "desc", prefix = "e."): string
   switch (sort) {
     case "relevance":
       return `relevance DESC, ${prefix}opened_at DESC, ${prefix}case_id DESC`;
-    case "closed":
+    case "closed_at":
       return `${prefix}closed_at ${d}, ${prefix}case_id ${d}`;
     case "vehicle":
       return `${prefix}make ${d}, ${prefix}model ${d}, ${prefix}year ${d}, ${prefix}case_id ${d}`;
@@ -31,8 +31,8 @@ function orderBy(sort: CasebookSort, dir: "asc" | "desc", prefix = "e."): string
 export function resolveSort(query: Pick<CasebookSearchQuery, "sort" | "dir">, where: CasebookWhere) {
   const sort: CasebookSort =
     query.sort === "relevance" && !where.relevanceSql
-      ? "opened"
-      : (query.sort ?? (where.relevanceSql ? "relevance" : "opened"));
+      ? "opened_at"
+      : (query.sort ?? (where.relevanceSql ? "relevance" : "opened_at"));
   const dir = query.dir ?? (sort === "vehicle" || sort === "status" ? "asc" : "desc");
   return { sort, dir } as const;
 }
