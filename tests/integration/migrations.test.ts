@@ -11,6 +11,11 @@ import { integrationDb, repoRoot, settingsFromUrl } from "./helpers";
 const appTables = [
   "attachment",
   "audit_event",
+  "casebook_entry",
+  "casebook_symptom",
+  "case_confirmed_cause",
+  "case_features",
+  "case_repair",
   "customer",
   "cylinder",
   "outbound_email",
