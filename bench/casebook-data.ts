@@ -7,6 +7,8 @@
 //
 // Everything here is generated: shops, people, vehicles, words and readings are invented scenarios.
 import { execFileSync } from "node:child_process";
+import { createHash } from "node:crypto";
+import { readFileSync, readdirSync } from "node:fs";
 import path from "node:path";
 import { randomBytes } from "node:crypto";
 import { QueryTypes, type Sequelize } from "sequelize";
@@ -22,6 +24,32 @@ export const BENCH_PASSWORD = "bench-only-password";
 const REPO = path.resolve(__dirname, "..");
 const dayMs = 86_400_000;
 const BUFFER_POOL_BYTES = 1024 * 1048576;
+const BENCH_DB_NAME = "chillwright_bench";
+
+/**
+ * What a filled database was made from: this generator, the casebook code that shapes its rows (words,
+ * search text, readings), the migrations and the size asked for. A database with another stamp (or none:
+ * filled by an older generator, or interrupted) is dropped and filled again rather than measured stale.
+ */
+function fillStamp(shops: number, cases: number): string {
+  const hash = createHash("sha256");
+  const files = [
+    "bench/casebook-data.ts",
+    ...readdirSync(path.join(REPO, "lib/casebook"))
+      .filter((f) => f.endsWith(".ts") && !f.endsWith(".test.ts"))
+      .map((f) => `lib/casebook/${f}`),
+    ...readdirSync(path.join(REPO, "migrations")).map((f) => `migrations/${f}`),
+  ].sort();
+  for (const file of files) hash.update(file).update(readFileSync(path.join(REPO, file)));
+  return `${hash.digest("hex").slice(0, 16)}:${shops}:${cases}`;
+}
+
+function rootSql(dir: string, sql: string): string {
+  return execFileSync("mariadb", ["--no-defaults", `--socket=${dir}/sock`, "-uroot", "-N", "-B", "-e", sql], {
+    encoding: "utf8",
+    stdio: ["ignore", "pipe", "pipe"],
+  });
+}
 
 export interface BenchDatabaseOptions {
   dir?: string;
@@ -652,11 +680,25 @@ export async function ensureBenchDatabase(options: BenchDatabaseOptions = {}) {
   const shops = options.shops ?? Number(process.env.BENCH_SHOPS ?? 50);
   const cases = options.cases ?? Number(process.env.BENCH_CASES ?? 100_000);
   const log = options.log ?? ((line: string) => console.log(line));
-  const env = { ...process.env, DB_DIR: dir, DB_PORT: String(port), DB_NAME: "chillwright_bench" };
+  const env = { ...process.env, DB_DIR: dir, DB_PORT: String(port), DB_NAME: BENCH_DB_NAME };
   execFileSync("bash", [path.join(REPO, "scripts/db.sh"), "up"], {
     env,
     stdio: ["ignore", "ignore", "inherit"],
   });
+  const stamp = fillStamp(shops, cases);
+  let filledWith = "";
+  try {
+    filledWith = rootSql(dir, `SELECT stamp FROM \`${BENCH_DB_NAME}\`.bench_fill LIMIT 1`).trim();
+  } catch {
+    // no stamp table: an empty database, or one an older generator filled
+  }
+  if (filledWith !== stamp) {
+    log(`${dir}: not filled by this generator and size (${filledWith || "no stamp"}); filling it afresh`);
+    rootSql(
+      dir,
+      `DROP DATABASE IF EXISTS \`${BENCH_DB_NAME}\`; CREATE DATABASE \`${BENCH_DB_NAME}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`,
+    );
+  }
   // db.sh starts MariaDB with its defaults (a 128 MB buffer pool); a server holding 100,000 cases gets
   // room for its working set, as any production server would be sized.
   execFileSync("mariadb", [
@@ -690,6 +732,9 @@ export async function ensureBenchDatabase(options: BenchDatabaseOptions = {}) {
       passwordHash: await hashPassword(BENCH_PASSWORD),
       log,
     });
+    // The stamp goes in last, so an interrupted fill is redone next time.
+    await sequelize.query("CREATE TABLE bench_fill (stamp VARCHAR(64) NOT NULL)");
+    await sequelize.query("INSERT INTO bench_fill (stamp) VALUES (?)", { replacements: [stamp] });
     log(`filled in ${((performance.now() - started) / 1000).toFixed(0)} s`);
   } else {
     log(`reusing ${dir}: ${present} cases already there`);

@@ -3,9 +3,10 @@
 // connections on (1) a search with words and two facets and (2) similar cases. Prints p50, p95, p99 and
 // requests per second for each, and the machine's load. Figures to read: nothing here passes or fails.
 //
-//   npm run bench:casebook           (BENCH_SECONDS=20, BENCH_CONNECTIONS=50, BENCH_PORT=3540 move it)
+//   npm run bench:casebook           (BENCH_SECONDS=20, BENCH_CONNECTIONS=50, BENCH_PORT=3540 move it;
+//                                     BENCH_KEEP_DB=1 leaves the database's server running afterwards)
 import { spawn, execFileSync, type ChildProcess } from "node:child_process";
-import { existsSync } from "node:fs";
+import { existsSync, readdirSync, statSync } from "node:fs";
 import { loadavg } from "node:os";
 import path from "node:path";
 import { randomBytes } from "node:crypto";
@@ -99,9 +100,10 @@ async function load(name: string, targets: Target[]) {
 
 async function main() {
   const started = loadavg();
-  const { databaseUrl } = await ensureBenchDatabase();
-  if (!existsSync(path.join(REPO, ".next/BUILD_ID"))) {
-    console.log("no production build yet: running next build…");
+  const { databaseUrl, env: dbEnv } = await ensureBenchDatabase();
+  const buildId = path.join(REPO, ".next/BUILD_ID");
+  if (!existsSync(buildId) || statSync(buildId).mtimeMs < newestSourceMs()) {
+    console.log("no production build of the current code: running next build…");
     execFileSync("npx", ["next", "build"], { cwd: REPO, stdio: "inherit" });
   }
   const { getModels } = await import("@/models");
@@ -168,7 +170,37 @@ async function main() {
     );
   } finally {
     server.kill("SIGTERM");
+    // The filled database stays in its folder for the next run (or another benchmark); its server stops.
+    if (process.env.BENCH_KEEP_DB !== "1")
+      execFileSync("bash", [path.join(REPO, "scripts/db.sh"), "down"], { env: dbEnv, stdio: "ignore" });
   }
+}
+
+/** When the app's code last changed: a build older than this would measure other code. */
+function newestSourceMs(): number {
+  let newest = 0;
+  const visit = (entry: string) => {
+    const full = path.join(REPO, entry);
+    if (!existsSync(full)) return;
+    const stat = statSync(full);
+    if (stat.isDirectory()) for (const child of readdirSync(full)) visit(path.join(entry, child));
+    else newest = Math.max(newest, stat.mtimeMs);
+  };
+  for (const entry of [
+    "app",
+    "components",
+    "lib",
+    "machines",
+    "models",
+    "migrations",
+    "data",
+    "proxy.ts",
+    "instrumentation-client.ts",
+    "next.config.mjs",
+    "package-lock.json",
+  ])
+    visit(entry);
+  return newest;
 }
 
 async function warm(search: Target[], similar: Target[]) {
