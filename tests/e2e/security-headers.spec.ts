@@ -205,7 +205,16 @@ test("the app runs under its CSP: no violation on any main page", async ({ page 
   await expect(page.getByRole("heading", { level: 1 })).toBeVisible();
   expect(await violations(), "/credits").toEqual([]);
   await new SignInPage(page).signInAs("owner");
-  for (const path of ["/cases", "/cases/new", "/specs", "/ledger", "/signoff", "/settings/users"]) {
+  for (const path of [
+    "/cases",
+    "/cases/new",
+    "/casebook",
+    "/casebook?q=warm&status=closed",
+    "/specs",
+    "/ledger",
+    "/signoff",
+    "/settings/users",
+  ]) {
     await page.goto(path);
     await expect(page.getByRole("navigation", { name: "Main" })).toBeVisible();
     expect(await violations(), path).toEqual([]);
