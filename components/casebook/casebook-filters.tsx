@@ -201,7 +201,7 @@ function RangeFields({
     if (a !== from.value || b !== to.value) onCommit(a.trim(), b.trim());
   };
   const input = (f: { id: string; label: string }, value: string, setValue: (v: string) => void) => (
-    <div className="flex-1">
+    <div className="min-w-0 flex-1">
       <label htmlFor={f.id} className="text-base">
         {f.label}
       </label>
@@ -220,7 +220,8 @@ function RangeFields({
   return (
     <fieldset>
       <legend className="field-label">{legend}</legend>
-      <div className="flex gap-2">
+      {/* A date field is too wide for two side by side on a phone: they stack there. */}
+      <div className={type === "date" ? "flex flex-col gap-2 sm:flex-row" : "flex gap-2"}>
         {input(from, a, setA)}
         {input(to, b, setB)}
       </div>
