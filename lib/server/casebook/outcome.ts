@@ -2,14 +2,13 @@ import "server-only";
 import type { User } from "lucia";
 import { getModels } from "@/models";
 import { AppError } from "@/lib/errors";
-import { mayChangeCase } from "@/lib/auth/case-access";
+import { caseRefusal } from "@/lib/cases/rules";
 import type { CaseOutcomeInput } from "@/lib/contracts/casebook";
 import { recordAudit } from "../audit";
 import { refreshCasebookEntry } from "./refresh";
 
-// A diagnosis is confirmed only after the repair: a case closes once it has been submitted and, for an
-// apprentice, signed off. Closing again replaces the recorded outcome.
-const CLOSABLE = new Set(["signed_off", "closed"]);
+// A diagnosis is confirmed only after the repair: a case closes by the case rules (lib/cases/rules.ts: once
+// signed off). Recording the outcome of a case already closed replaces it, for whoever may work on the case.
 
 /**
  * Records what the repair confirmed and what was done, and closes the case: the confirmed causes and the
@@ -35,10 +34,8 @@ export async function recordCaseOutcome({
       lock: transaction.LOCK.UPDATE,
     });
     if (!row) throw new AppError("not_found:case", "No such case in this shop.");
-    if (!mayChangeCase(user, row))
-      throw new AppError("forbidden:case", "Only the case's technician or a senior can close this case.");
-    if (!CLOSABLE.has(row.status))
-      throw new AppError("conflict:case", "A case closes after its diagnosis is submitted and signed off.");
+    const refusal = caseRefusal(row.status === "closed" ? "work_on" : "close", user, row);
+    if (refusal) throw new AppError(refusal.code, refusal.message);
     const uniqueCauses = [...new Set(causes)];
     const uniqueRepairs = [...new Set(repairIds)];
     await CaseConfirmedCause.destroy({ where: { shopId, caseId }, transaction });

@@ -1,7 +1,7 @@
 import "server-only";
 import { getModels } from "@/models";
 import type { CaseDetail, CaseListItem, CaseListResponse, CaseStatus } from "@/lib/contracts/cases";
-import { pageOf } from "./paging";
+import { pageOf } from "../paging";
 import { AppError } from "@/lib/errors";
 import type { Role } from "@/lib/auth/roles";
 

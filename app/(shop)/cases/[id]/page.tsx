@@ -3,6 +3,7 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { requireUser } from "@/lib/auth/guard";
 import { caseAbilities } from "@/lib/cases/rules";
+import { can } from "@/lib/auth/roles";
 import { getCase } from "@/lib/server/cases";
 import { isAppError } from "@/lib/errors";
 import { EXPANSION_DEVICE_LABELS, isExpansionDevice } from "@/lib/vehicles/expansion-devices";
