@@ -1,5 +1,5 @@
 import { CAUSE_LABELS, CAUSE_SHORT_NAMES, type CauseId } from "@/lib/diagnosis/causes";
-import type { CasebookCompressorType } from "@/lib/contracts/casebook";
+import { COMPRESSOR_TYPE_LABELS } from "@/lib/vehicles/compressor-types";
 import { EXPANSION_DEVICE_LABELS, isExpansionDevice } from "@/lib/vehicles/expansion-devices";
 
 const isCause = (id: string): id is CauseId => id in CAUSE_LABELS;
@@ -20,8 +20,5 @@ export function meteringDeviceLabel(id: string): string {
   return isExpansionDevice(id) ? EXPANSION_DEVICE_LABELS[id] : id;
 }
 
-export const COMPRESSOR_TYPE_LABELS: Record<CasebookCompressorType, string> = {
-  cycling_clutch: "Cycling clutch",
-  variable_displacement: "Variable displacement",
-  electric: "Electric (high voltage)",
-};
+/** The compressor types' one wording (lib/vehicles/compressor-types.ts). */
+export { COMPRESSOR_TYPE_LABELS };

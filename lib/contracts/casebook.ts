@@ -5,6 +5,7 @@ import { REFRIGERANT_IDS } from "@/lib/refrigerants/catalog";
 import { EXPANSION_DEVICE_IDS } from "@/lib/vehicles/expansion-devices";
 import { REPAIR_IDS } from "@/lib/repairs/catalog";
 import { CASE_STATUSES, type CaseStatus } from "./cases";
+import { COMPRESSOR_TYPES, type CompressorType } from "@/lib/vehicles/compressor-types";
 
 /** What a repair can confirm: a cause the findings rank, or that no fault was found. */
 export const CONFIRMED_CAUSE_IDS = [...CAUSE_IDS, "none_found"] as const;
@@ -14,10 +15,9 @@ export type ConfirmedCauseId = (typeof CONFIRMED_CAUSE_IDS)[number];
 // service (the facet lists only the values the shop's cases have).
 export const CASEBOOK_REFRIGERANTS = REFRIGERANT_IDS;
 export const CASEBOOK_METERING_DEVICES = EXPANSION_DEVICE_IDS;
-// How the compressor is driven. Main's vehicle record says only whether it is electric; a case's findings
-// input may name the type as the findings engine learns it.
-export const CASEBOOK_COMPRESSOR_TYPES = ["cycling_clutch", "variable_displacement", "electric"] as const;
-export type CasebookCompressorType = (typeof CASEBOOK_COMPRESSOR_TYPES)[number];
+// How the compressor is driven: the vehicle's type, or the one the case's findings input names.
+export const CASEBOOK_COMPRESSOR_TYPES = COMPRESSOR_TYPES;
+export type CasebookCompressorType = CompressorType;
 
 export const CASEBOOK_SORTS = ["relevance", "opened_at", "closed_at", "vehicle", "status"] as const;
 export type CasebookSort = (typeof CASEBOOK_SORTS)[number];

@@ -17,10 +17,14 @@ export function leadingSuspectOf(findings: unknown): string | null {
   return typeof cause === "string" && causeIds.has(cause) ? cause : null;
 }
 
-function compressorTypeOf(findings: unknown, electric: boolean | undefined): string | null {
+function compressorTypeOf(
+  findings: unknown,
+  vehicle: { electricCompressor?: boolean; compressorType?: string | null } | null,
+): string | null {
   const named = (findings as { input?: { compressorType?: unknown } } | null)?.input?.compressorType;
-  if (typeof named === "string" && compressorTypes.has(named)) return named;
-  return electric ? "electric" : null;
+  if (typeof named === "string" && named !== "unknown" && compressorTypes.has(named)) return named;
+  if (vehicle?.compressorType && compressorTypes.has(vehicle.compressorType)) return vehicle.compressorType;
+  return vehicle?.electricCompressor ? "electric" : null;
 }
 
 /**
@@ -52,7 +56,15 @@ export async function refreshCasebookEntry({
     row.vehicleId
       ? Vehicle.findOne({
           where: { id: row.vehicleId, shopId },
-          attributes: ["make", "model", "year", "refrigerant", "expansionDevice", "electricCompressor"],
+          attributes: [
+            "make",
+            "model",
+            "year",
+            "refrigerant",
+            "expansionDevice",
+            "electricCompressor",
+            "compressorType",
+          ],
           ...options,
         })
       : null,
@@ -144,10 +156,7 @@ export async function refreshCasebookEntry({
       year: vehicle?.year ?? null,
       refrigerant,
       meteringDevice,
-      compressorType: compressorTypeOf(
-        row.findings,
-        vehicle ? Boolean(vehicle.electricCompressor) : undefined,
-      ),
+      compressorType: compressorTypeOf(row.findings, vehicle),
       leadingSuspect: leadingSuspectOf(row.findings),
       outcome: confirmedCauses[0] ?? null,
       openedAt: row.createdAt,

@@ -53,7 +53,7 @@ function orificeCase(c: {
       system: {
         refrigerant: "R-134a",
         expansionDevice: "orifice_tube",
-        electricCompressor: false,
+        compressorType: "cycling_clutch",
         labelChargeG: c.labelChargeG,
         oilType: "pag",
       },

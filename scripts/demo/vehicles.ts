@@ -105,7 +105,7 @@ export const demoVehicles: DemoVehicle[] = [
     labelChargeG: 450,
     oilType: "PAG 46",
   },
-  // For the casebook: two more fleet vehicles, a second car, and a second Ridgeback vehicle.] = [
+  // For the casebook: two more fleet vehicles, a second car, and a second Ridgeback vehicle.
   {
     key: "transit",
     customerKey: "tidewater",
@@ -116,6 +116,7 @@ export const demoVehicles: DemoVehicle[] = [
     refrigerant: "R-134a",
     expansionDevice: "orifice_tube",
     electricCompressor: false,
+    compressorType: "cycling_clutch",
     labelChargeG: 910,
     oilType: "PAG 46",
   },
@@ -129,6 +130,7 @@ export const demoVehicles: DemoVehicle[] = [
     refrigerant: "R-134a",
     expansionDevice: "orifice_tube",
     electricCompressor: false,
+    compressorType: "cycling_clutch",
     labelChargeG: 740,
     oilType: "PAG 150",
   },
@@ -142,6 +144,7 @@ export const demoVehicles: DemoVehicle[] = [
     refrigerant: "R-134a",
     expansionDevice: "orifice_tube",
     electricCompressor: false,
+    compressorType: "cycling_clutch",
     labelChargeG: 650,
     oilType: "PAG 46",
   },
@@ -155,6 +158,7 @@ export const demoVehicles: DemoVehicle[] = [
     refrigerant: "R-134a",
     expansionDevice: "orifice_tube",
     electricCompressor: false,
+    compressorType: "cycling_clutch",
     labelChargeG: 620,
     oilType: "PAG 46",
   },
