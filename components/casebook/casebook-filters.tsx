@@ -29,6 +29,12 @@ export function CasebookFilters({
 }) {
   const symptoms = (params.symptoms ?? "").split(",").filter(Boolean);
   const set = (changes: CasebookParams) => onChange(withParams(params, changes));
+  // The box ticks at once; the URL (and so `params`) follows when the router has moved, which takes a
+  // moment on a slow phone. A tick remembered for one URL value is dropped when that value changes.
+  const [comebackTick, setComebackTick] = useState<{ from: boolean; to: boolean } | null>(null);
+  const comebackInUrl = Boolean(params.comeback);
+  const comebackChecked =
+    comebackTick && comebackTick.from === comebackInUrl ? comebackTick.to : comebackInUrl;
   const chips: { key: string; text: string; clear: CasebookParams }[] = [
     ...symptoms.map((s) => ({
       key: `symptom-${s}`,
@@ -163,8 +169,11 @@ export function CasebookFilters({
             <input
               type="checkbox"
               className="h-6 w-6"
-              checked={Boolean(params.comeback)}
-              onChange={(e) => set({ comeback: e.target.checked ? "1" : "" })}
+              checked={comebackChecked}
+              onChange={(e) => {
+                setComebackTick({ from: comebackInUrl, to: e.target.checked });
+                set({ comeback: e.target.checked ? "1" : "" });
+              }}
             />
             Comebacks only
             {facets ? ` (${facets.facets.comeback[0]?.count ?? 0})` : ""}

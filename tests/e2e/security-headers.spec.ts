@@ -186,6 +186,7 @@ test.describe("the redirect after sign-in", () => {
 });
 
 test("the app runs under its CSP: no violation on any main page", async ({ page }) => {
+  test.slow(); // walks every main page and a dozen cases: minutes on a busy two-core machine
   await page.addInitScript(() => {
     const seen: string[] = [];
     (window as unknown as { cspViolations: string[] }).cspViolations = seen;
