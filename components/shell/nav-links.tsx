@@ -8,7 +8,7 @@ export function NavLinks({ items }: { items: { href: string; label: string }[] }
   const pathname = usePathname();
   return (
     <nav aria-label="Main" className="border-t border-glacier-700">
-      <ul className="mx-auto flex max-w-5xl gap-1 overflow-x-auto px-2">
+      <ul className="mx-auto flex max-w-5xl flex-wrap gap-x-1 px-2">
         {items.map((item) => {
           const current = pathname === item.href || pathname.startsWith(`${item.href}/`);
           return (
