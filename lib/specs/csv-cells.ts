@@ -65,7 +65,7 @@ export function parseChargeCell(
     return { problem: `label charge "${text}": write numbers without a thousands separator` };
   const unit = declaredUnit("label charge", declared);
   if (typeof unit === "object") return unit;
-  const q = parseQuantity(text, "mass", unit ?? fallback);
+  const q = parseQuantity(text, "mass", unit ?? fallback, { decimalMark: decimalComma ? "," : "." });
   if ("error" in q)
     return { problem: `label charge "${text}" is not a mass (for example 650, 1.4 kg or 23 oz)` };
   if (/[a-z]/i.test(text) && unit && q.unit !== unit) {
@@ -86,7 +86,7 @@ export function parseOilCell(
   const unit = declaredUnit("total oil", declared);
   if (typeof unit === "object") return unit;
   const spelled = /fl/i.test(text) ? text : text.replace(/\boz\b/i, "fl oz");
-  const q = parseQuantity(spelled, "volume", unit ?? fallback);
+  const q = parseQuantity(spelled, "volume", unit ?? fallback, { decimalMark: decimalComma ? "," : "." });
   if ("error" in q)
     return { problem: `total oil "${text}" is not a volume (for example 120, 120 mL or 4 fl oz)` };
   if (/[a-z]/i.test(text) && unit && q.unit !== unit) {

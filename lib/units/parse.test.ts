@@ -40,20 +40,50 @@ describe("parseQuantity reads what a technician types", () => {
     expect(parseQuantity(text, kind, "kPa")).toEqual(expected);
   });
 
-  it("a comma before three digits is a decimal comma by default, or refused as ambiguous on request", () => {
-    expect(parseQuantity("1,250 kg", "mass", "g")).toEqual({ value: 1.25, unit: "kg" });
-    const refused = parseQuantity("1,400 g", "mass", "g", { ambiguousComma: "reject" });
-    expect("error" in refused && refused.error).toMatch(/ambiguous/);
-    expect(parseQuantity("12,500 kPa", "pressure", "kPa", { ambiguousComma: "reject" })).toHaveProperty(
-      "error",
-    );
+  it("reads thousands separators and decimal marks by the reader's locale (common practice)", () => {
+    // A mass field once read "1,200" as 1.2 g and refused it.
+    expect(parseQuantity("1,200", "mass", "g", { locale: "en-US" })).toEqual({ value: 1200, unit: "g" });
+    expect(parseQuantity("1,200 g", "mass", "g")).toEqual({ value: 1200, unit: "g" });
+    expect(parseQuantity("1.200,5 g", "mass", "g", { locale: "de-DE" })).toEqual({
+      value: 1200.5,
+      unit: "g",
+    });
+    expect(parseQuantity("1,200.5 g", "mass", "g", { locale: "de-DE" })).toEqual({
+      value: 1200.5,
+      unit: "g",
+    });
+    expect(parseQuantity("1 200 g", "mass", "g", { locale: "fr-FR" })).toEqual({ value: 1200, unit: "g" });
+    expect(parseQuantity("1\u202f200 g", "mass", "g", { locale: "fr-FR" })).toEqual({
+      value: 1200,
+      unit: "g",
+    });
+    expect(parseQuantity("1’200 g", "mass", "g", { locale: "de-CH" })).toEqual({ value: 1200, unit: "g" });
+    expect(parseQuantity("2,1 bar", "pressure", "kPa", { locale: "en-US" })).toEqual({
+      value: 2.1,
+      unit: "bar",
+    });
+    expect(parseQuantity("-5,5 °C", "temperature", "C", { locale: "de" })).toEqual({
+      value: -5.5,
+      unit: "C",
+    });
   });
 
-  it("a decimal comma is accepted where it cannot be a thousands separator, even when ambiguity is refused", () => {
+  it("asks where a locale with decimal commas leaves a number truly ambiguous", () => {
+    for (const text of ["1,200 g", "1.200 g"]) {
+      const asked = parseQuantity(text, "mass", "g", { locale: "de-DE" });
+      expect(asked).toMatchObject({ ambiguous: { decimal: 1.2, thousands: 1200 } });
+      expect("error" in asked && asked.error).toMatch(/Did you mean 1,2 or 1\.200\?/);
+    }
+    const refused = parseQuantity("1,400 g", "mass", "g", { ambiguousComma: "reject" });
+    expect("error" in refused && refused.error).toMatch(/ambiguous/);
+  });
+
+  it("a decimal mark is accepted where it cannot be a thousands separator, even where ambiguity is asked about", () => {
     const reject = { ambiguousComma: "reject" } as const;
     expect(parseQuantity("0,125 kg", "mass", "g", reject)).toEqual({ value: 0.125, unit: "kg" });
     expect(parseQuantity("1,45 MPa", "pressure", "kPa", reject)).toEqual({ value: 1.45, unit: "MPa" });
     expect(parseQuantity("1,4000 kg", "mass", "g", reject)).toEqual({ value: 1.4, unit: "kg" });
+    expect(parseQuantity("12,5 kg", "mass", "g", { locale: "de" })).toEqual({ value: 12.5, unit: "kg" });
   });
 
   it("a bare number takes the default unit", () => {

@@ -1,8 +1,11 @@
 import { GRAMS_PER_UNIT, KPA_PER_UNIT, MILLILITRES_PER_UNIT } from "./factors";
+import { ambiguityQuestion, normaliseNumbers } from "./number";
 
 export type QuantityKind = "pressure" | "temperature" | "mass" | "volume";
 export type ParsedQuantity =
-  { value: number; unit: string; reference?: "gauge" | "absolute" } | { error: string };
+  | { value: number; unit: string; reference?: "gauge" | "absolute" }
+  /** ambiguous: the number could be either; a screen may offer both as buttons. */
+  | { error: string; ambiguous?: { decimal: number; thousands: number } };
 
 interface Alias {
   kind: QuantityKind;
@@ -50,29 +53,35 @@ const EXAMPLES: Record<QuantityKind, string> = {
 
 const PART = /([+-]?\d+(?:\.\d+)?|[+-]?\.\d+)\s*([^\d\s+-][^\d+-]*?)?\s*(?=[+-]?\d|[+-]?\.\d|$)/gy;
 
-const THOUSANDS_OR_DECIMAL = /(^|[^\d.,])[1-9]\d{0,2},\d{3}(?![\d,])/;
-
-/** Reads what a technician types: "32 psi", "2,1 bar", "75F", "−5 °C", "1 lb 4 oz". A bare number takes defaultUnit. */
+/**
+ * Reads what a technician types: "32 psi", "2,1 bar", "75F", "−5 °C", "1 lb 4 oz", "1,200 g". A bare
+ * number takes defaultUnit. Thousands separators and decimal commas follow the reader's locale
+ * (number.ts); where the text could mean two numbers the answer is a question, never a guess.
+ */
 export function parseQuantity(
   text: string,
   kind: QuantityKind,
   defaultUnit: string,
   opts?: {
-    /** "decimal" (default): "2,1" and "1,400" are decimal commas. "reject": "1,400" is refused as ambiguous. */
-    ambiguousComma?: "decimal" | "reject";
+    /** The reader's locale (BCP 47); without one a point is the decimal mark and a comma groups thousands. */
+    locale?: string;
+    /** "reject": read as in a decimal-comma locale, so "1,400" is a question (spreadsheet cells of unknown origin). */
+    ambiguousComma?: "reject";
+    /** The decimal mark, where the source has said which it is (a semicolon-separated file uses a comma). */
+    decimalMark?: "." | ",";
   },
 ): ParsedQuantity {
-  const cleaned = text
-    .trim()
-    .replace(/[\u2212\u2013]/g, "-")
-    .replace(/(\d),(\d)/g, "$1.$2")
-    .replace(/\s+/g, " ");
-  // "1,400" could be 1400 or 1.4; where nothing else says which, a question beats a misread charge.
-  if (opts?.ambiguousComma === "reject" && THOUSANDS_OR_DECIMAL.test(text)) {
+  const locale = opts?.ambiguousComma === "reject" ? "de" : (opts?.locale ?? "en");
+  const numbers = normaliseNumbers(text.trim().replace(/[\u2212\u2013]/g, "-"), locale, opts?.decimalMark);
+  if ("error" in numbers) return numbers;
+  if ("ambiguous" in numbers) {
+    const { decimal, thousands } = numbers.ambiguous;
     return {
-      error: `“${text.trim()}” is ambiguous: write it without a thousands separator (1400) or with a decimal point (1.4).`,
+      error: `“${numbers.ambiguous.text}” is ambiguous. ${ambiguityQuestion(numbers.ambiguous, opts?.locale)}`,
+      ambiguous: { decimal, thousands },
     };
   }
+  const cleaned = numbers.text.replace(/\s+/g, " ");
   const failure = {
     error: `Could not read “${text.trim()}” as a ${kind}. Try for example ${EXAMPLES[kind]}.`,
   };
