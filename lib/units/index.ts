@@ -29,3 +29,48 @@ export {
   formatTemperatureDifference,
   formatVolume,
 } from "./format";
+export {
+  ambiguityQuestion,
+  normaliseNumbers,
+  numberConventions,
+  readNumberToken,
+  type ReadNumber,
+} from "./number";
+export {
+  deepestVacuumInHg,
+  formatVacuum,
+  KPA_PER_VACUUM_UNIT,
+  parseVacuum,
+  VACUUM_EXAMPLES,
+  vacuumFieldText,
+  vacuumFromKpaAbs,
+  type VacuumReading,
+  type VacuumUnit,
+} from "./vacuum";
+export {
+  isUnitOf,
+  READER_QUANTITIES,
+  type ReaderQuantity,
+  type ReaderUnits,
+  readerUnitsOf,
+  UNIT_CHOICES,
+  UNIT_LABELS,
+  type UnitChoice,
+  type UnitSystem,
+  unitSystems,
+  unitsOfSystem,
+} from "./reader";
+export {
+  formatQuantity,
+  gaugeKpaQuantity,
+  massGQuantity,
+  type Quantity,
+  type QuantityKind as MeasuredKind,
+  quantityMarker,
+  quantityParts,
+  sayInUnits,
+  SI_READER_UNITS,
+  tempCQuantity,
+  vacuumKpaAbsQuantity,
+  volumeMlQuantity,
+} from "./quantity";

@@ -1,0 +1,162 @@
+import { type BarometricSource, barometricKpa, STANDARD_ATMOSPHERE_KPA } from "./barometric";
+import { KPA_PER_UNIT } from "./factors";
+import { normaliseNumbers } from "./number";
+
+/**
+ * A vacuum reading as the technician's gauge shows it: inches of mercury below the local atmosphere
+ * (an analogue compound gauge), kPa or mbar absolute (an electronic gauge), or microns of mercury
+ * absolute (a micron gauge). Stored as kPa absolute.
+ */
+export type VacuumUnit = "inHg" | "kPa" | "mbar" | "micron";
+
+/**
+ * kPa per unit. 1 mbar = 0.1 kPa; 1 micron of mercury = 1 millitorr, a standard atmosphere over 760 000 (NIST SP 811,
+ * appendix B: 1 torr = 101 325/760 Pa); inHg is the conventional inch of mercury (factors.ts).
+ */
+export const KPA_PER_VACUUM_UNIT: Readonly<Record<VacuumUnit, number>> = {
+  inHg: KPA_PER_UNIT.inHg,
+  kPa: 1,
+  mbar: 0.1,
+  micron: STANDARD_ATMOSPHERE_KPA / 760_000,
+};
+
+const SPELLINGS: Record<string, VacuumUnit> = {
+  inhg: "inHg",
+  "in hg": "inHg",
+  '"hg': "inHg",
+  '" hg': "inHg",
+  "in. hg": "inHg",
+  "inhg vacuum": "inHg",
+  "inhg vac": "inHg",
+  kpa: "kPa",
+  "kpa abs": "kPa",
+  kpaa: "kPa",
+  "kpa(a)": "kPa",
+  "kpa absolute": "kPa",
+  mbar: "mbar",
+  "mbar abs": "mbar",
+  "mbar absolute": "mbar",
+  micron: "micron",
+  microns: "micron",
+  µ: "micron",
+  μ: "micron",
+  "µm hg": "micron",
+  "μm hg": "micron",
+  "um hg": "micron",
+  µmhg: "micron",
+  umhg: "micron",
+  mtorr: "micron",
+};
+
+export const VACUUM_EXAMPLES = "29.5 inHg, 0.4 kPa abs, 4 mbar or 500 microns";
+
+export type VacuumReading =
+  | {
+      kpaAbs: number;
+      /** The number and unit as read, for showing back what was typed. */
+      value: number;
+      unit: VacuumUnit;
+      /** What the number was taken to be, in words: a screen says it beside the field. */
+      readAs: string;
+    }
+  | { error: string; ambiguous?: { decimal: number; thousands: number } };
+
+/** The deepest reading a vacuum gauge in inHg can show at this place: the whole local atmosphere. */
+export function deepestVacuumInHg(at?: BarometricSource): number {
+  return barometricKpa(at) / KPA_PER_UNIT.inHg;
+}
+
+function round(value: number, decimals: number): number {
+  const f = 10 ** decimals;
+  return Math.round(value * f) / f;
+}
+
+/** Reads a typed vacuum ("29.9", "29.9 inHg", "-29.9 inHg", "500 microns", "0.4 kPa", "4 mbar"). */
+export function parseVacuum(
+  text: string,
+  defaultUnit: VacuumUnit,
+  opts: { at?: BarometricSource; locale?: string } = {},
+): VacuumReading {
+  const numbers = normaliseNumbers(text.trim().replace(/[\u2212\u2013]/g, "-"), opts.locale ?? "en");
+  if ("error" in numbers) return numbers;
+  if ("ambiguous" in numbers)
+    return {
+      error: `“${numbers.ambiguous.text}” could be ${numbers.ambiguous.decimal} or ${numbers.ambiguous.thousands}: type it without the separator.`,
+      ambiguous: numbers.ambiguous,
+    };
+  const match = /^([+-]?(?:\d+(?:\.\d+)?|\.\d+))\s*(.*)$/.exec(numbers.text.replace(/\s+/g, " "));
+  if (!match) return { error: `Enter the vacuum as the gauge shows it, for example ${VACUUM_EXAMPLES}.` };
+  const spelled = (match[2] ?? "").trim().toLowerCase();
+  const unit = spelled === "" ? defaultUnit : SPELLINGS[spelled];
+  if (!unit)
+    return {
+      error: `“${match[2]}” is not a vacuum unit we read. Use inHg, kPa or mbar absolute, or microns: for example ${VACUUM_EXAMPLES}.`,
+    };
+  const typed = Number(match[1]);
+  const atmosphereKpa = barometricKpa(opts.at);
+  const here = `${round(atmosphereKpa, 1)} kPa (${round(atmosphereKpa / KPA_PER_UNIT.inHg, 1)} inHg)`;
+  let kpaAbs: number;
+  let readAs: string;
+  if (unit === "inHg") {
+    // A compound gauge shows vacuum as inches below the atmosphere; some print it with a minus sign.
+    const below = Math.abs(typed);
+    kpaAbs = atmosphereKpa - below * KPA_PER_UNIT.inHg;
+    readAs = `inHg of vacuum below the local atmosphere (a compound gauge), about ${round(Math.max(kpaAbs, 0), 2)} kPa absolute`;
+    if (kpaAbs < -0.005)
+      return {
+        error: `${below} inHg is a deeper vacuum than the air here allows: the atmosphere here is ${here}, so a vacuum gauge cannot read more than ${round(atmosphereKpa / KPA_PER_UNIT.inHg, 1)} inHg. Check the gauge and the shop's altitude.`,
+      };
+    kpaAbs = Math.max(kpaAbs, 0);
+    return { kpaAbs, value: below, unit, readAs };
+  }
+  if (typed < 0) {
+    return {
+      error: `A ${unit === "micron" ? "micron" : "absolute"} reading cannot be below zero. For a compound gauge's reading below the atmosphere, type it in inHg (for example 29.5 inHg).`,
+    };
+  }
+  kpaAbs = typed * KPA_PER_VACUUM_UNIT[unit];
+  readAs =
+    unit === "micron"
+      ? "microns of mercury, absolute (a micron gauge)"
+      : `${unit} absolute (an electronic gauge)`;
+  if (kpaAbs > atmosphereKpa + 0.5)
+    return {
+      error: `${typed} ${unit === "micron" ? "microns" : unit} absolute is above the atmosphere here (${here}): not a vacuum. For a compound gauge's reading, type it in inHg.`,
+    };
+  return { kpaAbs, value: typed, unit, readAs };
+}
+
+const LABEL: Record<VacuumUnit, string> = {
+  inHg: "inHg vacuum",
+  kPa: "kPa abs",
+  mbar: "mbar abs",
+  micron: "microns",
+};
+
+/** Below about 2000 microns an inHg dial no longer tells readings apart; a micron gauge does (common practice). */
+export const MICRON_RANGE_KPA_ABS = 2000 * KPA_PER_VACUUM_UNIT.micron;
+
+/** The number of a vacuum in a unit; inHg is the depth below the local atmosphere, never a pressure above zero. */
+export function vacuumFromKpaAbs(kpaAbs: number, unit: VacuumUnit, at?: BarometricSource): number {
+  if (unit === "inHg") return Math.max(0, barometricKpa(at) - kpaAbs) / KPA_PER_UNIT.inHg;
+  return kpaAbs / KPA_PER_VACUUM_UNIT[unit];
+}
+
+const DECIMALS: Record<VacuumUnit, number> = { inHg: 2, kPa: 2, mbar: 1, micron: 0 };
+
+/**
+ * A stored vacuum in the reader's unit: "29.92 inHg vacuum", "0.27 kPa abs", "500 microns". A deep
+ * vacuum an inHg dial cannot resolve is said in microns too, so 500 and 1000 microns never read alike.
+ */
+export function formatVacuum(kpaAbs: number, unit: VacuumUnit, at?: BarometricSource): string {
+  const text = (u: VacuumUnit) => `${round(vacuumFromKpaAbs(kpaAbs, u, at), DECIMALS[u])} ${LABEL[u]}`;
+  if (unit !== "micron" && kpaAbs < MICRON_RANGE_KPA_ABS) return `${text(unit)} (${text("micron")})`;
+  return text(unit);
+}
+
+/** A vacuum as typed text the field reads back to the same value (no label words a reader would refuse). */
+export function vacuumFieldText(kpaAbs: number, unit: VacuumUnit, at?: BarometricSource): string {
+  const shown: VacuumUnit = kpaAbs < MICRON_RANGE_KPA_ABS ? "micron" : unit;
+  const value = round(vacuumFromKpaAbs(kpaAbs, shown, at), shown === "micron" ? 0 : 3);
+  return `${value} ${shown === "micron" ? "microns" : shown}`;
+}
