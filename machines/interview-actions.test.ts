@@ -1,7 +1,9 @@
 import { describe, expect, it } from "vitest";
 import type { InterviewAnswers } from "@/lib/interview/answers";
 import { exampleAnswers } from "@/lib/interview/example-answers";
-import { applyAnswer, applyEnterStep, applySkip } from "./interview-actions";
+import { applyAnswer, applyEnterStep, applySkip, applyTyping } from "./interview-actions";
+import { interviewMachine } from "./interview";
+import { createActor } from "xstate";
 import { createInterviewContext, type InterviewContext } from "./interview-context";
 
 function context(answers: InterviewAnswers, more: Partial<InterviewContext> = {}): InterviewContext {
@@ -56,6 +58,37 @@ describe("applyAnswer", () => {
 
   it("ignores an unknown group", () => {
     expect(applyAnswer(context({}), "vehicle", {})).toEqual({});
+  });
+});
+
+describe("applyTyping", () => {
+  it("keeps a valid value being typed as the draft and leaves the saved answer alone", () => {
+    // "9" on the way to "95": valid on its own, but not what the technician meant.
+    const changes = applyTyping(context(exampleAnswers), "conditions", {
+      ...exampleAnswers.conditions,
+      ambientC: 9,
+    });
+    expect(changes.answers).toBeUndefined();
+    expect(changes.drafts?.conditions).toEqual({ ...exampleAnswers.conditions, ambientC: 9 });
+    expect(changes.errors?.conditions).toBeUndefined();
+  });
+
+  it("keeps an out-of-range value as the draft with its message", () => {
+    const changes = applyTyping(context(exampleAnswers), "conditions", { ambientC: 95 });
+    expect(changes.answers).toBeUndefined();
+    expect(changes.errors?.conditions?.[0]?.field).toBe("ambientC");
+  });
+
+  it("never lets typing replace the answer; only ANSWER does, and only with a valid value", () => {
+    const actor = createActor(interviewMachine, { input: { answers: exampleAnswers } }).start();
+    for (const ambientC of [9, 95]) actor.send({ type: "TYPE", group: "conditions", values: { ambientC } });
+    expect(actor.getSnapshot().context.answers.conditions?.ambientC).toBe(32);
+    actor.send({ type: "ANSWER", group: "conditions", values: { ambientC: 95 } });
+    expect(actor.getSnapshot().context.answers.conditions?.ambientC).toBe(32);
+    expect(actor.getSnapshot().context.drafts.conditions).toEqual({ ambientC: 95 });
+    actor.send({ type: "ANSWER", group: "conditions", values: { ambientC: 35 } });
+    expect(actor.getSnapshot().context.answers.conditions?.ambientC).toBe(35);
+    expect(actor.getSnapshot().context.drafts.conditions).toBeUndefined();
   });
 });
 

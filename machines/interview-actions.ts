@@ -44,6 +44,20 @@ export function applyAnswer(context: InterviewContext, group: unknown, values: u
   return changes;
 }
 
+/**
+ * Keeps what is being typed as the group's draft, with its messages, and leaves the saved answer
+ * alone: "9" on the way to "95" must never replace the last answer. ANSWER (on leaving a field, on
+ * Next, or after a pause) is what turns a valid draft into the answer.
+ */
+export function applyTyping(context: InterviewContext, group: unknown, values: unknown): Changes {
+  if (!isGroupId(group)) return {};
+  const check = validateGroup(group, values, without(context.answers, group), context.shop);
+  return {
+    drafts: { ...context.drafts, [group]: values },
+    errors: check.ok ? without(context.errors, group) : { ...context.errors, [group]: check.issues },
+  };
+}
+
 /** Marks the step's group as skipped; anything typed is kept as a draft so it is not lost. */
 export function applySkip(context: InterviewContext): Changes {
   const group = groupForStep[context.step];

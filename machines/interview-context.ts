@@ -5,7 +5,10 @@ import { sortSavedAnswers, validateGroup } from "@/lib/interview/validate";
 
 export interface InterviewContext extends InterviewRecord {
   skipped: GroupId[];
-  /** What was typed but is not (or no longer) a valid answer: invalid values, or a skipped group's values. */
+  /**
+   * What was typed but is not (or not yet) the answer: invalid values, values still being typed, or a
+   * skipped group's values. A draft beside an answer is newer than it.
+   */
   drafts: Partial<Record<GroupId, unknown>>;
   visited: StepId[];
   /** The step on screen; kept equal to the machine's state by each step's entry action. */
@@ -16,6 +19,8 @@ export interface InterviewContext extends InterviewRecord {
 
 export type InterviewEvent =
   | { type: "ANSWER"; group: GroupId; values: unknown }
+  /** Values still being typed: kept as the draft, never as the answer. */
+  | { type: "TYPE"; group: GroupId; values: unknown }
   | { type: "NEXT" }
   | { type: "BACK" }
   | { type: "SKIP" }

@@ -1,6 +1,6 @@
 import { and, assign, not, raise, setup } from "xstate";
 import { stepIds, type GroupId, type StepId } from "@/lib/interview/steps";
-import { applyAnswer, applyEnterStep, applySkip } from "./interview-actions";
+import { applyAnswer, applyEnterStep, applySkip, applyTyping } from "./interview-actions";
 import {
   createInterviewContext,
   type InterviewContext,
@@ -34,6 +34,9 @@ export const interviewMachine = setup({
     storeAnswer: assign(({ context, event }) =>
       event.type === "ANSWER" ? applyAnswer(context, event.group, event.values) : {},
     ),
+    storeTyping: assign(({ context, event }) =>
+      event.type === "TYPE" ? applyTyping(context, event.group, event.values) : {},
+    ),
     skipGroup: assign(({ context }) => applySkip(context)),
     moveOn: raise({ type: "NEXT" }),
   },
@@ -47,6 +50,7 @@ export const interviewMachine = setup({
   })),
   on: {
     ANSWER: { actions: "storeAnswer" },
+    TYPE: { actions: "storeTyping" },
     SKIP: { guard: "currentStepOptional", actions: ["skipGroup", "moveOn"] },
     GOTO: stepIds.map((step) => ({
       guard: { type: "mayOpen", params: { step } } as const,

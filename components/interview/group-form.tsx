@@ -2,16 +2,20 @@
 
 import { Controller, type UseFormReturn } from "react-hook-form";
 import { clsx } from "clsx";
+import { sayInUnits } from "@/lib/units";
 import type { FieldDef, FormValues } from "./field-defs";
+import { unreadableFields, type Reading } from "./form-values";
 import { QuantityInput } from "./quantity-input";
-import { fromInternal, toInternal } from "./quantities";
-import type { QuantityKind, UnitPreferences } from "./unit-preferences";
+import { unitsForField, type QuantityKind } from "./unit-preferences";
 
 interface Props {
   form: UseFormReturn<FormValues>;
   fields: FieldDef[];
-  units: UnitPreferences;
-  setUnit: (kind: QuantityKind, unit: string) => void;
+  reading: Reading;
+  /** A tap on one field's unit button: says what its digits mean, changes nothing else. */
+  setFieldUnit: (name: string, unit: string) => void;
+  /** Takes the group's values as the answer where they are valid (leaving a field, a tap on a choice). */
+  commit: () => void;
   /** Computed values to show under a field, keyed by field name. */
   readouts?: Partial<Record<string, React.ReactNode>>;
   serverIssues?: { field: string; message: string }[];
@@ -19,29 +23,37 @@ interface Props {
 
 const QUANTITY_KINDS = new Set(["pressure", "temperature", "mass", "volume"]);
 
-export function GroupForm({ form, fields, units, setUnit, readouts = {}, serverIssues = [] }: Props) {
+export function GroupForm({
+  form,
+  fields,
+  reading,
+  setFieldUnit,
+  commit,
+  readouts = {},
+  serverIssues = [],
+}: Props) {
   const { register, formState, control, getValues, setValue } = form;
-
-  function changeUnit(kind: QuantityKind, unit: string) {
-    // Keep the quantity, not the digits: 30 psi becomes 206.8 kPa.
-    const next = { ...units, [kind]: unit } as UnitPreferences;
-    for (const def of fields) {
-      if (def.kind !== kind) continue;
-      const text = getValues(def.name);
-      if (typeof text !== "string" || text.trim() === "") continue;
-      const internal = toInternal(kind, text, units);
-      if (typeof internal === "number")
-        setValue(def.name, fromInternal(kind, internal, next), { shouldDirty: true });
-    }
-    setUnit(kind, unit);
-  }
+  const questions = new Map(
+    unreadableFields(fields, getValues(), reading)
+      .filter((u) => u.problem.ambiguous)
+      .map((u) => [u.field, u.problem.ambiguous!]),
+  );
+  const leave = (e: React.FocusEvent<HTMLElement>) => {
+    // Moving to the same field's unit buttons is not leaving it: the tap will say what the digits mean.
+    const next = e.relatedTarget as Node | null;
+    if (next && e.currentTarget.closest("[data-field]")?.contains(next)) return;
+    commit();
+  };
 
   return (
     <div className="space-y-5">
       {fields.map((def) => {
         const id = `f-${def.name}`;
+        const serverMessage = serverIssues.find((i) => i.field === def.name)?.message;
         const error =
-          formState.errors[def.name]?.message ?? serverIssues.find((i) => i.field === def.name)?.message;
+          formState.errors[def.name]?.message ??
+          (serverMessage === undefined ? undefined : sayInUnits(serverMessage, reading.units));
+        const question = error ? questions.get(def.name) : undefined;
         const describedBy =
           [
             def.hint ? `${id}-hint` : null,
@@ -52,7 +64,7 @@ export function GroupForm({ form, fields, units, setUnit, readouts = {}, serverI
             .join(" ") || undefined;
         const common = { "aria-invalid": error ? true : undefined, "aria-describedby": describedBy } as const;
         return (
-          <div key={def.name}>
+          <div key={def.name} data-field={def.name}>
             {def.kind === "multi" || def.kind === "choice" || def.kind === "yesno" ? (
               <Controller
                 control={control}
@@ -96,6 +108,7 @@ export function GroupForm({ form, fields, units, setUnit, readouts = {}, serverI
                                 );
                               }
                               field.onBlur();
+                              commit();
                             }}
                             className={clsx(
                               "min-h-glove rounded-card border-2 px-3 py-2 text-left font-bold",
@@ -122,11 +135,11 @@ export function GroupForm({ form, fields, units, setUnit, readouts = {}, serverI
                   <QuantityInput
                     id={id}
                     kind={def.kind as QuantityKind}
-                    units={units}
+                    units={unitsForField(reading.units, reading.fieldUnits ?? {}, def.name, def.kind)}
                     unitGroupLabel={`Unit for ${def.label.toLowerCase()}`}
-                    onUnitChange={(unit) => changeUnit(def.kind as QuantityKind, unit)}
+                    onUnitChange={(unit) => setFieldUnit(def.name, unit)}
                     {...common}
-                    {...register(def.name)}
+                    {...register(def.name, { onBlur: leave })}
                   />
                 ) : def.kind === "text" && def.multiline ? (
                   <textarea
@@ -134,7 +147,7 @@ export function GroupForm({ form, fields, units, setUnit, readouts = {}, serverI
                     rows={3}
                     className="field-input py-2"
                     {...common}
-                    {...register(def.name)}
+                    {...register(def.name, { onBlur: leave })}
                   />
                 ) : (
                   <input
@@ -145,7 +158,7 @@ export function GroupForm({ form, fields, units, setUnit, readouts = {}, serverI
                     placeholder={def.kind === "plain" ? def.placeholder : undefined}
                     className={clsx("field-input", def.kind === "plain" && "font-mono text-2xl")}
                     {...common}
-                    {...register(def.name)}
+                    {...register(def.name, { onBlur: leave })}
                   />
                 )}
               </>
@@ -164,6 +177,23 @@ export function GroupForm({ form, fields, units, setUnit, readouts = {}, serverI
               <p id={`${id}-error`} className="field-error" role="alert">
                 {error}
               </p>
+            )}
+            {question && (
+              <div className="mt-2 flex gap-2">
+                {[question.decimal, question.thousands].map((value) => (
+                  <button
+                    key={value}
+                    type="button"
+                    className="btn-quiet min-h-glove flex-1 font-mono"
+                    onClick={() => {
+                      setValue(def.name, String(value), { shouldDirty: true, shouldValidate: true });
+                      commit();
+                    }}
+                  >
+                    {String(value)}
+                  </button>
+                ))}
+              </div>
             )}
           </div>
         );

@@ -1,6 +1,6 @@
 "use client";
 
-import { useCallback, useEffect, useMemo, useRef } from "react";
+import { useCallback, useEffect, useMemo, useRef, useSyncExternalStore } from "react";
 import { useMachine } from "@xstate/react";
 import { interviewMachine } from "@/machines/interview";
 import { savedInterviewOf, viewOf, type SavedInterview } from "@/machines/interview-view";
@@ -14,8 +14,10 @@ import { SaveBanner } from "./save-banner";
 import { SpecMatches } from "./spec-matches";
 import { StepForm, type StepFormHandle } from "./step-form";
 import { useAutosave } from "./use-autosave";
-import { useUnitPreferences } from "./unit-preferences";
 import type { PhysicsContext } from "@/lib/interview/readouts";
+import type { ReaderUnits } from "@/lib/units";
+import { attentionOf } from "./attention";
+import type { ValuesMode } from "./use-group-form";
 
 export interface InterviewProps {
   caseId: number;
@@ -23,11 +25,17 @@ export interface InterviewProps {
   record: Partial<SavedInterview>;
   /** Changes made on this device that the server has not confirmed; they are sent at once. */
   pendingFromDevice: number;
-  shop: { altitudeM: number; units: "metric" | "imperial" };
+  shop: { altitudeM: number };
+  /** The technician's units (their profile, else the shop's system); every field starts in them. */
+  units: ReaderUnits;
+  /** The technician's locale, for reading "1,200" and "1,2" the way they write them. */
+  locale?: string;
   waitsForSignOff: boolean;
   heading: string;
   vehicleId: number | null;
 }
+
+const noChange = () => () => {};
 
 export function Interview({
   caseId,
@@ -35,15 +43,23 @@ export function Interview({
   record,
   pendingFromDevice,
   shop,
+  units,
+  locale,
   waitsForSignOff,
   heading,
   vehicleId,
 }: InterviewProps) {
+  // Without a locale on the profile, numbers are read the way this device's language writes them.
+  const deviceLocale = useSyncExternalStore(
+    noChange,
+    () => navigator.language,
+    () => undefined,
+  );
+  const readingLocale = locale ?? deviceLocale;
   const machineShop = useMemo(() => ({ altitudeM: shop.altitudeM }), [shop.altitudeM]);
   const [snapshot, send, actor] = useMachine(interviewMachine, { input: { ...record, shop: machineShop } });
   const view = viewOf(snapshot);
   const { answers, drafts, step } = snapshot.context;
-  const { units, setUnit } = useUnitPreferences(shop.units);
   const autosave = useAutosave({ caseId, initialVersion: version });
   const formRef = useRef<StepFormHandle>(null);
   const headingRef = useRef<HTMLHeadingElement>(null);
@@ -84,7 +100,8 @@ export function Interview({
   );
 
   const onValues = useCallback(
-    (values: Record<string, unknown>) => view.group && send({ type: "ANSWER", group: view.group, values }),
+    (values: Record<string, unknown>, mode: ValuesMode) =>
+      view.group && send({ type: mode === "commit" ? "ANSWER" : "TYPE", group: view.group, values }),
     [send, view.group],
   );
 
@@ -105,7 +122,11 @@ export function Interview({
         <p className="text-sm font-bold text-ink-soft">{heading}</p>
         <ProgressStrip entries={view.progress} onOpen={(target) => send({ type: "GOTO", step: target })} />
       </div>
-      <SaveBanner status={autosave.status} onReload={() => window.location.reload()} />
+      <SaveBanner
+        status={autosave.status}
+        attention={attentionOf(snapshot.context, units)}
+        onReload={() => window.location.reload()}
+      />
       <section id="interview-step" aria-labelledby="step-heading" className="card space-y-4">
         <header>
           <h1 id="step-heading" ref={headingRef} tabIndex={-1} className="text-2xl font-bold outline-none">
@@ -133,11 +154,11 @@ export function Interview({
               key={step}
               ref={formRef}
               group={group}
-              saved={answers[group] ?? drafts[group]}
+              saved={drafts[group] ?? answers[group]}
               answers={answers}
               issues={view.errors[group]}
               units={units}
-              setUnit={(kind, unit) => setUnit(kind, unit as never)}
+              locale={readingLocale}
               physics={physics}
               shop={machineShop}
               onValues={onValues}

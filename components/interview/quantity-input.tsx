@@ -2,8 +2,8 @@
 
 import { forwardRef } from "react";
 import { clsx } from "clsx";
-import { UNIT_CHOICES, type QuantityKind, type UnitPreferences } from "./unit-preferences";
-import { UNIT_LABELS } from "./quantities";
+import { UNIT_CHOICES, UNIT_LABELS } from "@/lib/units";
+import type { QuantityKind, UnitPreferences } from "./unit-preferences";
 
 type Props = React.InputHTMLAttributes<HTMLInputElement> & {
   kind: QuantityKind;
@@ -12,7 +12,10 @@ type Props = React.InputHTMLAttributes<HTMLInputElement> & {
   unitGroupLabel: string;
 };
 
-/** A large numeric input with the unit switch beside it. */
+/**
+ * A large numeric input with the unit buttons beside it. A button says what the typed digits mean;
+ * it never changes them (reading the gauge, then choosing its unit, is the natural order).
+ */
 export const QuantityInput = forwardRef<HTMLInputElement, Props>(function QuantityInput(
   { kind, units, onUnitChange, unitGroupLabel, id, ...props },
   ref,

@@ -1,9 +1,21 @@
 "use client";
 
+import type { AttentionItem } from "./attention";
 import type { SaveStatus } from "./use-autosave";
 
-/** A quiet line that says what is waiting; louder only when the technician must act. */
-export function SaveBanner({ status, onReload }: { status: SaveStatus; onReload: () => void }) {
+/**
+ * A quiet line that says what is waiting; louder only when the technician must act. It never says
+ * "all answers saved" while an answer needs fixing or is still being typed: it names that answer.
+ */
+export function SaveBanner({
+  status,
+  attention = [],
+  onReload,
+}: {
+  status: SaveStatus;
+  attention?: AttentionItem[];
+  onReload: () => void;
+}) {
   const plural = (n: number) => (n === 1 ? "1 change" : `${n} changes`);
   if (status.kind === "conflict" || status.kind === "refused") {
     return (
@@ -18,9 +30,34 @@ export function SaveBanner({ status, onReload }: { status: SaveStatus; onReload:
       </div>
     );
   }
+  const problems = attention.filter((a) => a.message !== undefined);
+  if (status.kind === "saved" && problems.length > 0) {
+    return (
+      <div
+        role="status"
+        data-save-state="attention"
+        className="rounded-card bg-caution-50 px-3 py-2 text-caution-700"
+      >
+        <p className="font-bold">
+          {problems.length === 1 ? "One answer needs attention" : `${problems.length} answers need attention`}
+          ; the last valid {problems.length === 1 ? "answer is" : "answers are"} kept:
+        </p>
+        <ul className="mt-1 list-disc pl-5 text-sm">
+          {problems.map((p) => (
+            <li key={`${p.group}-${p.label}`}>
+              <span className="font-bold">{p.label}</span>: {p.message}
+            </li>
+          ))}
+        </ul>
+      </div>
+    );
+  }
+  const typing = attention.filter((a) => a.message === undefined).map((a) => a.label);
   const text =
     status.kind === "saved"
-      ? "All answers saved"
+      ? typing.length > 0
+        ? `Saved as typed. ${typing.join(", ")}: becomes the answer when you leave the field or tap Next`
+        : "All answers saved"
       : status.kind === "saving"
         ? "Saving…"
         : status.reason === "offline"

@@ -8,10 +8,11 @@ import type { ShopSettings } from "@/lib/interview/branches";
 import { GroupForm } from "./group-form";
 import { fieldsFor } from "./group-fields";
 import { liveReadouts, type PhysicsContext, type ReadoutLine } from "@/lib/interview/readouts";
+import { sayInUnits } from "@/lib/units";
 import { answerValuesOf, formValuesOf } from "./form-values";
-import { otherSystem } from "./quantities";
-import { useGroupForm } from "./use-group-form";
-import type { QuantityKind, UnitPreferences } from "./unit-preferences";
+import { equivalents } from "./quantities";
+import { useGroupForm, type ValuesMode } from "./use-group-form";
+import { unitsForField, type QuantityKind, type UnitPreferences } from "./unit-preferences";
 import type { FormValues } from "./field-defs";
 
 export interface StepFormHandle {
@@ -26,16 +27,25 @@ interface Props {
   saved: unknown;
   answers: InterviewAnswers;
   issues?: AnswerIssue[];
+  /** The person's units (their profile); a field's own unit button overrides them for that field. */
   units: UnitPreferences;
-  setUnit: (kind: QuantityKind, unit: string) => void;
+  locale?: string;
   physics: PhysicsContext;
   shop: ShopSettings;
-  onValues: (values: Record<string, unknown>) => void;
+  onValues: (values: Record<string, unknown>, mode: ValuesMode) => void;
 }
 
 const STATUS_TEXT = { inside: "in range", below: "below range", above: "above range", unknown: "" } as const;
 
-function Readout({ lines, conversion }: { lines: ReadoutLine[]; conversion?: string }) {
+function Readout({
+  lines,
+  conversion,
+  units,
+}: {
+  lines: ReadoutLine[];
+  conversion?: string;
+  units: UnitPreferences;
+}) {
   return (
     <div className="space-y-0.5 font-mono text-base">
       {conversion && <p className="text-ink-soft">= {conversion}</p>}
@@ -50,7 +60,7 @@ function Readout({ lines, conversion }: { lines: ReadoutLine[]; conversion?: str
                 : "text-ink"
           }
         >
-          {line.text}
+          {sayInUnits(line.text, units)}
           {line.verdict !== undefined
             ? line.verdict
               ? ` — ${line.verdict}`
@@ -65,13 +75,22 @@ function Readout({ lines, conversion }: { lines: ReadoutLine[]; conversion?: str
 }
 
 export const StepForm = forwardRef<StepFormHandle, Props>(function StepForm(
-  { group, saved, answers, issues, units, setUnit, physics, shop, onValues },
+  { group, saved, answers, issues, units, locale, physics, shop, onValues },
   ref,
 ) {
   const compressorType = answers.system?.compressorType;
   // eslint-disable-next-line react-hooks/exhaustive-deps -- only the compressor type decides which fields show
   const fields = useMemo(() => fieldsFor(group, answers), [group, compressorType]);
-  const form = useGroupForm({ group, fields, saved, otherAnswers: answers, units, shop, onValues });
+  const { form, reading, setFieldUnit, commit } = useGroupForm({
+    group,
+    fields,
+    saved,
+    otherAnswers: answers,
+    units,
+    locale,
+    shop,
+    onValues,
+  });
   const values = form.watch() as FormValues;
 
   useImperativeHandle(ref, () => ({
@@ -82,38 +101,40 @@ export const StepForm = forwardRef<StepFormHandle, Props>(function StepForm(
         if (first) form.setFocus(first.name);
         return null;
       }
-      return answerValuesOf(fields, form.getValues(), units);
+      return answerValuesOf(fields, form.getValues(), reading);
     },
     apply: (values) => {
-      const shown = formValuesOf(fields, values, units);
+      const shown = formValuesOf(fields, values, reading);
       for (const [name, value] of Object.entries(shown)) {
         if (values[name] !== undefined)
           form.setValue(name, value, { shouldDirty: true, shouldValidate: true });
       }
+      commit();
     },
   }));
 
-  const internal = useMemo(() => answerValuesOf(fields, values, units), [fields, values, units]);
+  const internal = useMemo(() => answerValuesOf(fields, values, reading), [fields, values, reading]);
   const physicsLines = useMemo(() => liveReadouts(group, internal, physics), [group, internal, physics]);
   const readouts: Record<string, React.ReactNode> = {};
   for (const def of fields) {
     const value = internal[def.name];
     const kind = def.kind as QuantityKind;
+    const quantity = kind === "pressure" || kind === "temperature" || kind === "mass" || kind === "volume";
+    const fieldUnits = unitsForField(reading.units, reading.fieldUnits ?? {}, def.name, def.kind);
     const conversion =
-      (kind === "pressure" || kind === "temperature" || kind === "mass" || kind === "volume") &&
-      typeof value === "number"
-        ? otherSystem(kind, value)
-        : undefined;
+      quantity && typeof value === "number" ? equivalents(kind, value, fieldUnits[kind]) : undefined;
     const lines = physicsLines[def.name] ?? [];
-    if (conversion || lines.length) readouts[def.name] = <Readout conversion={conversion} lines={lines} />;
+    if (conversion || lines.length)
+      readouts[def.name] = <Readout conversion={conversion} lines={lines} units={units} />;
   }
 
   return (
     <GroupForm
       form={form}
       fields={fields}
-      units={units}
-      setUnit={setUnit}
+      reading={reading}
+      setFieldUnit={setFieldUnit}
+      commit={commit}
       readouts={readouts}
       serverIssues={issues}
     />
