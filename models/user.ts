@@ -7,6 +7,7 @@ import {
   type InferCreationAttributes,
   type Sequelize,
 } from "sequelize";
+import type { UnitChoice } from "@/lib/units/reader";
 import type { Shop } from "./shop";
 
 export const userRoles = ["owner", "senior", "technician", "apprentice"] as const;
@@ -24,6 +25,10 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare passwordMustChange: CreationOptional<boolean>;
   /** when a temporary password stops working; null for a password the person chose */
   declare passwordExpiresAt: CreationOptional<Date | null>;
+  /** The units this person chose on their profile (lib/units UnitChoice); null: the shop's. */
+  declare unitChoice: CreationOptional<UnitChoice | null>;
+  /** BCP 47 tag for reading and writing numbers; null: the browser's. */
+  declare locale: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -45,6 +50,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
         active: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
         passwordMustChange: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         passwordExpiresAt: { type: DataTypes.DATE(3), allowNull: true },
+        unitChoice: { type: DataTypes.JSON, allowNull: true },
+        locale: { type: DataTypes.STRING(35), allowNull: true },
         createdAt: DataTypes.DATE(3),
         updatedAt: DataTypes.DATE(3),
       },

@@ -14,6 +14,7 @@ export const NAV_ITEMS: readonly NavItem[] = [
   { href: "/specs", label: "Spec table", permission: "specs:read" },
   { href: "/ledger", label: "Ledger", permission: "ledger:read" },
   { href: "/settings/users", label: "People", permission: "users:manage" },
+  { href: "/profile", label: "Your units", permission: "cases:read" },
 ];
 
 export function navigationFor(role: Role): NavItem[] {

@@ -164,6 +164,54 @@ const table: {
     },
   },
   {
+    name: "GET /api/me/profile",
+    call: (c) => c.get("/api/me/profile"),
+    expect: {
+      anonymous: 401,
+      owner: 200,
+      senior: 200,
+      technician: 200,
+      apprentice: 200,
+      otherShopOwner: 200,
+    },
+  },
+  {
+    // Each person sets only their own units; this body puts back the shop's, which every demo user has.
+    name: "PUT /api/me/profile",
+    call: (c) =>
+      c.put("/api/me/profile", {
+        data: {
+          system: null,
+          pressure: null,
+          temperature: null,
+          mass: null,
+          volume: null,
+          vacuum: null,
+          locale: null,
+        },
+      }),
+    expect: {
+      anonymous: 401,
+      owner: 200,
+      senior: 200,
+      technician: 200,
+      apprentice: 200,
+      otherShopOwner: 200,
+    },
+  },
+  {
+    name: "PUT /api/me/profile (malformed)",
+    call: (c) => c.put("/api/me/profile", { data: { system: "cubits", locale: 7 } }),
+    expect: {
+      anonymous: 401,
+      owner: 400,
+      senior: 400,
+      technician: 400,
+      apprentice: 400,
+      otherShopOwner: 400,
+    },
+  },
+  {
     name: "GET /api/users",
     call: (c) => c.get("/api/users"),
     expect: {

@@ -215,6 +215,7 @@ test("the app runs under its CSP: no violation on any main page", async ({ page 
     "/ledger",
     "/signoff",
     "/settings/users",
+    "/profile",
   ]) {
     await page.goto(path);
     await expect(page.getByRole("navigation", { name: "Main" })).toBeVisible();

@@ -4,6 +4,7 @@ import { requireUser } from "@/lib/auth/guard";
 import { mayDo, statusAfterSubmit } from "@/lib/cases/rules";
 import { getCase } from "@/lib/server/cases";
 import { getShop } from "@/lib/server/shops";
+import { getProfile } from "@/lib/server/profile";
 import { isAppError } from "@/lib/errors";
 import { InterviewBoot } from "@/components/interview/interview-boot";
 import type { SavedInterview } from "@/machines/interview-view";
@@ -14,12 +15,13 @@ export default async function InterviewPage({ params }: { params: Promise<{ id: 
   const user = await requireUser("cases:write");
   const caseId = Number((await params).id);
   if (!Number.isInteger(caseId) || caseId <= 0) notFound();
-  const [detail, shop] = await Promise.all([
+  const [detail, shop, profile] = await Promise.all([
     getCase({ shopId: user.shopId, caseId }).catch((error) => {
       if (isAppError(error) && error.status === 404) notFound();
       throw error;
     }),
     getShop({ shopId: user.shopId }),
+    getProfile({ user }),
   ]);
   if (!mayDo("edit", user, detail)) redirect(`/cases/${caseId}`);
 
@@ -33,7 +35,9 @@ export default async function InterviewPage({ params }: { params: Promise<{ id: 
       caseId={caseId}
       version={detail.version}
       serverRecord={record}
-      shop={{ altitudeM: shop.altitudeM, units: shop.units }}
+      shop={{ altitudeM: shop.altitudeM }}
+      units={profile.units}
+      locale={profile.locale ?? shop.locale}
       waitsForSignOff={statusAfterSubmit(detail.technicianRole) === "awaiting_signoff"}
       heading={`Case ${caseId} · ${detail.vehicle ?? "vehicle"}`}
       vehicleId={detail.vehicleId}

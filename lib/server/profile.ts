@@ -1,0 +1,57 @@
+import "server-only";
+import type { User } from "lucia";
+import { getModels } from "@/models";
+import { AppError } from "@/lib/errors";
+import { readerUnitsOf, type UnitChoice } from "@/lib/units";
+import { unitChoiceOf, type ProfileInput, type ProfileResponse } from "@/lib/contracts/profile";
+import { getShop } from "./shops";
+import { recordAudit } from "./audit";
+
+function cleanChoice(raw: unknown): UnitChoice {
+  return typeof raw === "object" && raw !== null && !Array.isArray(raw) ? (raw as UnitChoice) : {};
+}
+
+/** The person's units and locale, resolved against the shop's system. */
+export async function getProfile({ user }: { user: Pick<User, "id" | "shopId"> }): Promise<ProfileResponse> {
+  const [row, shop] = await Promise.all([
+    getModels().User.findOne({
+      where: { id: user.id, shopId: user.shopId },
+      attributes: ["unitChoice", "locale"],
+      raw: true,
+    }),
+    getShop({ shopId: user.shopId }),
+  ]);
+  if (!row) throw new AppError("not_found:user");
+  const choice = cleanChoice(row.unitChoice);
+  return {
+    choice,
+    locale: row.locale ?? null,
+    shopSystem: shop.units,
+    units: readerUnitsOf(choice, shop.units),
+  };
+}
+
+export async function updateProfile({
+  user,
+  input,
+}: {
+  user: Pick<User, "id" | "shopId">;
+  input: ProfileInput;
+}): Promise<ProfileResponse> {
+  const choice = unitChoiceOf(input);
+  const locale = input.locale === null || input.locale === "" ? null : input.locale;
+  const [count] = await getModels().User.update(
+    { unitChoice: { ...choice }, locale },
+    { where: { id: user.id, shopId: user.shopId } },
+  );
+  if (count === 0) throw new AppError("not_found:user");
+  await recordAudit({
+    shopId: user.shopId,
+    actorId: user.id,
+    entity: "user",
+    entityId: user.id,
+    action: "profile",
+    detail: { units: { ...(choice as Record<string, string>) }, locale },
+  });
+  return getProfile({ user });
+}
