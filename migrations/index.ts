@@ -16,6 +16,7 @@ import * as m5002 from "./20261203-5002-name-service-record-figures-once";
 import * as m6001 from "./20261203-6001-add-user-temporary-password";
 import * as m7001 from "./20261203-7001-create-casebook-tables";
 import * as m8001 from "./20261203-8001-add-user-units-and-locale";
+import * as m8002 from "./20261203-8002-keep-vacuum-readings-to-the-micron";
 
 // Listed by hand, not globbed, so the same list works under tsx, vitest and a Next bundle.
 // A new migration file goes here too; an integration test fails when one is missing.
@@ -36,4 +37,5 @@ export const migrations: RunnableMigration<QueryInterface>[] = [
   { name: "20261203-6001-add-user-temporary-password", ...m6001 },
   { name: "20261203-7001-create-casebook-tables", ...m7001 },
   { name: "20261203-8001-add-user-units-and-locale", ...m8001 },
+  { name: "20261203-8002-keep-vacuum-readings-to-the-micron", ...m8002 },
 ];

@@ -85,4 +85,38 @@ describe("service record draft", () => {
     expect(read.errors.recoveredChargeG).toMatch(/Could not read/);
     expect(draft.text.recoveredChargeG).toBe("about a pound");
   });
+
+  it("reads 1,200 g as 1200 g, and asks where a decimal comma makes it ambiguous (common practice)", () => {
+    const draft = draftFromRecord(null, metric, { labelChargeG: null, oilType: null });
+    draft.text.recoveredChargeG = "1,200";
+    expect(readDraft(draft, { ...metric, locale: "en-US" }).values.recoveredChargeG).toBe(1200);
+    expect(readDraft(draft, { ...metric, locale: "de-DE" }).errors.recoveredChargeG).toMatch(
+      /Did you mean 1,2 or 1\.200\?/,
+    );
+  });
+
+  it("takes 29.9 inHg and 500 microns and shows them back as typed (NIST SP 811; US Standard Atmosphere 1976)", () => {
+    const sea = { ...imperial, altitudeM: 0 };
+    const draft = draftFromRecord(null, sea, { labelChargeG: null, oilType: null });
+    draft.text.deepestKpaAbs = "500 microns";
+    draft.text.holdStartKpaAbs = "29.9 inHg";
+    draft.text.holdEndKpaAbs = "24 inHg";
+    const read = readDraft(draft, sea);
+    expect(read.errors).toEqual({});
+    const input = inputFromDraft(draft, read, "evacuation", 0, sea);
+    const again = draftFromRecord({ ...saved, ...input } as ServiceRecordDto, sea, {
+      labelChargeG: null,
+      oilType: null,
+    });
+    expect(again.text.deepestKpaAbs).toBe("500 microns");
+    expect(again.text.holdStartKpaAbs).toBe("29.9 inHg");
+    expect(again.text.holdEndKpaAbs).toBe("24 inHg");
+  });
+
+  it("refuses a vacuum deeper than the local atmosphere allows, with the reason", () => {
+    const high = { ...imperial, altitudeM: 1500 };
+    const draft = draftFromRecord(null, high, { labelChargeG: null, oilType: null });
+    draft.text.deepestKpaAbs = "29.9 inHg";
+    expect(readDraft(draft, high).errors.deepestKpaAbs).toMatch(/deeper vacuum than the air here allows/);
+  });
 });

@@ -21,7 +21,8 @@ import {
   type PressureUnit,
   type TemperatureUnit,
   type VolumeUnit,
-  kpaAbsToVacuumInHg,
+  vacuumFieldText,
+  type VacuumUnit,
   massFromG,
   pressureFromKpa,
   temperatureFromC,
@@ -34,7 +35,13 @@ export interface ShopUnitsPrefs {
   gauge: PressureUnit;
   temperature: TemperatureUnit;
   altitudeM: number;
+  /** The reader's vacuum gauge; without one, inHg unless gauges read kPa. */
+  vacuum?: VacuumUnit;
+  /** How the reader writes numbers ("1,200" is 1200 in en-US, a question in de-DE). */
+  locale?: string;
 }
+
+const vacuumUnitOf = (u: ShopUnitsPrefs): VacuumUnit => u.vacuum ?? (u.gauge === "kPa" ? "kPa" : "inHg");
 
 /** The record's typed fields, by the API's names: the draft keeps what was typed in each. */
 export type TextField = ServiceEntryField;
@@ -69,11 +76,8 @@ export function draftFromRecord(
   const mass = (g: number) => withUnit(round(massFromG(g, u.mass), u.mass === "g" ? 0 : 2), u.mass);
   const vol = (ml: number) =>
     withUnit(round(volumeFromMl(ml, u.volume), u.volume === "mL" ? 0 : 1), u.volume);
-  // Metric shops see the stored absolute pressure as it is; others see inHg of vacuum, to 0.001 so a re-save does not drift.
-  const vac = (k: number) =>
-    u.gauge === "kPa"
-      ? `${round(k, 3)} kPa`
-      : `${round(kpaAbsToVacuumInHg(k, { altitudeM: u.altitudeM }), 3)} inHg`;
+  // In the reader's vacuum unit, to 0.001 so a re-save does not drift; a deep vacuum in microns, as typed.
+  const vac = (k: number) => vacuumFieldText(k, vacuumUnitOf(u), { altitudeM: u.altitudeM });
   const shown: Record<ServiceEntryKind, (value: number | string) => string> = {
     mass: (v) => mass(Number(v)),
     volume: (v) => vol(Number(v)),
@@ -118,13 +122,14 @@ export type ReadDraft = {
 /** Every typed quantity in internal units, with a message for each one that cannot be read. */
 export function readDraft(d: Draft, u: ShopUnitsPrefs): ReadDraft {
   const readers: Partial<Record<ServiceEntryKind, (t: string) => Entry>> = {
-    mass: (t) => readMassG(t, u.mass),
-    volume: (t) => readVolumeMl(t, u.volume),
+    mass: (t) => readMassG(t, u.mass, u.locale),
+    volume: (t) => readVolumeMl(t, u.volume, u.locale),
     percent: (t) => readPlainNumber(t, "a percentage"),
     minutes: (t) => readPlainNumber(t, "minutes"),
-    vacuum: (t) => readVacuumKpaAbs(t, { altitudeM: u.altitudeM }),
-    temperature: (t) => readTemperatureC(t, u.temperature),
-    gauge: (t) => readGaugeKpa(t, u.gauge),
+    vacuum: (t) =>
+      readVacuumKpaAbs(t, { altitudeM: u.altitudeM, defaultUnit: vacuumUnitOf(u), locale: u.locale }),
+    temperature: (t) => readTemperatureC(t, u.temperature, u.locale),
+    gauge: (t) => readGaugeKpa(t, u.gauge, u.locale),
   };
   const values: ReadDraft["values"] = {};
   const errors: ReadDraft["errors"] = {};

@@ -4,7 +4,7 @@ import type { Dispatch, SetStateAction } from "react";
 import type { ServiceStepId } from "@/lib/contracts/service-records";
 import type { ServiceRecordSummary } from "@/lib/service/record-summary";
 import { REPLACED_PART_IDS, REPLACED_PART_LABELS } from "@/lib/service/oil";
-import { formatMass, formatVolume } from "@/lib/units";
+import { formatMass, formatVolume, UNIT_LABELS, VACUUM_EXAMPLES } from "@/lib/units";
 import type { Draft, TextField } from "./draft";
 import { EntryInput } from "./entry-input";
 import { ResultLine } from "./result-line";
@@ -69,7 +69,7 @@ export function StepFields({ step, draft, setDraft, setText, errorOf, summary, p
   const u = props.units;
   const massHint = `Type ${u.mass === "g" ? "grams" : u.mass} or add a unit: 650 g, 1.4 kg, 1 lb 7 oz.`;
   const volHint = `Type ${u.volume === "mL" ? "mL" : "fl oz"} or add a unit: 45 mL, 1.5 fl oz.`;
-  const vacHint = "As the gauge shows it: 29.5 inHg of vacuum, or an absolute pressure such as 0.4 kPa.";
+  const vacHint = `As the gauge shows it: ${VACUUM_EXAMPLES}. A bare number is read as ${UNIT_LABELS[u.vacuum ?? (u.gauge === "kPa" ? "kPa" : "inHg")]}${u.vacuum === "inHg" || (!u.vacuum && u.gauge !== "kPa") ? " of vacuum below the atmosphere" : u.vacuum === "micron" ? " of mercury" : " absolute"}.`;
   const t = draft.text;
   const f = (field: TextField, label: string, hint?: string) => (
     <EntryInput

@@ -3,12 +3,12 @@ import {
   type PressureUnit,
   type TemperatureUnit,
   type VolumeUnit,
-  barometricKpa,
   massToG,
   parseQuantity,
+  parseVacuum,
   pressureToKpa,
   temperatureToC,
-  vacuumInHgToKpaAbs,
+  type VacuumUnit,
   volumeToMl,
 } from "@/lib/units";
 
@@ -18,61 +18,54 @@ export type Entry = { empty: true } | { value: number } | { error: string };
 const EMPTY: Entry = { empty: true };
 
 /** "650", "1.4 kg", "1 lb 7 oz" → grams (whole grams, as the ledger stores them). */
-export function readMassG(text: string, defaultUnit: MassUnit = "g"): Entry {
+export function readMassG(text: string, defaultUnit: MassUnit = "g", locale?: string): Entry {
   if (text.trim() === "") return EMPTY;
-  const q = parseQuantity(text, "mass", defaultUnit);
+  const q = parseQuantity(text, "mass", defaultUnit, { locale });
   if ("error" in q) return q;
   if (q.value < 0) return { error: "A mass cannot be negative." };
   return { value: Math.round(massToG(q.value, q.unit as MassUnit)) };
 }
 
 /** "45", "45 mL", "1.5 fl oz" → millilitres (whole). A bare "oz" on an oil volume means fluid ounces. */
-export function readVolumeMl(text: string, defaultUnit: VolumeUnit = "mL"): Entry {
+export function readVolumeMl(text: string, defaultUnit: VolumeUnit = "mL", locale?: string): Entry {
   if (text.trim() === "") return EMPTY;
   const spelled = /fl/i.test(text) ? text : text.replace(/\boz\b/i, "fl oz");
-  const q = parseQuantity(spelled, "volume", defaultUnit);
+  const q = parseQuantity(spelled, "volume", defaultUnit, { locale });
   if ("error" in q) return q;
   if (q.value < 0) return { error: "A volume cannot be negative." };
   return { value: Math.round(volumeToMl(q.value, q.unit as VolumeUnit)) };
 }
 
 /**
- * A vacuum reading → kPa absolute. Inches of mercury are read as a vacuum gauge shows them,
- * below the local atmosphere (so the shop's altitude matters); kPa, bar and psi are taken as
- * absolute, the way electronic vacuum gauges show them.
+ * A vacuum reading → kPa absolute, to 0.01 Pa so microns come back as typed. Inches of mercury are read
+ * as a compound gauge shows them, below the local atmosphere (so the shop's altitude matters); kPa and
+ * mbar as absolute, the way electronic gauges show them; microns of mercury as a micron gauge shows them.
  */
 export function readVacuumKpaAbs(
   text: string,
-  opts: { altitudeM?: number; defaultUnit?: PressureUnit } = {},
+  opts: { altitudeM?: number; defaultUnit?: VacuumUnit; locale?: string } = {},
 ): Entry {
   if (text.trim() === "") return EMPTY;
-  const q = parseQuantity(text, "pressure", opts.defaultUnit ?? "inHg");
-  if ("error" in q) return q;
-  if (q.reference === "gauge")
-    return { error: "Give the vacuum in inHg below the atmosphere, or as an absolute pressure (kPa abs)." };
-  const atmosphereKpa = barometricKpa({ altitudeM: opts.altitudeM ?? 0 });
-  const kpaAbs =
-    q.unit === "inHg"
-      ? vacuumInHgToKpaAbs(q.value, { barometricKpa: atmosphereKpa })
-      : pressureToKpa(q.value, q.unit as PressureUnit);
-  if (kpaAbs < 0)
-    return { error: "That is deeper than a perfect vacuum here: check the reading and the shop's altitude." };
-  if (kpaAbs > atmosphereKpa + 0.5) return { error: "That is above the atmosphere, not a vacuum." };
-  return { value: Math.round(kpaAbs * 1000) / 1000 };
+  const read = parseVacuum(text, opts.defaultUnit ?? "inHg", {
+    at: { altitudeM: opts.altitudeM ?? 0 },
+    locale: opts.locale,
+  });
+  if ("error" in read) return { error: read.error };
+  return { value: Math.round(read.kpaAbs * 100_000) / 100_000 };
 }
 
 /** A gauge pressure ("210 kPa", "32 psi") → kPa gauge. */
-export function readGaugeKpa(text: string, defaultUnit: PressureUnit = "kPa"): Entry {
+export function readGaugeKpa(text: string, defaultUnit: PressureUnit = "kPa", locale?: string): Entry {
   if (text.trim() === "") return EMPTY;
-  const q = parseQuantity(text, "pressure", defaultUnit);
+  const q = parseQuantity(text, "pressure", defaultUnit, { locale });
   if ("error" in q) return q;
   if (q.reference === "absolute") return { error: "Give the gauge reading, not an absolute pressure." };
   return { value: Math.round(pressureToKpa(q.value, q.unit as PressureUnit) * 100) / 100 };
 }
 
-export function readTemperatureC(text: string, defaultUnit: TemperatureUnit = "C"): Entry {
+export function readTemperatureC(text: string, defaultUnit: TemperatureUnit = "C", locale?: string): Entry {
   if (text.trim() === "") return EMPTY;
-  const q = parseQuantity(text, "temperature", defaultUnit);
+  const q = parseQuantity(text, "temperature", defaultUnit, { locale });
   if ("error" in q) return q;
   return { value: Math.round(temperatureToC(q.value, q.unit as TemperatureUnit) * 100) / 100 };
 }

@@ -47,7 +47,9 @@ describe("parseVacuum reads a vacuum as the gauge shows it", () => {
       "29.90 inHg vacuum (500 microns)".replace("29.90", "29.9"),
     );
     expect(formatVacuum(0.0666612, "micron")).toBe("500 microns");
-    expect(vacuumFieldText(0.0666612, "inHg", seaLevel)).toBe("500 microns");
+    expect(vacuumFieldText(0.06666, "inHg", seaLevel)).toBe("500 microns");
+    expect(vacuumFieldText(0.07197, "micron", seaLevel)).toBe("29.9 inHg");
+    expect(vacuumFieldText(0.35, "inHg", seaLevel)).toBe("0.35 kPa");
     const inHg = parseVacuum(vacuumFieldText(20, "inHg", seaLevel), "kPa", { at: seaLevel });
     expect("kpaAbs" in inHg && inHg.kpaAbs).toBeCloseTo(20, 2);
   });

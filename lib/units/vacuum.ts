@@ -154,9 +154,30 @@ export function formatVacuum(kpaAbs: number, unit: VacuumUnit, at?: BarometricSo
   return text(unit);
 }
 
-/** A vacuum as typed text the field reads back to the same value (no label words a reader would refuse). */
+/** Stored vacuum readings keep 0.01 Pa (service_record, DECIMAL(9,5) kPa). */
+const STORED_RESOLUTION_KPA = 0.00001;
+
+/**
+ * A stored vacuum as field text that reads back to the same value, in the unit it was most likely typed
+ * in: the unit where it needs the fewest significant digits, the reader's own first on a tie. 500 microns comes
+ * back as 500 microns and 29.9 inHg as 29.9 inHg, whatever the reader's unit.
+ */
 export function vacuumFieldText(kpaAbs: number, unit: VacuumUnit, at?: BarometricSource): string {
-  const shown: VacuumUnit = kpaAbs < MICRON_RANGE_KPA_ABS ? "micron" : unit;
-  const value = round(vacuumFromKpaAbs(kpaAbs, shown, at), shown === "micron" ? 0 : 3);
-  return `${value} ${shown === "micron" ? "microns" : shown}`;
+  const order = [...new Set<VacuumUnit>([unit, "inHg", "micron", "kPa", "mbar"])];
+  let best: { unit: VacuumUnit; value: number; digits: number } | null = null;
+  for (const u of order) {
+    const exact = vacuumFromKpaAbs(kpaAbs, u, at);
+    if (u === "inHg" && exact <= 0) continue;
+    const tolerance = (0.6 * STORED_RESOLUTION_KPA) / KPA_PER_VACUUM_UNIT[u];
+    // Nobody reads a micron gauge to a fraction of a micron.
+    for (let decimals = 0; decimals <= (u === "micron" ? 0 : 3); decimals++) {
+      const value = round(exact, decimals);
+      if (Math.abs(value - exact) > tolerance) continue;
+      const digits = value.toFixed(decimals).replace(".", "").replace(/^0+/, "").length;
+      if (!best || digits < best.digits) best = { unit: u, value, digits };
+      break;
+    }
+  }
+  const shown = best ?? { unit, value: round(vacuumFromKpaAbs(kpaAbs, unit, at), 3) };
+  return `${shown.value} ${shown.unit === "micron" ? "microns" : shown.unit}`;
 }

@@ -6,6 +6,7 @@ import { serviceRecordRefusal } from "@/lib/service/record-rules";
 import { isAppError } from "@/lib/errors";
 import { EXPANSION_DEVICE_LABELS } from "@/lib/vehicles/expansion-devices";
 import { getShop } from "@/lib/server/shops";
+import { getProfile } from "@/lib/server/profile";
 import { getServiceCase, getServiceRecord } from "@/lib/server/service-records";
 import { listCylinders } from "@/lib/server/ledger";
 import { listSpecMatches } from "@/lib/server/specs";
@@ -23,11 +24,12 @@ export default async function ServiceRecordPage({ params }: { params: Promise<{ 
     if (isAppError(error) && error.status === 404) notFound();
     throw error;
   });
-  const [shop, record, cylinders, allowancesMl] = await Promise.all([
+  const [shop, record, cylinders, allowancesMl, profile] = await Promise.all([
     getShop({ shopId }),
     getServiceRecord({ shopId, caseId }),
     listCylinders({ shopId, includeRetired: false }),
     getPartOilAllowances({ shopId }),
+    getProfile({ user }),
   ]);
   const matches =
     serviceCase.make && serviceCase.model && serviceCase.year
@@ -41,7 +43,6 @@ export default async function ServiceRecordPage({ params }: { params: Promise<{ 
           },
         })
       : [];
-  const imperial = shop.units === "imperial";
   const readOnlyReason =
     serviceRecordRefusal("save", user, {
       caseStatus: serviceCase.status,
@@ -85,11 +86,13 @@ export default async function ServiceRecordPage({ params }: { params: Promise<{ 
         }))}
         allowancesMl={allowancesMl}
         units={{
-          mass: imperial ? "oz" : "g",
-          volume: imperial ? "floz" : "mL",
-          gauge: imperial ? "psi" : "kPa",
-          temperature: imperial ? "F" : "C",
+          mass: profile.units.mass,
+          volume: profile.units.volume,
+          gauge: profile.units.pressure,
+          temperature: profile.units.temperature,
+          vacuum: profile.units.vacuum,
           altitudeM: shop.altitudeM,
+          locale: profile.locale ?? shop.locale,
         }}
         readOnlyReason={readOnlyReason}
       />
