@@ -1,5 +1,11 @@
 import { z } from "zod";
 import { FULL_VACUUM_KPA_GAUGE, MAX_READING_KPA_GAUGE } from "@/lib/refrigerants/gauge-limits";
+import { quantityMarker } from "@/lib/units/quantity";
+
+// Limits go into messages as quantity markers, so a °F reader is told "above 131 °F", not "above 55 °C".
+const limitC = (c: number) => quantityMarker({ kind: "temperature", value: c, decimals: 0 });
+const limitG = (g: number) => quantityMarker({ kind: "mass", value: g });
+const limitMl = (ml: number) => quantityMarker({ kind: "volume", value: ml });
 import {
   behaviourSymptomIds,
   compressorOilChoices,
@@ -35,8 +41,8 @@ function gaugeKpa(label: string) {
 function tempC(label: string, minC: number, maxC: number) {
   return z
     .number({ error: `${label}: enter a number` })
-    .min(minC, { error: `${label}: below ${minC} °C is not a reading we can use — check the unit` })
-    .max(maxC, { error: `${label}: above ${maxC} °C is not a reading we can use — check the unit` });
+    .min(minC, { error: `${label}: below ${limitC(minC)} is not a reading we can use — check the unit` })
+    .max(maxC, { error: `${label}: above ${limitC(maxC)} is not a reading we can use — check the unit` });
 }
 
 export const complaintAnswersSchema = z.object({
@@ -66,8 +72,10 @@ export const systemAnswersSchema = z.preprocess(
     }),
     labelChargeG: z
       .number({ error: "Label charge: enter a number" })
-      .min(50, { error: "Label charge: under 50 g is not a vehicle charge — check the unit" })
-      .max(5000, { error: "Label charge: over 5 kg is not a light-vehicle charge — check the unit" })
+      .min(50, { error: `Label charge: under ${limitG(50)} is not a vehicle charge — check the unit` })
+      .max(5000, {
+        error: `Label charge: over ${limitG(5000)} is not a light-vehicle charge — check the unit`,
+      })
       .optional(),
     oilType: z.enum(oilTypeChoices, { error: "Choose the oil type or leave it blank" }).optional(),
   }),
@@ -170,12 +178,14 @@ export const chargeAuditAnswersSchema = z
     recoveredChargeG: z
       .number({ error: "Recovered mass: enter a number" })
       .min(0, { error: "Recovered mass cannot be negative" })
-      .max(6000, { error: "Recovered mass: over 6 kg is not one vehicle's charge — check the unit" })
+      .max(6000, {
+        error: `Recovered mass: over ${limitG(6000)} is not one vehicle's charge — check the unit`,
+      })
       .optional(),
     oilRemovedMl: z
       .number({ error: "Oil removed: enter a number" })
       .min(0, { error: "Oil removed cannot be negative" })
-      .max(1000, { error: "Oil removed: over 1 litre is not one vehicle's oil — check the unit" })
+      .max(1000, { error: `Oil removed: over ${limitMl(1000)} is not one vehicle's oil — check the unit` })
       .optional(),
     partReplaced: z
       .enum(partReplacedChoices, { error: "Say whether a part was replaced, and its oil" })

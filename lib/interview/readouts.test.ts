@@ -4,7 +4,19 @@ import { diagnose } from "@/lib/diagnosis";
 import { SUBCOOLING_K } from "@/lib/diagnosis/grading";
 import { SERVICE_REFRIGERANT_IDS } from "@/lib/refrigerants/catalog";
 import { runningPhysics } from "@/lib/refrigerants/readings";
-import { liveReadouts } from "./readouts";
+import { sayInUnits, unitsOfSystem } from "@/lib/units";
+import { liveReadouts as markedReadouts } from "./readouts";
+
+/** The lines as an SI reader sees them. */
+function liveReadouts(...args: Parameters<typeof markedReadouts>) {
+  const lines = markedReadouts(...args);
+  return Object.fromEntries(
+    Object.entries(lines).map(([field, list]) => [
+      field,
+      list.map((l) => ({ ...l, text: sayInUnits(l.text) })),
+    ]),
+  );
+}
 
 // R-134a saturation: 1317.905 kPa abs at 50 °C, 292.803 kPa abs at 0 °C, 665.381 kPa abs at 25 °C
 // (Tillner-Roth & Baehr 1994); one standard atmosphere is 101.325 kPa (ISO 2533).
@@ -53,6 +65,23 @@ describe("liveReadouts", () => {
     );
     expect(lines.staticKpaGauge?.[0]?.text).toBe("Saturation at 25.0 °C ambient: 564 kPa gauge");
     expect(lines.staticKpaGauge?.[1]).toMatchObject({ status: "inside", verdict: "no sign of air" });
+  });
+
+  it("says every number in an imperial reader's units (NIST SP 811 factors)", () => {
+    const lines = markedReadouts(
+      "running",
+      { highKpaGauge: 1317.905 - SEA_LEVEL_KPA, liquidLineC: 45, ventC: 9 },
+      { refrigerant: "R-134a", expansionDevice: "txv", ambientC: 35 },
+    );
+    const imperial = unitsOfSystem("imperial");
+    // 50 °C is 122 °F; a 15 K difference is 27 °F; 26 K is 46.8 °F.
+    expect(sayInUnits(lines.highKpaGauge![0]!.text, imperial)).toBe(
+      "Condensing at 122.0 °F, 27.0 °F above the air",
+    );
+    expect(sayInUnits(lines.ventC![0]!.text, imperial)).toBe("46.8 °F below the air temperature");
+    expect(sayInUnits(lines.highKpaGauge![1]!.text, imperial)).toMatch(/^Expected \d+–\d+ psig for this air/);
+    for (const list of Object.values(lines))
+      for (const line of list) expect(sayInUnits(line.text, imperial)).not.toMatch(/kPa|°C| K\b/);
   });
 
   it("computes nothing before the refrigerant is known", () => {

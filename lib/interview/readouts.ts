@@ -6,15 +6,23 @@ import { runningPhysics, type RunningPhysics } from "@/lib/refrigerants/readings
 import { saturationTemperature } from "@/lib/refrigerants/saturation";
 import { recoveredAgainstLabel } from "@/lib/service/charge";
 import type { ExpansionDevice } from "@/lib/vehicles/expansion-devices";
+import { quantityMarker as q, quantityRangeMarker as range } from "@/lib/units/quantity";
 
 /*
  * The physics shown beside each reading as it is typed: pure, recomputed on every keystroke. The numbers
  * come from the same functions the findings engine uses (runningPhysics, staticCheck, expectedBands) and
- * are judged against the engine's own grading table, so the screen and the findings agree.
+ * are judged against the engine's own grading table, so the screen and the findings agree. Numbers go
+ * into the text as quantity markers (lib/units/quantity.ts): the screen says them in the reader's units.
  */
+
+const tempC = (value: number) => q({ kind: "temperature", value: round1(value), decimals: 1 });
+const kelvin = (value: number, decimals: 0 | 1 = 1) =>
+  q({ kind: "temperature_difference", value: round1(value), decimals });
+const round1 = (value: number) => Math.round(value * 1000) / 1000;
 
 export type BandStatus = "inside" | "below" | "above" | "unknown";
 export interface ReadoutLine {
+  /** With quantity markers: a screen says it with sayInUnits (lib/units) in the reader's units. */
   text: string;
   status?: BandStatus;
   /** Replaces the plain "in range / above range" word when the reading needs its own. */
@@ -75,7 +83,9 @@ function staticLines(
     if (check.kind === "out_of_range") return [{ text: check.message, status: "unknown" }];
     const satGauge = check.saturationKpaAbs - barometricKpa;
     const lines: ReadoutLine[] = [
-      { text: `Saturation at ${fmt(referenceC)} °C ${where}: ${fmt(satGauge, 0)} kPa gauge` },
+      {
+        text: `Saturation at ${tempC(referenceC)} ${where}: ${q({ kind: "pressure_gauge", value: satGauge })}`,
+      },
     ];
     if (check.kind === "no_liquid") lines.push({ text: check.message, status: "below", verdict: "" });
     // The same tolerance in kelvin the findings engine grades against, so the screen and the findings agree.
@@ -83,7 +93,7 @@ function staticLines(
       const excessK = saturationTemperature(refrigerant, staticKpaAbs) - referenceC;
       const air = excessK > STATIC_CHECK.normalUpToK;
       lines.push({
-        text: `Static pressure is ${fmt(Math.abs(excessK))} K ${excessK >= 0 ? "above" : "below"} saturation`,
+        text: `Static pressure is ${kelvin(Math.abs(excessK))} ${excessK >= 0 ? "above" : "below"} saturation`,
         status: air ? "above" : "inside",
         verdict: air ? "air or another gas is likely present" : "no sign of air",
       });
@@ -109,13 +119,13 @@ function runningLines(
     else {
       const lines: ReadoutLine[] = [
         {
-          text: `Condensing at ${fmt(condensingC)} °C${num(ambientC) ? `, ${fmt(condensingC - ambientC)} K above the air` : ""}`,
+          text: `Condensing at ${tempC(condensingC)}${num(ambientC) ? `, ${kelvin(condensingC - ambientC)} above the air` : ""}`,
         },
       ];
       if (bands) {
         const [min, max] = [gauge(bands.high.minKpaAbs), gauge(bands.high.maxKpaAbs)];
         lines.push({
-          text: `Expected ${fmt(min, 0)}–${fmt(max, 0)} kPa gauge for this air temperature`,
+          text: `Expected ${range("pressure_gauge", min, max)} for this air temperature`,
           status: band(high, min, max),
         });
       }
@@ -126,10 +136,10 @@ function runningLines(
     const low = values.lowKpaGauge;
     if (evaporatingC === undefined) out.lowKpaGauge = offTable(refrigerant, lowKpaAbs);
     else {
-      const lines: ReadoutLine[] = [{ text: `Evaporating at ${fmt(evaporatingC)} °C` }];
+      const lines: ReadoutLine[] = [{ text: `Evaporating at ${tempC(evaporatingC)}` }];
       if (bands) {
         const [min, max] = [gauge(bands.low.minKpaAbs), gauge(bands.low.maxKpaAbs)];
-        lines.push({ text: `Expected ${fmt(min, 0)}–${fmt(max, 0)} kPa gauge`, status: band(low, min, max) });
+        lines.push({ text: `Expected ${range("pressure_gauge", min, max)}`, status: band(low, min, max) });
       }
       out.lowKpaGauge = lines;
     }
@@ -141,9 +151,14 @@ function runningLines(
       const { low, high } = SUBCOOLING_K.txv;
       const typical =
         ctx.expansionDevice === "txv"
-          ? { text: ` (typical for a TXV system ${low}–${high} K)`, status: band(subcoolingK, low, high) }
+          ? {
+              text: ` (typical for a TXV system ${range("temperature_difference", low, high, 0)})`,
+              status: band(subcoolingK, low, high),
+            }
           : { text: "", status: undefined };
-      out.liquidLineC = [{ text: `Subcooling ${fmt(subcoolingK)} K${typical.text}`, status: typical.status }];
+      out.liquidLineC = [
+        { text: `Subcooling ${kelvin(subcoolingK)}${typical.text}`, status: typical.status },
+      ];
     }
   }
   if (num(values.suctionLineC) && lowKpaAbs !== undefined) {
@@ -153,15 +168,15 @@ function runningLines(
       const typical =
         ctx.expansionDevice === "txv"
           ? {
-              text: ` (typical for a TXV system ${nearZero}–${high} K)`,
+              text: ` (typical for a TXV system ${range("temperature_difference", nearZero, high, 0)})`,
               status: band(superheatK, nearZero, high),
             }
-          : { text: " (an orifice-tube evaporator runs near 0 K)", status: undefined };
-      out.suctionLineC = [{ text: `Superheat ${fmt(superheatK)} K${typical.text}`, status: typical.status }];
+          : { text: ` (an orifice-tube evaporator runs near ${kelvin(0, 0)})`, status: undefined };
+      out.suctionLineC = [{ text: `Superheat ${kelvin(superheatK)}${typical.text}`, status: typical.status }];
     }
   }
   if (num(values.ventC) && num(ambientC)) {
-    out.ventC = [{ text: `${fmt(ambientC - values.ventC)} K below the air temperature` }];
+    out.ventC = [{ text: `${kelvin(ambientC - values.ventC)} below the air temperature` }];
   }
   return out;
 }
@@ -177,7 +192,7 @@ function chargeLines(refrigerant: RefrigerantId, labelChargeG: number, recovered
     const status: BandStatus = verdict === "over" ? "above" : verdict === "under" ? "below" : "inside";
     return [
       {
-        text: `${deltaG >= 0 ? "+" : "−"}${fmt(Math.abs(deltaG), 0)} g (${deltaPct >= 0 ? "+" : "−"}${fmt(Math.abs(deltaPct))} %) against the ${fmt(labelChargeG, 0)} g label`,
+        text: `${deltaG >= 0 ? "+" : "−"}${q({ kind: "mass", value: Math.abs(deltaG) })} (${deltaPct >= 0 ? "+" : "−"}${fmt(Math.abs(deltaPct))} %) against the ${q({ kind: "mass", value: labelChargeG })} label`,
         status,
       },
     ];

@@ -68,6 +68,7 @@ export {
   type QuantityKind as MeasuredKind,
   quantityMarker,
   quantityParts,
+  quantityRangeMarker,
   sayInUnits,
   SI_READER_UNITS,
   tempCQuantity,

@@ -126,13 +126,34 @@ export function quantityMarker(q: Quantity): string {
   return `{{q:${q.kind}:${q.value}${q.decimals === undefined ? "" : `:${q.decimals}`}}}`;
 }
 
+const RANGE_MARKER = /\{\{r:([a-z_]+):(-?[\d.e-]+):(-?[\d.e-]+)(?::([0-3]))?\}\}/g;
+
+/** A range said once with its unit: "1200–1500 kPa gauge", "174–218 psig". */
+export function quantityRangeMarker(
+  kind: QuantityKind,
+  low: number,
+  high: number,
+  decimals?: 0 | 1 | 2 | 3,
+): string {
+  return `{{r:${kind}:${low}:${high}${decimals === undefined ? "" : `:${decimals}`}}}`;
+}
+
 /** A message with quantity markers, said in the reader's units (SI when no reader is known). */
 export function sayInUnits(
   message: string,
   units: ReaderUnits = SI_READER_UNITS,
   at?: BarometricSource,
 ): string {
-  return message.replace(MARKER, (_, kind: string, value: string, decimals?: string) =>
+  const withRanges = message.replace(
+    RANGE_MARKER,
+    (_, kind: string, low: string, high: string, decimals?: string) => {
+      const d = decimals === undefined ? {} : { decimals: Number(decimals) as 0 | 1 | 2 | 3 };
+      const [from] = quantityParts({ kind: kind as QuantityKind, value: Number(low), ...d }, units, at);
+      const [to, unit] = quantityParts({ kind: kind as QuantityKind, value: Number(high), ...d }, units, at);
+      return `${from}–${to} ${unit}`;
+    },
+  );
+  return withRanges.replace(MARKER, (_, kind: string, value: string, decimals?: string) =>
     formatQuantity(
       {
         kind: kind as QuantityKind,
