@@ -202,12 +202,16 @@ test("a case entered in imperial units gives the same computed values as its met
   await imperial.press("Enter");
   await imperial.skip();
   await imperial.expectStep(STEP_LABELS.running);
+  // Each field's unit button says what its digits mean, for that field alone.
   await imperial.setUnit("High side", "psi");
   await imperial.field("High side").fill("250");
+  await imperial.setUnit("Low side", "psi");
   await imperial.field("Low side").fill("40");
+  await imperial.setUnit("Liquid line at the condenser outlet", "°F");
   await imperial.field(/Liquid line/).fill("125.6");
+  await imperial.setUnit("Suction line at the evaporator outlet", "°F");
   await imperial.field(/Suction line/).fill("50");
-  await expect(page.getByText("= 250 psi · 1724 kPa · 17.24 bar")).toBeVisible();
+  await expect(page.getByText("= 1723.7 kPa · 17.24 bar")).toBeVisible();
   await imperial.press("Enter");
   await imperial.next();
   await imperial.skip();
@@ -349,7 +353,7 @@ test("two screens on one case: the second never silently overwrites the first, a
   await otherDevice.close();
 });
 
-test("switching units converts what was typed and keeps the quantity (1 psi = 6.894757 kPa, NIST SP 811)", async ({
+test("a unit tapped after typing says what the digits mean and never changes them (1 psi = 6.894757 kPa, NIST SP 811)", async ({
   page,
 }) => {
   const interview = new InterviewPage(page);
@@ -358,10 +362,11 @@ test("switching units converts what was typed and keeps the quantity (1 psi = 6.
   await interview.digits("30");
   await interview.press("Enter");
   await interview.expectStep(STEP_LABELS.static);
-  await interview.setUnit("Static pressure (either gauge)", "psi");
+  // Read the gauge, type it, then say which unit it was in: the natural order.
   await interview.enter(/Static pressure/, "90");
-  await interview.setUnit("Static pressure (either gauge)", "kPa");
-  await expect(interview.field(/Static pressure/)).toHaveValue("620.5");
+  await interview.setUnit("Static pressure (either gauge)", "psi");
+  await expect(interview.field(/Static pressure/)).toHaveValue("90");
+  await expect(page.getByText("= 620.5 kPa · 6.21 bar")).toBeVisible();
   await interview.waitUntilSaved();
   const saved = await readCase(interview.caseIdFromUrl());
   expect(saved.answers.answers.static?.staticKpaGauge).toBeCloseTo(90 * 6.894757, 1);
