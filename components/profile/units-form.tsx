@@ -157,7 +157,9 @@ function LoadedUnitsForm({ profile }: { profile: ProfileResponse }) {
           placeholder="This device's language"
           autoComplete="off"
           aria-describedby="profile-locale-hint"
-          {...form.register("locale", { setValueAs: (v: string) => (v.trim() === "" ? null : v.trim()) })}
+          {...form.register("locale", {
+            setValueAs: (v: string | null) => (v == null || v.trim() === "" ? null : v.trim()),
+          })}
         />
         <datalist id="profile-locales">
           {LOCALES.map((l) => (
