@@ -5,6 +5,7 @@ import { can } from "@/lib/auth/roles";
 import { getQueryClient } from "@/lib/query-client";
 import { ledgerKeys } from "@/lib/queries/ledger";
 import { getShop } from "@/lib/server/shops";
+import { getProfile } from "@/lib/server/profile";
 import { ledgerReport, listCylinderPage, listMovementPage } from "@/lib/server/ledger";
 import { cautionsFor } from "@/lib/service/cautions";
 import { LedgerView } from "@/components/ledger/ledger-view";
@@ -22,12 +23,15 @@ const LEDGER_CAUTIONS: readonly string[] = [
 export default async function LedgerPage() {
   const user = await requireUser("ledger:read");
   const shopId = user.shopId;
-  const [shop, cylinders, movements, report] = await Promise.all([
+  const [shop, cylinders, movements, report, profile] = await Promise.all([
     getShop({ shopId }),
     listCylinderPage({ shopId, query: {} }),
     listMovementPage({ shopId, query: {} }),
     ledgerReport({ shopId }),
+    getProfile({ user }),
   ]);
+  // Cylinders are weighed in pounds by a reader of ounces (common practice); metric readers keep their unit.
+  const mass = profile.units.mass;
   const queryClient = getQueryClient();
   queryClient.setQueryData(ledgerKeys.cylinders(), { pages: [cylinders], pageParams: [null] });
   queryClient.setQueryData(ledgerKeys.movements(), { pages: [movements], pageParams: [null] });
@@ -38,7 +42,7 @@ export default async function LedgerPage() {
       <HydrationBoundary state={dehydrate(queryClient)}>
         <LedgerView
           viewer={{
-            massUnit: shop.units === "imperial" ? "lb" : "g",
+            massUnit: mass === "oz" || mass === "lb" ? "lb" : mass,
             timeZone: shop.timeZone,
             canWrite: can(user.role, "ledger:write"),
             canCancelAny: user.role === "owner" || user.role === "senior",
