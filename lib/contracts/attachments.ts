@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { singleLineText } from "./text";
 
 // Photos attached to a case: what an upload may be, and what the shop's screens receive.
 
@@ -24,8 +25,7 @@ export const ATTACHMENT_KIND_LABELS: Record<AttachmentKind, string> = {
 };
 
 export const CAPTION_MAX_CHARS = 200;
-const caption = z
-  .string()
+const caption = singleLineText()
   .trim()
   .max(CAPTION_MAX_CHARS, `Keep the caption under ${CAPTION_MAX_CHARS} characters.`);
 

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { multiLineText, singleLineText } from "./text";
 import { CAUSE_IDS } from "@/lib/diagnosis/causes";
 import { SYMPTOM_IDS } from "@/lib/diagnosis/symptoms";
 import { REFRIGERANT_IDS } from "@/lib/refrigerants/catalog";
@@ -27,8 +28,7 @@ export const CASEBOOK_MAX_PAGE = 400;
 export const CASEBOOK_EXPORT_MAX_ROWS = 5000;
 
 const optionalText = (max: number, message: string) =>
-  z
-    .string()
+  singleLineText()
     .trim()
     .max(max, message)
     .optional()
@@ -235,7 +235,7 @@ export const caseOutcomeSchema = z
     repairIds: z
       .array(z.enum(REPAIR_IDS, { message: "Pick repairs from the list." }))
       .max(10, "Pick at most ten repairs."),
-    note: z.string().trim().max(2000, "Keep the note under 2000 characters.").optional(),
+    note: multiLineText().trim().max(2000, "Keep the note under 2000 characters.").optional(),
   })
   .refine((v) => !v.causes.includes("none_found") || v.causes.length === 1, {
     message: "None found stands alone.",

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { multiLineText, singleLineText } from "./text";
 import type { Role } from "@/lib/auth/roles";
 import { CASE_STATUSES, type CaseStatus } from "@/lib/cases/statuses";
 import { SERVICE_REFRIGERANT_IDS } from "@/lib/refrigerants/catalog";
@@ -22,9 +23,8 @@ export const caseParamsSchema = z.object({
 const thisYear = new Date().getUTCFullYear();
 
 export const newCustomerSchema = z.object({
-  name: z.string().trim().min(1, "Enter the customer's name.").max(120),
-  phone: z
-    .string()
+  name: singleLineText().trim().min(1, "Enter the customer's name.").max(120),
+  phone: singleLineText()
     .trim()
     .max(40)
     .optional()
@@ -45,10 +45,9 @@ export const newVehicleSchema = z.object({
     .int("The model year is a whole number.")
     .min(1980, "From 1980 on.")
     .max(thisYear + 1, `Up to ${thisYear + 1}.`),
-  make: z.string().trim().min(1, "Enter the make.").max(60),
-  model: z.string().trim().min(1, "Enter the model.").max(80),
-  engine: z
-    .string()
+  make: singleLineText().trim().min(1, "Enter the make.").max(60),
+  model: singleLineText().trim().min(1, "Enter the model.").max(80),
+  engine: singleLineText()
     .trim()
     .max(80)
     .optional()
@@ -85,8 +84,7 @@ export const createCaseSchema = z
     newCustomer: newCustomerSchema.optional(),
     vehicleId: z.number().int().positive().optional(),
     newVehicle: newVehicleSchema.optional(),
-    complaint: z
-      .string()
+    complaint: multiLineText()
       .trim()
       .min(1, "Write down the complaint in the owner's words.")
       .max(2000, "Keep it under 2000 characters."),
@@ -144,7 +142,7 @@ export interface CaseDetail extends CaseListItem {
 export const signOffSchema = z
   .object({
     verdict: z.enum(["signed_off", "sent_back"], { message: "Sign off or send back." }),
-    comment: z.string().trim().max(4000, "Keep the comment under 4000 characters.").optional(),
+    comment: multiLineText().trim().max(4000, "Keep the comment under 4000 characters.").optional(),
   })
   .refine((v) => v.verdict === "signed_off" || (v.comment?.length ?? 0) > 0, {
     message: "Say what to look at again when you send a case back.",

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { singleLineText } from "./text";
 import { type RefrigerantId, SERVICE_REFRIGERANT_IDS } from "@/lib/refrigerants/catalog";
 import { RECOVERY_CYLINDER_FILL_LIMIT_PCT } from "@/lib/service/ledger";
 
@@ -14,13 +15,11 @@ export const cylinderParamsSchema = z.object({
 
 export const createCylinderSchema = z
   .object({
-    label: z
-      .string()
+    label: singleLineText()
       .trim()
       .min(1, "The label is missing: use the one written on the cylinder.")
       .max(60, "The label is at most 60 characters."),
-    serial: z
-      .string()
+    serial: singleLineText()
       .trim()
       .max(60, "The serial number is at most 60 characters.")
       .optional()

@@ -1,16 +1,20 @@
 import { z } from "zod";
+import { boundedJson } from "./json-body";
+import { multiLineText, singleLineText } from "./text";
 import { groupIds, stepIds } from "@/lib/interview/steps";
 import { CAUSE_IDS } from "@/lib/diagnosis";
 
 // Drafts hold what was typed but is not yet valid; bounded so a buggy client cannot fill the row.
 const MAX_RECORD_CHARS = 64_000;
+/** A group's draft is its form's values as typed: a few levels (a list of readings) at most. */
+const draftValue = boundedJson({ maxDepth: 6, maxChars: 16_000 });
 
 export const interviewSaveSchema = z
   .object({
     baseVersion: z.number().int().positive(),
     step: z.enum(stepIds, { message: "Unknown interview step." }),
     answers: z.partialRecord(z.enum(groupIds), z.unknown()),
-    drafts: z.partialRecord(z.enum(groupIds), z.unknown()).default({}),
+    drafts: z.partialRecord(z.enum(groupIds), draftValue).default({}),
     skipped: z.array(z.enum(groupIds)).max(groupIds.length).default([]),
     visited: z
       .array(z.enum(stepIds))
@@ -30,10 +34,9 @@ export interface InterviewSaveResponse {
 
 export const caseSubmitSchema = z.object({
   baseVersion: z.number().int().positive(),
-  engineVersion: z.string().min(1).max(64),
+  engineVersion: singleLineText().min(1).max(64),
   conclusionCause: z.enum(CAUSE_IDS, { message: "Choose the cause you concluded." }),
-  conclusionNotes: z
-    .string()
+  conclusionNotes: multiLineText()
     .trim()
     .min(1, "Say in a sentence or two why you concluded this.")
     .max(4000, "Keep it under 4000 characters."),

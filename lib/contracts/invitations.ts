@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { singleLineText } from "./text";
 import { ROLES, type Role } from "@/lib/auth/roles";
 
 // Adding a person to a shop: the owner invites an e-mail address; the person sets a password.
@@ -14,8 +15,7 @@ export const inviteUserSchema = z.object({
     .min(1, "The e-mail address is missing.")
     .email("That is not an e-mail address.")
     .max(255, "The e-mail address is at most 255 characters."),
-  name: z
-    .string({ message: "The name is missing." })
+  name: singleLineText({ message: "The name is missing." })
     .trim()
     .min(1, "The name is missing.")
     .max(120, "The name is at most 120 characters."),
@@ -35,8 +35,7 @@ export const invitationTokenSchema = z.string().regex(/^[A-Za-z0-9_-]{43}$/, "Th
 
 export const acceptInvitationSchema = z.object({
   token: invitationTokenSchema,
-  name: z
-    .string({ message: "Your name is missing." })
+  name: singleLineText({ message: "Your name is missing." })
     .trim()
     .min(1, "Your name is missing.")
     .max(120, "Your name is at most 120 characters."),

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { plausibleInstant, singleLineText } from "./text";
 import type { RefrigerantId } from "@/lib/refrigerants";
 import type { MovementType } from "@/lib/service/ledger";
 import type { MonthlyReportRow } from "@/lib/service/ledger-report";
@@ -56,9 +57,9 @@ export const manualMovementSchema = z
       .int("The mass is in whole grams.")
       .min(-LEDGER_MASS_MAX_G, "That is more than any cylinder holds: check the figure and its unit.")
       .max(LEDGER_MASS_MAX_G, "That is more than any cylinder holds: check the figure and its unit."),
-    occurredAt: z.iso.datetime({ offset: true, message: "Give the date and time." }).optional(),
-    destination: z.string().trim().max(120, "The destination is at most 120 characters.").optional(),
-    note: z.string().trim().max(255, "The note is at most 255 characters.").optional(),
+    occurredAt: plausibleInstant("Give the date and time.").optional(),
+    destination: singleLineText().trim().max(120, "The destination is at most 120 characters.").optional(),
+    note: singleLineText().trim().max(255, "The note is at most 255 characters.").optional(),
   })
   .strict()
   .refine((m) => (m.type === "adjustment" ? m.massG !== 0 : m.massG > 0), {
@@ -78,8 +79,7 @@ export type ManualMovementInput = z.infer<typeof manualMovementSchema>;
 /** Cancelling a wrong line: the line stays, a correction that cancels it is posted with the reason. */
 export const reversalSchema = z
   .object({
-    reason: z
-      .string({ message: "Say why this line is wrong." })
+    reason: singleLineText({ message: "Say why this line is wrong." })
       .trim()
       .min(3, "Say why this line is wrong, in a few words.")
       .max(200, "The reason is at most 200 characters."),

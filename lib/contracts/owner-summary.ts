@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { multiLineText } from "./text";
 import { REPAIR_IDS } from "@/lib/repairs/catalog";
 
 // Contracts of the owner summary: the share links, the repair proposal and the owner's answer,
@@ -49,8 +50,7 @@ export const repairProposalSchema = z.object({
     .string()
     .regex(/^[A-Z]{3}$/, "Use a three-letter currency code such as USD or CAD.")
     .default("USD"),
-  note: z
-    .string()
+  note: multiLineText()
     .trim()
     .max(NOTE_MAX_CHARS, `Keep the note under ${NOTE_MAX_CHARS} characters.`)
     .default(""),
@@ -62,8 +62,7 @@ export type OwnerAnswer = (typeof OWNER_ANSWERS)[number];
 export const ownerAnswerSchema = z.object({
   proposalId: z.number({ message: "The proposal is missing." }).int().positive(),
   answer: z.enum(OWNER_ANSWERS, { message: "Choose approve or decline." }),
-  note: z
-    .string()
+  note: multiLineText()
     .trim()
     .max(NOTE_MAX_CHARS, `Keep the note under ${NOTE_MAX_CHARS} characters.`)
     .default(""),

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { multiLineText, plausibleInstant, singleLineText } from "./text";
 import type { RefrigerantId } from "@/lib/refrigerants";
 import type { ExpansionDevice } from "@/lib/vehicles/expansion-devices";
 import { REPLACED_PART_IDS } from "@/lib/service/oil";
@@ -28,8 +29,11 @@ const id = (label: string) =>
     .positive()
     .nullable()
     .optional();
-const instant = z.iso.datetime({ offset: true, message: "Give a date and time." }).nullable().optional();
-const text = (max: number) => z.string().trim().max(max, `At most ${max} characters.`).nullable().optional();
+const instant = plausibleInstant("Give a date and time.").nullable().optional();
+const line = (max: number) =>
+  singleLineText().trim().max(max, `At most ${max} characters.`).nullable().optional();
+const text = (max: number) =>
+  multiLineText().trim().max(max, `At most ${max} characters.`).nullable().optional();
 
 /** A save of the service record: every value in internal units (g, mL, kPa absolute, °C); empty fields are null. */
 export const serviceRecordInputSchema = z
@@ -54,7 +58,7 @@ export const serviceRecordInputSchema = z
     holdStartKpaAbs: num("Vacuum at the start of the hold", 0, 110, "kPa absolute"),
     holdEndKpaAbs: num("Vacuum at the end of the hold", 0, 110, "kPa absolute"),
     holdMinutes: num("Hold time", 0.5, 240, "min"),
-    oilAddedType: text(60),
+    oilAddedType: line(60),
     oilAddedMl: whole("Oil added", 0, 1000, "mL"),
     partsReplaced: z
       .array(

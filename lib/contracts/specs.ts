@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { pageQuery, type PageInfo } from "./paging";
+import { singleLineText } from "./text";
 import { specRowSchema, type SpecCsvParse, type SpecMatch, type SpecRow } from "@/lib/specs";
 import { partOilAllowancesSchema, type ReplacedPartId } from "@/lib/service/oil";
 
@@ -11,7 +12,7 @@ export const specParamsSchema = z.object({
 });
 
 export const specListQuerySchema = z
-  .object({ q: z.string().trim().max(80, "Search with at most 80 characters.").optional() })
+  .object({ q: singleLineText().trim().max(80, "Search with at most 80 characters.").optional() })
   .and(pageQuery({ defaultLimit: 500, maxLimit: 1000 }));
 
 /** The row as a form sends it: grams and millilitres, converted from the typed units in the browser. */

@@ -1,10 +1,11 @@
 import { z } from "zod";
+import { singleLineText } from "./text";
 import type { ExpansionDevice } from "@/lib/vehicles/expansion-devices";
 import type { CompressorType } from "@/lib/vehicles/compressor-types";
 import { pageQuery, type PageInfo } from "./paging";
 
 export const vehicleListQuerySchema = z
-  .object({ q: z.string().max(80, "Search with fewer than 80 characters.").optional() })
+  .object({ q: singleLineText().max(80, "Search with fewer than 80 characters.").optional() })
   .and(pageQuery({ defaultLimit: 30, maxLimit: 50 }));
 
 /** A vehicle the shop has seen, offered when a new case is opened. */

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { multiLineText } from "@/lib/contracts/text";
 import { FULL_VACUUM_KPA_GAUGE, MAX_READING_KPA_GAUGE } from "@/lib/refrigerants/gauge-limits";
 import { quantityMarker } from "@/lib/units/quantity";
 
@@ -46,8 +47,7 @@ function tempC(label: string, minC: number, maxC: number) {
 }
 
 export const complaintAnswersSchema = z.object({
-  ownerWords: z
-    .string({ error: "Write down the complaint" })
+  ownerWords: multiLineText({ message: "Write down the complaint" })
     .trim()
     .min(1, { error: "Write down the complaint in the owner's words" })
     .max(2000, { error: "Keep the complaint under 2000 characters" }),
@@ -207,7 +207,7 @@ export const chargeAuditAnswersSchema = z
 export const leakFindingAnswersSchema = z.object({
   method: z.enum(leakMethodChoices, { error: "Choose how you looked for the leak" }),
   whereFound: z.enum(leakPlaceChoices, { error: "Choose where the leak is, or 'not found yet'" }).optional(),
-  notes: z.string().trim().max(2000, { error: "Keep the notes under 2000 characters" }).optional(),
+  notes: multiLineText().trim().max(2000, { error: "Keep the notes under 2000 characters" }).optional(),
 });
 
 export const answerSchemas = {

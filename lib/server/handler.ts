@@ -10,6 +10,7 @@ import { AppError, isAppError } from "@/lib/errors";
 import { API_CACHE_CONTROL } from "@/lib/security/headers";
 import { isOwnOrigin, STATE_CHANGING_METHODS } from "@/lib/security/origin";
 import { fieldErrorsOf } from "@/lib/validation";
+import { illFormedTextPath, JSON_BODY_MESSAGES, jsonDepth, MAX_JSON_DEPTH } from "@/lib/contracts/json-body";
 
 const MAX_BODY_BYTES = 1_000_000;
 
@@ -121,11 +122,23 @@ async function readJson(req: NextRequest): Promise<unknown> {
   if (length > MAX_BODY_BYTES) throw new AppError("payload_too_large:body");
   const text = await req.text();
   if (text.length > MAX_BODY_BYTES) throw new AppError("payload_too_large:body");
+  // Counted on the raw text, before anything recursive (the parser, zod, the database) sees it.
+  if (jsonDepth(text, MAX_JSON_DEPTH) > MAX_JSON_DEPTH)
+    throw new AppError("bad_request:body", JSON_BODY_MESSAGES.tooDeep);
+  let value: unknown;
   try {
-    return JSON.parse(text);
+    value = JSON.parse(text);
   } catch {
     throw new AppError("bad_request:body", "The request body is not valid JSON.");
   }
+  // "\ud800" escapes decode to lone surrogates that no schema or column can hold: refuse them anywhere.
+  const illFormedAt = illFormedTextPath(value);
+  if (illFormedAt !== null) {
+    throw new AppError("bad_request:body", "Some values need attention.", {
+      fieldErrors: { [illFormedAt]: [JSON_BODY_MESSAGES.illFormed] },
+    });
+  }
+  return value;
 }
 
 function parse<S extends Schema>(schema: S, value: unknown, where: string): Infer<S> {

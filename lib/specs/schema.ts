@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { singleLineText } from "@/lib/contracts/text";
 import { SERVICE_REFRIGERANT_IDS } from "@/lib/refrigerants/catalog";
 import { COMPRESSOR_TYPES } from "@/lib/vehicles/compressor-types";
 
@@ -21,18 +22,16 @@ export const specRowSchema = z
       .int("A year is a whole number, for example 2019.")
       .min(MODEL_YEAR_RANGE.min, `The last year is before ${MODEL_YEAR_RANGE.min}: check it.`)
       .max(MODEL_YEAR_RANGE.max, `The last year is after ${MODEL_YEAR_RANGE.max}: check it.`),
-    make: z
-      .string({ message: "Make is missing." })
+    make: singleLineText({ message: "Make is missing." })
       .trim()
       .min(1, "Make is missing.")
       .max(60, "Make is at most 60 characters."),
-    model: z
-      .string({ message: "Model is missing." })
+    model: singleLineText({ message: "Model is missing." })
       .trim()
       .min(1, "Model is missing.")
       .max(80, "Model is at most 80 characters."),
     /** engine or variant; "" when the row covers every variant */
-    variant: z.string().trim().max(120, "The engine or variant is at most 120 characters."),
+    variant: singleLineText().trim().max(120, "The engine or variant is at most 120 characters."),
     /** true: front and rear A/C; false: front only */
     rearAc: z.boolean({ message: "Say whether the vehicle has rear A/C." }),
     refrigerant: z.enum(SERVICE_REFRIGERANT_IDS, {
@@ -49,8 +48,7 @@ export const specRowSchema = z
         LABEL_CHARGE_RANGE_G.max,
         "That label charge is too large for a car or light truck: check the unit.",
       ),
-    oilType: z
-      .string({ message: "The oil type is missing." })
+    oilType: singleLineText({ message: "The oil type is missing." })
       .trim()
       .min(1, "The oil type is missing.")
       .max(60, "The oil type is at most 60 characters."),
