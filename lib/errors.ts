@@ -9,7 +9,8 @@ export type ErrorKind =
   | "conflict"
   | "rate_limited"
   | "unsupported_media_type"
-  | "payload_too_large";
+  | "payload_too_large"
+  | "unavailable";
 
 const STATUS: Record<ErrorKind, number> = {
   bad_request: 400,
@@ -20,6 +21,7 @@ const STATUS: Record<ErrorKind, number> = {
   payload_too_large: 413,
   unsupported_media_type: 415,
   rate_limited: 429,
+  unavailable: 503,
 };
 
 const DEFAULT_MESSAGE: Record<ErrorKind, string> = {
@@ -31,6 +33,8 @@ const DEFAULT_MESSAGE: Record<ErrorKind, string> = {
   payload_too_large: "That is too large to accept.",
   unsupported_media_type: "Send the request as JSON.",
   rate_limited: "Too many attempts. Wait a little and try again.",
+  unavailable:
+    "A service the shop relies on is not answering. Nothing you entered was lost; try again shortly.",
 };
 
 export type FieldErrors = Record<string, string[]>;

@@ -6,6 +6,7 @@ import { getLucia } from "@/lib/auth/lucia";
 import { validateSessionId } from "@/lib/auth/session";
 import { can, type Permission } from "@/lib/auth/roles";
 import { env } from "@/lib/env";
+import { isDatabaseUnavailable } from "@/lib/db/unavailable";
 import { AppError, isAppError } from "@/lib/errors";
 import { API_CACHE_CONTROL } from "@/lib/security/headers";
 import { isOwnOrigin, STATE_CHANGING_METHODS } from "@/lib/security/origin";
@@ -13,6 +14,10 @@ import { fieldErrorsOf } from "@/lib/validation";
 import { illFormedTextPath, JSON_BODY_MESSAGES, jsonDepth, MAX_JSON_DEPTH } from "@/lib/contracts/json-body";
 
 const MAX_BODY_BYTES = 1_000_000;
+/** How long a client waits before sending again while the database is away (a restart takes seconds). */
+export const DATABASE_RETRY_AFTER_S = 5;
+const DATABASE_UNAVAILABLE_MESSAGE =
+  "The shop's database is not answering just now. Nothing you entered was lost; it can be sent again in a few seconds.";
 
 type Schema = z.ZodType | undefined;
 type Infer<S extends Schema> = S extends z.ZodType ? z.infer<S> : undefined;
@@ -161,6 +166,15 @@ export function errorResponse(error: unknown, headers = new Headers()): Response
   if (name === "SequelizeUniqueConstraintError") {
     return NextResponse.json(new AppError("conflict:unique", "That already exists.").toJSON(), {
       status: 409,
+      headers,
+    });
+  }
+  if (isDatabaseUnavailable(error)) {
+    // Stopped, restarting or out of connections: the client keeps what was typed and sends it again.
+    console.error("Database unavailable", (error as Error).message);
+    headers.set("Retry-After", String(DATABASE_RETRY_AFTER_S));
+    return NextResponse.json(new AppError("unavailable:database", DATABASE_UNAVAILABLE_MESSAGE).toJSON(), {
+      status: 503,
       headers,
     });
   }

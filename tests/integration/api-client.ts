@@ -18,7 +18,7 @@ type RouteFn = (
 export interface CallOptions {
   method?: string;
   sessionId?: string | null;
-  /** A string is sent as it is (malformed JSON, raw escapes); anything else as JSON. */
+  /** A string is sent as it is (malformed JSON, raw escapes), FormData as multipart, anything else as JSON. */
   body?: unknown;
   params?: Record<string, string>;
   contentType?: string;
@@ -28,8 +28,9 @@ export async function callRoute(fn: RouteFn, path: string, options: CallOptions 
   const { method = "GET", sessionId, body, params = {}, contentType = "application/json" } = options;
   const headers: Record<string, string> = { origin: ORIGIN, host: "127.0.0.1:3000" };
   if (sessionId) headers.cookie = `${getLucia().sessionCookieName}=${sessionId}`;
-  let payload: string | undefined;
-  if (body !== undefined) {
+  let payload: string | FormData | undefined;
+  if (body instanceof FormData) payload = body;
+  else if (body !== undefined) {
     headers["content-type"] = contentType;
     payload = typeof body === "string" ? body : JSON.stringify(body);
   }
