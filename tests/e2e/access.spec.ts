@@ -73,9 +73,15 @@ test.afterAll(async () => {
 });
 
 type Expectation = Record<Who, number>;
+/**
+ * A row names the route as "METHOD /path (what is sent)", or "PAGE /path" for a page;
+ * tests/unit/route-inventory.test.ts fails when a route, page or server action of app/ has no row.
+ */
 const table: {
   name: string;
   call: (c: APIRequestContext) => Promise<{ status(): number }>;
+  /** For a row that must not use the shared clients (signing out would end their sessions). */
+  callAs?: (who: Who) => Promise<number>;
   expect: Expectation;
 }[] = [
   {
@@ -140,7 +146,7 @@ const table: {
   },
   {
     // A page, not an API route: public, so no role is sent to the sign-in page.
-    name: "GET /credits (page)",
+    name: "PAGE /credits",
     call: (c) => c.get("/credits", { maxRedirects: 0 }),
     expect: {
       anonymous: 200,
@@ -840,12 +846,12 @@ const ownerRoutes: typeof table = [
     expect: onSharedCase(404, 403),
   },
   {
-    name: "GET /s/:token (public owner page, no session needed)",
+    name: "PAGE /s/:token (public owner page, no session needed)",
     call: (c) => c.get(`/s/${harbourlineToken}`),
     expect: everyone(200),
   },
   {
-    name: "GET /s/:token (a token of another shop's case shows only that case)",
+    name: "PAGE /s/:token (a token of another shop's case shows only that case)",
     call: async (c) => {
       const response = await c.get(`/s/${ridgebackToken}`);
       expect(await response.text()).toContain("Ridgeback Cooling Works");
@@ -854,7 +860,7 @@ const ownerRoutes: typeof table = [
     expect: everyone(200),
   },
   {
-    name: "GET /s/:token (malformed)",
+    name: "PAGE /s/:token (malformed)",
     call: (c) => c.get(`/s/${MALFORMED_TOKEN}`),
     expect: everyone(404),
   },
@@ -898,7 +904,7 @@ table.push(...ownerRoutes);
 const signedIn = (status: number): Expectation => ({ ...everyone(status), anonymous: 401 });
 const casebookRoutes: typeof table = [
   {
-    name: "GET /casebook (page; no session goes to sign-in)",
+    name: "PAGE /casebook (no session goes to sign-in)",
     call: (c) => c.get("/casebook?q=warm&status=closed", { maxRedirects: 0 }),
     expect: { ...everyone(200), anonymous: 307 },
   },
@@ -939,11 +945,125 @@ const casebookRoutes: typeof table = [
   },
 ];
 table.push(...casebookRoutes);
+/** A signed-in client of its own for `who`, for rows that would end the shared session. */
+async function ownClient(who: Who): Promise<APIRequestContext> {
+  if (who === "anonymous") return apiClient();
+  return signedInClient(who === "otherShopOwner" ? "owner@ridgeback.test" : DEMO_USERS[who].email);
+}
+// A page without a session is sent to sign-in by proxy.ts; a missing permission renders 403.
+const page = (ok: Partial<Expectation>, otherwise = 403): Expectation => ({
+  anonymous: 307,
+  owner: otherwise,
+  senior: otherwise,
+  technician: otherwise,
+  apprentice: otherwise,
+  otherShopOwner: otherwise,
+  ...ok,
+});
+const allRoles = { owner: 200, senior: 200, technician: 200, apprentice: 200, otherShopOwner: 200 };
+const moreRoutes: typeof table = [
+  {
+    name: "POST /api/session (malformed; public)",
+    call: (c) => c.post("/api/session", { data: { email: "not-an-address", password: "" } }),
+    expect: everyone(400),
+  },
+  {
+    name: "DELETE /api/session (sign out: ends that session only; public)",
+    call: (c) => c.get("/api/me"),
+    callAs: async (who) => {
+      const own = await ownClient(who);
+      const status = (await own.delete("/api/session")).status();
+      expect((await own.get("/api/me")).status()).toBe(401);
+      await own.dispose();
+      return status;
+    },
+    expect: everyone(200),
+  },
+  {
+    name: "PUT /api/cases/:id/interview (a Harbourline case at a version long gone)",
+    call: (c) =>
+      c.put(`/api/cases/${sharedCaseId}/interview`, {
+        data: { baseVersion: 1, step: "complaint", answers: {} },
+      }),
+    expect: { ...onSharedCase(409, 403) },
+  },
+  {
+    name: "POST /api/cases/:id/signoff (malformed)",
+    call: (c) => c.post(`/api/cases/${harbourlineCaseId}/signoff`, { data: { verdict: "maybe" } }),
+    expect: { ...signedIn(400), technician: 403, apprentice: 403 },
+  },
+  {
+    name: "PUT /api/specs/:id (malformed)",
+    call: (c) => c.put("/api/specs/999999999", { data: { make: "", yearFrom: "old" } }),
+    expect: { ...signedIn(400), technician: 403, apprentice: 403 },
+  },
+  {
+    name: "PAGE / (home: sends each person to sign-in or the case list)",
+    call: (c) => c.get("/", { maxRedirects: 0 }),
+    expect: { ...everyone(307) },
+  },
+  {
+    name: "PAGE /sign-in (a signed-in person goes on to the app)",
+    call: (c) => c.get("/sign-in", { maxRedirects: 0 }),
+    expect: { ...everyone(307), anonymous: 200 },
+  },
+  {
+    name: "PAGE /invitation/:token (a link never issued; public)",
+    call: (c) => c.get(`/invitation/${"A".repeat(43)}`, { maxRedirects: 0 }),
+    expect: everyone(200),
+  },
+  { name: "PAGE /cases", call: (c) => c.get("/cases", { maxRedirects: 0 }), expect: page(allRoles) },
+  { name: "PAGE /cases/new", call: (c) => c.get("/cases/new", { maxRedirects: 0 }), expect: page(allRoles) },
+  {
+    name: "PAGE /cases/:id (a Harbourline case)",
+    call: (c) => c.get(`/cases/${sharedCaseId}`, { maxRedirects: 0 }),
+    expect: page({ ...allRoles, otherShopOwner: 404 }),
+  },
+  {
+    name: "PAGE /cases/:id (not a number)",
+    call: (c) => c.get("/cases/abc", { maxRedirects: 0 }),
+    expect: page({}, 404),
+  },
+  {
+    // The CX-5 case is submitted: its interview no longer changes, so everyone goes to the case page.
+    name: "PAGE /cases/:id/interview (a submitted Harbourline case)",
+    call: (c) => c.get(`/cases/${sharedCaseId}/interview`, { maxRedirects: 0 }),
+    expect: page({ ...everyone(307), otherShopOwner: 404 }),
+  },
+  {
+    name: "PAGE /cases/:id/service (a Harbourline case)",
+    call: (c) => c.get(`/cases/${sharedCaseId}/service`, { maxRedirects: 0 }),
+    expect: page({ ...allRoles, otherShopOwner: 404 }),
+  },
+  {
+    name: "PAGE /ledger",
+    call: (c) => c.get("/ledger", { maxRedirects: 0 }),
+    expect: page({ ...allRoles, apprentice: 403 }),
+  },
+  {
+    name: "PAGE /settings/users",
+    call: (c) => c.get("/settings/users", { maxRedirects: 0 }),
+    expect: page({ owner: 200, otherShopOwner: 200 }),
+  },
+  {
+    name: "PAGE /signoff",
+    call: (c) => c.get("/signoff", { maxRedirects: 0 }),
+    expect: page({ owner: 200, senior: 200, otherShopOwner: 200 }),
+  },
+  {
+    name: "PAGE /account/password (each person changes their own)",
+    call: (c) => c.get("/account/password", { maxRedirects: 0 }),
+    expect: page(allRoles),
+  },
+  { name: "PAGE /specs", call: (c) => c.get("/specs", { maxRedirects: 0 }), expect: page(allRoles) },
+];
+table.push(...moreRoutes);
 
 for (const row of table) {
   test(`role × route: ${row.name}`, async () => {
     const got: Partial<Expectation> = {};
-    for (const who of WHO) got[who] = (await row.call(clients.get(who)!)).status();
+    for (const who of WHO)
+      got[who] = row.callAs ? await row.callAs(who) : (await row.call(clients.get(who)!)).status();
     expect(got).toEqual(row.expect);
   });
 }
