@@ -1055,6 +1055,11 @@ const moreRoutes: typeof table = [
     call: (c) => c.get("/account/password", { maxRedirects: 0 }),
     expect: page(allRoles),
   },
+  {
+    name: "PAGE /profile (each person sets their own units and locale)",
+    call: (c) => c.get("/profile", { maxRedirects: 0 }),
+    expect: page(allRoles),
+  },
   { name: "PAGE /specs", call: (c) => c.get("/specs", { maxRedirects: 0 }), expect: page(allRoles) },
 ];
 table.push(...moreRoutes);
