@@ -1,5 +1,6 @@
 import { CAUSE_LABELS, type CauseId, type Suspect } from "@/lib/diagnosis";
 import { SuspectCard } from "@/components/interview/suspect-card";
+import { DetailsLine } from "@/components/ui/details-line";
 
 interface Snapshot {
   engineVersion: string;
@@ -48,7 +49,9 @@ export function FindingsSnapshot({
           <strong>Next check then:</strong> {findings.nextCheck.instruction}
         </p>
       )}
-      <p className="text-sm text-ink-soft">Findings engine {findings.engineVersion}</p>
+      <DetailsLine>
+        <p>Worked out by findings engine version {findings.engineVersion}.</p>
+      </DetailsLine>
     </section>
   );
 }

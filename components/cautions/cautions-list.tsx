@@ -54,9 +54,32 @@ function CautionCard({ caution, withSource }: { caution: CautionItem; withSource
   );
 }
 
+function FoldedItem({ caution, withSource }: { caution: CautionItem; withSource: boolean }) {
+  return (
+    <>
+      {caution.level !== "notice" && <LevelTag level={caution.level} />}{" "}
+      {caution.title && <strong>{caution.title}. </strong>}
+      {caution.text}
+      {withSource && caution.source && (
+        <span className="block text-sm text-ink-soft">Source: {caution.source}</span>
+      )}
+    </>
+  );
+}
+
+/** What the folded line says: cautions already read in this case, or only the quieter notes. */
+function foldSummary(earlier: number, notes: number): string {
+  const plural = (n: number, one: string, many: string) => (n === 1 ? `1 ${one}` : `${n} ${many}`);
+  if (earlier === 0) return `${plural(notes, "more note", "more notes")}`;
+  const shown = `${plural(earlier, "caution", "cautions")} shown earlier in this case`;
+  return notes === 0 ? shown : `${shown}, ${plural(notes, "note", "notes")}`;
+}
+
 /**
- * Safety and service cautions from the one catalogue. Dangers and warnings are always open; notices are
- * folded away but present unless every caution must show (the service record lists them all, with sources).
+ * Safety and service cautions from the one catalogue. Dangers and warnings are open the first time
+ * they apply; ones in `shownEarlier` (already shown open in this case) fold to one line with the
+ * notices, so the step's first field stays in view. Nothing folds where every caution must show
+ * (the service record lists them all, with sources).
  */
 export function CautionsList({
   cautions,
@@ -64,15 +87,19 @@ export function CautionsList({
   showHeading = false,
   withSources = false,
   foldNotices = true,
+  shownEarlier,
 }: {
   cautions: readonly CautionItem[];
   heading?: string;
   showHeading?: boolean;
   withSources?: boolean;
   foldNotices?: boolean;
+  shownEarlier?: ReadonlySet<string>;
 }) {
   if (cautions.length === 0) return null;
-  const folded = foldNotices ? cautions.filter((c) => c.level === "notice") : [];
+  const earlier = cautions.filter((c) => shownEarlier?.has(c.id));
+  const notes = foldNotices ? cautions.filter((c) => c.level === "notice" && !earlier.includes(c)) : [];
+  const folded = [...earlier, ...notes];
   const open = cautions.filter((c) => !folded.includes(c));
   return (
     <section aria-label={heading} className="space-y-2">
@@ -87,19 +114,15 @@ export function CautionsList({
         </ul>
       )}
       {folded.length > 0 && (
-        <details className="rounded-card border border-paper-line bg-paper p-3">
+        <details className="rounded-card border border-paper-line bg-paper p-3" data-testid="folded-cautions">
           <summary className="min-h-touch cursor-pointer font-bold">
             <Info aria-hidden className="mr-1 inline h-5 w-5" />
-            {folded.length === 1 ? "1 more note" : `${folded.length} more notes`}
+            {foldSummary(earlier.length, notes.length)}
           </summary>
           <ul className="mt-2 space-y-2">
             {folded.map((c) => (
               <li key={c.id}>
-                {c.title && <strong>{c.title}. </strong>}
-                {c.text}
-                {withSources && c.source && (
-                  <span className="block text-sm text-ink-soft">Source: {c.source}</span>
-                )}
+                <FoldedItem caution={c} withSource={withSources} />
               </li>
             ))}
           </ul>

@@ -19,6 +19,7 @@ import { submitCase, type CaseSubmitResult } from "@/lib/queries/case-submit";
 import { CautionsList, type CautionItem } from "@/components/cautions/cautions-list";
 import { SuspectCard } from "./suspect-card";
 import type { SaveStatus } from "./use-autosave";
+import { DetailsLine } from "@/components/ui/details-line";
 
 interface Props {
   caseId: number;
@@ -28,6 +29,8 @@ interface Props {
   interviewCautions: InterviewCaution[];
   /** whether submitting sends the case to a senior (lib/cases/rules.ts) rather than signing it off */
   waitsForSignOff: boolean;
+  /** Cautions already shown open earlier in this case: folded to one line here. */
+  shownEarlier?: ReadonlySet<string>;
   saveStatus: SaveStatus;
   currentVersion: () => number;
   onBack: () => void;
@@ -39,6 +42,7 @@ export function FindingsStep({
   units,
   interviewCautions,
   waitsForSignOff,
+  shownEarlier,
   saveStatus,
   currentVersion,
   onBack,
@@ -179,7 +183,7 @@ export function FindingsStep({
         </ul>
       )}
 
-      <CautionsList cautions={cautions} />
+      <CautionsList cautions={cautions} shownEarlier={shownEarlier} />
 
       {stored ? (
         <section
@@ -193,7 +197,9 @@ export function FindingsStep({
             {CAUSE_LABELS[chosen as CauseId]}
           </p>
           <p className="whitespace-pre-line">{notes}</p>
-          <p className="text-sm text-ink-soft">Findings engine {findings.engineVersion}</p>
+          <DetailsLine>
+            <p>Worked out by findings engine version {findings.engineVersion}.</p>
+          </DetailsLine>
         </section>
       ) : (
         <form onSubmit={submit} noValidate className="space-y-3 rounded-card border-2 border-ink-muted p-4">
@@ -240,7 +246,9 @@ export function FindingsStep({
               {waitsForSignOff ? "Send to a senior for sign-off" : "Submit the diagnosis"}
             </button>
           </div>
-          <p className="text-sm text-ink-soft">Findings engine {findings.engineVersion}</p>
+          <DetailsLine>
+            <p>Worked out by findings engine version {findings.engineVersion}.</p>
+          </DetailsLine>
         </form>
       )}
     </div>

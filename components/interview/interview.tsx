@@ -14,6 +14,7 @@ import { SaveBanner } from "./save-banner";
 import { SpecMatches } from "./spec-matches";
 import { StepForm, type StepFormHandle } from "./step-form";
 import { useAutosave } from "./use-autosave";
+import { useShownCautions } from "./use-shown-cautions";
 import type { PhysicsContext } from "@/lib/interview/readouts";
 import type { ReaderUnits } from "@/lib/units";
 import { attentionOf } from "./attention";
@@ -74,18 +75,31 @@ export function Interview({
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [actor]);
 
-  // Put the technician straight into the first field of each new step.
+  // Put the technician straight into the first field of each new step. The findings are read, not
+  // typed into: there the heading takes focus, so no keyboard covers the ranking.
   const firstRender = useRef(true);
   useEffect(() => {
     if (firstRender.current) {
       firstRender.current = false;
       return;
     }
-    const input = document.querySelector<HTMLElement>(
-      "#interview-step input[type=text], #interview-step textarea",
-    );
-    (input ?? headingRef.current)?.focus();
+    const input =
+      step === "findings"
+        ? null
+        : document.querySelector<HTMLElement>("#interview-step input[type=text], #interview-step textarea");
+    (input ?? headingRef.current)?.focus({ preventScroll: step === "findings" });
+    if (step === "findings") window.scrollTo({ top: 0 });
   }, [step]);
+
+  const stepCautions = useMemo(
+    () => view.cautions.filter((c) => c.id !== "defer_to_procedure" || step === "complaint"),
+    [view.cautions, step],
+  );
+  const shownEarlier = useShownCautions(
+    caseId,
+    step,
+    stepCautions.map((c) => c.id),
+  );
 
   const physics: PhysicsContext = useMemo(
     () => ({
@@ -134,11 +148,7 @@ export function Interview({
           </h1>
           <p className="text-ink-soft">{STEP_LEADS[step]}</p>
         </header>
-        {step !== "findings" && (
-          <CautionsList
-            cautions={view.cautions.filter((c) => c.id !== "defer_to_procedure" || step === "complaint")}
-          />
-        )}
+        {step !== "findings" && <CautionsList cautions={stepCautions} shownEarlier={shownEarlier} />}
         {step === "system" && vehicleId !== null && (
           <SpecMatches vehicleId={vehicleId} onPick={(pick) => formRef.current?.apply({ ...pick })} />
         )}
@@ -187,6 +197,7 @@ export function Interview({
             units={units}
             interviewCautions={view.cautions}
             waitsForSignOff={waitsForSignOff}
+            shownEarlier={shownEarlier}
             saveStatus={autosave.status}
             currentVersion={autosave.currentVersion}
             onBack={() => send({ type: "BACK" })}

@@ -9,6 +9,7 @@ import {
   oilTypeChoices,
   partReplacedChoices,
 } from "@/lib/interview/choices";
+import { PERFORMANCE_TEST_CONDITIONS } from "@/lib/interview/performance-test";
 import type { StepId } from "@/lib/interview/steps";
 import type { ChoiceOption } from "./field-defs";
 
@@ -19,8 +20,7 @@ export const STEP_LEADS: Readonly<Record<StepId, string>> = {
   conditions: "Where and how the readings are taken.",
   static:
     "Look for sealant before any hose goes on. Engine off for an hour or more, pressures equalised: read the static and the parts' temperature beside the lines.",
-  running:
-    "A/C at maximum, recirculation, blower high, doors open, after 5–10 minutes at a steady engine speed.",
+  running: `${PERFORMANCE_TEST_CONDITIONS}.`,
   behaviour: "Tick everything you noticed. Leave it empty if nothing stood out.",
   leakFinding: "The system has lost its charge: find the leak before anything is run or charged.",
   identification: "Run the identifier before anything goes into the recovery machine.",

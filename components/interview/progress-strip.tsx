@@ -1,5 +1,6 @@
 "use client";
 
+import { useEffect, useRef } from "react";
 import { clsx } from "clsx";
 import type { ProgressEntry } from "@/lib/interview/progress";
 import { STEP_LABELS, type StepId } from "@/lib/interview/steps";
@@ -13,6 +14,11 @@ const MARK: Record<ProgressEntry["status"], string> = {
   ahead: "",
 };
 
+/** Where the strip should scroll so the current step sits in the middle of the visible part. */
+function stripScrollLeftPx(strip: { widthPx: number }, item: { leftPx: number; widthPx: number }) {
+  return Math.max(0, Math.round(item.leftPx - (strip.widthPx - item.widthPx) / 2));
+}
+
 export function ProgressStrip({
   entries,
   onOpen,
@@ -20,9 +26,25 @@ export function ProgressStrip({
   entries: ProgressEntry[];
   onOpen: (step: StepId) => void;
 }) {
+  const listRef = useRef<HTMLOListElement>(null);
+  const current = entries.find((e) => e.status === "current")?.step;
+
+  // On a phone only two or three steps fit: keep the current one in view, without moving the page.
+  useEffect(() => {
+    const list = listRef.current;
+    const item = list?.querySelector<HTMLElement>("[aria-current=step]")?.parentElement;
+    if (!list || !item) return;
+    const left = stripScrollLeftPx(
+      { widthPx: list.clientWidth },
+      { leftPx: item.offsetLeft, widthPx: item.offsetWidth },
+    );
+    if (typeof list.scrollTo === "function") list.scrollTo({ left, behavior: "auto" });
+    else list.scrollLeft = left;
+  }, [current, entries.length]);
+
   return (
     <nav aria-label="Interview steps">
-      <ol className="flex gap-1 overflow-x-auto pb-1">
+      <ol ref={listRef} className="relative flex gap-1 overflow-x-auto pb-1" data-testid="step-strip">
         {entries.map((entry, index) => (
           <li key={entry.step} className="shrink-0">
             <button

@@ -17,7 +17,7 @@ import type { ServiceRecordFormProps } from "./form-props";
 import { StepFields } from "./step-fields";
 
 export const STEP_TITLES: Record<ServiceStepId, string> = {
-  identify: "Identify",
+  identify: "Identification",
   recovery: "Recovery",
   evacuation: "Evacuation and hold",
   oil: "Oil",
@@ -85,7 +85,7 @@ export function ServiceRecordForm(props: ServiceRecordFormProps) {
           : "";
       setMessage({
         tone: result.warnings.length ? "error" : "ok",
-        text: `Saved ${STEP_TITLES[step].toLowerCase()}.${posted}${result.warnings.length ? ` ${result.warnings.join(" ")}` : ""}`,
+        text: `${STEP_TITLES[step]} saved.${posted}${result.warnings.length ? ` ${result.warnings.join(" ")}` : ""}`,
       });
       setStep(nextStep);
       void queryClient.invalidateQueries({ queryKey: serviceRecordKeys.forCase(caseId) });

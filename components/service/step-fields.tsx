@@ -9,6 +9,7 @@ import type { Draft, TextField } from "./draft";
 import { EntryInput } from "./entry-input";
 import { ResultLine } from "./result-line";
 import type { CylinderChoice, ServiceRecordFormProps } from "./form-props";
+import { PERFORMANCE_TEST_CONDITIONS } from "@/lib/interview/performance-test";
 
 interface Props {
   step: ServiceStepId;
@@ -360,7 +361,8 @@ export function StepFields({ step, draft, setDraft, setText, errorOf, summary, p
       return (
         <div className="space-y-4">
           <p className="text-ink-soft">
-            The performance reading after the recharge, engine running, doors closed, A/C at maximum.
+            The performance reading after the recharge, taken as before the work:{" "}
+            {PERFORMANCE_TEST_CONDITIONS}.
           </p>
           <div className="grid grid-cols-2 gap-3">
             {f("finalAmbientC", "Ambient temperature")}
