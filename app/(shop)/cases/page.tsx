@@ -4,6 +4,8 @@ import { listCases } from "@/lib/server/cases";
 import Link from "next/link";
 import { can } from "@/lib/auth/roles";
 import { CaseList } from "@/components/cases/case-list";
+import { workCounts } from "@/lib/server/work-counts";
+import { WorkCountsPanel } from "@/components/cases/work-counts";
 
 export const metadata: Metadata = { title: "Cases" };
 
@@ -13,11 +15,10 @@ export default async function CasesPage({ searchParams }: { searchParams: Promis
   const user = await requireUser("cases:read");
   const requested = Number((await searchParams).page ?? 1);
   const page = Number.isInteger(requested) && requested >= 1 && requested <= 2000 ? requested : 1;
-  const { cases, nextOffset } = await listCases({
-    shopId: user.shopId,
-    limit: PAGE_SIZE,
-    offset: (page - 1) * PAGE_SIZE,
-  });
+  const [{ cases, nextOffset }, counts] = await Promise.all([
+    listCases({ shopId: user.shopId, limit: PAGE_SIZE, offset: (page - 1) * PAGE_SIZE }),
+    workCounts({ user }),
+  ]);
   return (
     <>
       <div className="mb-4 flex flex-wrap items-center justify-between gap-3">
@@ -28,6 +29,7 @@ export default async function CasesPage({ searchParams }: { searchParams: Promis
           </Link>
         )}
       </div>
+      <WorkCountsPanel counts={counts} />
       <CaseList cases={cases} empty={page === 1 ? "No cases yet." : "No cases on this page."} />
       {(page > 1 || nextOffset !== null) && (
         <nav aria-label="Pages" className="mt-4 flex flex-wrap items-center justify-between gap-2">
