@@ -17,6 +17,7 @@ import * as m6001 from "./20261203-6001-add-user-temporary-password";
 import * as m7001 from "./20261203-7001-create-casebook-tables";
 import * as m8001 from "./20261203-8001-add-user-units-and-locale";
 import * as m8002 from "./20261203-8002-keep-vacuum-readings-to-the-micron";
+import * as m9001 from "./20261203-9001-add-vehicle-plate-and-phone-search";
 
 // Listed by hand, not globbed, so the same list works under tsx, vitest and a Next bundle.
 // A new migration file goes here too; an integration test fails when one is missing.
@@ -38,4 +39,5 @@ export const migrations: RunnableMigration<QueryInterface>[] = [
   { name: "20261203-7001-create-casebook-tables", ...m7001 },
   { name: "20261203-8001-add-user-units-and-locale", ...m8001 },
   { name: "20261203-8002-keep-vacuum-readings-to-the-micron", ...m8002 },
+  { name: "20261203-9001-add-vehicle-plate-and-phone-search", ...m9001 },
 ];

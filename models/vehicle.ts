@@ -24,6 +24,7 @@ export class Vehicle extends Model<InferAttributes<Vehicle>, InferCreationAttrib
   declare model: string;
   declare engine: CreationOptional<string | null>;
   declare vin: CreationOptional<string | null>;
+  declare plate: CreationOptional<string | null>;
   declare refrigerant: RefrigerantId;
   declare expansionDevice: ExpansionDevice;
   declare electricCompressor: CreationOptional<boolean>;
@@ -43,6 +44,7 @@ export class Vehicle extends Model<InferAttributes<Vehicle>, InferCreationAttrib
         model: { type: DataTypes.STRING(80), allowNull: false },
         engine: { type: DataTypes.STRING(80), allowNull: true },
         vin: { type: DataTypes.STRING(17), allowNull: true },
+        plate: { type: DataTypes.STRING(12), allowNull: true },
         refrigerant: { type: DataTypes.ENUM(...REFRIGERANT_IDS), allowNull: false },
         expansionDevice: { type: DataTypes.ENUM(...EXPANSION_DEVICE_IDS), allowNull: false },
         electricCompressor: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },

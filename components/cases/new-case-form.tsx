@@ -10,6 +10,7 @@ import { apiFetch, ApiError } from "@/lib/queries/api-fetch";
 import { vehicleChoicesQuery } from "@/lib/queries/vehicles";
 import { EXPANSION_DEVICE_LABELS } from "@/lib/vehicles/expansion-devices";
 import { NewVehicleFields, type NewVehicleDraft } from "./new-vehicle-fields";
+import { COMPLAINT_PICKS, withPick } from "./complaint-picks";
 
 export function NewCaseForm() {
   const router = useRouter();
@@ -50,7 +51,7 @@ export function NewCaseForm() {
       <fieldset className="card">
         <legend className="px-1 text-xl font-bold">Which vehicle?</legend>
         <label htmlFor="vehicle-search" className="field-label mt-2">
-          Find by customer, make, model or VIN
+          Find by plate, VIN, customer phone or name
         </label>
         <input
           id="vehicle-search"
@@ -75,7 +76,10 @@ export function NewCaseForm() {
                 <span className="flex-1">
                   <span className="block font-bold">{v.description}</span>
                   <span className="block text-ink-soft">
-                    {v.customer} · {v.refrigerant} · {EXPANSION_DEVICE_LABELS[v.expansionDevice]}
+                    {[v.plate, v.customer, v.customerPhone].filter(Boolean).join(" · ")}
+                  </span>
+                  <span className="block text-sm text-ink-soft">
+                    {v.refrigerant} · {EXPANSION_DEVICE_LABELS[v.expansionDevice]}
                     {v.electricCompressor ? " · electric compressor" : ""}
                   </span>
                 </span>
@@ -101,6 +105,21 @@ export function NewCaseForm() {
         <label htmlFor="complaint" className="field-label text-xl">
           The complaint, in the owner&apos;s words
         </label>
+        <p id="complaint-picks-hint" className="text-sm text-ink-soft">
+          Tap what the owner says, or write their own words.
+        </p>
+        <div className="my-2 flex flex-wrap gap-2" role="group" aria-label="Common complaints">
+          {COMPLAINT_PICKS.map((pick) => (
+            <button
+              key={pick}
+              type="button"
+              className="min-h-touch rounded-full border-2 border-glacier-500 bg-paper px-3 text-left text-sm font-bold text-glacier-900"
+              onClick={() => setComplaint((c) => withPick(c, pick))}
+            >
+              {pick}
+            </button>
+          ))}
+        </div>
         <textarea
           id="complaint"
           rows={3}

@@ -18,6 +18,7 @@ export interface NewVehicleDraft {
     model: string;
     engine?: string;
     vin?: string;
+    plate?: string;
     refrigerant: string;
     expansionDevice: string;
     /** absent when the technician does not know it */
@@ -34,6 +35,7 @@ const EMPTY = {
   model: "",
   engine: "",
   vin: "",
+  plate: "",
   refrigerant: "R-1234yf",
   expansionDevice: "txv",
   compressorType: "",
@@ -57,6 +59,7 @@ export function NewVehicleFields({
         model: f.model,
         engine: f.engine || undefined,
         vin: f.vin || undefined,
+        plate: f.plate || undefined,
         refrigerant: f.refrigerant,
         expansionDevice: f.expansionDevice,
         compressorType: f.compressorType === "" ? undefined : (f.compressorType as CompressorType),
@@ -96,6 +99,10 @@ export function NewVehicleFields({
     <div className="mt-4 grid gap-4 sm:grid-cols-2">
       {field("name", "Customer name", "newCustomer.name", { autoComplete: "off" })}
       {field("phone", "Customer phone (optional)", "newCustomer.phone", { type: "tel", autoComplete: "off" })}
+      {field("plate", "Plate (optional)", "newVehicle.plate", {
+        autoCapitalize: "characters",
+        autoComplete: "off",
+      })}
       {field("year", "Model year", "newVehicle.year", { inputMode: "numeric" })}
       {field("make", "Make", "newVehicle.make")}
       {field("model", "Model", "newVehicle.model")}

@@ -6,6 +6,7 @@ import { SERVICE_REFRIGERANT_IDS } from "@/lib/refrigerants/catalog";
 import { EXPANSION_DEVICE_IDS } from "@/lib/vehicles/expansion-devices";
 import { COMPRESSOR_TYPES } from "@/lib/vehicles/compressor-types";
 import { pageQuery, type PageInfo } from "./paging";
+import { normalisePlate, plateError } from "@/lib/vehicles/plate";
 
 export { CASE_STATUSES, type CaseStatus };
 
@@ -59,6 +60,16 @@ export const newVehicleSchema = z.object({
       (v) => v === "" || /^[A-HJ-NPR-Z0-9]{17}$/.test(v),
       "A VIN has 17 letters and digits, never I, O or Q.",
     )
+    .optional()
+    .transform((v) => (v ? v : undefined)),
+  plate: z
+    .string()
+    .max(40)
+    .transform(normalisePlate)
+    .superRefine((v, ctx) => {
+      const problem = plateError(v);
+      if (problem) ctx.addIssue({ code: "custom", message: problem });
+    })
     .optional()
     .transform((v) => (v ? v : undefined)),
   refrigerant: z.enum(SERVICE_REFRIGERANT_IDS, {

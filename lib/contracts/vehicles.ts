@@ -13,6 +13,8 @@ export interface VehicleChoice {
   vehicleId: number;
   customerId: number;
   customer: string;
+  customerPhone: string | null;
+  plate: string | null;
   description: string;
   refrigerant: string;
   expansionDevice: ExpansionDevice;

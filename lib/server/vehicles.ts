@@ -1,12 +1,17 @@
 import type { CompressorType } from "@/lib/vehicles/compressor-types";
 import "server-only";
-import { Op } from "sequelize";
+import { Op, col, fn, where } from "sequelize";
 import { getModels } from "@/models";
 import type { ExpansionDevice } from "@/lib/vehicles/expansion-devices";
 import type { VehicleChoiceListResponse } from "@/lib/contracts/vehicles";
 import { pageOf } from "./paging";
+import { normalisePlate, phoneDigits } from "@/lib/vehicles/plate";
 
-/** The shop's vehicles, most recently seen first, optionally filtered by customer, make, model or VIN. */
+/**
+ * The shop's vehicles, most recently seen first, optionally found by plate, VIN, the customer's phone
+ * number or name, or make and model. Plates and VINs compare without spaces or dashes, phone numbers
+ * by their digits (customer.phone_digits), so the way a number was typed never hides a vehicle.
+ */
 export async function listVehicleChoices({
   shopId,
   search,
@@ -20,22 +25,31 @@ export async function listVehicleChoices({
 }): Promise<VehicleChoiceListResponse> {
   const { Vehicle, Customer } = getModels();
   const term = search?.trim();
-  const like = term ? `%${term.replace(/[%_\\]/g, (c) => `\\${c}`)}%` : undefined;
+  const escape = (text: string) => text.replace(/[%_\\]/g, (c) => `\\${c}`);
+  const like = term ? `%${escape(term)}%` : undefined;
+  const compact = term ? normalisePlate(term) : "";
+  const digits = term ? phoneDigits(term) : "";
   const rows = await Vehicle.findAll({
     where: {
       shopId,
       ...(like
         ? {
             [Op.or]: [
-              { make: { [Op.like]: like } },
-              { model: { [Op.like]: like } },
-              { vin: { [Op.like]: like } },
+              where(fn("CONCAT", col("Vehicle.make"), " ", col("Vehicle.model")), Op.like, like),
               { "$Customer.name$": { [Op.like]: like } },
+              ...(compact
+                ? [
+                    { plate: { [Op.like]: `%${escape(compact)}%` } },
+                    { vin: { [Op.like]: `%${escape(compact)}%` } },
+                  ]
+                : []),
+              // Three digits or more, so a year or a model number does not match every phone.
+              ...(digits.length >= 3 ? [{ "$Customer.phone_digits$": { [Op.like]: `%${digits}%` } }] : []),
             ],
           }
         : {}),
     },
-    include: [{ model: Customer, attributes: ["id", "name"] }],
+    include: [{ model: Customer, attributes: ["id", "name", "phone"] }],
     order: [
       ["updatedAt", "DESC"],
       ["id", "DESC"],
@@ -57,12 +71,15 @@ export async function listVehicleChoices({
       electricCompressor: boolean | number;
       compressorType: CompressorType | null;
       labelChargeG: number | null;
-      Customer: { name: string };
+      plate: string | null;
+      Customer: { name: string; phone: string | null };
     };
     return {
       vehicleId: v.id,
       customerId: v.customerId,
       customer: v.Customer.name,
+      customerPhone: v.Customer.phone,
+      plate: v.plate,
       description: `${v.year} ${v.make} ${v.model}${v.engine ? ` ${v.engine}` : ""}`,
       refrigerant: v.refrigerant,
       expansionDevice: v.expansionDevice,

@@ -64,6 +64,7 @@ export async function createCase({
           model: v.model,
           engine: v.engine ?? null,
           vin: v.vin ?? null,
+          plate: v.plate ?? null,
           refrigerant: v.refrigerant,
           expansionDevice: v.expansionDevice,
           electricCompressor: v.compressorType ? v.compressorType === "electric" : v.electricCompressor,
