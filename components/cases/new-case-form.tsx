@@ -60,6 +60,8 @@ export function NewCaseForm() {
           value={search}
           onChange={(e) => setSearch(e.target.value)}
           autoComplete="off"
+          // The first thing done here: a phone number's digits or a plate find the vehicle.
+          autoFocus
         />
         <ul className="mt-3 space-y-2" aria-busy={isFetching}>
           {vehicles.map((v) => (
@@ -97,7 +99,13 @@ export function NewCaseForm() {
         >
           A vehicle not listed here
         </button>
-        {picked === "new" && <NewVehicleFields onChange={setDraft} errors={errors} />}
+        {picked === "new" && (
+          <NewVehicleFields
+            onChange={setDraft}
+            errors={errors}
+            initialPhone={/^[\d\s()+.-]{3,}$/.test(search.trim()) ? search.trim() : ""}
+          />
+        )}
         {firstError("vehicleId") && <p className="field-error">{firstError("vehicleId")}</p>}
       </fieldset>
 

@@ -8,6 +8,7 @@ import {
   COMPRESSOR_TYPES,
   type CompressorType,
 } from "@/lib/vehicles/compressor-types";
+import { SpecLookup } from "./spec-lookup";
 import { normaliseVin, vinCheckDigitMatches, vinFormatError } from "@/lib/vehicles/vin";
 
 export interface NewVehicleDraft {
@@ -24,6 +25,7 @@ export interface NewVehicleDraft {
     /** absent when the technician does not know it */
     compressorType?: CompressorType;
     electricCompressor: boolean;
+    labelChargeG?: number;
   };
 }
 
@@ -39,17 +41,21 @@ const EMPTY = {
   refrigerant: "R-1234yf",
   expansionDevice: "txv",
   compressorType: "",
+  labelChargeG: "",
 };
 
 /** The customer and vehicle for a first visit. Server-side validation has the final word. */
 export function NewVehicleFields({
   onChange,
   errors,
+  initialPhone = "",
 }: {
   onChange: (draft: NewVehicleDraft) => void;
   errors: Record<string, string[]>;
+  /** Digits typed into the vehicle search that found nothing: most likely the customer's phone. */
+  initialPhone?: string;
 }) {
-  const [f, setF] = useState(EMPTY);
+  const [f, setF] = useState({ ...EMPTY, phone: initialPhone });
   useEffect(() => {
     onChange({
       customer: { name: f.name, phone: f.phone || undefined },
@@ -64,6 +70,7 @@ export function NewVehicleFields({
         expansionDevice: f.expansionDevice,
         compressorType: f.compressorType === "" ? undefined : (f.compressorType as CompressorType),
         electricCompressor: f.compressorType === "electric",
+        labelChargeG: f.labelChargeG ? Number(f.labelChargeG) : undefined,
       },
     });
   }, [f, onChange]);
@@ -103,10 +110,25 @@ export function NewVehicleFields({
         autoCapitalize: "characters",
         autoComplete: "off",
       })}
+      <SpecLookup
+        onPick={(pick) =>
+          setF({
+            ...f,
+            year: pick.year === undefined ? f.year : String(pick.year),
+            make: pick.make,
+            model: pick.model,
+            refrigerant: pick.refrigerant,
+            labelChargeG: String(pick.labelChargeG),
+          })
+        }
+      />
       {field("year", "Model year", "newVehicle.year", { inputMode: "numeric" })}
       {field("make", "Make", "newVehicle.make")}
       {field("model", "Model", "newVehicle.model")}
       {field("engine", "Engine (optional)", "newVehicle.engine")}
+      {field("labelChargeG", "Label charge, g (optional)", "newVehicle.labelChargeG", {
+        inputMode: "numeric",
+      })}
       <div className="sm:col-span-2">
         {field("vin", "VIN (optional)", "newVehicle.vin", {
           autoCapitalize: "characters",

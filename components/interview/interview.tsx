@@ -75,20 +75,23 @@ export function Interview({
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [actor]);
 
-  // Put the technician straight into the first field of each new step. The findings are read, not
-  // typed into: there the heading takes focus, so no keyboard covers the ranking.
+  // Put the technician straight into the first field of each step, the first one too. The findings
+  // are read, not typed into: on arriving there nothing takes focus, so no keyboard covers the
+  // ranking; later steps move focus to the heading when they have no field.
   const firstRender = useRef(true);
   useEffect(() => {
-    if (firstRender.current) {
-      firstRender.current = false;
+    const arriving = firstRender.current;
+    firstRender.current = false;
+    if (step === "findings") {
+      if (!arriving) headingRef.current?.focus({ preventScroll: true });
+      window.scrollTo({ top: 0 });
       return;
     }
-    const input =
-      step === "findings"
-        ? null
-        : document.querySelector<HTMLElement>("#interview-step input[type=text], #interview-step textarea");
-    (input ?? headingRef.current)?.focus({ preventScroll: step === "findings" });
-    if (step === "findings") window.scrollTo({ top: 0 });
+    const input = document.querySelector<HTMLElement>(
+      "#interview-step input[type=text], #interview-step textarea",
+    );
+    if (input) input.focus();
+    else if (!arriving) headingRef.current?.focus();
   }, [step]);
 
   const stepCautions = useMemo(
