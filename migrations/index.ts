@@ -18,6 +18,7 @@ import * as m7001 from "./20261203-7001-create-casebook-tables";
 import * as m8001 from "./20261203-8001-add-user-units-and-locale";
 import * as m8002 from "./20261203-8002-keep-vacuum-readings-to-the-micron";
 import * as m9001 from "./20261203-9001-add-vehicle-plate-and-phone-search";
+import * as m9002 from "./20261203-9002-add-case-conclusion-writers";
 
 // Listed by hand, not globbed, so the same list works under tsx, vitest and a Next bundle.
 // A new migration file goes here too; an integration test fails when one is missing.
@@ -40,4 +41,5 @@ export const migrations: RunnableMigration<QueryInterface>[] = [
   { name: "20261203-8001-add-user-units-and-locale", ...m8001 },
   { name: "20261203-8002-keep-vacuum-readings-to-the-micron", ...m8002 },
   { name: "20261203-9001-add-vehicle-plate-and-phone-search", ...m9001 },
+  { name: "20261203-9002-add-case-conclusion-writers", ...m9002 },
 ];

@@ -53,6 +53,7 @@ export class Case extends Model<InferAttributes<Case>, InferCreationAttributes<C
   declare submittedAt: CreationOptional<Date | null>;
   declare closedAt: CreationOptional<Date | null>;
   declare repairNote: CreationOptional<string | null>;
+  declare conclusionWriterIds: CreationOptional<string[] | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -74,6 +75,7 @@ export class Case extends Model<InferAttributes<Case>, InferCreationAttributes<C
         submittedAt: { type: DataTypes.DATE(3), allowNull: true },
         closedAt: { type: DataTypes.DATE(3), allowNull: true },
         repairNote: { type: DataTypes.TEXT, allowNull: true },
+        conclusionWriterIds: { type: DataTypes.JSON, allowNull: true },
         createdAt: DataTypes.DATE(3),
         updatedAt: DataTypes.DATE(3),
       },

@@ -6,6 +6,8 @@ import {
   STATUS_AFTER,
   caseAbilities,
   caseRefusal,
+  conclusionWritersWith,
+  isOwnConclusionRefusal,
   statusAfterSubmit,
   type CaseAction,
 } from "./rules";
@@ -95,5 +97,84 @@ describe("the case's rules", () => {
       close: "closed",
       reopen: "signed_off",
     });
+  });
+});
+
+describe("nobody signs off a conclusion they wrote or changed", () => {
+  // Who wrote the conclusion of an apprentice's case waiting for sign-off, and whether each role may
+  // then sign it off: only a reviewer who neither owns the case nor saved or submitted it.
+  const WRITERS = {
+    nobody: [] as string[],
+    "the apprentice only": ["a1"],
+    "me and the apprentice": ["a1", "me"],
+    "only me": ["me"],
+    "not recorded": null,
+  } as const;
+  const MAY_SIGN_OFF: Record<Role, Record<keyof typeof WRITERS, boolean>> = {
+    owner: {
+      nobody: true,
+      "the apprentice only": true,
+      "me and the apprentice": false,
+      "only me": false,
+      "not recorded": true,
+    },
+    senior: {
+      nobody: true,
+      "the apprentice only": true,
+      "me and the apprentice": false,
+      "only me": false,
+      "not recorded": true,
+    },
+    technician: {
+      nobody: false,
+      "the apprentice only": false,
+      "me and the apprentice": false,
+      "only me": false,
+      "not recorded": false,
+    },
+    apprentice: {
+      nobody: false,
+      "the apprentice only": false,
+      "me and the apprentice": false,
+      "only me": false,
+      "not recorded": false,
+    },
+  };
+
+  it("holds for every role × who wrote it", () => {
+    for (const role of ROLES)
+      for (const [who, writers] of Object.entries(WRITERS) as [keyof typeof WRITERS, string[] | null][]) {
+        const facts = {
+          status: "awaiting_signoff" as const,
+          technicianId: "a1",
+          conclusionWriterIds: writers,
+        };
+        expect(caseAbilities({ id: "me", role }, facts).sign_off, `${role}, written by ${who}`).toBe(
+          MAY_SIGN_OFF[role][who],
+        );
+      }
+  });
+
+  it("says why, and still lets the writer send the case back", () => {
+    const senior = { id: "s1", role: "senior" as const };
+    const facts = {
+      status: "awaiting_signoff" as const,
+      technicianId: "a1",
+      conclusionWriterIds: ["a1", "s1"],
+    };
+    const refusal = caseRefusal("sign_off", senior, facts);
+    expect(refusal?.code).toBe("forbidden:case");
+    expect(refusal?.message).toMatch(/saved this case's interview or submitted its conclusion/);
+    expect(isOwnConclusionRefusal(refusal)).toBe(true);
+    expect(isOwnConclusionRefusal(caseRefusal("sign_off", senior, { ...facts, status: "draft" }))).toBe(
+      false,
+    );
+    expect(caseRefusal("send_back", senior, facts)).toBeNull();
+  });
+
+  it("records each writer once, in the order they wrote", () => {
+    expect(conclusionWritersWith(null, "a1")).toEqual(["a1"]);
+    expect(conclusionWritersWith(["a1"], "s1")).toEqual(["a1", "s1"]);
+    expect(conclusionWritersWith(["a1", "s1"], "a1")).toEqual(["a1", "s1"]);
   });
 });

@@ -35,6 +35,11 @@ export interface CaseActor {
 export interface CaseFacts {
   status: CaseStatus;
   technicianId: string;
+  /**
+   * Everyone who saved the case's interview or submitted its conclusion (null or missing: nobody
+   * recorded, as on cases from before this was kept).
+   */
+  conclusionWriterIds?: readonly string[] | null;
 }
 
 export interface CaseRefusal {
@@ -54,6 +59,8 @@ const MESSAGES = {
   submitted: "This case has been submitted; a senior must send it back before it can change.",
   notWaiting: "This case is not waiting for sign-off.",
   ownCase: "A second person signs off: you cannot sign off your own case.",
+  ownConclusion:
+    "You saved this case's interview or submitted its conclusion, so it is partly your work: a second person who did neither signs it off.",
   notSignedOff: "Only a signed-off case can be closed.",
   notClosed: "Only a closed case can be reopened.",
 } as const;
@@ -80,15 +87,38 @@ export const EDITABLE_CASE_STATUSES: readonly CaseStatus[] = ["draft", "sent_bac
 const notOwnCase: Check = (actor, facts) =>
   facts.technicianId === actor.id ? forbidden(MESSAGES.ownCase) : null;
 
+/** Nobody signs off a conclusion they wrote or changed, whoever's case it is. */
+const notOwnConclusion: Check = (actor, facts) =>
+  facts.conclusionWriterIds?.includes(actor.id) ? forbidden(MESSAGES.ownConclusion) : null;
+
+/** The writers after this person saves the interview or submits: each person once, in order. */
+export function conclusionWritersWith(
+  writers: readonly string[] | null | undefined,
+  actorId: string,
+): string[] {
+  const list = [...(writers ?? [])];
+  return list.includes(actorId) ? list : [...list, actorId];
+}
+
+/** Whether this refusal is the one that keeps a writer from signing off their own conclusion. */
+export function isOwnConclusionRefusal(refusal: CaseRefusal | null): boolean {
+  return refusal?.message === MESSAGES.ownConclusion;
+}
+
 /**
  * Each action's checks, run in order; the first that fails is the answer. To add a rule, add a line
- * to the action's list (for instance, that nobody signs off a conclusion they wrote or changed).
+ * to the action's list (as `notOwnConclusion`: nobody signs off a conclusion they wrote or changed).
  */
 const CHECKS: Record<CaseAction, readonly Check[]> = {
   edit: [permitted("cases:write"), theirsOrSenior, inStatus(EDITABLE_CASE_STATUSES, MESSAGES.submitted)],
   work_on: [permitted("cases:write"), theirsOrSenior],
   submit: [permitted("cases:write"), theirsOrSenior, inStatus(EDITABLE_CASE_STATUSES, MESSAGES.submitted)],
-  sign_off: [permitted("signoff:review"), inStatus(["awaiting_signoff"], MESSAGES.notWaiting), notOwnCase],
+  sign_off: [
+    permitted("signoff:review"),
+    inStatus(["awaiting_signoff"], MESSAGES.notWaiting),
+    notOwnCase,
+    notOwnConclusion,
+  ],
   send_back: [permitted("signoff:review"), inStatus(["awaiting_signoff"], MESSAGES.notWaiting), notOwnCase],
   close: [permitted("cases:write"), theirsOrSenior, inStatus(["signed_off"], MESSAGES.notSignedOff)],
   reopen: [permitted("signoff:review"), inStatus(["closed"], MESSAGES.notClosed)],

@@ -136,6 +136,8 @@ export interface CaseListResponse extends PageInfo {
 export interface CaseDetail extends CaseListItem {
   technicianId: string;
   technicianRole: Role;
+  /** Who saved the interview or submitted the conclusion: none of them may sign it off. */
+  conclusionWriterIds: string[];
   vehicleId: number | null;
   refrigerant: string | null;
   expansionDevice: string | null;

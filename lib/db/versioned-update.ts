@@ -16,6 +16,7 @@ export type CaseChanges = Partial<{
   conclusionNotes: string | null;
   confirmedRepair: string | null;
   submittedAt: Date | null;
+  conclusionWriterIds: string[];
 }>;
 
 export type UpdateCaseAtVersionInput = {

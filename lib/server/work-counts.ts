@@ -12,24 +12,32 @@ export async function workCounts({
   user: Pick<User, "id" | "shopId" | "role">;
 }): Promise<WorkCounts> {
   const { Case } = getModels();
+  const me = Case.sequelize!.escape(user.id);
   const rows = (await Case.findAll({
     attributes: [
       "status",
-      [literal(`technician_id = ${Case.sequelize!.escape(user.id)}`), "mine"],
+      [literal(`technician_id = ${me}`), "mine"],
+      // A conclusion this person saved or submitted is not theirs to sign off (lib/cases/rules.ts).
+      [literal(`JSON_CONTAINS(COALESCE(conclusion_writer_ids, '[]'), JSON_QUOTE(${me}))`), "wrote"],
       [fn("COUNT", col("id")), "n"],
     ],
     where: { shopId: user.shopId, status: { [Op.ne]: "closed" } },
-    group: ["status", "mine"],
+    group: ["status", "mine", "wrote"],
     raw: true,
-  })) as unknown as { status: string; mine: number | string; n: number | string }[];
-  const count = (status: string, mine?: boolean) =>
+  })) as unknown as { status: string; mine: number | string; wrote: number | string; n: number | string }[];
+  const count = (status: string, mine: boolean, wrote?: boolean) =>
     rows
-      .filter((r) => r.status === status && (mine === undefined || Boolean(Number(r.mine)) === mine))
+      .filter(
+        (r) =>
+          r.status === status &&
+          Boolean(Number(r.mine)) === mine &&
+          (wrote === undefined || Boolean(Number(r.wrote)) === wrote),
+      )
       .reduce((sum, r) => sum + Number(r.n), 0);
   return {
     myDrafts: count("draft", true),
     sentBackToMe: count("sent_back", true),
-    waitingForMySignOff: can(user.role, "signoff:review") ? count("awaiting_signoff", false) : null,
+    waitingForMySignOff: can(user.role, "signoff:review") ? count("awaiting_signoff", false, false) : null,
     shopOpen: rows.reduce((sum, r) => sum + Number(r.n), 0),
   };
 }

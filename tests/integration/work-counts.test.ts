@@ -45,6 +45,9 @@ describe("the home screen's counts and the sign-off queue", () => {
     const newer = await add(apprentice.id, "awaiting_signoff", hourAgo);
     const older = await add(apprentice.id, "awaiting_signoff", dayAgo);
     await add(senior.id, "awaiting_signoff", hourAgo);
+    // One the senior helped write: not theirs to sign off either.
+    const helped = await add(apprentice.id, "awaiting_signoff", hourAgo);
+    await helped.update({ conclusionWriterIds: [apprentice.id, senior.id] });
     await add(technician.id, "closed");
     // Another shop's waiting case never shows here.
     const other = await createShopWithCase(models);
@@ -54,24 +57,24 @@ describe("the home screen's counts and the sign-off queue", () => {
       myDrafts: 1, // the fixture's own draft
       sentBackToMe: 0,
       waitingForMySignOff: null,
-      shopOpen: 6,
+      shopOpen: 7,
     });
     expect(await workCounts({ user: { ...apprentice.get({ plain: true }), role: "apprentice" } })).toEqual({
       myDrafts: 1,
       sentBackToMe: 1,
       waitingForMySignOff: null,
-      shopOpen: 6,
+      shopOpen: 7,
     });
     // The senior's own submitted case is not theirs to sign off.
     expect(await workCounts({ user: { ...senior.get({ plain: true }), role: "senior" } })).toEqual({
       myDrafts: 0,
       sentBackToMe: 0,
       waitingForMySignOff: 2,
-      shopOpen: 6,
+      shopOpen: 7,
     });
 
     const queue = await signOffQueue({ shopId: shop.id });
-    expect(queue.total).toBe(3);
+    expect(queue.total).toBe(4);
     expect(queue.items.map((c) => c.id).slice(0, 2)).toEqual([older.id, newer.id]);
     expect(queue.items[0]!.submittedAt).toBe(dayAgo.toISOString());
     expect(queue.items[0]!.technician).toBe("Fixture apprentice");

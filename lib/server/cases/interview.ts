@@ -6,14 +6,14 @@ import { AppError } from "@/lib/errors";
 import { sortSavedAnswers } from "@/lib/interview/validate";
 import { diagnosisInputFor } from "@/lib/interview/to-diagnosis-input";
 import { diagnose } from "@/lib/diagnosis";
-import { statusAfterSubmit } from "@/lib/cases/rules";
+import { conclusionWritersWith, statusAfterSubmit } from "@/lib/cases/rules";
 import { endSentence, formatShopTime } from "@/lib/units/clock";
 import type { CaseSubmitResult } from "@/lib/contracts/case-submit";
 import type { CaseSubmitInput, InterviewSaveInput, InterviewSaveResponse } from "@/lib/contracts/interview";
 import { updateCaseAtVersion, type CaseChanges } from "@/lib/db/versioned-update";
 import { recordAudit } from "../audit";
 import { getShop, type ShopSummary } from "../shops";
-import { caseForAction } from "./load";
+import { caseForAction, conclusionWritersOf } from "./load";
 import { refreshCasebookEntry } from "../casebook/refresh";
 
 /**
@@ -80,6 +80,7 @@ export async function saveInterview({
           visited: input.visited,
         } as unknown as JsonObject,
         symptomTags: sorted.answers.behaviour?.symptoms ?? [],
+        conclusionWriterIds: conclusionWritersWith(conclusionWritersOf(row), user.id),
       },
     });
     return { version, draftGroups: Object.keys(sorted.drafts) };
@@ -130,6 +131,7 @@ export async function submitCase({
         conclusionCause: input.conclusionCause,
         conclusionNotes: input.conclusionNotes,
         submittedAt: new Date(),
+        conclusionWriterIds: conclusionWritersWith(conclusionWritersOf(row), user.id),
       },
     });
     // Findings, leading suspect, symptoms and readings for the casebook and similar cases.

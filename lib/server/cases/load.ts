@@ -28,7 +28,20 @@ export async function caseForAction({
     lock: transaction ? transaction.LOCK.UPDATE : undefined,
   });
   if (!row) throw new AppError("not_found:case", "No such case in this shop.");
-  const refusal = caseRefusal(action, user, row);
+  const refusal = caseRefusal(action, user, { ...row, conclusionWriterIds: conclusionWritersOf(row) });
   if (refusal) throw new AppError(refusal.code, refusal.message);
   return row;
+}
+
+/** The stored writers of the conclusion (a JSON column, which a raw read may hand back as text). */
+export function conclusionWritersOf(row: { conclusionWriterIds?: unknown }): string[] {
+  let raw = row.conclusionWriterIds;
+  if (typeof raw === "string") {
+    try {
+      raw = JSON.parse(raw);
+    } catch {
+      raw = null;
+    }
+  }
+  return Array.isArray(raw) ? raw.filter((id): id is string => typeof id === "string") : [];
 }

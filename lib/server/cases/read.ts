@@ -3,6 +3,7 @@ import { getModels } from "@/models";
 import type { CaseDetail, CaseListItem, CaseListResponse, CaseStatus } from "@/lib/contracts/cases";
 import { pageOf } from "../paging";
 import { AppError } from "@/lib/errors";
+import { conclusionWritersOf } from "./load";
 import type { Role } from "@/lib/auth/roles";
 
 type VehicleRow = {
@@ -97,6 +98,7 @@ export async function getCase({ shopId, caseId }: { shopId: number; caseId: numb
     technician: c.technician.name,
     technicianId: c.technicianId as string,
     technicianRole: c.technician.role,
+    conclusionWriterIds: conclusionWritersOf({ conclusionWriterIds: c.conclusionWriterIds }),
     vehicleId: (c.vehicleId as number | null) ?? null,
     updatedAt: (c.updatedAt as Date).toISOString(),
     refrigerant: c.Vehicle?.refrigerant ?? null,

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { requireUser } from "@/lib/auth/guard";
-import { caseAbilities } from "@/lib/cases/rules";
+import { caseAbilities, caseRefusal, isOwnConclusionRefusal } from "@/lib/cases/rules";
 import { can } from "@/lib/auth/roles";
 import { getCase } from "@/lib/server/cases";
 import { isAppError } from "@/lib/errors";
@@ -31,6 +31,7 @@ export default async function CasePage({ params }: { params: Promise<{ id: strin
   });
   const record = (detail.answers ?? {}) as { answers?: Record<string, never> };
   const may = caseAbilities(user, detail);
+  const wroteIt = isOwnConclusionRefusal(caseRefusal("sign_off", user, detail));
   const [owner, comeback] = await Promise.all([
     ownerPanelData({ user, caseId: detail.id }),
     caseComebackLinks({ shopId: user.shopId, caseId: detail.id }),
@@ -69,6 +70,15 @@ export default async function CasePage({ params }: { params: Promise<{ id: strin
         </section>
       )}
       {may.sign_off && may.send_back && <SignOffForm caseId={detail.id} />}
+      {wroteIt && (
+        <p
+          className="card border-2 border-caution-500 bg-caution-50 text-caution-700"
+          data-testid="own-conclusion"
+        >
+          You saved this case&apos;s interview or submitted its conclusion, so it is partly your work. Another
+          senior or the owner signs it off.
+        </p>
+      )}
       <section className="card">
         <h2 className="text-lg font-bold">Complaint, in the owner&apos;s words</h2>
         <p className="mt-1">&ldquo;{detail.complaint}&rdquo;</p>
