@@ -18,6 +18,14 @@ import { ApiError } from "@/lib/queries/api-fetch";
 import { submitCase, type CaseSubmitResult } from "@/lib/queries/case-submit";
 import { CautionsList, type CautionItem } from "@/components/cautions/cautions-list";
 import { SuspectCard } from "./suspect-card";
+import { ReviewThread, type ReviewContext } from "./review-thread";
+import { clsx } from "clsx";
+import {
+  CONCLUSION_REASON_IDS,
+  CONCLUSION_REASON_LABELS,
+  conclusionProblem,
+  type ConclusionReasonId,
+} from "@/lib/cases/conclusion";
 import type { SaveStatus } from "./use-autosave";
 import { DetailsLine } from "@/components/ui/details-line";
 
@@ -29,6 +37,8 @@ interface Props {
   interviewCautions: InterviewCaution[];
   /** whether submitting sends the case to a senior (lib/cases/rules.ts) rather than signing it off */
   waitsForSignOff: boolean;
+  /** The review so far; a resubmission starts from the conclusion sent before. */
+  review?: ReviewContext;
   /** Cautions already shown open earlier in this case: folded to one line here. */
   shownEarlier?: ReadonlySet<string>;
   saveStatus: SaveStatus;
@@ -42,6 +52,7 @@ export function FindingsStep({
   units,
   interviewCautions,
   waitsForSignOff,
+  review,
   shownEarlier,
   saveStatus,
   currentVersion,
@@ -49,8 +60,12 @@ export function FindingsStep({
 }: Props) {
   const router = useRouter();
   const onScreen = useMemo(() => (input ? diagnose(input) : null), [input]);
-  const [cause, setCause] = useState<CauseId | "">("");
-  const [notes, setNotes] = useState("");
+  const earlierCause = (CAUSE_IDS as readonly string[]).includes(review?.earlierCause ?? "")
+    ? (review!.earlierCause as CauseId)
+    : "";
+  const [cause, setCause] = useState<CauseId | "">(earlierCause);
+  const [notes, setNotes] = useState(review?.earlierNotes ?? "");
+  const [reasons, setReasons] = useState<ConclusionReasonId[]>([]);
   const [error, setError] = useState<string | null>(null);
   // Set when the server's findings differ from these (the app was updated while the interview was open).
   const [stored, setStored] = useState<Extract<CaseSubmitResult, { findingsChanged: true }> | null>(null);
@@ -101,11 +116,14 @@ export function FindingsStep({
     if (saveStatus.kind !== "saved")
       return setError("Some answers are still waiting to be saved. Submit once they are.");
     if (!findings || !chosen) return;
+    const problem = conclusionProblem({ needsReason: waitsForSignOff, reasons, words: notes });
+    if (problem) return setError(problem);
     mutation.mutate({
       baseVersion: currentVersion(),
       engineVersion: findings.engineVersion,
       conclusionCause: chosen,
       conclusionNotes: notes,
+      conclusionReasons: reasons,
     });
   }
 
@@ -221,18 +239,44 @@ export function FindingsStep({
               ))}
             </select>
           </div>
+          {waitsForSignOff && (
+            <fieldset>
+              <legend className="field-label">Why: pick what it rests on</legend>
+              <div className="flex flex-wrap gap-2">
+                {CONCLUSION_REASON_IDS.map((id) => (
+                  <button
+                    key={id}
+                    type="button"
+                    aria-pressed={reasons.includes(id)}
+                    onClick={() =>
+                      setReasons((r) => (r.includes(id) ? r.filter((x) => x !== id) : [...r, id]))
+                    }
+                    className={clsx(
+                      "min-h-touch rounded-full border-2 px-3 text-left text-sm font-bold",
+                      reasons.includes(id)
+                        ? "border-glacier-700 bg-glacier-700 text-white"
+                        : "border-glacier-500 bg-paper text-glacier-900",
+                    )}
+                  >
+                    {CONCLUSION_REASON_LABELS[id]}
+                  </button>
+                ))}
+              </div>
+            </fieldset>
+          )}
           <div>
             <label htmlFor="conclusion-notes" className="field-label">
-              Why, in a sentence or two
+              {waitsForSignOff ? "Anything to add (optional)" : "Why, in a sentence or two (optional)"}
             </label>
             <textarea
               id="conclusion-notes"
-              rows={3}
+              rows={2}
               className="field-input py-2"
               value={notes}
               onChange={(e) => setNotes(e.target.value)}
             />
           </div>
+          {review && <ReviewThread review={review} />}
           {error && (
             <p role="alert" className="field-error">
               {error}

@@ -11,6 +11,7 @@ import { FindingsStep } from "./findings-step";
 import { STEP_LEADS } from "./labels";
 import { ProgressStrip } from "./progress-strip";
 import { SaveBanner } from "./save-banner";
+import { SentBackNote, type ReviewContext } from "./review-thread";
 import { SpecMatches } from "./spec-matches";
 import { StepForm, type StepFormHandle } from "./step-form";
 import { useAutosave } from "./use-autosave";
@@ -32,6 +33,8 @@ export interface InterviewProps {
   /** The technician's locale, for reading "1,200" and "1,2" the way they write them. */
   locale?: string;
   waitsForSignOff: boolean;
+  /** The case's review so far: a sent-back case shows the senior's comment here and at the findings. */
+  review: ReviewContext;
   heading: string;
   vehicleId: number | null;
 }
@@ -47,6 +50,7 @@ export function Interview({
   units,
   locale,
   waitsForSignOff,
+  review,
   heading,
   vehicleId,
 }: InterviewProps) {
@@ -139,6 +143,7 @@ export function Interview({
         <p className="text-sm font-bold text-ink-soft">{heading}</p>
         <ProgressStrip entries={view.progress} onOpen={(target) => send({ type: "GOTO", step: target })} />
       </div>
+      <SentBackNote review={review} />
       <SaveBanner
         status={autosave.status}
         attention={attentionOf(snapshot.context, units)}
@@ -200,6 +205,7 @@ export function Interview({
             units={units}
             interviewCautions={view.cautions}
             waitsForSignOff={waitsForSignOff}
+            review={review}
             shownEarlier={shownEarlier}
             saveStatus={autosave.status}
             currentVersion={autosave.currentVersion}

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { CONCLUSION_REASON_IDS } from "@/lib/cases/conclusion";
 import { boundedJson } from "./json-body";
 import { multiLineText, singleLineText } from "./text";
 import { groupIds, stepIds } from "@/lib/interview/steps";
@@ -36,9 +37,11 @@ export const caseSubmitSchema = z.object({
   baseVersion: z.number().int().positive(),
   engineVersion: singleLineText().min(1).max(64),
   conclusionCause: z.enum(CAUSE_IDS, { message: "Choose the cause you concluded." }),
-  conclusionNotes: multiLineText()
-    .trim()
-    .min(1, "Say in a sentence or two why you concluded this.")
-    .max(4000, "Keep it under 4000 characters."),
+  /** Optional for a technician or senior; an apprentice gives reasons or words (lib/cases/conclusion.ts). */
+  conclusionNotes: multiLineText().trim().max(4000, "Keep it under 4000 characters.").default(""),
+  conclusionReasons: z
+    .array(z.enum(CONCLUSION_REASON_IDS, { message: "Unknown reason." }))
+    .max(CONCLUSION_REASON_IDS.length)
+    .default([]),
 });
 export type CaseSubmitInput = z.infer<typeof caseSubmitSchema>;

@@ -143,6 +143,7 @@ describe("case changes and their audit rows", () => {
           baseVersion: stored!.version,
           conclusionCause: "overcharge",
           conclusionNotes: "High side well above the band for the ambient.",
+          conclusionReasons: [],
           engineVersion: "any",
         },
       }),

@@ -121,3 +121,45 @@ describe("separation of duties on sign-off", () => {
     expect(row!.status).toBe("signed_off");
   });
 });
+
+describe("the conclusion's why", () => {
+  it("asks an apprentice for a reason or words (400, nothing stored), and stores picked reasons as a sentence", async () => {
+    const models = getModels();
+    const { shop, serviceCase } = await createShopWithCase(models);
+    const apprentice = await person(shop.id, "apprentice");
+    await serviceCase.update({
+      technicianId: apprentice.user.id,
+      interviewStep: "findings",
+      answers: { answers: exampleAnswers, drafts: {}, skipped: [], visited: [] },
+    });
+    const params = { params: Promise.resolve({ id: String(serviceCase.id) }) };
+    const settings = { altitudeM: shop.altitudeM };
+    const findings = diagnose(
+      diagnosisInputFor(sortSavedAnswers(exampleAnswers, settings).answers, settings)!,
+    );
+    const body = async () => ({
+      baseVersion: (await models.Case.findByPk(serviceCase.id, { raw: true }))!.version,
+      engineVersion: findings.engineVersion,
+      conclusionCause: findings.suspects[0]!.cause,
+    });
+    const bare = await submitRoute(
+      request("POST", `/api/cases/${serviceCase.id}/submit`, apprentice.session, await body()),
+      params,
+    );
+    expect(bare.status).toBe(400);
+    expect(JSON.stringify(await bare.json())).toMatch(/Pick at least one reason/);
+    expect((await models.Case.findByPk(serviceCase.id, { raw: true }))!.status).toBe("draft");
+
+    const withReasons = await submitRoute(
+      request("POST", `/api/cases/${serviceCase.id}/submit`, apprentice.session, {
+        ...(await body()),
+        conclusionReasons: ["charge_weight", "pressures"],
+      }),
+      params,
+    );
+    expect(withReasons.status).toBe(200);
+    const row = await models.Case.findByPk(serviceCase.id, { raw: true });
+    expect(row!.status).toBe("awaiting_signoff");
+    expect(row!.conclusionNotes).toBe("The pressures point to it; the recovered charge against the label.");
+  });
+});

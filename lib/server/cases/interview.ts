@@ -7,6 +7,7 @@ import { sortSavedAnswers } from "@/lib/interview/validate";
 import { diagnosisInputFor } from "@/lib/interview/to-diagnosis-input";
 import { diagnose } from "@/lib/diagnosis";
 import { conclusionWritersWith, statusAfterSubmit } from "@/lib/cases/rules";
+import { conclusionNotesFrom, conclusionProblem } from "@/lib/cases/conclusion";
 import { endSentence, formatShopTime } from "@/lib/units/clock";
 import type { CaseSubmitResult } from "@/lib/contracts/case-submit";
 import type { CaseSubmitInput, InterviewSaveInput, InterviewSaveResponse } from "@/lib/contracts/interview";
@@ -119,6 +120,13 @@ export async function submitCase({
       transaction,
     });
     const status = statusAfterSubmit(technician?.role ?? null);
+    const problem = conclusionProblem({
+      needsReason: status === "awaiting_signoff",
+      reasons: input.conclusionReasons,
+      words: input.conclusionNotes,
+    });
+    if (problem)
+      throw new AppError("bad_request:case", problem, { fieldErrors: { conclusionNotes: [problem] } });
     const version = await updateIfVersion({
       row,
       shop,
@@ -129,7 +137,7 @@ export async function submitCase({
         findings: { input: diagnosisInput, ...findings } as unknown as JsonValue,
         engineVersion: findings.engineVersion,
         conclusionCause: input.conclusionCause,
-        conclusionNotes: input.conclusionNotes,
+        conclusionNotes: conclusionNotesFrom(input.conclusionReasons, input.conclusionNotes),
         submittedAt: new Date(),
         conclusionWriterIds: conclusionWritersWith(conclusionWritersOf(row), user.id),
       },
@@ -145,6 +153,7 @@ export async function submitCase({
       detail: {
         status,
         conclusionCause: input.conclusionCause,
+        conclusionReasons: input.conclusionReasons,
         engineVersion: findings.engineVersion,
         ...(findingsChanged ? { screenEngineVersion: input.engineVersion } : {}),
       },

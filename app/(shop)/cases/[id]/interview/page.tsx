@@ -5,6 +5,7 @@ import { mayDo, statusAfterSubmit } from "@/lib/cases/rules";
 import { getCase } from "@/lib/server/cases";
 import { getShop } from "@/lib/server/shops";
 import { getProfile } from "@/lib/server/profile";
+import { formatShopTime } from "@/lib/units/clock";
 import { isAppError } from "@/lib/errors";
 import { InterviewBoot } from "@/components/interview/interview-boot";
 import type { SavedInterview } from "@/machines/interview-view";
@@ -39,6 +40,16 @@ export default async function InterviewPage({ params }: { params: Promise<{ id: 
       units={profile.units}
       locale={profile.locale ?? shop.locale}
       waitsForSignOff={statusAfterSubmit(detail.technicianRole) === "awaiting_signoff"}
+      review={{
+        thread: detail.signOffs.map((s) => ({
+          verdict: s.verdict,
+          reviewer: s.reviewer,
+          comment: s.comment,
+          when: formatShopTime(new Date(s.createdAt), shop),
+        })),
+        earlierCause: detail.conclusionCause,
+        earlierNotes: detail.conclusionNotes,
+      }}
       heading={`Case ${caseId} · ${detail.vehicle ?? "vehicle"}`}
       vehicleId={detail.vehicleId}
     />
