@@ -17,8 +17,9 @@ function read(caseId: number): string[] {
 }
 
 /**
- * The ids shown before this step began (fold these), given the ids on screen now. Ones that appear
- * during the step stay open until the next step.
+ * The ids shown before this step began (fold these), given the ids on screen now. A caution counts
+ * as shown once a step opened with it on screen: one that appears while a reading is typed stays
+ * open until a step has opened with it, so a new danger is never folded before it is read.
  */
 export function useShownCautions(caseId: number, stepKey: string, onScreen: readonly string[]) {
   // The interview renders only in the browser (it waits for the device's outbox), so reading storage
@@ -34,6 +35,8 @@ export function useShownCautions(caseId: number, stepKey: string, onScreen: read
     } catch {
       // A full or blocked storage only means the cards stay open.
     }
-  }, [caseId, onScreenKey]);
+    // Only on arriving at a step: what shows up while typing is remembered at the next arrival.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [caseId, stepKey]);
   return state.ids as ReadonlySet<string>;
 }
