@@ -3,6 +3,7 @@ import { requireUser } from "@/lib/auth/guard";
 import { navigationFor } from "@/lib/auth/navigation";
 import { ROLE_LABELS } from "@/lib/auth/roles";
 import { getShop } from "@/lib/server/shops";
+import { ShopClockProvider } from "@/components/shell/shop-clock";
 import { passwordMustChange } from "@/lib/server/passwords";
 import { ChangePasswordForm } from "@/components/account/change-password-form";
 import { BrandMark } from "@/components/shell/brand-mark";
@@ -61,7 +62,9 @@ export default async function ShopLayout({ children }: { children: React.ReactNo
             </div>
           </div>
         ) : (
-          children
+          <ShopClockProvider clock={{ timeZone: shop.timeZone, locale: shop.locale }}>
+            {children}
+          </ShopClockProvider>
         )}
       </main>
       <footer className="mx-auto max-w-5xl px-3 pb-6 text-sm">

@@ -1,6 +1,7 @@
 import Link from "next/link";
 import type { CaseListItem } from "@/lib/contracts/cases";
 import { StatusBadge } from "./status-badge";
+import { ShopTime } from "@/components/shell/shop-clock";
 
 export function CaseList({ cases, empty }: { cases: CaseListItem[]; empty: string }) {
   if (cases.length === 0) return <p className="card text-ink-soft">{empty}</p>;
@@ -15,8 +16,7 @@ export function CaseList({ cases, empty }: { cases: CaseListItem[]; empty: strin
             </div>
             <p className="mt-1 line-clamp-2 text-ink-soft">&ldquo;{c.complaint}&rdquo;</p>
             <p className="mt-1 text-sm text-ink-muted">
-              Case {c.id} · {c.customer ?? "no customer"} · {c.technician} ·{" "}
-              <time dateTime={c.updatedAt}>{new Date(c.updatedAt).toISOString().slice(0, 10)}</time>
+              Case {c.id} · {c.customer ?? "no customer"} · {c.technician} · <ShopTime iso={c.updatedAt} />
             </p>
           </Link>
         </li>

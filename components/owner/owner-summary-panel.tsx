@@ -12,8 +12,7 @@ import {
 } from "@/lib/queries/owner-summary";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { useCaseAction } from "./use-case-action";
-
-const when = (iso: string) => new Date(iso).toLocaleString("en", { dateStyle: "medium", timeStyle: "short" });
+import { useShopTime } from "@/components/shell/shop-clock";
 
 /** Links to the owner's page and the e-mails that carried them, with revoke and retry. */
 export function OwnerSummaryPanel({
@@ -31,6 +30,7 @@ export function OwnerSummaryPanel({
   links: ShareLinkView[];
   emails: OutboundEmailView[];
 }) {
+  const when = useShopTime();
   const [to, setTo] = useState(customerEmail ?? "");
   const [newUrl, setNewUrl] = useState<string | null>(null);
   const send = useCaseAction((address: string) => sendOwnerEmail(caseId, { to: address }));
@@ -174,6 +174,7 @@ function EmailList({
   onRetry: (id: number) => void;
   busy: boolean;
 }) {
+  const when = useShopTime();
   return (
     <div>
       <h3 className="font-bold">E-mails</h3>

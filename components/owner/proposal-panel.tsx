@@ -5,8 +5,7 @@ import type { ShopProposalView } from "@/lib/contracts/owner-summary";
 import { REPAIRS, type RepairId } from "@/lib/repairs/catalog";
 import { proposeRepairs } from "@/lib/queries/owner-summary";
 import { useCaseAction } from "./use-case-action";
-
-const when = (iso: string) => new Date(iso).toLocaleString("en", { dateStyle: "medium", timeStyle: "short" });
+import { useShopTime } from "@/components/shell/shop-clock";
 
 /** The repair the shop proposes to the owner, and the owner's answer when it comes. */
 export function ProposalPanel({
@@ -20,6 +19,7 @@ export function ProposalPanel({
   proposal: ShopProposalView | null;
   suggested: RepairId[];
 }) {
+  const when = useShopTime();
   const [chosen, setChosen] = useState<Set<string>>(
     () => new Set(proposal ? proposal.repairs.map((r) => r.id) : suggested),
   );

@@ -1,6 +1,7 @@
 "use client";
 
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { ShopTime } from "@/components/shell/shop-clock";
 import { useState } from "react";
 import { ROLE_LABELS } from "@/lib/auth/roles";
 import { apiFetch, ApiError } from "@/lib/queries/api-fetch";
@@ -45,9 +46,13 @@ export function OpenInvitations() {
               </p>
               <p className="truncate text-ink-soft">
                 {inv.email} ·{" "}
-                {inv.expired
-                  ? "link expired: invite again"
-                  : `link valid until ${new Date(inv.expiresAt).toLocaleDateString()}`}
+                {inv.expired ? (
+                  "link expired: invite again"
+                ) : (
+                  <>
+                    link valid until <ShopTime iso={inv.expiresAt} />
+                  </>
+                )}
               </p>
             </div>
             <button

@@ -1,6 +1,7 @@
 "use client";
 
 import { useState } from "react";
+import { ShopTime } from "@/components/shell/shop-clock";
 import { useMutation } from "@tanstack/react-query";
 import type { ShopUser } from "@/lib/contracts/users";
 import { TEMPORARY_PASSWORD_LIFETIME_HOURS, type PasswordResetResponse } from "@/lib/contracts/passwords";
@@ -56,8 +57,7 @@ export function ResetPassword({ person }: { person: ShopUser }) {
           </p>
           <p className="text-sm">
             Give it to them in person or by phone, never in a group chat. It works until{" "}
-            {new Date(shown.expiresAt).toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short" })},
-            and they must choose their own when they sign in.
+            <ShopTime iso={shown.expiresAt} />, and they must choose their own when they sign in.
             {shown.sessionsEnded > 0
               ? ` ${shown.sessionsEnded === 1 ? "One device was" : `${shown.sessionsEnded} devices were`} signed out.`
               : ""}
