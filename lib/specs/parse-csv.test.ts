@@ -118,6 +118,16 @@ describe("parseSpecCsv: good rows", () => {
     expect(r.rows.every((x) => x.problems.length === 0)).toBe(true);
   });
 
+  it("counts lines in a file that mixes lone carriage returns with CR LF (rows pasted from two exports)", () => {
+    const row1 = "2016,2019,Ford,Explorer,,no,R-134a,765,PAG 46,210";
+    const row2 = "2016,2019,Ford,Explorer,,yes,R-134a,1130,PAG 46,270";
+    for (const csv of [`${HEADER}\r${row1}\r\n${row2}`, `${HEADER}\r\n${row1}\r${row2}\n`]) {
+      const r = parseSpecCsv(csv);
+      expect(r.rows.map((x) => x.line)).toEqual([2, 3]);
+      expect(r.rows.map((x) => x.values?.labelChargeG)).toEqual([765, 1130]);
+    }
+  });
+
   it("lists columns it does not use", () => {
     expect(
       parseSpecCsv(`${HEADER},notes\n2016,2019,Ford,Explorer,,no,R-134a,765,PAG 46,210,ok`).ignoredColumns,

@@ -67,11 +67,8 @@ function readRecords(text: string, delimiter: string): { cells: string[]; line: 
       const end = result.meta.cursor;
       const cells = result.data;
       if (cells.some((c) => c.trim() !== "")) records.push({ cells, line });
-      for (let i = start; i < end; i++) {
-        const c = text.charCodeAt(i);
-        // \n, \r\n and a lone \r (old spreadsheet exports) each end one line
-        if (c === 10 || (c === 13 && text.charCodeAt(i + 1) !== 10)) line++;
-      }
+      // line ends are all \n by now (parseSpecCsv), so each one is a physical line
+      for (let i = start; i < end; i++) if (text.charCodeAt(i) === 10) line++;
       start = end;
     },
   });
@@ -80,7 +77,9 @@ function readRecords(text: string, delimiter: string): { cells: string[]; line: 
 
 /** Read a spec-table CSV into rows with their problems, for a preview before anything is saved. */
 export function parseSpecCsv(text: string, options: SpecCsvOptions = {}): SpecCsvParse {
-  const body = text.replace(/^\uFEFF/, "");
+  // \r\n and a lone \r (old spreadsheet exports) each end one line, and a file pasted together from two
+  // exports can mix them: one line end before parsing, or a \r\n split at its \r starts a cell with \n.
+  const body = text.replace(/^\uFEFF/, "").replace(/\r\n?/g, "\n");
   const delimiter = guessDelimiter(body);
   const fileProblems: string[] = [];
   const records = readRecords(body, delimiter);
