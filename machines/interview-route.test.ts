@@ -6,6 +6,7 @@ import { routeFor } from "@/lib/interview/route";
 import { optionalGroups } from "@/lib/interview/steps";
 import { viewOf } from "./interview-view";
 import { isFallBack, startInterview, stepOf, walk } from "./interview-test-kit";
+import { propertyRuns } from "@/tests/support/property-runs";
 
 /*
  * The machine's own NEXT/BACK transitions and routeFor (which draws the progress strip) are written
@@ -61,7 +62,7 @@ describe("machine and routeFor agree", { timeout: 30_000 }, () => {
         // The explicit transitions got there on their own, without the fall-back move.
         expect(fallBacks).toBe(0);
       }),
-      { numRuns: 300 },
+      { numRuns: propertyRuns(300) },
     );
   });
 });

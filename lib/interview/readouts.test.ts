@@ -17,6 +17,7 @@ function liveReadouts(...args: Parameters<typeof markedReadouts>) {
     ]),
   );
 }
+import { propertyRuns } from "@/tests/support/property-runs";
 
 // R-134a saturation: 1317.905 kPa abs at 50 °C, 292.803 kPa abs at 0 °C, 665.381 kPa abs at 25 °C
 // (Tillner-Roth & Baehr 1994); one standard atmosphere is 101.325 kPa (ISO 2533).
@@ -93,6 +94,7 @@ describe("one physics path", () => {
   it("the readouts' numbers are the findings engine's numbers for the same readings (property over running reading sets)", () => {
     const reading = (min: number, max: number) =>
       fc.integer({ min: min * 10, max: max * 10 }).map((tenths) => tenths / 10);
+    const numRuns = propertyRuns(400);
     let compared = 0;
     fc.assert(
       fc.property(
@@ -127,9 +129,9 @@ describe("one physics path", () => {
           if (physics.subcoolingK !== undefined && physics.superheatK !== undefined) compared += 1;
         },
       ),
-      { numRuns: 400 },
+      { numRuns },
     );
     // Most reading sets lie inside the tables; make sure the comparison was not vacuous.
-    expect(compared).toBeGreaterThan(100);
+    expect(compared).toBeGreaterThan(numRuns / 4);
   });
 });

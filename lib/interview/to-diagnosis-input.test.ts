@@ -7,6 +7,7 @@ import { behaviourSymptomIds, leakPlaceChoices } from "./choices";
 import { crossCheck } from "./cross-checks";
 import { emptySystemAnswers, exampleAnswers } from "./example-answers";
 import { diagnosisInputFor, toDiagnosisInput } from "./to-diagnosis-input";
+import { propertyRuns } from "@/tests/support/property-runs";
 
 describe("toDiagnosisInput", () => {
   it("is null until refrigerant, expansion device and ambient are known", () => {
@@ -175,6 +176,7 @@ describe("toDiagnosisInput", () => {
       }),
     });
     const shop = fc.record({ altitudeM: opt(num(-450, 5000)) });
+    const numRuns = propertyRuns(400);
     let checked = 0;
     fc.assert(
       fc.property(answers, shop, (candidate, shopSettings) => {
@@ -186,8 +188,8 @@ describe("toDiagnosisInput", () => {
         const result = diagnosisInputSchema.safeParse(input);
         expect(result.error?.issues ?? []).toEqual([]);
       }),
-      { numRuns: 400 },
+      { numRuns },
     );
-    expect(checked).toBeGreaterThan(100);
+    expect(checked).toBeGreaterThan(numRuns / 4);
   });
 });

@@ -10,6 +10,7 @@ import {
   subcoolingK,
   superheatK,
 } from "./index";
+import { propertyRuns } from "@/tests/support/property-runs";
 
 const psig = (value: number) => gaugeToAbsoluteKpa(pressureToKpa(value, "psi"));
 
@@ -118,7 +119,7 @@ describe("static pressure check (engine off, soaked to ambient)", () => {
           expect(["valid", "no_liquid", "out_of_range"]).toContain(check.kind);
         },
       ),
-      { numRuns: 2000 },
+      { numRuns: propertyRuns(2000) },
     );
   });
 });

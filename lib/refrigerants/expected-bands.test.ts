@@ -9,6 +9,7 @@ import {
   refrigerantInfo,
   saturationTemperature,
 } from "./index";
+import { propertyRuns } from "@/tests/support/property-runs";
 
 const psigToTsatC = (psig: number) =>
   saturationTemperature("R-134a", gaugeToAbsoluteKpa(pressureToKpa(psig, "psi")));
@@ -157,7 +158,7 @@ describe("expected bands from the physics", () => {
           expect(bands.low.maxSaturationC).toBeGreaterThan(bands.low.minSaturationC);
         },
       ),
-      { numRuns: 2000 },
+      { numRuns: propertyRuns(2000) },
     );
     // About 35 % of the conditions have bands (10 °C up to the top of the table, never R-744): make sure they are reached.
     expect(reached).toBeGreaterThan(500);

@@ -1,6 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { hermite, monotoneSlopes } from "./monotone-hermite";
+import { propertyRuns } from "@/tests/support/property-runs";
 
 function interpolate(xs: number[], ys: number[], slopes: Float64Array, x: number): number {
   let i = 0;
@@ -55,7 +56,7 @@ describe("monotone cubic Hermite (Fritsch & Carlson 1980)", () => {
         expect(y).toBeGreaterThanOrEqual(ys[i]! - 1e-9 * scale);
         expect(y).toBeLessThanOrEqual(ys[i + 1]! + 1e-9 * scale);
       }),
-      { numRuns: 1000 },
+      { numRuns: propertyRuns(1000) },
     );
   });
 

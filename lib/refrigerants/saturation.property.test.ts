@@ -9,8 +9,9 @@ import {
   saturationPressure,
   saturationTemperature,
 } from "./index";
+import { propertyRuns } from "@/tests/support/property-runs";
 
-const RUNS = { numRuns: 2000 };
+const RUNS = { numRuns: propertyRuns(2000) };
 const refrigerant = fc.constantFrom(...REFRIGERANT_IDS);
 const inRangeTemp = refrigerant.chain((id) => {
   const { minTempC, maxTempC } = refrigerantInfo(id);

@@ -11,6 +11,7 @@ import {
 } from "./ledger";
 import { postingsForRecordChange, postingsForServiceRecord } from "./ledger-corrections";
 import { monthInTimeZone, monthlyReport, toCsv } from "./ledger-report";
+import { propertyRuns } from "@/tests/support/property-runs";
 
 const tank: Cylinder = {
   id: "cyl-rec-1",
@@ -212,7 +213,7 @@ describe("monthlyReport", () => {
           expect(monthInTimeZone(new Date(ms).toISOString(), timeZone)).toBe(expected);
         },
       ),
-      { numRuns: 2000 },
+      { numRuns: propertyRuns(2000) },
     );
   });
 

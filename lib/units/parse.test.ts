@@ -11,6 +11,7 @@ import {
   temperatureToC,
   volumeToMl,
 } from "./index";
+import { propertyRuns } from "@/tests/support/property-runs";
 
 describe("parseQuantity reads what a technician types", () => {
   it.each([
@@ -125,7 +126,7 @@ describe("parseQuantity reads what a technician types", () => {
           if ("value" in parsed) expect(Number.isFinite(parsed.value)).toBe(true);
         },
       ),
-      { numRuns: 3000 },
+      { numRuns: propertyRuns(3000) },
     );
   });
 });
