@@ -34,7 +34,7 @@ describe("wet bulb (ASHRAE Handbook—Fundamentals 2017 ch. 1)", () => {
     expect(Math.abs(wetBulbC({ dryBulbC: 40, relativeHumidityPct: 14 }) - 20)).toBeLessThan(0.5);
   });
 
-  it("in saturated air, dew point, wet bulb and dry bulb coincide", () => {
+  it("in saturated air, dew point, wet bulb and dry bulb coincide (ASHRAE Handbook—Fundamentals 2017 ch. 1, definitions)", () => {
     expect(wetBulbC({ dryBulbC: 22, relativeHumidityPct: 100 })).toBeCloseTo(22, 2);
     expect(dewPointC({ dryBulbC: 22, relativeHumidityPct: 100 })).toBeCloseTo(22, 2);
   });

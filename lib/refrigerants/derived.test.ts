@@ -35,6 +35,7 @@ describe("subcooling, superheat and condensing approach", () => {
     );
   });
 
+  // 1016.593 kPa saturates R-134a at 40 °C (Tillner-Roth & Baehr 1994 EOS): a 45 °C liquid line is 5 K above it.
   it("a liquid line warmer than saturation gives negative subcooling (flash gas), not an error", () => {
     expect(subcoolingK({ refrigerant: "R-134a", highKpaAbs: 1016.593, liquidLineC: 45 })).toBeLessThan(0);
   });
@@ -75,12 +76,16 @@ describe("static pressure check (engine off, soaked to ambient)", () => {
     expect(Math.abs(check.excessKpa)).toBeLessThan(0.5);
   });
 
+  // R-1234yf saturates at 682.582 kPa at 25 °C (Richter, McLinden & Lemmon 2011 EOS); air adds its own partial
+  // pressure on top (Dalton's law; a textbook), so 120 kPa more is an excess of 120 kPa.
   it("a static pressure above saturation reports the excess (non-condensables suspected)", () => {
     const check = staticCheck({ refrigerant: "R-1234yf", staticKpaAbs: 682.582 + 120, ambientC: 25 });
     expect(check).toMatchObject({ kind: "valid" });
     if (check.kind === "valid") expect(check.excessKpa).toBeCloseTo(120, 0);
   });
 
+  // R-134a saturates at 665.381 kPa at 25 °C (Tillner-Roth & Baehr 1994 EOS): 300 kPa abs is less than half of it, so
+  // no liquid is left to fix the pressure (common practice).
   it("far below saturation: no liquid present — check not valid", () => {
     const check = staticCheck({ refrigerant: "R-134a", staticKpaAbs: 300, ambientC: 25 });
     expect(check.kind).toBe("no_liquid");

@@ -135,6 +135,7 @@ describe("estimateOilPulledMl", () => {
     expect(estimateOilPulledMl({ liquidRecoveredG: 1460 }).sumpComparison).toBe("less_than_sump"); // 59.0 mL
   });
 
+  // The oil estimate is a fixed mass fraction of the liquid (common practice), so it scales linearly.
   it("property: the estimate grows in proportion to the liquid recovered", () => {
     fc.assert(
       fc.property(fc.double({ min: 1, max: 5000, noNaN: true }), (liquidRecoveredG) => {

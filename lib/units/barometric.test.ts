@@ -48,7 +48,7 @@ describe("gauge and absolute", () => {
     expect(mountainGaugeKpa - seaLevelGaugeKpa).toBeCloseTo(101.325 - 84.556, 3);
   });
 
-  it("a gauge reading converts to a lower absolute pressure in a mountain shop", () => {
+  it("a gauge reading converts to a lower absolute pressure in a mountain shop (standard atmosphere: 101.325 kPa at sea level, 84.556 kPa at 1500 m, ASHRAE Handbook—Fundamentals ch. 1 table 1)", () => {
     const readingKpaGauge = pressureToKpa(32, "psi");
     expect(
       gaugeToAbsoluteKpa(readingKpaGauge) - gaugeToAbsoluteKpa(readingKpaGauge, { altitudeM: 1500 }),
@@ -67,7 +67,7 @@ describe("vacuum gauge in inHg", () => {
     expect(vacuumInHgToKpaAbs(29.921)).toBeCloseTo(0, 2);
   });
 
-  it("the same 25 inHg vacuum is a deeper absolute vacuum at sea level than at 1500 m", () => {
+  it("the same 25 inHg vacuum is a deeper absolute vacuum at sea level than at 1500 m (ASHRAE Handbook—Fundamentals ch. 1 table 1; inHg: NIST SP 811)", () => {
     const seaLevel = vacuumInHgToKpaAbs(25);
     const mountain = vacuumInHgToKpaAbs(25, { altitudeM: 1500 });
     expect(seaLevel).toBeCloseTo(101.325 - 25 * 3.386389, 6);
