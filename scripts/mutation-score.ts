@@ -77,9 +77,14 @@ export function belowGoal(scores: readonly AreaScore[]): AreaScore[] {
 }
 
 if (process.argv[1]?.endsWith("mutation-score.ts")) {
-  const path = process.argv[2] ?? join(process.cwd(), "reports", "mutation", "mutation.json");
-  const scores = scoreAreas(JSON.parse(readFileSync(path, "utf8")) as Report);
-  console.log(`Mutation score per area (${path})\n`);
+  // One report by default; several (runs of different areas, each given with --mutate) are merged file by file.
+  const paths = process.argv.slice(2);
+  if (paths.length === 0) paths.push(join(process.cwd(), "reports", "mutation", "mutation.json"));
+  const merged: Report = { files: {} };
+  for (const path of paths)
+    Object.assign(merged.files, (JSON.parse(readFileSync(path, "utf8")) as Report).files);
+  const scores = scoreAreas(merged);
+  console.log(`Mutation score per area (${paths.join(", ")})\n`);
   console.log(formatScores(scores));
   const short = belowGoal(scores);
   if (short.length > 0) {
