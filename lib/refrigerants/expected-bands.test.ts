@@ -60,9 +60,6 @@ describe("expected bands against the published quick-check table (US Army TM 5-3
 });
 
 describe("expected bands from the physics", () => {
-  // Each band edge must be the saturation pressure of its own temperature (the equations of state behind the tables:
-  // Tillner-Roth & Baehr 1994, Richter, McLinden & Lemmon 2011, Marx, Pruß & Wagner 1992), and the high side must
-  // condense above the 30 °C air to reject heat to it (second law; a textbook).
   it("pressures are the saturation pressures of the stated temperatures, for every refrigerant", () => {
     for (const refrigerant of ["R-134a", "R-1234yf", "R-12"] as const) {
       const bands = expectedBands({ refrigerant, ambientC: 30 })!;

@@ -44,6 +44,22 @@ describe("conversion factors (NIST SP 811, appendix B)", () => {
     expect(() => pressureToKpa(1, "atm" as never)).toThrow(RangeError);
     expect(() => massToG(1, "toString" as never)).toThrow(RangeError);
   });
+  it("the refusal says which quantity and which unit, in both directions", () => {
+    const cases: [(value: number, unit: never) => number, string][] = [
+      [pressureToKpa, "pressure"],
+      [pressureFromKpa, "pressure"],
+      [temperatureToC, "temperature"],
+      [temperatureFromC, "temperature"],
+      [temperatureDifferenceToK, "temperature difference"],
+      [temperatureDifferenceFromK, "temperature difference"],
+      [massToG, "mass"],
+      [massFromG, "mass"],
+      [volumeToMl, "volume"],
+      [volumeFromMl, "volume"],
+    ];
+    for (const [convert, kind] of cases)
+      expect(() => convert(1, "furlong" as never)).toThrow(`Unknown ${kind} unit "furlong".`);
+  });
 });
 
 describe("round trips (property-based)", () => {
