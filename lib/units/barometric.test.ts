@@ -22,7 +22,7 @@ describe("standard atmosphere (US Standard Atmosphere 1976; ASHRAE Handbook—Fu
   });
 
   it("refuses altitudes no shop has", () => {
-    expect(() => standardBarometricKpa(12000)).toThrow(RangeError);
+    expect(() => standardBarometricKpa(12000)).toThrow("Altitude must be between -500 and 9000 m.");
     expect(() => standardBarometricKpa(Number.NaN)).toThrow(RangeError);
   });
 
@@ -58,6 +58,10 @@ describe("gauge and absolute", () => {
   it("a measured barometric pressure wins over the altitude", () => {
     expect(gaugeToAbsoluteKpa(100, { altitudeM: 1500, barometricKpa: 99.1 })).toBeCloseTo(199.1, 9);
     expect(() => gaugeToAbsoluteKpa(100, { barometricKpa: -3 })).toThrow(RangeError);
+    // no atmosphere at all is not a barometer reading either
+    expect(() => gaugeToAbsoluteKpa(100, { barometricKpa: 0 })).toThrow(
+      "Barometric pressure must be a positive number.",
+    );
   });
 });
 

@@ -6,6 +6,7 @@ import {
   formatTemperature,
   formatTemperatureDifference,
   formatVolume,
+  pressureToKpa,
 } from "./index";
 
 describe("formatting for the technician", () => {
@@ -16,6 +17,16 @@ describe("formatting for the technician", () => {
     expect(formatPressure(210, "bar")).toBe("2.10 bar");
     expect(formatPressure(3000, "MPa", { gauge: true })).toBe("3.000 MPa (gauge)");
     expect(formatPressure(-67.7, "kPa")).toBe("−67.7 kPa");
+  });
+
+  it("switches to fewer decimals at exactly 100 kPa, psi or bar, and shows a vacuum gauge in inHg to 0.1", () => {
+    expect(formatPressure(100, "kPa")).toBe("100 kPa");
+    expect(formatPressure(99.94, "kPa")).toBe("99.9 kPa");
+    expect(formatPressure(pressureToKpa(100, "psi"), "psi", { gauge: true })).toBe("100 psig");
+    expect(formatPressure(10000, "bar")).toBe("100.0 bar");
+    expect(formatPressure(15000, "bar")).toBe("150.0 bar");
+    expect(formatPressure(pressureToKpa(28, "inHg"), "inHg")).toBe("28.0 inHg");
+    expect(formatPressure(pressureToKpa(28, "inHg"), "inHg", { gauge: true })).toBe("28.0 inHg");
   });
 
   it("an absolute internal pressure is shown as gauge after converting it first", () => {

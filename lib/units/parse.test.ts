@@ -116,6 +116,45 @@ describe("parseQuantity reads what a technician types", () => {
     if ("error" in parsed) expect(parsed.error).toMatch(message);
   });
 
+  it("reads units typed with doubled spaces or a tab between their words", () => {
+    expect(parseQuantity("220 kPa  abs", "pressure", "psi")).toEqual({
+      value: 220,
+      unit: "kPa",
+      reference: "absolute",
+    });
+    expect(parseQuantity("4 fl\t oz", "volume", "mL")).toEqual({ value: 4, unit: "floz" });
+  });
+
+  it("quotes what was typed, without its surrounding spaces, and says the expected kind of unit", () => {
+    expect(parseQuantity("  abc ", "pressure", "psi")).toEqual({
+      error: "Could not read “abc” as a pressure. Try for example 32 psi, 2.2 bar or 220 kPa.",
+    });
+    expect(parseQuantity(" 1,400 ", "mass", "g", { ambiguousComma: "reject" })).toEqual({
+      error:
+        "“1,400” is ambiguous: write it without a thousands separator (1400) or with a decimal point (1.4).",
+    });
+    expect(parseQuantity("75 F", "pressure", "psi")).toEqual({
+      error: "“F” is a temperature unit, not a pressure unit.",
+    });
+    // a bare number takes the default unit, so a default of the wrong kind is named
+    expect(parseQuantity("180", "pressure", "C")).toEqual({
+      error: "“C” is a temperature unit, not a pressure unit.",
+    });
+  });
+
+  it("refuses text it cannot read to the end, or at all, for every kind", () => {
+    for (const kind of ["pressure", "temperature", "mass", "volume"] as const) {
+      expect(parseQuantity("abc", kind, "g")).toHaveProperty("error");
+      expect(parseQuantity("2.1 bar 3-", kind, "bar")).toHaveProperty("error");
+    }
+  });
+
+  it("sums only masses, largest unit first, each unit once; zero in the smaller unit is fine", () => {
+    expect(parseQuantity("2 bar 30 psi", "pressure", "psi")).toHaveProperty("error");
+    expect(parseQuantity("1 lb 4 lb", "mass", "g")).toHaveProperty("error");
+    expect(parseQuantity("1 lb 0 oz", "mass", "g")).toEqual({ value: 16, unit: "oz" });
+  });
+
   it("never throws on any text", () => {
     fc.assert(
       fc.property(
