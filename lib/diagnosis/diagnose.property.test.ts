@@ -5,6 +5,7 @@ import { diagnose } from "./diagnose";
 import { ENGINE_VERSION } from "./engine-version";
 import { type DiagnosisInput, diagnosisInputSchema } from "./schema";
 import { real, shopInput, validInput } from "./test-inputs";
+import { propertyRuns } from "@/tests/support/property-runs";
 
 describe("diagnose on any input the schema accepts (fast-check)", { timeout: 30_000 }, () => {
   it("returns every cause once, with shares in [0, 1] that sum to 1, sorted, never NaN, and cautions ending in deference", () => {
@@ -26,7 +27,7 @@ describe("diagnose on any input the schema accepts (fast-check)", { timeout: 30_
         expect(findings.nextCheck.instruction.length).toBeGreaterThan(10);
         expect(JSON.stringify(findings)).not.toMatch(/NaN|null|Infinity/);
       }),
-      { numRuns: 400 },
+      { numRuns: propertyRuns(400) },
     );
   });
 
@@ -35,7 +36,7 @@ describe("diagnose on any input the schema accepts (fast-check)", { timeout: 30_
       fc.property(validInput, (input) => {
         expect(diagnose(structuredClone(input))).toEqual(diagnose(input));
       }),
-      { numRuns: 200 },
+      { numRuns: propertyRuns(200) },
     );
   });
 
@@ -54,7 +55,7 @@ describe("diagnose on any input the schema accepts (fast-check)", { timeout: 30_
           diagnose(i).suspects.find((s) => s.cause === "non_condensables")?.logOdds ?? Number.NaN;
         expect(air(higher)).toBeGreaterThanOrEqual(air(lower));
       }),
-      { numRuns: 400 },
+      { numRuns: propertyRuns(400) },
     );
   });
 
@@ -65,7 +66,7 @@ describe("diagnose on any input the schema accepts (fast-check)", { timeout: 30_
         expect(findings.suspects[0]?.cause).toBe("contaminated_refrigerant");
         expect(findings.cautions.map((c) => c.id)).toContain("contaminated_do_not_recover");
       }),
-      { numRuns: 200 },
+      { numRuns: propertyRuns(200) },
     );
   });
 
@@ -94,7 +95,7 @@ describe("diagnose on any input the schema accepts (fast-check)", { timeout: 30_
         expect(findings.nextCheck.check).toBe("repair_path");
         expect(findings.nextCheck.runsSystem).toBe(false);
       }),
-      { numRuns: 200 },
+      { numRuns: propertyRuns(200) },
     );
   });
 });
@@ -108,7 +109,7 @@ describe("shares (fast-check)", { timeout: 30_000 }, () => {
         for (let i = 1; i < suspects.length; i++)
           expect(suspects[i]!.share).toBeLessThanOrEqual(suspects[i - 1]!.share);
       }),
-      { numRuns: 400 },
+      { numRuns: propertyRuns(400) },
     );
   });
 
@@ -119,7 +120,7 @@ describe("shares (fast-check)", { timeout: 30_000 }, () => {
         expect(suspects[0]).toMatchObject({ cause: "contaminated_refrigerant", share: 1, assessed: true });
         for (const s of suspects.slice(1)) expect(s).toMatchObject({ share: 0, assessed: false });
       }),
-      { numRuns: 200 },
+      { numRuns: propertyRuns(200) },
     );
   });
 });
@@ -143,7 +144,7 @@ describe("monotone where the physics says so (fast-check)", { timeout: 30_000 },
         expect(scoreOf(higher, "overcharge")).toBeGreaterThanOrEqual(scoreOf(lower, "overcharge"));
         expect(scoreOf(higher, "undercharge")).toBeLessThanOrEqual(scoreOf(lower, "undercharge"));
       }),
-      { numRuns: 300 },
+      { numRuns: propertyRuns(300) },
     );
   });
 
@@ -155,7 +156,7 @@ describe("monotone where the physics says so (fast-check)", { timeout: 30_000 },
           scoreOf({ ...input, identifierAirPct: less }, "non_condensables"),
         );
       }),
-      { numRuns: 300 },
+      { numRuns: propertyRuns(300) },
     );
   });
 
@@ -168,7 +169,7 @@ describe("monotone where the physics says so (fast-check)", { timeout: 30_000 },
           scoreOf({ ...input, identifierPurityPct: more }, "contaminated_refrigerant"),
         ).toBeLessThanOrEqual(scoreOf({ ...input, identifierPurityPct: less }, "contaminated_refrigerant"));
       }),
-      { numRuns: 300 },
+      { numRuns: propertyRuns(300) },
     );
   });
 });
