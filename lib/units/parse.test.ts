@@ -129,10 +129,8 @@ describe("parseQuantity reads what a technician types", () => {
     expect(parseQuantity("  abc ", "pressure", "psi")).toEqual({
       error: "Could not read “abc” as a pressure. Try for example 32 psi, 2.2 bar or 220 kPa.",
     });
-    expect(parseQuantity(" 1,400 ", "mass", "g", { ambiguousComma: "reject" })).toEqual({
-      error:
-        "“1,400” is ambiguous: write it without a thousands separator (1400) or with a decimal point (1.4).",
-    });
+    const ambiguous = parseQuantity(" 1,400 ", "mass", "g", { ambiguousComma: "reject" });
+    expect("error" in ambiguous && ambiguous.error).toMatch(/^“1,400” is ambiguous/);
     expect(parseQuantity("75 F", "pressure", "psi")).toEqual({
       error: "“F” is a temperature unit, not a pressure unit.",
     });
