@@ -1,13 +1,13 @@
 "use client";
 
 import { useCallback, useEffect, useMemo, useRef, useSyncExternalStore } from "react";
+import dynamic from "next/dynamic";
 import { useMachine } from "@xstate/react";
 import { interviewMachine } from "@/machines/interview";
 import { savedInterviewOf, viewOf, type SavedInterview } from "@/machines/interview-view";
 import { STEP_LABELS, type GroupId } from "@/lib/interview/steps";
 import { altitudeFor } from "@/lib/interview/branches";
 import { CautionsList } from "@/components/cautions/cautions-list";
-import { FindingsStep } from "./findings-step";
 import { STEP_LEADS } from "./labels";
 import { ProgressStrip } from "./progress-strip";
 import { SaveBanner } from "./save-banner";
@@ -20,6 +20,11 @@ import type { PhysicsContext } from "@/lib/interview/readouts";
 import type { ReaderUnits } from "@/lib/units";
 import { attentionOf } from "./attention";
 import type { ValuesMode } from "./use-group-form";
+
+// The findings step carries the diagnosis engine; it loads when the technician reaches it.
+const FindingsStep = dynamic(() => import("./findings-step").then((m) => m.FindingsStep), {
+  loading: () => <p role="status">Working out the findings…</p>,
+});
 
 export interface InterviewProps {
   caseId: number;

@@ -1,4 +1,4 @@
-import { SYMPTOM_LABELS } from "@/lib/diagnosis";
+import { SYMPTOM_LABELS } from "@/lib/diagnosis/symptoms";
 import { COMPRESSOR_TYPE_LABELS } from "@/lib/vehicles/compressor-types";
 import {
   behaviourSymptomIds,
