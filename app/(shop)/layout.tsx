@@ -5,7 +5,7 @@ import { ROLE_LABELS } from "@/lib/auth/roles";
 import { getShop } from "@/lib/server/shops";
 import { ShopClockProvider } from "@/components/shell/shop-clock";
 import { passwordMustChange } from "@/lib/server/passwords";
-import { ChangePasswordForm } from "@/components/account/change-password-form";
+import { ChangePasswordOnDemand } from "@/components/account/change-password-on-demand";
 import { BrandMark } from "@/components/shell/brand-mark";
 import { NavLinks } from "@/components/shell/nav-links";
 import { SignOutButton } from "@/components/auth/sign-out-button";
@@ -58,7 +58,7 @@ export default async function ShopLayout({ children }: { children: React.ReactNo
               before you go on; the temporary one stops working once you do.
             </p>
             <div className="card">
-              <ChangePasswordForm email={user.email} temporary />
+              <ChangePasswordOnDemand email={user.email} temporary />
             </div>
           </div>
         ) : (
