@@ -2,7 +2,7 @@ import { staticShowsNoCharge } from "@/lib/refrigerants/static-charge";
 import { chargeDeviationVerdict } from "@/lib/service/charge";
 import { standardBarometricKpa } from "@/lib/units/barometric";
 import { DO_NOT_RUN, STATIC_CHECK, STATIC_EMPTY, SUBCOOLING_K } from "./grading";
-import { saturationPressureOrNull, saturationTemperatureOrNull } from "./saturation-guard";
+import { saturationPressureOrNull, saturationTemperatureOrNull } from "@/lib/refrigerants/saturation-guard";
 import type { DiagnosisInput } from "./schema";
 
 /**

@@ -2,7 +2,7 @@ import type { Extraction } from "./evidence-types";
 import { CYCLING } from "./grading";
 import type { ReadingObservationId } from "./observations";
 import { gaugeKpa, tempC } from "./quantities";
-import { saturationTemperatureOrNull } from "./saturation-guard";
+import { saturationTemperatureOrNull } from "@/lib/refrigerants/saturation-guard";
 import type { DiagnosisInput } from "./schema";
 import { SYMPTOM_LABELS } from "./symptoms";
 

@@ -1,6 +1,9 @@
 import { expectedBands, refrigerantInfo } from "@/lib/refrigerants";
 import { CONDENSING_ABOVE_AMBIENT_K, HUMIDITY_SHIFT_MAX_K } from "@/lib/refrigerants/expected-bands";
-import { saturationTemperatureOrNull as saturationOrNull, tempInTable } from "./saturation-guard";
+import {
+  saturationTemperatureOrNull as saturationOrNull,
+  tempInTable,
+} from "@/lib/refrigerants/saturation-guard";
 import type { Extraction, SaturationBand } from "./evidence-types";
 import type { ReadingObservationId } from "./observations";
 import { gaugeKpa, kelvin, type Quantity, tempC } from "./quantities";

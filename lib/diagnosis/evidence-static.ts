@@ -1,6 +1,6 @@
 import { refrigerantInfo } from "@/lib/refrigerants";
 import type { Extraction } from "./evidence-types";
-import { saturationPressureOrNull, saturationTemperatureOrNull } from "./saturation-guard";
+import { saturationPressureOrNull, saturationTemperatureOrNull } from "@/lib/refrigerants/saturation-guard";
 import { gaugeKpa, kelvin, minutes, type Quantity, tempC } from "./quantities";
 import type { DiagnosisInput } from "./schema";
 import { STATIC_CHECK, STATIC_EMPTY, STATIC_SOAK } from "./grading";
