@@ -35,7 +35,7 @@ export async function prepareImage(bytes: Buffer): Promise<PreparedImage> {
   }
   try {
     const base = sharp(bytes, { failOn: "error", limitInputPixels: 80_000_000 }).rotate();
-    const display = await base
+    const { data: displayBytes, info: displaySize } = await base
       .clone()
       .resize({ width: DISPLAY_EDGE_PX, height: DISPLAY_EDGE_PX, fit: "inside", withoutEnlargement: true })
       .jpeg({ quality: 82, mozjpeg: true })
@@ -46,7 +46,7 @@ export async function prepareImage(bytes: Buffer): Promise<PreparedImage> {
       .jpeg({ quality: 75 })
       .toBuffer();
     return {
-      display: { bytes: display.data, widthPx: display.info.width, heightPx: display.info.height },
+      display: { bytes: displayBytes, widthPx: displaySize.width, heightPx: displaySize.height },
       thumb: { bytes: thumb },
       detectedType: detected.mime,
     };

@@ -4,12 +4,12 @@ import { SignInPage } from "./pages/sign-in-page";
 
 test("anyone can open the credits from the sign-in page: reference papers and every package with its licence", async ({
   page,
-}) => {
+}, testInfo) => {
   await new SignInPage(page).goto();
   await page.getByRole("link", { name: "Credits and licences" }).click();
   await expect(page).toHaveURL(/\/credits$/);
   await expect(page.getByRole("heading", { name: "Credits and licences", level: 1 })).toBeVisible();
-  await page.screenshot({ path: test.info().outputPath("credits-phone.png") });
+  await page.screenshot({ path: testInfo.outputPath("credits-phone.png") });
 
   const papers = page.getByRole("list", { name: "Publications behind the saturation tables" });
   await expect(papers).toContainText("Tillner-Roth, R. & Baehr, H. D. (1994)");

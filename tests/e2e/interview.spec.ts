@@ -395,7 +395,7 @@ test("the system step offers the spec-table rows for the vehicle and the technic
 
 test("an interview left open across an update still submits: the server's findings and a plain note, the chosen conclusion kept", async ({
   page,
-}) => {
+}, testInfo) => {
   const interview = new InterviewPage(page);
   await openCase(
     interview,
@@ -435,7 +435,7 @@ test("an interview left open across an update still submits: the server's findin
   await expect(page.getByTestId("kept-conclusion")).toHaveText("Low or wrong compressor oil");
   await expect(interview.suspects().first()).toContainText("Not enough refrigerant");
   await expectNoSeriousA11yIssues(page, "findings after an update");
-  await page.screenshot({ path: test.info().outputPath("findings-updated-phone.png") });
+  await page.screenshot({ path: testInfo.outputPath("findings-updated-phone.png") });
 
   const saved = await readCase(caseId);
   expect(saved.status).toBe("signed_off");

@@ -13,7 +13,7 @@ async function invitationLinkFor(address: string): Promise<string> {
 test("an owner invites a technician, who sets a password from the mailed link and is signed in", async ({
   page,
   browser,
-}) => {
+}, testInfo) => {
   const address = `new-hand-${Date.now()}@harbourline.test`;
   await new SignInPage(page).signInAs("owner");
   await page.goto("/settings/users");
@@ -27,7 +27,7 @@ test("an owner invites a technician, who sets a password from the mailed link an
   await expect(open).toContainText(address);
 
   // The person opens the link on their own phone.
-  const phone = await browser.newContext({ ...test.info().project.use });
+  const phone = await browser.newContext({ ...testInfo.project.use });
   const invited = await phone.newPage();
   await invited.goto(await invitationLinkFor(address));
   await expect(invited.getByRole("heading", { name: /^Join Harbourline/ })).toBeVisible();
@@ -38,7 +38,7 @@ test("an owner invites a technician, who sets a password from the mailed link an
   await invited.getByRole("button", { name: "Set password and sign in" }).click();
   await expect(invited.getByText("The two passwords differ.")).toBeVisible();
   await invited.getByLabel("New password again").press("2");
-  await invited.screenshot({ path: test.info().outputPath("invitation.png") });
+  await invited.screenshot({ path: testInfo.outputPath("invitation.png") });
   await invited.getByRole("button", { name: "Set password and sign in" }).click();
   await expect(invited).toHaveURL(/\/cases$/);
   await expect(invited.getByRole("navigation", { name: "Main" })).toBeVisible();
