@@ -50,7 +50,7 @@ async function apprenticeCaseWaitingForSignOff(apprentice: APIRequestContext): P
 
 test("a senior sends an apprentice's case back with a comment: the form asks for one first and keeps it", async ({
   page,
-}) => {
+}, testInfo) => {
   const apprentice = await signedInClient(DEMO_USERS.apprentice.email);
   const caseId = await apprenticeCaseWaitingForSignOff(apprentice);
   await apprentice.dispose();
@@ -71,7 +71,7 @@ test("a senior sends an apprentice's case back with a comment: the form asks for
   await expect(form.getByText("Say what to look at again when you send a case back.")).toBeVisible();
   await expect(comment).toHaveAttribute("aria-invalid", "true");
   expect((await readCase(caseId)).status).toBe("awaiting_signoff");
-  await page.screenshot({ path: test.info().outputPath("sign-off-refused-phone.png") });
+  await page.screenshot({ path: testInfo.outputPath("sign-off-refused-phone.png") });
 
   await comment.pressSequentially("Check the fan at idle before blaming the condenser.");
   await form.getByRole("button", { name: "Send back" }).click();

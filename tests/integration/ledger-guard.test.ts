@@ -117,7 +117,7 @@ describe("the ledger cannot go wrong", () => {
     expect(statuses.filter((s) => s === 409)).toHaveLength(11);
     expect(await netOf(shop.id, recovery.id)).toBe(160);
     expect(await getModels().RefrigerantMovement.count({ where: { shopId: shop.id } })).toBe(9);
-    console.info(
+    console.log(
       `ledger: 20 parallel posts of 500 g against 4,660 g — 9 accepted, 11 refused, ${elapsedMs.toFixed(0)} ms in all`,
     );
   });

@@ -28,7 +28,7 @@ export class LedgerPage {
     return this.page.getByTestId("movement-form-status");
   }
 
-  net(label: string) {
+  netMass(label: string) {
     return this.page.getByTestId(`cylinder-${label}`).getByTestId("cylinder-net");
   }
 
