@@ -27,7 +27,7 @@ test("a technician completes a service record on the phone and the ledger shows 
   await page.getByRole("radio", { name: /RAV4 Hybrid/ }).check();
   await expect(record.field("Label charge (under-hood label)")).toHaveValue("480 g");
   await record.fill({ "Identifier: purity %": "99.6", "Identifier: air %": "0.2" });
-  await record.saveAndExpect("identify");
+  await record.saveAndExpect("Identification");
 
   // 2. Recovery, typed in pounds and ounces: 1 lb 2 oz = 510 g (NIST SP 811), 30 g over a 480 g label.
   await record.fill({ "Recovered mass": "lots" });
@@ -41,7 +41,7 @@ test("a technician completes a service record on the phone and the ledger shows 
     "30 g (6.3 %) over — more than the machine's accuracy and recovery can explain: an overcharge",
   );
   await expect(page.getByText(/R-1234yf is mildly flammable/)).toBeVisible();
-  await record.saveAndExpect("recovery");
+  await record.saveAndExpect("Recovery");
   await expect(page.getByRole("status")).toContainText("1 ledger entry posted");
 
   // 3. Evacuation and hold: 0.2 inHg lost in 10 min is inside the 2 inHg / 5 min field limit.
@@ -52,12 +52,12 @@ test("a technician completes a service record on the phone and the ledger shows 
     "Hold time, minutes": "10",
   });
   await expect(record.result("hold-verdict")).toContainText("Hold passed");
-  await record.saveAndExpect("evacuation and hold");
+  await record.saveAndExpect("Evacuation and hold");
 
   // 4. Oil: the record asks for the 10 mL drained.
   await expect(record.result("oil-add-back")).toContainText("Add back 10 mL");
   await record.fill({ "Oil added": "10 mL" });
-  await record.saveAndExpect("oil");
+  await record.saveAndExpect("Oil");
 
   // 5. Recharge: 20 g over the 480 g target is outside ±15 g (SAE J2843 ½ oz, from memory), 6 g is inside.
   await record.fill({ "Charged mass (machine display)": "500 g" });
@@ -65,7 +65,7 @@ test("a technician completes a service record on the phone and the ledger shows 
   await record.fill({ "Charged mass (machine display)": "486 g" });
   await expect(record.result("charge-check")).toContainText("inside");
   await record.chooseCylinder("Charged from cylinder", "HL-SUP-YF");
-  await record.saveAndExpect("recharge");
+  await record.saveAndExpect("Recharge");
 
   // 6. Final reading.
   await record.fill({
@@ -74,7 +74,7 @@ test("a technician completes a service record on the phone and the ledger shows 
     "High side (gauge)": "1300",
     "Low side (gauge)": "230",
   });
-  await record.saveAndExpect("final reading");
+  await record.saveAndExpect("Final reading");
 
   await page
     .getByRole("navigation", { name: "Main" })

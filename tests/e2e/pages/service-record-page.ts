@@ -25,7 +25,7 @@ export class ServiceRecordPage {
 
   async saveAndExpect(stepTitle: string) {
     await this.page.getByRole("button", { name: /^Save/ }).click();
-    await expect(this.page.getByRole("status")).toContainText(`Saved ${stepTitle}`);
+    await expect(this.page.getByRole("status")).toContainText(`${stepTitle} saved.`);
   }
 
   result(testId: string) {
