@@ -5,6 +5,7 @@ import type { InterviewSaveResponse } from "@/lib/contracts/interview";
 import type { SavedInterview } from "@/machines/interview-view";
 import { apiFetch, ApiError } from "@/lib/queries/api-fetch";
 import { clearOutbox, writeOutbox } from "@/lib/queries/interview-outbox";
+import { isTryAgainStatus, nextRetryDelayMs } from "@/lib/queries/retry-after";
 
 export type SaveStatus =
   | { kind: "saved"; pending: 0 }
@@ -70,13 +71,23 @@ export function useAutosave({ caseId, initialVersion }: { caseId: number; initia
       if (error instanceof ApiError && error.status === 409) {
         blocked.current = true;
         setStatus({ kind: "conflict", pending, message: error.message });
-      } else if (error instanceof ApiError && error.status >= 400 && error.status < 500) {
+      } else if (
+        error instanceof ApiError &&
+        error.status >= 400 &&
+        error.status < 500 &&
+        !isTryAgainStatus(error.status)
+      ) {
         blocked.current = true;
         setStatus({ kind: "refused", pending, message: error.message });
       } else {
-        // The network or the server is away: keep the copy in IndexedDB and try again later.
+        // The network or the server is away or busy: keep the copy in IndexedDB and try again later,
+        // no sooner than the server's Retry-After asked.
+        const serverAskedMs = error instanceof ApiError ? error.retryAfterMs : undefined;
         setStatus({ kind: "waiting", pending, reason: navigator.onLine ? "retrying" : "offline" });
-        timer.current = setTimeout(() => void flushRef.current(), retryMs.current);
+        timer.current = setTimeout(
+          () => void flushRef.current(),
+          nextRetryDelayMs(retryMs.current, serverAskedMs, MAX_RETRY_MS),
+        );
         retryMs.current = Math.min(retryMs.current * 2, MAX_RETRY_MS);
       }
     } finally {

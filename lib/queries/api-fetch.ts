@@ -1,4 +1,5 @@
 import type { FieldErrors } from "@/lib/errors";
+import { retryAfterMs } from "./retry-after";
 
 export class ApiError extends Error {
   constructor(
@@ -6,6 +7,8 @@ export class ApiError extends Error {
     readonly status: number,
     readonly code: string,
     readonly fieldErrors?: FieldErrors,
+    /** How long the server asked us to wait (its Retry-After header), when it said. */
+    readonly retryAfterMs?: number,
   ) {
     super(message);
     this.name = "ApiError";
@@ -32,6 +35,7 @@ export async function apiFetch<T = unknown>(
       response.status,
       data?.error?.code ?? "unknown",
       data?.error?.fieldErrors,
+      retryAfterMs(response.headers.get("retry-after")),
     );
   }
   return data as T;
