@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { multiLineText, singleLineText } from "./text";
+import { multiLineText, PLAUSIBLE_DATE_FROM, singleLineText } from "./text";
 import { CAUSE_IDS } from "@/lib/diagnosis/causes";
 import { SYMPTOM_IDS } from "@/lib/diagnosis/symptoms";
 import { REFRIGERANT_IDS } from "@/lib/refrigerants/catalog";
@@ -52,11 +52,24 @@ function idList<const T extends readonly [string, ...string[]]>(ids: T, what: st
     });
 }
 
+// A filter may reach past today (a search kept for next month), but a year like 0000 or 9999 is a slip.
+const LATEST_FILTER_DATE = "2100-12-31";
+
+/** A YYYY-MM-DD that names a day on the calendar (Date.parse alone takes 2026-02-31 as 3 March). */
+function isCalendarDate(v: string): boolean {
+  const ms = Date.parse(`${v}T00:00:00Z`);
+  return !Number.isNaN(ms) && new Date(ms).toISOString().slice(0, 10) === v;
+}
+
 const isoDate = (what: string) =>
   z
     .string()
     .regex(/^\d{4}-\d{2}-\d{2}$/, `Give the ${what} as a date (YYYY-MM-DD).`)
-    .refine((v) => !Number.isNaN(Date.parse(`${v}T00:00:00Z`)), `The ${what} is not a real date.`)
+    .refine(isCalendarDate, `The ${what} is not a real date.`)
+    .refine(
+      (v) => v >= PLAUSIBLE_DATE_FROM.slice(0, 10) && v <= LATEST_FILTER_DATE,
+      `Give the ${what} between ${PLAUSIBLE_DATE_FROM.slice(0, 4)} and ${LATEST_FILTER_DATE.slice(0, 4)}; check the year.`,
+    )
     .optional()
     .or(z.literal("").transform(() => undefined));
 
