@@ -72,4 +72,14 @@ describe("every list answers one page", () => {
     expect(plan[0]?.key, JSON.stringify(plan)).toBe("service_case_shop_updated");
     expect(plan[0]?.Extra ?? "", JSON.stringify(plan)).not.toContain("filesort");
   });
+
+  it("lists a shop's vehicles most recently seen first through an index", async () => {
+    const shop = await getModels().Shop.findOne({ where: { name: "Harbourline Auto Climate" }, raw: true });
+    const plan = await getModels().sequelize.query<{ key: string | null; Extra: string; type: string }>(
+      "EXPLAIN SELECT id FROM vehicle WHERE shop_id = :shopId ORDER BY updated_at DESC, id DESC LIMIT 31",
+      { replacements: { shopId: shop?.id }, type: QueryTypes.SELECT },
+    );
+    expect(plan[0]?.key, JSON.stringify(plan)).toBe("vehicle_shop_updated");
+    expect(plan[0]?.Extra ?? "", JSON.stringify(plan)).not.toContain("filesort");
+  });
 });
