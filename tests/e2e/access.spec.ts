@@ -719,18 +719,6 @@ const table: {
     },
   },
   {
-    name: "GET /account/password (page)",
-    call: (c) => c.get("/account/password", { maxRedirects: 0 }),
-    expect: {
-      anonymous: 307,
-      owner: 200,
-      senior: 200,
-      technician: 200,
-      apprentice: 200,
-      otherShopOwner: 200,
-    },
-  },
-  {
     name: "GET /api/ledger/report?format=csv",
     call: (c) => c.get("/api/ledger/report?format=csv"),
     expect: {
