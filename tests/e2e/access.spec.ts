@@ -981,6 +981,22 @@ const moreRoutes: typeof table = [
     expect: { ...signedIn(400), technician: 403, apprentice: 403 },
   },
   {
+    name: "POST /api/cases/:id/outcome (malformed)",
+    call: (c) => c.post(`/api/cases/${harbourlineCaseId}/outcome`, { data: { causes: ["gremlins"] } }),
+    expect: signedIn(400),
+  },
+  {
+    name: "POST /api/cases/:id/outcome (no confirmed cause)",
+    call: (c) =>
+      c.post(`/api/cases/${harbourlineCaseId}/outcome`, { data: { causes: [], repairIds: ["leak_repair"] } }),
+    expect: signedIn(400),
+  },
+  {
+    name: "POST /api/cases/:id/reopen (no reason)",
+    call: (c) => c.post(`/api/cases/${harbourlineCaseId}/reopen`, { data: { reason: "  " } }),
+    expect: { ...signedIn(400), technician: 403, apprentice: 403 },
+  },
+  {
     name: "PUT /api/specs/:id (malformed)",
     call: (c) => c.put("/api/specs/999999999", { data: { make: "", yearFrom: "old" } }),
     expect: { ...signedIn(400), technician: 403, apprentice: 403 },

@@ -88,6 +88,12 @@ function template(key: string): Record<string, unknown> {
       conclusionNotes: "Low on both sides.",
     },
     "POST /api/cases/:id/signoff": { verdict: "sent_back", comment: "Check the static pressure again." },
+    "POST /api/cases/:id/outcome": {
+      causes: ["undercharge"],
+      repairIds: ["leak_repair", "recover_evacuate_recharge"],
+      note: "Replaced the O-ring at the condenser inlet.",
+    },
+    "POST /api/cases/:id/reopen": { reason: "Warm again within a week: the leak was not the only one." },
     "PUT /api/cases/:id/service": {
       baseVersion: 0,
       step: "recovery",
