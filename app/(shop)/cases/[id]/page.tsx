@@ -18,6 +18,25 @@ import { CasePhotos } from "@/components/photos/case-photos";
 import { caseComebackLinks } from "@/lib/server/casebook/case-flags";
 import { ComebackBadge } from "@/components/casebook/comeback-badge";
 import { SimilarCasesPanel } from "@/components/casebook/similar-cases-panel";
+import { caseOutcome } from "@/lib/server/casebook/outcome";
+import { getServiceCase, getServiceRecord } from "@/lib/server/service-records";
+import { getProfile } from "@/lib/server/profile";
+import { getShop } from "@/lib/server/shops";
+import { getPartOilAllowances } from "@/lib/server/oil-allowances";
+import { formatShopTime } from "@/lib/units/clock";
+import { CAUSE_IDS, CAUSE_LABELS, type CauseId } from "@/lib/diagnosis/causes";
+import { SYMPTOM_LABELS, type SymptomId } from "@/lib/diagnosis/symptoms";
+import { confirmedCauseLabel } from "@/lib/casebook/labels";
+import { REPAIR_CATALOG, REPAIR_IDS, type RepairId } from "@/lib/repairs/catalog";
+import { ServiceSummary } from "@/components/cases/service-summary";
+import {
+  emptiedNotRecharged,
+  serviceSummaryLines,
+  summaryValuesOf,
+} from "@/components/cases/service-summary-lines";
+import { CaseOutcomeForm } from "@/components/cases/case-outcome-form";
+import { CaseReopenForm } from "@/components/cases/case-reopen-form";
+import { CaseOutcomeHistory, CaseOutcomeSummary } from "@/components/cases/case-outcome-view";
 
 export const metadata: Metadata = { title: "Case" };
 
@@ -30,12 +49,60 @@ export default async function CasePage({ params }: { params: Promise<{ id: strin
     throw error;
   });
   const record = (detail.answers ?? {}) as { answers?: Record<string, never> };
+  const ticked = (record.answers as { behaviour?: { symptoms?: unknown } } | undefined)?.behaviour?.symptoms;
   const may = caseAbilities(user, detail);
   const wroteIt = isOwnConclusionRefusal(caseRefusal("sign_off", user, detail));
-  const [owner, comeback] = await Promise.all([
+  const [owner, comeback, outcome, serviceCase, service, profile, shop, allowancesMl] = await Promise.all([
     ownerPanelData({ user, caseId: detail.id }),
     caseComebackLinks({ shopId: user.shopId, caseId: detail.id }),
+    caseOutcome({ shopId: user.shopId, caseId: detail.id }),
+    getServiceCase({ shopId: user.shopId, caseId: detail.id }),
+    getServiceRecord({ shopId: user.shopId, caseId: detail.id }),
+    getProfile({ user }),
+    getShop({ shopId: user.shopId }),
+    getPartOilAllowances({ shopId: user.shopId }),
   ]);
+  const serviceValues = summaryValuesOf(service, serviceCase);
+  const summaryLines = serviceSummaryLines({
+    values: serviceValues,
+    units: profile.units,
+    altitudeM: shop.altitudeM,
+    allowancesMl,
+    electricCompressor: serviceCase.electricCompressor,
+  });
+  const symptoms = (Array.isArray(ticked) ? (ticked as string[]) : []).map((s) =>
+    s in SYMPTOM_LABELS ? SYMPTOM_LABELS[s as SymptomId] : s,
+  );
+  const clock = { timeZone: shop.timeZone, locale: shop.locale };
+  // The findings' leading causes (and the technician's conclusion) in view, with none found; the rest of
+  // the engine's causes folded. The repairs proposed or suggested for the case in view, the rest folded.
+  const conclusion = detail.conclusionCause;
+  const ranked = ((detail.findings as { suspects?: { cause?: string }[] } | null)?.suspects ?? [])
+    .map((s) => s.cause)
+    .filter((c): c is CauseId => typeof c === "string" && c in CAUSE_LABELS);
+  const leadingCauses = new Set<string>([
+    ...(conclusion && conclusion in CAUSE_LABELS ? [conclusion] : []),
+    ...ranked.slice(0, 3),
+  ]);
+  const causeChoice = (id: string) => ({ id, label: confirmedCauseLabel(id) });
+  const causeChoices = {
+    shown: [...leadingCauses, "none_found"].map(causeChoice),
+    more: [...ranked, ...CAUSE_IDS]
+      .filter((id, i, all) => !leadingCauses.has(id) && all.indexOf(id) === i)
+      .map(causeChoice),
+  };
+  const likelyRepairs = new Set<string>([
+    ...(owner.proposal?.repairs.map((r) => r.id) ?? []),
+    ...owner.suggestedRepairs,
+  ]);
+  const repairChoice = (id: RepairId) => ({ id, label: REPAIR_CATALOG[id].tradeLabel });
+  const repairChoices =
+    likelyRepairs.size > 0
+      ? {
+          shown: REPAIR_IDS.filter((id) => likelyRepairs.has(id)).map(repairChoice),
+          more: REPAIR_IDS.filter((id) => !likelyRepairs.has(id)).map(repairChoice),
+        }
+      : { shown: REPAIR_IDS.map(repairChoice), more: [] };
   const findings = detail.findings as Parameters<typeof FindingsSnapshot>[0]["findings"] | null;
   return (
     <article className="space-y-4">
@@ -79,6 +146,27 @@ export default async function CasePage({ params }: { params: Promise<{ id: strin
           senior or the owner signs it off.
         </p>
       )}
+      {detail.status === "closed" && outcome.causes.length > 0 && (
+        <CaseOutcomeSummary
+          outcome={outcome}
+          closedWhen={outcome.closedAt ? formatShopTime(new Date(outcome.closedAt), clock) : null}
+        />
+      )}
+      <CaseOutcomeHistory
+        events={outcome.history.map((e) => ({ ...e, when: formatShopTime(new Date(e.at), clock) }))}
+      />
+      {may.close && (
+        <CaseOutcomeForm
+          caseId={detail.id}
+          causes={causeChoices}
+          repairs={repairChoices}
+          defaults={{
+            causes: conclusion && conclusion in CAUSE_LABELS ? [conclusion as CauseId] : [],
+            repairIds: [],
+          }}
+        />
+      )}
+      {may.reopen && <CaseReopenForm caseId={detail.id} />}
       <section className="card">
         <h2 className="text-lg font-bold">Complaint, in the owner&apos;s words</h2>
         <p className="mt-1">&ldquo;{detail.complaint}&rdquo;</p>
@@ -128,16 +216,14 @@ export default async function CasePage({ params }: { params: Promise<{ id: strin
         links={owner.links}
         emails={owner.emails}
       />
-      <section className="card">
-        <h2 className="text-lg font-bold">Service record</h2>
-        <p className="mt-1">
-          Recovery, evacuation and hold, oil and the recharge by weight; each step posts to the refrigerant
-          ledger.
-        </p>
-        <Link href={`/cases/${detail.id}/service`} className="btn-quiet mt-2">
-          Open the service record
-        </Link>
-      </section>
+      <ServiceSummary
+        caseId={detail.id}
+        lines={summaryLines}
+        symptoms={symptoms}
+        hasRecord={service !== null}
+        emptied={emptiedNotRecharged(serviceValues)}
+        electricCompressor={serviceCase.electricCompressor}
+      />
     </article>
   );
 }
