@@ -156,6 +156,10 @@ export const STATUS_AFTER = {
   sign_off: "signed_off",
   send_back: "sent_back",
   close: "closed",
+  // A reopened case goes back to signed off, not to the technician's draft: a second person already
+  // checked the diagnosis, and a reopen questions the outcome (the repair did not hold, or the wrong
+  // cause was recorded). The technician records the outcome again and closes it; a diagnosis wrong from
+  // the start is a new case, which the casebook links to this one as a comeback.
   reopen: "signed_off",
 } as const satisfies Record<Exclude<CaseAction, "edit" | "work_on" | "submit">, CaseStatus>;
 
