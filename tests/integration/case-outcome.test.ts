@@ -129,7 +129,10 @@ describe("reopening a case through POST /api/cases/[id]/reopen", () => {
     const c = await signedOffCase();
     expect((await c.close(c.technicianSession)).status).toBe(200);
 
+    expect((await c.reopen(null, { reason: "Warm again." })).status).toBe(401);
     expect((await c.reopen(c.technicianSession, { reason: "Warm again." })).status).toBe(403);
+    const otherShop = await signedOffCase();
+    expect((await c.reopen(otherShop.senior.sessionId, { reason: "Warm again." })).status).toBe(404);
     const noReason = await c.reopen(c.senior.sessionId, { reason: "   " });
     expect(noReason.status).toBe(400);
     expect(fieldErrorsOf(noReason.json).reason?.[0]).toBe(
