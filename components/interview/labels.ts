@@ -27,7 +27,7 @@ export const STEP_LEADS: Readonly<Record<StepId, string>> = {
   chargeAudit:
     "If you recovered the charge, what came out and how much oil with it; and what you know of the oil.",
   recoveryHeld: "This refrigerant must not go into the shop's recovery machine.",
-  findings: "The likely causes, ranked, with the evidence for and against each.",
+  findings: "What the readings point to.",
 };
 
 const OIL_LABELS: Record<(typeof oilTypeChoices)[number], string> = {
