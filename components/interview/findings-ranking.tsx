@@ -7,8 +7,6 @@ import {
 } from "@/lib/diagnosis";
 import { SuspectCard } from "./suspect-card";
 
-export const whyId = (cause: string) => `why-${cause}`;
-
 function restLine(ranking: FirstScreenRanking<Suspect>): string {
   const n = ranking.others.length;
   const causes = n === 1 ? "1 other cause" : `${n} other causes`;
@@ -42,7 +40,7 @@ export function FindingsRanking({
       aria-labelledby="suspects-heading"
       className="overflow-hidden rounded-card border-2 border-glacier-700 bg-paper"
     >
-      <div className="flex items-baseline justify-between gap-2 bg-glacier-700 px-3 py-1 text-white">
+      <div className="flex items-baseline justify-between gap-2 bg-glacier-700 px-3 py-0.5 text-white">
         <h2 id="suspects-heading" className="text-base font-bold">
           Likely causes
         </h2>
@@ -57,15 +55,12 @@ export function FindingsRanking({
               className="absolute inset-y-0 left-0 bg-glacier-100"
               style={{ width: `${percent}%` }}
             />
-            <a
-              href={`#${whyId(suspect.cause)}`}
-              className="relative flex min-h-touch items-center justify-between gap-3 px-3 text-ink no-underline"
-            >
+            <div className="relative flex items-center justify-between gap-3 px-3 py-1">
               <span className="font-bold leading-snug">
                 {i + 1}. {CAUSE_TITLES[suspect.cause] ?? suspect.cause}
               </span>
               <Percent percent={percent} className="text-xl text-glacier-900" />
-            </a>
+            </div>
           </li>
         ))}
       </ol>

@@ -19,7 +19,7 @@ import { ApiError } from "@/lib/queries/api-fetch";
 import { submitCase, type CaseSubmitResult } from "@/lib/queries/case-submit";
 import { CautionsList, type CautionItem } from "@/components/cautions/cautions-list";
 import { SuspectCard } from "./suspect-card";
-import { FindingsRanking, whyId } from "./findings-ranking";
+import { FindingsRanking } from "./findings-ranking";
 import { ReviewThread, type ReviewContext } from "./review-thread";
 import { clsx } from "clsx";
 import {
@@ -137,7 +137,7 @@ export function FindingsStep({
   }
 
   return (
-    <div className="space-y-4">
+    <div className="space-y-3">
       {stored && (
         <div
           ref={noteRef}
@@ -164,7 +164,7 @@ export function FindingsStep({
       <section
         aria-labelledby="next-check-heading"
         className={clsx(
-          "rounded-card border-2 border-l-8 p-3",
+          "rounded-card border-2 border-l-8 px-3 py-2",
           findings.doNotRun.active ? "border-ember-500 bg-ember-50" : "border-glacier-700 bg-glacier-50",
         )}
         data-testid={findings.doNotRun.active ? "do-not-run" : undefined}
@@ -172,7 +172,7 @@ export function FindingsStep({
         <h2
           id="next-check-heading"
           className={clsx(
-            "text-sm font-bold uppercase tracking-wide",
+            "mr-2 inline text-sm font-bold uppercase tracking-wide",
             findings.doNotRun.active ? "text-ember-700" : "text-glacier-900",
           )}
         >
@@ -181,7 +181,10 @@ export function FindingsStep({
         {findings.doNotRun.active && (
           <p className="mt-1 font-bold text-ember-700">{findings.nextCheck.reason}</p>
         )}
-        <p className="mt-1 font-bold leading-snug" data-testid="next-check">
+        <p
+          className={clsx("font-semibold leading-snug", findings.doNotRun.active ? "mt-1" : "inline")}
+          data-testid="next-check"
+        >
           {findings.nextCheck.instruction}
         </p>
         {!findings.doNotRun.active && (
@@ -202,13 +205,7 @@ export function FindingsStep({
         <ol className="space-y-3">
           {ranking.leading.map(({ suspect }, i) => (
             <li key={suspect.cause}>
-              <SuspectCard
-                suspect={suspect}
-                rank={i + 1}
-                units={units}
-                percent={null}
-                id={whyId(suspect.cause)}
-              />
+              <SuspectCard suspect={suspect} rank={i + 1} units={units} percent={null} />
             </li>
           ))}
         </ol>

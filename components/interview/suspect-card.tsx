@@ -61,13 +61,11 @@ export function SuspectCard({
   rank,
   units,
   percent,
-  id,
 }: {
   suspect: Suspect;
   rank: number;
   units?: ReaderUnits;
   percent?: number | null;
-  id?: string;
 }) {
   const assessed = suspect.assessed !== false;
   const share = shareOf(suspect);
@@ -76,11 +74,7 @@ export function SuspectCard({
   const more = reasons.moreFor.length + reasons.moreAgainst.length;
   const label = CAUSE_LABELS[suspect.cause] ?? suspect.cause;
   return (
-    <article
-      id={id}
-      className="scroll-mt-4 rounded-card border border-paper-line bg-paper p-3"
-      aria-label={`${rank}. ${label}`}
-    >
+    <article className="rounded-card border border-paper-line bg-paper p-3" aria-label={`${rank}. ${label}`}>
       <div className="flex items-baseline justify-between gap-3">
         <h3 className="font-bold">
           {rank}. {label}
