@@ -171,7 +171,7 @@ test("metric: the leading causes with one share each, the next check and nothing
   // The other causes are one line until tapped.
   const others = page.getByTestId("other-causes");
   await expect(others.getByRole("article").first()).toBeHidden();
-  const othersLine = others.locator("summary");
+  const othersLine = others.locator(":scope > summary");
   await expect(othersLine).toHaveText(new RegExp(`^${13 - leaders} other causes together\\s*\\d+\\s%$`));
   await othersLine.click();
   await expect(others.getByRole("article").first()).toBeVisible();
@@ -216,7 +216,7 @@ test("imperial: the same first screen with the evidence in psi and °F for a tec
   expect(whyText).toMatch(/psig/);
   expect(whyText).toMatch(/°F/);
   expect(whyText).not.toMatch(/kPa|°C/);
-  await page.getByTestId("other-causes").locator("summary").click();
+  await page.getByTestId("other-causes").locator(":scope > summary").click();
   const othersText = await page.getByTestId("other-causes").innerText();
   expect(othersText).not.toMatch(/kPa|°C/);
   await expectNoA11yIssues(page, "findings, imperial");
