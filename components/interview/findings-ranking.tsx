@@ -5,6 +5,7 @@ import {
   type ReaderUnits,
   type Suspect,
 } from "@/lib/diagnosis";
+import { ChevronDown } from "lucide-react";
 import { SuspectCard } from "./suspect-card";
 
 function restLine(ranking: FirstScreenRanking<Suspect>): string {
@@ -65,9 +66,15 @@ export function FindingsRanking({
         ))}
       </ol>
       {ranking.others.length > 0 && (
-        <details className="border-t border-paper-line bg-paper-sunk" data-testid="other-causes">
+        <details className="group border-t border-paper-line bg-paper-sunk" data-testid="other-causes">
           <summary className="flex min-h-touch cursor-pointer items-center justify-between gap-3 px-3 font-bold">
-            <span>{restLine(ranking)}</span>
+            <span className="flex items-center gap-1">
+              <ChevronDown
+                aria-hidden
+                className="h-5 w-5 shrink-0 transition-transform group-open:rotate-180"
+              />
+              {restLine(ranking)}
+            </span>
             {ranking.othersAssessed && <Percent percent={ranking.restPercent} className="text-lg" />}
           </summary>
           <div className="space-y-2 px-3 pb-3">

@@ -80,7 +80,16 @@ export function SuspectCard({
           {rank}. {label}
         </h3>
         {assessed && shown !== null && (
-          <span className="shrink-0 font-mono text-lg font-bold">{percentText(shown, share)}</span>
+          <span className="shrink-0 text-lg font-bold">
+            {shown === 0 && share > 0 ? (
+              percentText(shown, share)
+            ) : (
+              <>
+                <span className="font-mono">{shown}</span>
+                {"\u00a0%"}
+              </>
+            )}
+          </span>
         )}
       </div>
       {!assessed ? (
