@@ -8,6 +8,7 @@ import {
   CAUSE_IDS,
   CAUSE_LABELS,
   diagnose,
+  firstScreenRanking,
   formatMessage,
   type CauseId,
   type DiagnosisInput,
@@ -18,6 +19,7 @@ import { ApiError } from "@/lib/queries/api-fetch";
 import { submitCase, type CaseSubmitResult } from "@/lib/queries/case-submit";
 import { CautionsList, type CautionItem } from "@/components/cautions/cautions-list";
 import { SuspectCard } from "./suspect-card";
+import { FindingsRanking } from "./findings-ranking";
 import { ReviewThread, type ReviewContext } from "./review-thread";
 import { clsx } from "clsx";
 import {
@@ -28,6 +30,9 @@ import {
 } from "@/lib/cases/conclusion";
 import type { SaveStatus } from "./use-autosave";
 import { DetailsLine } from "@/components/ui/details-line";
+
+/** The cautions that say the system must not be run (lib/cautions/catalog.ts). */
+const DO_NOT_RUN_CAUTIONS: ReadonlySet<string> = new Set(["empty_system", "electric_never_without_charge"]);
 
 interface Props {
   caseId: number;
@@ -107,8 +112,12 @@ export function FindingsStep({
 
   const chosen = cause || findings.suspects[0]?.cause || "";
   // The engine's cautions are the catalogue's (a repair in its conditional wording): one caution, one level.
-  const cautions: CautionItem[] = [...interviewCautions];
-  for (const c of findings.cautions) if (!cautions.some((x) => x.id === c.id)) cautions.push(c);
+  const allCautions: CautionItem[] = [...interviewCautions];
+  for (const c of findings.cautions) if (!allCautions.some((x) => x.id === c.id)) allCautions.push(c);
+  // While the system must not be run, its cautions follow the next check and never fold, however often seen.
+  const pinned = findings.doNotRun.active ? allCautions.filter((c) => DO_NOT_RUN_CAUTIONS.has(c.id)) : [];
+  const cautions = allCautions.filter((c) => !pinned.includes(c));
+  const ranking = firstScreenRanking(findings.suspects);
 
   function submit(event: React.FormEvent) {
     event.preventDefault();
@@ -128,7 +137,7 @@ export function FindingsStep({
   }
 
   return (
-    <div className="space-y-5">
+    <div className="space-y-3">
       {stored && (
         <div
           ref={noteRef}
@@ -150,58 +159,64 @@ export function FindingsStep({
           </Link>
         </div>
       )}
-      <section aria-labelledby="suspects-heading">
-        <h2 id="suspects-heading" className="text-xl font-bold">
-          Likely causes
-        </h2>
-        <p className="mt-1 text-ink-soft" data-testid="measured">
-          {findings.measured.statement}
-        </p>
-        <ol className="mt-2 space-y-3">
-          {findings.suspects.slice(0, 4).map((s, i) => (
-            <li key={s.cause}>
-              <SuspectCard suspect={s} rank={i + 1} units={units} />
-            </li>
-          ))}
-        </ol>
-        {findings.suspects.length > 4 && (
-          <details className="mt-3">
-            <summary className="min-h-touch cursor-pointer font-bold">
-              The other {findings.suspects.length - 4} causes considered
-            </summary>
-            <ol className="mt-2 space-y-3" start={5}>
-              {findings.suspects.slice(4).map((s, i) => (
-                <li key={s.cause}>
-                  <SuspectCard suspect={s} rank={i + 5} units={units} />
-                </li>
-              ))}
-            </ol>
-          </details>
-        )}
-      </section>
+      <FindingsRanking ranking={ranking} units={units} />
 
       <section
         aria-labelledby="next-check-heading"
-        className="rounded-card border-2 border-glacier-600 bg-glacier-50 p-4"
+        className={clsx(
+          "rounded-card border-2 border-l-8 px-3 py-2",
+          findings.doNotRun.active ? "border-ember-500 bg-ember-50" : "border-glacier-700 bg-glacier-50",
+        )}
+        data-testid={findings.doNotRun.active ? "do-not-run" : undefined}
       >
-        <h2 id="next-check-heading" className="text-xl font-bold text-glacier-900">
+        <h2
+          id="next-check-heading"
+          className={clsx(
+            "mr-2 inline text-sm font-bold uppercase tracking-wide",
+            findings.doNotRun.active ? "text-ember-700" : "text-glacier-900",
+          )}
+        >
           Next check
         </h2>
-        <p className="mt-1 text-lg font-bold" data-testid="next-check">
+        {findings.doNotRun.active && (
+          <p className="mt-1 font-bold text-ember-700">{findings.nextCheck.reason}</p>
+        )}
+        <p
+          className={clsx("font-semibold leading-snug", findings.doNotRun.active ? "mt-1" : "inline")}
+          data-testid="next-check"
+        >
           {findings.nextCheck.instruction}
         </p>
-        <p className="mt-1 text-ink-soft">{findings.nextCheck.reason}</p>
+        {!findings.doNotRun.active && (
+          <p className="mt-1 text-sm text-ink-soft">{findings.nextCheck.reason}</p>
+        )}
       </section>
 
-      {findings.notes.length > 0 && (
-        <ul className="list-disc space-y-1 pl-5 text-ink-soft">
-          {findings.notes.map((n, i) => (
-            <li key={i}>{formatMessage(n, units)}</li>
-          ))}
-        </ul>
-      )}
-
+      {pinned.length > 0 && <CautionsList cautions={pinned} heading="Do not run" foldNotices={false} />}
       <CautionsList cautions={cautions} shownEarlier={shownEarlier} />
+
+      <section aria-labelledby="why-heading" className="space-y-3">
+        <h2 id="why-heading" className="text-xl font-bold">
+          {ranking.leading.length === 1 ? "Why this cause" : "Why these causes"}
+        </h2>
+        <p className="text-ink-soft" data-testid="measured">
+          {findings.measured.statement}
+        </p>
+        <ol className="space-y-3">
+          {ranking.leading.map(({ suspect }, i) => (
+            <li key={suspect.cause}>
+              <SuspectCard suspect={suspect} rank={i + 1} units={units} percent={null} />
+            </li>
+          ))}
+        </ol>
+        {findings.notes.length > 0 && (
+          <ul className="list-disc space-y-1 pl-5 text-ink-soft">
+            {findings.notes.map((n, i) => (
+              <li key={i}>{formatMessage(n, units)}</li>
+            ))}
+          </ul>
+        )}
+      </section>
 
       {stored ? (
         <section

@@ -159,7 +159,7 @@ export function Interview({
           <h1 id="step-heading" ref={headingRef} tabIndex={-1} className="text-2xl font-bold outline-none">
             {STEP_LABELS[step]}
           </h1>
-          <p className="text-ink-soft">{STEP_LEADS[step]}</p>
+          {STEP_LEADS[step] && <p className="text-ink-soft">{STEP_LEADS[step]}</p>}
         </header>
         {step !== "findings" && <CautionsList cautions={stepCautions} shownEarlier={shownEarlier} />}
         {step === "system" && vehicleId !== null && (

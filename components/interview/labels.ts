@@ -27,7 +27,8 @@ export const STEP_LEADS: Readonly<Record<StepId, string>> = {
   chargeAudit:
     "If you recovered the charge, what came out and how much oil with it; and what you know of the oil.",
   recoveryHeld: "This refrigerant must not go into the shop's recovery machine.",
-  findings: "The likely causes, ranked, with the evidence for and against each.",
+  // The findings open with their own ranking under the step's name: no lead line above it.
+  findings: "",
 };
 
 const OIL_LABELS: Record<(typeof oilTypeChoices)[number], string> = {

@@ -49,3 +49,20 @@ export const CAUSE_SHORT_NAMES: Record<CauseId, string> = {
   oil_loss: "oil loss",
   no_refrigerant_fault: "no refrigerant-circuit fault",
 };
+
+/** One-line titles for the findings' ranking on a phone; the full label says the rest beside the reasons. */
+export const CAUSE_TITLES: Record<CauseId, string> = {
+  overcharge: "Overcharge",
+  undercharge: "Undercharge or leak",
+  non_condensables: "Air in the system",
+  moisture: "Moisture in the system",
+  metering_restriction: "Metering device blocked",
+  high_side_restriction: "High-side restriction",
+  metering_stuck_open: "Expansion valve stuck open",
+  condenser_airflow: "Poor condenser airflow",
+  weak_compressor: "Weak compressor",
+  evaporator_icing: "Evaporator icing",
+  contaminated_refrigerant: "Wrong or mixed refrigerant",
+  oil_loss: "Low or wrong oil",
+  no_refrigerant_fault: "Refrigerant circuit working",
+};

@@ -72,8 +72,14 @@ export class InterviewPage {
     await expect(this.page.getByText("All answers saved")).toBeVisible({ timeout: 20_000 });
   }
 
+  /** The leading causes in rank order, each with its full name and its strongest reasons. */
   suspects() {
-    return this.page.getByRole("region", { name: "Likely causes" }).getByRole("article");
+    return this.page.getByRole("region", { name: /^Why (this cause|these causes)$/ }).getByRole("article");
+  }
+
+  /** The leading causes' rows in the ranking, each with its share. */
+  leadingRows() {
+    return this.page.getByTestId("leading-causes").getByRole("listitem");
   }
 
   caseIdFromUrl(): number {
