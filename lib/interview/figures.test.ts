@@ -37,7 +37,7 @@ describe("figures typed once: the interview's side", () => {
   it("writes the kept figures into the answers, and a recovered mass marks the charge recovered", () => {
     const shown = answersWithFigures(
       { system: { refrigerant: "R-134a" }, chargeAudit: { recovered: false } },
-      { labelChargeG: 640, recoveredChargeG: 450, oilRemovedMl: null, chargedG: 610 },
+      { labelChargeG: 640, recoveredChargeG: 450, chargedG: 610 },
     );
     expect(shown).toEqual({
       system: { refrigerant: "R-134a", labelChargeG: 640 },
@@ -45,7 +45,7 @@ describe("figures typed once: the interview's side", () => {
     });
   });
 
-  it("starts only the groups a figure makes whole, and drops a figure its home holds empty", () => {
+  it("starts only the groups a figure makes whole", () => {
     expect(
       answersWithFigures({}, { labelChargeG: 500, purityPct: 97, recoveredChargeG: 300, chargedG: 280 }),
     ).toEqual({
@@ -53,8 +53,14 @@ describe("figures typed once: the interview's side", () => {
       chargeAudit: { recovered: true, recoveredChargeG: 300, chargedG: 280 },
     });
     expect(answersWithFigures({}, { oilRemovedMl: 20 })).toEqual({});
-    expect(answersWithFigures({ identification: { airPct: 3 } }, { airPct: null })).toEqual({
-      identification: {},
+  });
+
+  it("shows a copy not yet moved where the home holds none, and the home's value over it", () => {
+    const legacy = { identification: { airPct: 3 }, system: { refrigerant: "R-134a", labelChargeG: 450 } };
+    expect(answersWithFigures(legacy, { airPct: null, labelChargeG: null })).toEqual(legacy);
+    expect(answersWithFigures(legacy, { airPct: 2, labelChargeG: 480 })).toEqual({
+      identification: { airPct: 2 },
+      system: { refrigerant: "R-134a", labelChargeG: 480 },
     });
   });
 

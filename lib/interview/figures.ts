@@ -41,18 +41,16 @@ export function answersWithFigures(saved: unknown, figures: Partial<CaseFigures>
   const answers: Json = isObject(saved) ? { ...saved } : {};
   for (const id of FIGURE_IDS) {
     const value = figures[id];
-    if (value === undefined) continue;
+    // A home holding none leaves the answers as stored: every save takes a figure out of the answers
+    // once it lives elsewhere, so a copy still there predates that (a case not yet moved) and is shown.
+    if (value === undefined || value === null) continue;
     const { group } = CASE_FIGURES[id];
     const current = answers[group];
     if (isObject(current)) {
-      const next = { ...current };
-      if (value === null) delete next[id];
-      else next[id] = value;
-      if (id === "recoveredChargeG" && value !== null) next.recovered = true;
-      answers[group] = next;
-    } else if (value !== null && group === "identification") {
+      answers[group] = { ...current, [id]: value, ...(id === "recoveredChargeG" ? { recovered: true } : {}) };
+    } else if (group === "identification") {
       answers[group] = { [id]: value };
-    } else if (value !== null && id === "recoveredChargeG") {
+    } else if (id === "recoveredChargeG") {
       answers[group] = { recovered: true, [id]: value };
     }
   }

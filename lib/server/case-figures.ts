@@ -118,7 +118,8 @@ export async function caseFigures(opts: {
   const homes = await homesOf(opts);
   const inAnswers = figuresInAnswers(storedAnswers(opts.interviewRecord) as InterviewAnswers);
   const all = {} as CaseFigures;
-  for (const id of FIGURE_IDS) all[id] = (id in homes.kept ? homes.kept[id] : inAnswers[id]) ?? null;
+  // A home holding none shows a copy the answers still hold from before the move (as the interview does).
+  for (const id of FIGURE_IDS) all[id] = homes.kept[id] ?? inAnswers[id] ?? null;
   return all;
 }
 
