@@ -3,7 +3,7 @@ import type { MigrationParams } from "umzug";
 
 type Params = MigrationParams<QueryInterface>;
 
-// One stored value per figure (lib/server/case-figures.ts): the label charge moves onto the vehicle,
+// One stored value per figure (lib/server/case-figures/): the label charge moves onto the vehicle,
 // and the recovered mass, oil drained, identifier result and charged mass onto the case's service
 // record where it has one; the interview's answers keep them only while no record exists. Where two
 // copies disagreed, the kept one wins (the record's: it posted to the ledger; the vehicle's: it is

@@ -3,7 +3,7 @@ import type { GroupId } from "@/lib/interview/steps";
 /*
  * The figures a case holds once, whichever screen meets them first: the label charge, the mass
  * recovered, the oil drained with it, the identifier's result (purity and air) and the mass charged.
- * Each has one stored home (lib/server/case-figures.ts): the label charge is the vehicle's (the label
+ * Each has one stored home (lib/server/case-figures/): the label charge is the vehicle's (the label
  * is on the vehicle, and every case of it reads the same label); the others are the service record's
  * once it is started (it posts the masses to the ledger), and the interview's answers until then.
  */

@@ -71,7 +71,7 @@ export async function saveInterview({
     // A stale screen is refused here, before any figure is written elsewhere.
     if (row.version !== input.baseVersion)
       await updateIfVersion({ row, shop, baseVersion: input.baseVersion, transaction, values: {} });
-    // Each figure typed here is written where it lives (lib/server/case-figures.ts); the answers keep
+    // Each figure typed here is written where it lives (lib/server/case-figures/); the answers keep
     // only those that live in them.
     const answers = await saveInterviewFigures({ user, caseRow: row, answers: sorted.answers, transaction });
     const version = await updateIfVersion({

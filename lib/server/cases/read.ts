@@ -105,7 +105,7 @@ export async function getCase({ shopId, caseId }: { shopId: number; caseId: numb
     refrigerant: c.Vehicle?.refrigerant ?? null,
     expansionDevice: c.Vehicle?.expansionDevice ?? null,
     interviewStep: (c.interviewStep as string | null) ?? null,
-    // Each figure typed once is shown from where it lives (lib/server/case-figures.ts).
+    // Each figure typed once is shown from where it lives (lib/server/case-figures/).
     answers: await interviewRecordWithFigures({
       shopId,
       caseId,

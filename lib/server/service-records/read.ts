@@ -96,7 +96,7 @@ export async function getServiceRecord({
     ? await ReadingSet.findOne({ where: { id: r.finalReadingSetId, shopId, caseId }, raw: true, transaction })
     : null;
   const dto = recordDto(r, r.technician.name, final);
-  // The label charge is the vehicle's (lib/server/case-figures.ts); a record keeps no copy of it.
+  // The label charge is the vehicle's (lib/server/case-figures/); a record keeps no copy of it.
   const caseRow = await Case.findOne({
     where: { id: caseId, shopId },
     attributes: ["id"],
