@@ -101,6 +101,12 @@ export const GROUP_FIELDS: GroupFields = {
     { name: "recoveredChargeG", label: "Mass recovered", kind: "mass" },
     { name: "oilRemovedMl", label: "Oil drained with it", kind: "volume" },
     {
+      name: "chargedG",
+      label: "Mass charged after the repair",
+      kind: "mass",
+      hint: "Weighed in from the cylinder; leave empty until the system is recharged.",
+    },
+    {
       name: "partReplaced",
       label: "A part replaced recently?",
       kind: "choice",

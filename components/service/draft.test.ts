@@ -77,6 +77,23 @@ describe("service record draft", () => {
     });
   }
 
+  it("starts a record not yet saved from the figures typed in the interview, in the reader's units", () => {
+    const figures = { recoveredChargeG: 431, oilRemovedMl: 25, purityPct: 98.5, airPct: 1.2, chargedG: 600 };
+    const draft = draftFromRecord(null, metric, { labelChargeG: 620, oilType: null, figures });
+    expect(draft.text.labelChargeG).toBe("620 g");
+    expect(draft.text.recoveredChargeG).toBe("431 g");
+    expect(draft.text.oilRemovedMl).toBe("25 mL");
+    expect(draft.text.purityPct).toBe("98.5");
+    expect(draft.text.chargedG).toBe("600 g");
+    // A saved record is shown as saved: the figures then live on it.
+    const started = draftFromRecord({ ...saved, recoveredChargeG: 450 }, metric, {
+      labelChargeG: 620,
+      oilType: null,
+      figures,
+    });
+    expect(started.text.recoveredChargeG).toBe("450 g");
+  });
+
   it("keeps what was typed and reports an unreadable entry instead of sending it", () => {
     const draft = draftFromRecord(null, metric, { labelChargeG: 480, oilType: "PAG 46" });
     expect(draft.text.labelChargeG).toBe("480 g");

@@ -6,6 +6,7 @@ import {
   type ServiceRecordInput,
   type ServiceStepId,
 } from "@/lib/contracts/service-records";
+import type { CaseFigures, FigureId } from "@/lib/contracts/case-figures";
 import type { ReplacedPartId } from "@/lib/service/oil";
 import {
   type Entry,
@@ -71,7 +72,7 @@ function toLocalInput(iso: string | null | undefined): string {
 export function draftFromRecord(
   r: ServiceRecordDto | null,
   u: ShopUnitsPrefs,
-  defaults: { labelChargeG: number | null; oilType: string | null },
+  defaults: { labelChargeG: number | null; oilType: string | null; figures?: Partial<CaseFigures> },
 ): Draft {
   const mass = (g: number) => withUnit(round(massFromG(g, u.mass), u.mass === "g" ? 0 : 2), u.mass);
   const vol = (ml: number) =>
@@ -89,13 +90,17 @@ export function draftFromRecord(
     instant: (v) => toLocalInput(String(v)),
     text: (v) => String(v),
   };
-  // Before a record exists the label charge comes from the vehicle, and the oil from the spec.
+  // Before a record exists the label charge comes from the vehicle, the figures typed in the
+  // interview from where they are kept (ServiceCaseContext.figures), and the oil from the spec.
+  const figures = defaults.figures ?? {};
   const stored = (field: TextField) =>
     field === "labelChargeG" && !r
       ? defaults.labelChargeG
       : field === "oilAddedType"
         ? (r?.oilAddedType ?? defaults.oilType)
-        : r?.[field];
+        : !r && field in figures
+          ? figures[field as FigureId]
+          : r?.[field];
   const text = {} as Record<TextField, string>;
   for (const field of TEXT_FIELDS) {
     const value = stored(field);

@@ -32,6 +32,7 @@ export function ServiceRecordForm(props: ServiceRecordFormProps) {
     draftFromRecord(props.record, units, {
       labelChargeG: serviceCase.labelChargeG,
       oilType: serviceCase.oilType,
+      figures: serviceCase.figures,
     }),
   );
   const [version, setVersion] = useState(props.record?.version ?? 0);

@@ -3,6 +3,7 @@ import { multiLineText, plausibleInstant, singleLineText } from "./text";
 import type { RefrigerantId } from "@/lib/refrigerants";
 import type { ExpansionDevice } from "@/lib/vehicles/expansion-devices";
 import { REPLACED_PART_IDS } from "@/lib/service/oil";
+import type { CaseFigures } from "./case-figures";
 
 export const SERVICE_STEPS = ["identify", "recovery", "evacuation", "oil", "recharge", "final"] as const;
 export type ServiceStepId = (typeof SERVICE_STEPS)[number];
@@ -159,6 +160,11 @@ export interface ServiceCaseContext {
   electricCompressor: boolean;
   labelChargeG: number | null;
   oilType: string | null;
+  /**
+   * The figures typed once (label charge, recovered mass, oil drained, identifier result, charged mass)
+   * from where each is kept: what a record not yet started begins with, so nothing is typed twice.
+   */
+  figures: CaseFigures;
 }
 
 /** A saved service record as the server returns it. */

@@ -187,6 +187,14 @@ export const chargeAuditAnswersSchema = z
       .min(0, { error: "Oil removed cannot be negative" })
       .max(1000, { error: `Oil removed: over ${limitMl(1000)} is not one vehicle's oil — check the unit` })
       .optional(),
+    /** Weighed in after the repair; lifts the do-not-run rule once the system holds a charge again. */
+    chargedG: z
+      .number({ error: "Charged mass: enter a number" })
+      .min(0, { error: "Charged mass cannot be negative" })
+      .max(6000, {
+        error: `Charged mass: over ${limitG(6000)} is not one vehicle's charge — check the unit`,
+      })
+      .optional(),
     partReplaced: z
       .enum(partReplacedChoices, { error: "Say whether a part was replaced, and its oil" })
       .optional(),

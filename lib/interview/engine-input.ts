@@ -38,6 +38,7 @@ export function toDiagnosisInput(answers: InterviewAnswers, shop?: ShopSettings)
     ventC: answers.running?.ventC,
     labelChargeG: system.labelChargeG,
     recoveredChargeG: charge?.recovered ? charge.recoveredChargeG : undefined,
+    chargedG: charge?.chargedG,
     identifierPurityPct: answers.identification?.purityPct,
     identifierAirPct: answers.identification?.airPct,
     symptoms: symptomsFrom(answers),

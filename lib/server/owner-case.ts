@@ -8,6 +8,7 @@ import type { ServiceRecordFacts } from "@/lib/owner/case-facts";
 import type { ProposalRecord } from "@/lib/owner/summary";
 import type { OwnerUnits } from "@/lib/owner/units";
 import { getModels } from "@/models";
+import { interviewRecordWithFigures } from "./case-figures";
 
 /** A case as the owner-summary code needs it; plain values only. */
 export interface OwnerCaseRow {
@@ -72,6 +73,7 @@ export async function loadOwnerCase({
     complaint: string;
     technicianId: string;
     answers: unknown;
+    vehicleId: number | null;
     findings: unknown;
     conclusionCause: string | null;
     Vehicle: { year: number; make: string; model: string } | null;
@@ -87,7 +89,13 @@ export async function loadOwnerCase({
     complaint: c.complaint,
     technicianId: c.technicianId,
     technicianRole,
-    answers: c.answers,
+    // The label charge and the service record's figures written in from where they live.
+    answers: await interviewRecordWithFigures({
+      shopId,
+      caseId,
+      vehicleId: c.vehicleId,
+      interviewRecord: c.answers,
+    }),
     findings: c.findings,
     conclusionCause: c.conclusionCause,
     vehicle: c.Vehicle ? `${c.Vehicle.year} ${c.Vehicle.make} ${c.Vehicle.model}` : null,

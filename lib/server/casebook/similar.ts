@@ -21,6 +21,7 @@ import { diagnosisInputFor } from "@/lib/interview/to-diagnosis-input";
 import { neighbourSummary } from "@/lib/casebook/summary";
 import type { Replacements } from "./filters";
 import { vehicleLabel } from "./search";
+import { interviewRecordWithFigures } from "../case-figures";
 
 type FeatureRow = Partial<Record<(typeof FEATURE_COLUMNS)[keyof typeof FEATURE_COLUMNS], number | null>> & {
   features_case_id?: number | null;
@@ -46,10 +47,18 @@ function featuresOf(row: FeatureRow): CaseFeatureValues {
 async function draftFeatures(shopId: number, caseId: number): Promise<CaseFeatureValues> {
   const { Case, Shop } = getModels();
   const [row, shop] = await Promise.all([
-    Case.findOne({ where: { id: caseId, shopId }, attributes: ["answers"], raw: true }),
+    Case.findOne({ where: { id: caseId, shopId }, attributes: ["answers", "vehicleId"], raw: true }),
     Shop.findByPk(shopId, { attributes: ["altitudeM"], raw: true }),
   ]);
-  const saved = (row?.answers as { answers?: unknown } | null)?.answers;
+  const record = row
+    ? await interviewRecordWithFigures({
+        shopId,
+        caseId,
+        vehicleId: row.vehicleId ?? null,
+        interviewRecord: row.answers,
+      })
+    : null;
+  const saved = (record as { answers?: unknown } | null)?.answers;
   const settings = { altitudeM: shop?.altitudeM ?? undefined };
   const input = saved ? diagnosisInputFor(sortSavedAnswers(saved, settings).answers, settings) : null;
   return draftFeaturesFrom(input);

@@ -16,6 +16,7 @@ import { recordAudit } from "../audit";
 import { getShop, type ShopSummary } from "../shops";
 import { caseForAction, conclusionWritersOf } from "./load";
 import { refreshCasebookEntry } from "../casebook/refresh";
+import { interviewRecordWithFigures, saveInterviewFigures } from "../case-figures";
 
 /**
  * Applies the change only at the version the client last saw; otherwise says plainly what happened,
@@ -67,6 +68,12 @@ export async function saveInterview({
     const settings = { altitudeM: shop.altitudeM };
     const sorted = sortSavedAnswers(input.answers, settings);
     const drafts = { ...input.drafts, ...sorted.drafts };
+    // A stale screen is refused here, before any figure is written elsewhere.
+    if (row.version !== input.baseVersion)
+      await updateIfVersion({ row, shop, baseVersion: input.baseVersion, transaction, values: {} });
+    // Each figure typed here is written where it lives (lib/server/case-figures/); the answers keep
+    // only those that live in them.
+    const answers = await saveInterviewFigures({ user, caseRow: row, answers: sorted.answers, transaction });
     const version = await updateIfVersion({
       row,
       shop,
@@ -75,7 +82,7 @@ export async function saveInterview({
       values: {
         interviewStep: input.step,
         answers: {
-          answers: sorted.answers,
+          answers,
           drafts,
           skipped: input.skipped,
           visited: input.visited,
@@ -101,7 +108,14 @@ export async function submitCase({
   const { sequelize, User: UserModel } = getModels();
   return sequelize.transaction(async (transaction) => {
     const row = await caseForAction({ user, caseId, action: "submit", transaction });
-    const record = row.answers as { answers?: unknown };
+    // With the figures from where they live (the vehicle's label, the service record's masses).
+    const record = (await interviewRecordWithFigures({
+      shopId: user.shopId,
+      caseId,
+      vehicleId: row.vehicleId ?? null,
+      interviewRecord: row.answers,
+      transaction,
+    })) as { answers?: unknown };
     const settings = { altitudeM: shop.altitudeM };
     const { answers } = sortSavedAnswers(record.answers, settings);
     // The same route-filtered input the findings screen used, so the stored snapshot matches what was shown

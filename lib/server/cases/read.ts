@@ -5,6 +5,7 @@ import { pageOf } from "../paging";
 import { AppError } from "@/lib/errors";
 import { conclusionWritersOf } from "./load";
 import type { Role } from "@/lib/auth/roles";
+import { interviewRecordWithFigures } from "../case-figures";
 
 type VehicleRow = {
   year: number;
@@ -104,7 +105,13 @@ export async function getCase({ shopId, caseId }: { shopId: number; caseId: numb
     refrigerant: c.Vehicle?.refrigerant ?? null,
     expansionDevice: c.Vehicle?.expansionDevice ?? null,
     interviewStep: (c.interviewStep as string | null) ?? null,
-    answers: c.answers ?? {},
+    // Each figure typed once is shown from where it lives (lib/server/case-figures/).
+    answers: await interviewRecordWithFigures({
+      shopId,
+      caseId,
+      vehicleId: (c.vehicleId as number | null) ?? null,
+      interviewRecord: c.answers ?? {},
+    }),
     findings: c.findings ?? null,
     engineVersion: (c.engineVersion as string | null) ?? null,
     conclusionCause: (c.conclusionCause as string | null) ?? null,

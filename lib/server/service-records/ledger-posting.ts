@@ -19,7 +19,11 @@ export async function postLedger(opts: {
   recordId: number;
   technicianId: string;
   refrigerant: RefrigerantId;
-  input: ServiceRecordInput | null;
+  /** the record's masses and cylinders as they now stand; null when the record is being removed */
+  input: Pick<
+    ServiceRecordInput,
+    "recoveryCylinderId" | "recoveredChargeG" | "chargeCylinderId" | "chargedG" | "recoveryEndedAt"
+  > | null;
   transaction: Transaction;
 }): Promise<number> {
   const { RefrigerantMovement } = getModels();

@@ -10,6 +10,7 @@ import type {
   ServiceRecordResponse,
 } from "@/lib/contracts/service-records";
 import { recordDto } from "./mapping";
+import { caseFigures } from "../case-figures";
 
 export async function getServiceCase({
   shopId,
@@ -32,6 +33,7 @@ export async function getServiceCase({
     status: string;
     technicianId: string;
     vehicleId: number | null;
+    answers: unknown;
     Vehicle: Record<string, unknown> | null;
   };
   const v = c.Vehicle as {
@@ -60,6 +62,13 @@ export async function getServiceCase({
     electricCompressor: Boolean(v?.electricCompressor),
     labelChargeG: v?.labelChargeG ?? null,
     oilType: v?.oilType ?? null,
+    figures: await caseFigures({
+      shopId,
+      caseId,
+      vehicleId: c.vehicleId ?? null,
+      interviewRecord: c.answers,
+      transaction,
+    }),
   };
 }
 
@@ -72,7 +81,7 @@ export async function getServiceRecord({
   caseId: number;
   transaction?: Transaction;
 }): Promise<ServiceRecordDto | null> {
-  const { ServiceRecord, ReadingSet, User } = getModels();
+  const { ServiceRecord, ReadingSet, User, Case, Vehicle } = getModels();
   const row = await ServiceRecord.findOne({
     where: { shopId, caseId },
     include: [{ model: User, as: "technician", attributes: ["name"] }],
@@ -86,7 +95,17 @@ export async function getServiceRecord({
   const final = r.finalReadingSetId
     ? await ReadingSet.findOne({ where: { id: r.finalReadingSetId, shopId, caseId }, raw: true, transaction })
     : null;
-  return recordDto(r, r.technician.name, final);
+  const dto = recordDto(r, r.technician.name, final);
+  // The label charge is the vehicle's (lib/server/case-figures/); a record keeps no copy of it.
+  const caseRow = await Case.findOne({
+    where: { id: caseId, shopId },
+    attributes: ["id"],
+    include: [{ model: Vehicle, attributes: ["labelChargeG"] }],
+    transaction,
+  });
+  const vehicle = caseRow?.get({ plain: true }) as
+    { Vehicle?: { labelChargeG: number | null } | null } | undefined;
+  return vehicle?.Vehicle ? { ...dto, labelChargeG: vehicle.Vehicle.labelChargeG ?? null } : dto;
 }
 
 /** The case as the service record sees it, and its record if one was started (GET /api/cases/[id]/service). */

@@ -13,6 +13,7 @@ import { checkNamedRows } from "./checks";
 import { postLedger } from "./ledger-posting";
 import { finalReadingColumns, recordColumns } from "./mapping";
 import { getServiceCase, getServiceRecord } from "./read";
+import { figuresBeforeRecordSave, saveRecordFigures } from "../case-figures";
 
 /** Links or updates the record's final reading set, when any final reading was entered. */
 async function saveFinalReading(opts: {
@@ -57,6 +58,8 @@ export async function saveServiceRecord({
   const shop = await getShop({ shopId });
   try {
     return await sequelize.transaction(async (transaction) => {
+      // The case row is locked first (as the interview's save does), with the figures as they stood.
+      const figures = await figuresBeforeRecordSave({ shopId, caseId, transaction });
       const serviceCase = await getServiceCase({ shopId, caseId, transaction });
       const existing = await ServiceRecord.findOne({ where: { shopId, caseId }, transaction });
       const refusal = serviceRecordRefusal("save", user, {
@@ -77,7 +80,8 @@ export async function saveServiceRecord({
       const refrigerant = existing?.refrigerant ?? serviceCase.refrigerant!;
       await checkNamedRows({ shopId, input, refrigerant, previous: existing, transaction });
 
-      const values = recordColumns(input);
+      // The label charge is kept on the vehicle (saveRecordFigures writes it there), never a copy here.
+      const values = { ...recordColumns(input), labelChargeG: null };
       let record = existing;
       if (!record) {
         record = await ServiceRecord.create(
@@ -106,6 +110,13 @@ export async function saveServiceRecord({
       const warnings = (await listCylinders({ shopId, ids: touched, transaction })).flatMap((c) =>
         c.problems.map((p) => `${c.label}: ${p}`),
       );
+      await saveRecordFigures({
+        user,
+        caseRow: figures.caseRow,
+        before: figures.before,
+        entered: { labelChargeG: input.labelChargeG ?? null },
+        transaction,
+      });
       const saved = await getServiceRecord({ shopId, caseId, transaction });
       if (!saved) throw new AppError("conflict:service_record", RECORD_CONFLICT.removed);
       await recordAudit({

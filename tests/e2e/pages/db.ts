@@ -22,6 +22,8 @@ export interface SavedCaseRow {
   } | null;
   engine_version: string | null;
   conclusion_cause: string | null;
+  /** the case's vehicle's label charge: that figure's one stored home */
+  vehicle_label_charge_g: number | null;
 }
 
 const parse = (v: unknown) => (typeof v === "string" ? JSON.parse(v) : v);
@@ -31,7 +33,9 @@ export async function readCase(caseId: number): Promise<SavedCaseRow> {
   const connection = await mysql.createConnection(E2E_DATABASE);
   try {
     const [rows] = await connection.query(
-      "SELECT status, interview_step, version, answers, findings, engine_version, conclusion_cause FROM service_case WHERE id = ?",
+      `SELECT c.status, c.interview_step, c.version, c.answers, c.findings, c.engine_version, c.conclusion_cause,
+              v.label_charge_g AS vehicle_label_charge_g
+         FROM service_case c LEFT JOIN vehicle v ON v.id = c.vehicle_id WHERE c.id = ?`,
       [caseId],
     );
     const row = (rows as Record<string, unknown>[])[0];
