@@ -67,7 +67,7 @@ describe("the ledger cannot go wrong", () => {
       expect(response.status).toBe(409);
       const { error } = await response.json();
       expect(error.message).toContain("below empty");
-      expect(error.message).toContain("It holds 4660 g and this takes out");
+      expect(error.message).toContain("It holds 4,660 g and this takes out");
       expect(error.fieldErrors.massG[0]).toBe(error.message);
     }
     expect(await netOf(shop.id, recovery.id)).toBe(4_660);
