@@ -61,3 +61,9 @@ export function useReaderUnits(): ReaderUnitsView {
     };
   }, [units, locale, altitudeM]);
 }
+
+/** A sentence with quantity markers, said in the reader's units; usable from server components. */
+export function SaidInReaderUnits({ text }: { text: string }) {
+  const { say } = useReaderUnits();
+  return <>{say(text)}</>;
+}
