@@ -76,6 +76,8 @@ export function StepFields({ step, draft, setDraft, setText, errorOf, summary, p
   const vacuumExamples =
     vacuumUnit === "inHg" || vacuumUnit === "micron" ? "29.5 inHg or 500 microns" : VACUUM_EXAMPLES;
   const vacHint = `As the gauge shows it: ${vacuumExamples}. A bare number is read as ${UNIT_LABELS[vacuumUnit]}${vacuumUnit === "inHg" ? " of vacuum below the atmosphere" : vacuumUnit === "micron" ? " of mercury" : " absolute"}.`;
+  const tempHint = `In ${UNIT_LABELS[u.temperature] ?? u.temperature}.`;
+  const gaugeHint = `In ${UNIT_LABELS[u.gauge] ?? u.gauge} gauge.`;
   const t = draft.text;
   const f = (field: TextField, label: string, hint?: string) => (
     <EntryInput
@@ -370,10 +372,10 @@ export function StepFields({ step, draft, setDraft, setText, errorOf, summary, p
             {PERFORMANCE_TEST_CONDITIONS}.
           </p>
           <div className="grid grid-cols-2 gap-3">
-            {f("finalAmbientC", "Ambient temperature")}
-            {f("finalVentC", "Centre vent temperature")}
-            {f("finalHighKpaGauge", "High side (gauge)")}
-            {f("finalLowKpaGauge", "Low side (gauge)")}
+            {f("finalAmbientC", "Ambient temperature", tempHint)}
+            {f("finalVentC", "Centre vent temperature", tempHint)}
+            {f("finalHighKpaGauge", "High side (gauge)", gaugeHint)}
+            {f("finalLowKpaGauge", "Low side (gauge)", gaugeHint)}
           </div>
           <div>
             <label htmlFor="record-notes" className="field-label">
