@@ -154,7 +154,7 @@ describe("the ledger cannot go wrong", () => {
       note: "Weighed on the bench scale",
     });
     expect(over.status).toBe(409);
-    expect((await over.json()).error.message).toContain("safe fill of 17600 g (80 % of 22000 g)");
+    expect((await over.json()).error.message).toContain("safe fill of 17,600 g (80 % of 22,000 g)");
     const fits = await post(sessionId, {
       cylinderId: recovery.id,
       type: "adjustment",
