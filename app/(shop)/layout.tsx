@@ -4,6 +4,8 @@ import { navigationFor } from "@/lib/auth/navigation";
 import { ROLE_LABELS } from "@/lib/auth/roles";
 import { getShop } from "@/lib/server/shops";
 import { ShopClockProvider } from "@/components/shell/shop-clock";
+import { ReaderUnitsProvider } from "@/components/shell/reader-units";
+import { getProfile } from "@/lib/server/profile";
 import { passwordMustChange } from "@/lib/server/passwords";
 import { ChangePasswordOnDemand } from "@/components/account/change-password-on-demand";
 import { BrandMark } from "@/components/shell/brand-mark";
@@ -12,9 +14,10 @@ import { SignOutButton } from "@/components/auth/sign-out-button";
 
 export default async function ShopLayout({ children }: { children: React.ReactNode }) {
   const user = await requireUser();
-  const [shop, mustChange] = await Promise.all([
+  const [shop, mustChange, profile] = await Promise.all([
     getShop({ shopId: user.shopId }),
     passwordMustChange({ userId: user.id }),
+    getProfile({ user }),
   ]);
   // Signed in with a temporary password an owner set: nothing else until they choose their own.
   const items = mustChange ? [] : navigationFor(user.role).map(({ href, label }) => ({ href, label }));
@@ -63,7 +66,9 @@ export default async function ShopLayout({ children }: { children: React.ReactNo
           </div>
         ) : (
           <ShopClockProvider clock={{ timeZone: shop.timeZone, locale: shop.locale }}>
-            {children}
+            <ReaderUnitsProvider profile={profile} altitudeM={shop.altitudeM}>
+              {children}
+            </ReaderUnitsProvider>
           </ShopClockProvider>
         )}
       </main>

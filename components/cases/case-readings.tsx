@@ -1,4 +1,7 @@
-import { formatPressure, formatTemperature } from "@/lib/units";
+"use client";
+
+import { useReaderUnits } from "@/components/shell/reader-units";
+import type { Quantity } from "@/lib/units/quantity";
 
 type Answers = {
   conditions?: { ambientC?: number; relativeHumidityPct?: number; engineRpm?: number };
@@ -14,13 +17,13 @@ type Answers = {
   chargeAudit?: { recovered?: boolean; recoveredChargeG?: number; oilRemovedMl?: number };
 };
 
-const pressure = (kpa?: number) =>
-  kpa === undefined ? "—" : `${formatPressure(kpa, "kPa")} · ${formatPressure(kpa, "psi")} gauge`;
-const temperature = (c?: number) =>
-  c === undefined ? "—" : `${formatTemperature(c, "C")} · ${formatTemperature(c, "F")}`;
-
-/** The readings as the technician entered them, in both unit systems. */
+/** The readings as the technician entered them, said in the reader's units. */
 export function CaseReadings({ answers }: { answers: Answers }) {
+  const { format } = useReaderUnits();
+  const said = (value: number | undefined, kind: Quantity["kind"]) =>
+    value === undefined ? "—" : format({ value, kind });
+  const pressure = (kpa?: number) => said(kpa, "pressure_gauge");
+  const temperature = (c?: number) => said(c, "temperature");
   const rows: [string, string][] = [
     ["Air temperature", temperature(answers.conditions?.ambientC)],
     [
@@ -45,7 +48,11 @@ export function CaseReadings({ answers }: { answers: Answers }) {
       "Recovered",
       answers.chargeAudit?.recoveredChargeG === undefined
         ? "—"
-        : `${answers.chargeAudit.recoveredChargeG} g, ${answers.chargeAudit.oilRemovedMl ?? "?"} mL oil`,
+        : `${said(answers.chargeAudit.recoveredChargeG, "mass")}, ${
+            answers.chargeAudit.oilRemovedMl === undefined
+              ? "oil not measured"
+              : `${said(answers.chargeAudit.oilRemovedMl, "volume")} oil`
+          }`,
     ],
   ];
   return (

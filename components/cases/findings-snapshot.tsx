@@ -1,6 +1,9 @@
+"use client";
+
 import { CAUSE_LABELS, type CauseId, type Suspect } from "@/lib/diagnosis";
 import { SuspectCard } from "@/components/interview/suspect-card";
 import { DetailsLine } from "@/components/ui/details-line";
+import { useReaderUnits } from "@/components/shell/reader-units";
 
 interface Snapshot {
   engineVersion: string;
@@ -20,6 +23,7 @@ export function FindingsSnapshot({
   conclusionCause: string | null;
   conclusionNotes: string | null;
 }) {
+  const { units } = useReaderUnits();
   const top = findings.suspects[0];
   const differs = conclusionCause && top && top.cause !== conclusionCause;
   return (
@@ -40,7 +44,7 @@ export function FindingsSnapshot({
       <ol className="space-y-2">
         {findings.suspects.slice(0, 3).map((s, i) => (
           <li key={s.cause}>
-            <SuspectCard suspect={s} rank={i + 1} />
+            <SuspectCard suspect={s} rank={i + 1} units={units} />
           </li>
         ))}
       </ol>

@@ -1,6 +1,7 @@
 import { clsx } from "clsx";
 import { Info, OctagonAlert, TriangleAlert, type LucideIcon } from "lucide-react";
 import { CAUTION_LEVEL_LABELS, type CautionLevel } from "@/lib/cautions/catalog";
+import { SaidInReaderUnits } from "@/components/shell/reader-units";
 
 export interface CautionItem {
   id: string;
@@ -47,7 +48,7 @@ function CautionCard({ caution, withSource }: { caution: CautionItem; withSource
       <LevelTag level={caution.level} />
       <p className="mt-1">
         {caution.title && <strong>{caution.title}. </strong>}
-        {caution.text}
+        <SaidInReaderUnits text={caution.text} />
       </p>
       {withSource && caution.source && <p className="mt-1 text-sm opacity-90">Source: {caution.source}</p>}
     </div>
@@ -59,7 +60,7 @@ function FoldedItem({ caution, withSource }: { caution: CautionItem; withSource:
     <>
       {caution.level !== "notice" && <LevelTag level={caution.level} />}{" "}
       {caution.title && <strong>{caution.title}. </strong>}
-      {caution.text}
+      <SaidInReaderUnits text={caution.text} />
       {withSource && caution.source && (
         <span className="block text-sm text-ink-soft">Source: {caution.source}</span>
       )}

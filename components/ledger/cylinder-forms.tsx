@@ -8,6 +8,8 @@ import { ledgerKeys } from "@/lib/queries/ledger";
 import { SERVICE_REFRIGERANT_OPTIONS } from "@/lib/refrigerants/catalog";
 import { readMassG } from "@/lib/service/entry";
 import { type MassUnit, formatMass } from "@/lib/units";
+import { sayInUnits } from "@/lib/units/quantity";
+import { useReaderUnits } from "@/components/shell/reader-units";
 import { EntryInput } from "@/components/service/entry-input";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 
@@ -84,6 +86,11 @@ export function AddCylinderForm({ massUnit }: { massUnit: MassUnit }) {
   const [form, setForm] = useState(EMPTY);
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [status, setStatus] = useState<string | null>(null);
+  const reader = useReaderUnits();
+  // The schema's limits are said in the ledger's mass unit, as every figure on this screen.
+  const say = (text: string | undefined) =>
+    text === undefined ? undefined : sayInUnits(text, { ...reader.units, mass: massUnit }, reader.at);
+  const imperial = massUnit === "lb" || massUnit === "oz";
   const create = useMutation({
     mutationFn: (body: CreateCylinderInput) => apiFetch("/api/cylinders", { method: "POST", body }),
     onSuccess: () => {
@@ -186,24 +193,24 @@ export function AddCylinderForm({ massUnit }: { massUnit: MassUnit }) {
         label="Tare (stamped on the collar)"
         value={form.tare}
         onChange={set("tare")}
-        error={errors.tareG}
-        hint="For example 7.2 kg or 15 lb 14 oz."
+        error={say(errors.tareG)}
+        hint={`For example ${imperial ? "15 lb 14 oz" : "7.2 kg"}.`}
       />
       <EntryInput
         label="Refrigerant capacity"
         value={form.capacity}
         onChange={set("capacity")}
-        error={errors.capacityG}
+        error={say(errors.capacityG)}
       />
       <EntryInput
         label="Refrigerant in it now"
         value={form.initial}
         onChange={set("initial")}
-        error={errors.initialNetG}
+        error={say(errors.initialNetG)}
       />
       {status && (
         <p role="status" className="font-bold">
-          {status}
+          {say(status)}
         </p>
       )}
       <button type="submit" className="btn-primary w-full" disabled={create.isPending}>

@@ -8,7 +8,8 @@ import { ApiError } from "@/lib/queries/api-fetch";
 import { saveServiceRecord, serviceRecordKeys } from "@/lib/queries/service-record";
 import { ledgerKeys } from "@/lib/queries/ledger";
 import { cautionsFor } from "@/lib/service/cautions";
-import { summariseServiceRecord } from "@/lib/service/record-summary";
+import { sayServiceRecordSummary, summariseServiceRecord } from "@/lib/service/record-summary";
+import { useReaderUnits } from "@/components/shell/reader-units";
 import type { ReplacedPartId } from "@/lib/service/oil";
 import { readVolumeMl } from "@/lib/service/entry";
 import { CautionsList } from "@/components/cautions/cautions-list";
@@ -45,33 +46,37 @@ export function ServiceRecordForm(props: ServiceRecordFormProps) {
 
   const read = useMemo(() => readDraft(draft, units), [draft, units]);
   const spec = props.specChoices.find((s) => s.id === draft.specEntryId) ?? null;
+  const { say } = useReaderUnits();
   const summary = useMemo(
     () =>
-      summariseServiceRecord(
-        {
-          ...read.values,
-          refrigerant,
-          specChargeG: spec?.labelChargeG ?? null,
-          specOilType: spec?.oilType ?? serviceCase.oilType,
-          specTotalOilMl: spec?.totalOilMl ?? null,
-          oilPulled: draft.oilPulled,
-          partsReplaced: Object.entries(draft.parts).map(([part, p]) => {
-            const measured = readVolumeMl(p?.measured ?? "", units.volume);
-            return {
-              part: part as ReplacedPartId,
-              count: p?.count ?? 1,
-              ...("value" in measured ? { measuredMl: measured.value } : {}),
-            };
-          }),
-          oilAddedType: draft.text.oilAddedType,
-        },
-        {
-          altitudeM: units.altitudeM,
-          allowancesMl: props.allowancesMl,
-          compressorDrive: serviceCase.electricCompressor ? "electric" : "belt",
-        },
+      sayServiceRecordSummary(
+        summariseServiceRecord(
+          {
+            ...read.values,
+            refrigerant,
+            specChargeG: spec?.labelChargeG ?? null,
+            specOilType: spec?.oilType ?? serviceCase.oilType,
+            specTotalOilMl: spec?.totalOilMl ?? null,
+            oilPulled: draft.oilPulled,
+            partsReplaced: Object.entries(draft.parts).map(([part, p]) => {
+              const measured = readVolumeMl(p?.measured ?? "", units.volume);
+              return {
+                part: part as ReplacedPartId,
+                count: p?.count ?? 1,
+                ...("value" in measured ? { measuredMl: measured.value } : {}),
+              };
+            }),
+            oilAddedType: draft.text.oilAddedType,
+          },
+          {
+            altitudeM: units.altitudeM,
+            allowancesMl: props.allowancesMl,
+            compressorDrive: serviceCase.electricCompressor ? "electric" : "belt",
+          },
+        ),
+        say,
       ),
-    [draft, read, spec, refrigerant, serviceCase, units, props.allowancesMl],
+    [draft, read, spec, refrigerant, serviceCase, units, props.allowancesMl, say],
   );
 
   const save = useMutation({
@@ -86,7 +91,7 @@ export function ServiceRecordForm(props: ServiceRecordFormProps) {
           : "";
       setMessage({
         tone: result.warnings.length ? "error" : "ok",
-        text: `${STEP_TITLES[step]} saved.${posted}${result.warnings.length ? ` ${result.warnings.join(" ")}` : ""}`,
+        text: `${STEP_TITLES[step]} saved.${posted}${result.warnings.length ? ` ${result.warnings.map(say).join(" ")}` : ""}`,
       });
       setStep(nextStep);
       void queryClient.invalidateQueries({ queryKey: serviceRecordKeys.forCase(caseId) });

@@ -68,9 +68,16 @@ function CylinderSelect({
 
 export function StepFields({ step, draft, setDraft, setText, errorOf, summary, props }: Props) {
   const u = props.units;
-  const massHint = `Type ${u.mass === "g" ? "grams" : u.mass} or add a unit: 650 g, 1.4 kg, 1 lb 7 oz.`;
-  const volHint = `Type ${u.volume === "mL" ? "mL" : "fl oz"} or add a unit: 45 mL, 1.5 fl oz.`;
-  const vacHint = `As the gauge shows it: ${VACUUM_EXAMPLES}. A bare number is read as ${UNIT_LABELS[u.vacuum ?? (u.gauge === "kPa" ? "kPa" : "inHg")]}${u.vacuum === "inHg" || (!u.vacuum && u.gauge !== "kPa") ? " of vacuum below the atmosphere" : u.vacuum === "micron" ? " of mercury" : " absolute"}.`;
+  // Examples in the reader's own system; any other unit typed after the number is read as well.
+  const imperialMass = u.mass === "oz" || u.mass === "lb";
+  const massHint = `Type ${u.mass === "g" ? "grams" : u.mass} or add a unit: ${imperialMass ? "23 oz, 1 lb 7 oz" : "650 g, 1.4 kg"}.`;
+  const volHint = `Type ${u.volume === "mL" ? "mL" : "fl oz"} or add a unit: ${u.volume === "mL" ? "45 mL" : "1.5 fl oz"}.`;
+  const vacuumUnit = u.vacuum ?? (u.gauge === "kPa" ? "kPa" : "inHg");
+  const vacuumExamples =
+    vacuumUnit === "inHg" || vacuumUnit === "micron" ? "29.5 inHg or 500 microns" : VACUUM_EXAMPLES;
+  const vacHint = `As the gauge shows it: ${vacuumExamples}. A bare number is read as ${UNIT_LABELS[vacuumUnit]}${vacuumUnit === "inHg" ? " of vacuum below the atmosphere" : vacuumUnit === "micron" ? " of mercury" : " absolute"}.`;
+  const tempHint = `In ${UNIT_LABELS[u.temperature] ?? u.temperature}.`;
+  const gaugeHint = `In ${UNIT_LABELS[u.gauge] ?? u.gauge} gauge.`;
   const t = draft.text;
   const f = (field: TextField, label: string, hint?: string) => (
     <EntryInput
@@ -365,10 +372,10 @@ export function StepFields({ step, draft, setDraft, setText, errorOf, summary, p
             {PERFORMANCE_TEST_CONDITIONS}.
           </p>
           <div className="grid grid-cols-2 gap-3">
-            {f("finalAmbientC", "Ambient temperature")}
-            {f("finalVentC", "Centre vent temperature")}
-            {f("finalHighKpaGauge", "High side (gauge)")}
-            {f("finalLowKpaGauge", "Low side (gauge)")}
+            {f("finalAmbientC", "Ambient temperature", tempHint)}
+            {f("finalVentC", "Centre vent temperature", tempHint)}
+            {f("finalHighKpaGauge", "High side (gauge)", gaugeHint)}
+            {f("finalLowKpaGauge", "Low side (gauge)", gaugeHint)}
           </div>
           <div>
             <label htmlFor="record-notes" className="field-label">

@@ -1,4 +1,5 @@
 import { PURITY_PASS_PCT } from "@/lib/service/identifier";
+import { quantityMarker } from "@/lib/units/quantity";
 
 /*
  * The one catalogue of safety and service cautions. The interview, the service record, the ledger and
@@ -67,7 +68,8 @@ const ENTRIES = {
   r744_pressure: {
     level: "danger",
     title: "R-744 runs at very high pressure",
-    text: "R-744 (CO₂) systems stand at about 6 MPa at 25 °C and run far higher. Use only gauges, hoses and equipment rated for R-744, and follow the vehicle maker's procedure for releasing the charge.",
+    // Said in each reader's units by the list that shows it: the numbers are quantity markers.
+    text: `R-744 (CO₂) systems stand at about ${quantityMarker({ kind: "pressure_abs", value: 6430, decimals: 0 })} at ${quantityMarker({ kind: "temperature", value: 25, decimals: 0 })} and run far higher. Use only gauges, hoses and equipment rated for R-744, and follow the vehicle maker's procedure for releasing the charge.`,
     source:
       "CO₂ saturation pressure 6.43 MPa at 25 °C (Span & Wagner 1996 equation of state); SAE J639 (R-744 systems); from memory for the rest",
   },

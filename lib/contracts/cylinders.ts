@@ -2,6 +2,10 @@ import { z } from "zod";
 import { singleLineText } from "./text";
 import { type RefrigerantId, SERVICE_REFRIGERANT_IDS } from "@/lib/refrigerants/catalog";
 import { RECOVERY_CYLINDER_FILL_LIMIT_PCT } from "@/lib/service/ledger";
+import { quantityMarker } from "@/lib/units/quantity";
+
+// Limits carry their masses as quantity markers: the form says them in the reader's unit.
+const massLimit = (g: number) => quantityMarker({ kind: "mass", value: g });
 
 export const CYLINDER_KINDS = ["recovery", "virgin", "recycled"] as const;
 export type CylinderKind = (typeof CYLINDER_KINDS)[number];
@@ -29,12 +33,12 @@ export const createCylinderSchema = z
     tareG: z
       .number({ message: "The tare is missing: it is stamped on the cylinder's collar." })
       .int("The tare is in whole grams.")
-      .min(500, "A tare under 500 g is not a refrigerant cylinder.")
-      .max(60_000, "A tare over 60 kg is not a refrigerant cylinder: check the unit."),
+      .min(500, `A tare under ${massLimit(500)} is not a refrigerant cylinder.`)
+      .max(60_000, `A tare over ${massLimit(60_000)} is not a refrigerant cylinder: check the unit.`),
     capacityG: z
       .number({ message: "The refrigerant capacity is missing." })
       .int("The capacity is in whole grams.")
-      .min(500, "A capacity under 500 g is not a refrigerant cylinder: check the unit.")
+      .min(500, `A capacity under ${massLimit(500)} is not a refrigerant cylinder: check the unit.`)
       .max(120_000, "That is more than any cylinder holds: check the figure and its unit."),
     initialNetG: z
       .number({ message: "Say what it holds now (0 when empty)." })

@@ -5,7 +5,8 @@ import { getModels } from "@/models";
 import { AppError } from "@/lib/errors";
 import type { RefrigerantId } from "@/lib/refrigerants";
 import type { CylinderMovement, MovementType } from "@/lib/service/ledger";
-import { checkLedgerChange, ledgerRefusalMessage } from "@/lib/service/ledger-guard";
+import { checkLedgerChange, ledgerMassUnit, ledgerRefusalMessage } from "@/lib/service/ledger-guard";
+import { readerUnitsOf } from "@/lib/units";
 import type {
   ManualMovementInput,
   MovementDto,
@@ -13,6 +14,7 @@ import type {
   ReversalResponse,
 } from "@/lib/contracts/ledger";
 import { recordAudit } from "./audit";
+import { unitChoiceOfRow } from "./profile";
 import {
   type CylinderRow,
   cylinderMovementRows,
@@ -50,13 +52,16 @@ export async function postMovements({
   shopId,
   lines,
   transaction,
+  readerId,
 }: {
   shopId: number;
   lines: NewLedgerLine[];
   transaction: Transaction;
+  /** who reads a refusal, in their own units; the first line's technician when not given */
+  readerId?: string;
 }): Promise<number[]> {
   if (lines.length === 0) return [];
-  const { Cylinder, RefrigerantMovement, Shop } = getModels();
+  const { Cylinder, RefrigerantMovement, Shop, User } = getModels();
   const cylinderIds = [...new Set(lines.map((l) => l.cylinderId))].sort((a, b) => a - b);
   const cylinders = new Map<number, CylinderRow>();
   for (const id of cylinderIds) {
@@ -98,10 +103,19 @@ export async function postMovements({
     const own = (list: CylinderMovement[]) => list.filter((m) => m.cylinderId === cylinder.id);
     const refusal = checkLedgerChange(cylinder, own(existing), own(planned));
     if (!refusal) continue;
-    const shop = await Shop.findByPk(shopId, { attributes: ["units", "timeZone"], raw: true, transaction });
+    const [shop, reader] = await Promise.all([
+      Shop.findByPk(shopId, { attributes: ["units", "timeZone"], raw: true, transaction }),
+      User.findOne({
+        where: { id: readerId ?? lines[0]!.technicianId, shopId },
+        attributes: ["unitChoice"],
+        raw: true,
+        transaction,
+      }),
+    ]);
+    const units = readerUnitsOf(unitChoiceOfRow(reader?.unitChoice), shop?.units ?? "metric");
     const message = ledgerRefusalMessage(refusal, {
       cylinderLabel: cylinders.get(id)!.label,
-      massUnit: shop?.units === "imperial" ? "lb" : "g",
+      massUnit: ledgerMassUnit(units.mass),
       timeZone: shop?.timeZone ?? "UTC",
     });
     const fields = lines.filter((l) => l.cylinderId === id && !l.reversesId).map((l) => l.field ?? "massG");

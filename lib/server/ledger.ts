@@ -3,6 +3,8 @@ import { Op, type Transaction } from "sequelize";
 import { getModels, type CylinderKind } from "@/models";
 import { AppError } from "@/lib/errors";
 import { recordAudit } from "./audit";
+import type { User } from "lucia";
+import { getProfile } from "./profile";
 import type { RefrigerantId } from "@/lib/refrigerants";
 import {
   type Cylinder as LedgerCylinder,
@@ -10,7 +12,7 @@ import {
   type MovementType,
   applyMovements,
 } from "@/lib/service/ledger";
-import { safeFillG } from "@/lib/service/ledger-guard";
+import { ledgerMassUnit, safeFillG } from "@/lib/service/ledger-guard";
 import { monthlyReport, toCsv } from "@/lib/service/ledger-report";
 import {
   CYLINDER_PAGE_DEFAULT,
@@ -407,8 +409,11 @@ export async function getMovement({
 /** Recovered, recycled, charged and sent out per month × technician × refrigerant, in the shop's time zone. */
 export async function ledgerReport({
   shopId,
+  reader,
 }: {
   shopId: number;
+  /** whose units the CSV is written in; grams when nobody is named */
+  reader?: Pick<User, "id" | "shopId">;
 }): Promise<LedgerReportResponse & { csv: string }> {
   const { Shop, User } = getModels();
   const shop = await Shop.findOne({ where: { id: shopId }, attributes: ["timeZone"], raw: true });
@@ -418,7 +423,10 @@ export async function ledgerReport({
   const report = monthlyReport((await movementRows(shopId)).map(toLedgerMovement), { timeZone });
   return {
     rows: report.map((r) => ({ ...r, technician: names[r.technicianId] ?? r.technicianId })),
-    csv: toCsv(report, { technicianNames: names }),
+    csv: toCsv(report, {
+      technicianNames: names,
+      massUnit: reader ? ledgerMassUnit((await getProfile({ user: reader })).units.mass) : "g",
+    }),
     timeZone,
   };
 }

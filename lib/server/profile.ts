@@ -7,7 +7,8 @@ import { unitChoiceOf, type ProfileInput, type ProfileResponse } from "@/lib/con
 import { getShop } from "./shops";
 import { recordAudit } from "./audit";
 
-function cleanChoice(raw: unknown): UnitChoice {
+/** A stored unit choice, or none when the column holds anything else. */
+export function unitChoiceOfRow(raw: unknown): UnitChoice {
   return typeof raw === "object" && raw !== null && !Array.isArray(raw) ? (raw as UnitChoice) : {};
 }
 
@@ -22,7 +23,7 @@ export async function getProfile({ user }: { user: Pick<User, "id" | "shopId"> }
     getShop({ shopId: user.shopId }),
   ]);
   if (!row) throw new AppError("not_found:user");
-  const choice = cleanChoice(row.unitChoice);
+  const choice = unitChoiceOfRow(row.unitChoice);
   return {
     choice,
     locale: row.locale ?? null,

@@ -4,6 +4,8 @@ import { Op } from "sequelize";
 import { getModels } from "@/models";
 import { AppError } from "@/lib/errors";
 import { recordAudit } from "./audit";
+import type { User } from "lucia";
+import { getProfile } from "./profile";
 import { type MassUnit, type VolumeUnit } from "@/lib/units";
 import {
   type SpecRow,
@@ -280,11 +282,17 @@ export async function commitSpecImport({
 export async function exportSpecsCsv({
   shopId,
   units,
+  reader,
 }: {
   shopId: number;
   units?: ImportUnits;
+  /** whose units fill in any unit the request leaves out; grams and millilitres when nobody is named */
+  reader?: Pick<User, "id" | "shopId">;
 }): Promise<string> {
-  return specRowsToCsv(await allRows(shopId), { units });
+  const own = reader ? (await getProfile({ user: reader })).units : null;
+  return specRowsToCsv(await allRows(shopId), {
+    units: { charge: units?.charge ?? own?.mass, oil: units?.oil ?? own?.volume },
+  });
 }
 
 export interface SpecVehicle {

@@ -1,3 +1,5 @@
+import { sayInUnits } from "@/lib/units/quantity";
+import { unitsOfSystem } from "@/lib/units/reader";
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import {
@@ -5,10 +7,11 @@ import {
   chargeDeviationVerdict,
   chargeTolerance,
   chargeWithinTolerance,
-  indefiniteArticle,
   recoveredAgainstLabel,
   targetCharge,
 } from "./charge";
+
+const imperial = unitsOfSystem("imperial");
 
 describe("recoveredAgainstLabel", () => {
   it("reports a recovered mass a quarter over the label as a 25 % overcharge (arithmetic; SAE J2788 95 % recovery band)", () => {
@@ -19,14 +22,21 @@ describe("recoveredAgainstLabel", () => {
     expect(r.deltaG).toBe(155);
     expect(r.deltaPct).toBeCloseTo(25, 10);
     expect(r.grade).toBe("well_over");
-    expect(r.sentence).toBe(
-      "Recovered 775 g against a 620 g label: 155 g (25 %) over — more than the machine's accuracy and recovery can explain: an overcharge.",
+    expect(sayInUnits(r.sentence)).toBe(
+      "Recovered 775 g against a label charge of 620 g: 155 g (25 %) over — more than the machine's accuracy and recovery can explain: an overcharge.",
+    );
+    // The same sentence to an imperial reader: 1 oz = 28.349523125 g (NIST SP 811), so 775 g = 27.3 oz.
+    expect(sayInUnits(r.sentence, imperial)).toBe(
+      "Recovered 27.3 oz against a label charge of 21.9 oz: 5.5 oz (25 %) over — more than the machine's accuracy and recovery can explain: an overcharge.",
     );
   });
 
-  it("writes the thousands separator and the article for 800 g", () => {
+  it("carries its masses as quantities, said with the thousands separator (common practice)", () => {
     const r = recoveredAgainstLabel({ labelChargeG: 800, recoveredChargeG: 1000 });
-    expect(r.sentence).toMatch(/^Recovered 1,000 g against an 800 g label: 200 g \(25 %\) over — /);
+    expect(r.sentence).not.toMatch(/\d g\b/);
+    expect(sayInUnits(r.sentence)).toMatch(
+      /^Recovered 1,000 g against a label charge of 800 g: 200 g \(25 %\) over — /,
+    );
   });
 
   it("treats a shortfall up to 5 % as what recovery leaves behind (SAE J2788: ≥95 % recovered)", () => {
@@ -37,7 +47,7 @@ describe("recoveredAgainstLabel", () => {
     const past5 = recoveredAgainstLabel({ labelChargeG: 800, recoveredChargeG: 759 });
     expect(past5.verdict).toBe("under");
     expect(past5.grade).toBe("possible_slow_leak");
-    expect(past5.sentence).toContain("41 g (5.1 %) under");
+    expect(sayInUnits(past5.sentence)).toContain("41 g (5.1 %) under");
     expect(past5.sentence).toContain("possibly a slow leak");
   });
 
@@ -162,8 +172,12 @@ describe("chargeWithinTolerance", () => {
     const r = chargeWithinTolerance({ targetG: 680, chargedG: 670, refrigerant: "R-134a" });
     expect(r.within).toBe(true);
     expect(r.deltaG).toBe(-10);
-    expect(r.sentence).toBe(
-      "Charged 670 g against a 680 g target: 10 g under, inside the ±15 g a recharge machine must hold.",
+    expect(sayInUnits(r.sentence)).toBe(
+      "Charged 670 g against a target of 680 g: 10 g under, inside the ±15 g a recharge machine must hold.",
+    );
+    // 1 oz = 28.349523125 g (NIST SP 811): 670 g = 23.6 oz, 15 g = 0.5 oz.
+    expect(sayInUnits(r.sentence, imperial)).toBe(
+      "Charged 23.6 oz against a target of 24.0 oz: 0.4 oz under, inside the ±0.5 oz a recharge machine must hold.",
     );
     expect(chargeWithinTolerance({ targetG: 680, chargedG: 690, refrigerant: "R-134a" }).within).toBe(true);
   });
@@ -208,19 +222,5 @@ describe("targetCharge", () => {
 
   it("returns null when nothing is known", () => {
     expect(targetCharge({})).toBeNull();
-  });
-});
-
-describe("indefiniteArticle", () => {
-  it.each([
-    ["800 g", "an"],
-    ["8,000 g", "an"],
-    ["18 g", "an"],
-    ["11,500 g", "an"],
-    ["1,000 g", "a"],
-    ["180 g", "a"],
-    ["620 g", "a"],
-  ])("%s takes '%s'", (formatted, article) => {
-    expect(indefiniteArticle(formatted)).toBe(article);
   });
 });

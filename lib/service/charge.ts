@@ -1,5 +1,5 @@
 import type { RefrigerantId } from "@/lib/refrigerants";
-import { formatGrams, formatPercent } from "./format";
+import { formatPercent, sayGrams } from "./format";
 import { SERVICE_SOURCES } from "./sources";
 
 export type ChargeVerdict = "over" | "under" | "within";
@@ -114,12 +114,6 @@ export interface RecoveredAgainstLabel {
   sources: string[];
 }
 
-/** "an 800 g", "an 18 g", "a 1,000 g" */
-export function indefiniteArticle(formatted: string): "a" | "an" {
-  const leadingGroup = formatted.split(/[ ,]/)[0] ?? "";
-  return leadingGroup.startsWith("8") || leadingGroup === "11" || leadingGroup === "18" ? "an" : "a";
-}
-
 function assertMass(name: string, valueG: number, allowZero: boolean): void {
   if (!Number.isFinite(valueG) || valueG < 0 || (!allowZero && valueG === 0)) {
     throw new RangeError(
@@ -142,9 +136,8 @@ export function recoveredAgainstLabel(input: {
   const verdict: ChargeVerdict =
     grade === "over" || grade === "well_over" ? "over" : grade === "within" ? "within" : "under";
 
-  const label = formatGrams(input.labelChargeG);
-  const head = `Recovered ${formatGrams(input.recoveredChargeG)} against ${indefiniteArticle(label)} ${label} label`;
-  const size = `${formatGrams(deltaG)} (${formatPercent(deltaPct)})`;
+  const head = `Recovered ${sayGrams(input.recoveredChargeG)} against a label charge of ${sayGrams(input.labelChargeG)}`;
+  const size = `${sayGrams(deltaG)} (${formatPercent(deltaPct)})`;
   let sentence: string;
   if (verdict === "over") {
     sentence = `${head}: ${size} over — more than the machine's accuracy and recovery can explain: an overcharge.`;
@@ -198,11 +191,10 @@ export function chargeWithinTolerance(input: {
     throw new RangeError(`toleranceG must be ≥ 0, got ${toleranceG}`);
   const deltaG = input.chargedG - input.targetG;
   const within = Math.abs(deltaG) <= toleranceG;
-  const target = formatGrams(input.targetG);
-  const off = deltaG === 0 ? "on target" : `${formatGrams(deltaG)} ${deltaG > 0 ? "over" : "under"}`;
-  const sentence = `Charged ${formatGrams(input.chargedG)} against ${indefiniteArticle(target)} ${target} target: ${off}, ${
+  const off = deltaG === 0 ? "on target" : `${sayGrams(deltaG)} ${deltaG > 0 ? "over" : "under"}`;
+  const sentence = `Charged ${sayGrams(input.chargedG)} against a target of ${sayGrams(input.targetG)}: ${off}, ${
     within ? "inside" : "outside"
-  } the ±${formatGrams(toleranceG)} a recharge machine must hold.${within ? "" : " Recover and recharge by weight."}`;
+  } the ±${sayGrams(toleranceG)} a recharge machine must hold.${within ? "" : " Recover and recharge by weight."}`;
   return {
     within,
     deltaG,
@@ -239,7 +231,7 @@ export function targetCharge(input: {
   }
   if (labelChargeG != null && specChargeG != null && Math.abs(labelChargeG - specChargeG) > toleranceG) {
     warnings.push(
-      `The label says ${formatGrams(labelChargeG)} but the spec table says ${formatGrams(specChargeG)}: check the variant (rear A/C?) and the label before charging.`,
+      `The label says ${sayGrams(labelChargeG)} but the spec table says ${sayGrams(specChargeG)}: check the variant (rear A/C?) and the label before charging.`,
     );
   }
   if (revisedChargeG != null) {

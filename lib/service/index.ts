@@ -80,6 +80,7 @@ export {
 } from "./ledger-corrections";
 export {
   MONTHLY_REPORT_CSV_COLUMNS,
+  monthlyReportCsvColumns,
   type MonthlyReportRow,
   monthInTimeZone,
   monthlyReport,

@@ -40,7 +40,7 @@ describe("checkLedgerChange", () => {
     const refusal = checkLedgerChange(recovery, [], [line(recovery, { type: "sent_out", massG: 5_000 })]);
     expect(refusal).toMatchObject({ reason: "below_empty", now: true, beforeG: 4_660, afterG: -340 });
     expect(ledgerRefusalMessage(refusal!, text)).toBe(
-      "Refused: REC-1 would go below empty. It holds 4660 g and this takes out 5000 g. " +
+      "Refused: REC-1 would go below empty. It holds 4,660 g and this takes out 5,000 g. " +
         "Weigh the cylinder; if the scale disagrees with the ledger, post a weighed correction first.",
     );
   });
@@ -86,7 +86,7 @@ describe("checkLedgerChange", () => {
     expect(refusal).toMatchObject({ reason: "below_empty", now: false, beforeG: 660, afterG: -340 });
     // 23:30 UTC on 5 Nov is already 6 Nov in Auckland (IANA time zone rules).
     expect(ledgerRefusalMessage(refusal!, { ...text, timeZone: "Pacific/Auckland" })).toMatch(
-      /below empty on 6 Nov 2026\. It held 660 g and this takes out 1000 g\./,
+      /below empty on 6 Nov 2026\. It held 660 g and this takes out 1,000 g\./,
     );
     const today = line(recovery, { type: "charged_from", massG: 1_000, at: "2026-11-25T10:00:00Z" });
     expect(checkLedgerChange(recovery, existing, [today])).toBeNull();
@@ -196,7 +196,7 @@ describe("checkLedgerChange", () => {
 describe("fillSentence", () => {
   it("words the fill in the reader's unit (NIST SP 811: 1 lb = 453.59237 g)", () => {
     expect(fillSentence({ fillPct: 50, limitPct: 80, roomG: 6_000 }, "g")).toBe(
-      "50 % full; 6000 g of room before the 80 % limit.",
+      "50 % full; 6,000 g of room before the 80 % limit.",
     );
     expect(fillSentence({ fillPct: 81, limitPct: 80, roomG: -227 }, "lb")).toBe(
       "81 % full: 0.50 lb past the 80 % limit. Stop filling this cylinder and change to an empty one.",

@@ -1,4 +1,5 @@
-import { type MassUnit, formatMass } from "@/lib/units";
+import type { MassUnit } from "@/lib/units";
+import { formatQuantity, SI_READER_UNITS } from "@/lib/units/quantity";
 import {
   type Cylinder,
   type CylinderMovement,
@@ -116,12 +117,22 @@ function dayIn(atIso: string, timeZone: string): string {
   return f.format(new Date(atIso));
 }
 
+/** Cylinders are weighed in pounds by a reader of ounces (common practice); metric readers keep their unit. */
+export function ledgerMassUnit(readerMass: MassUnit): MassUnit {
+  return readerMass === "oz" ? "lb" : readerMass;
+}
+
+/** A mass in the reader's unit, with thousands separators: "4,660 g", "10.27 lb". */
+function massIn(massG: number, unit: MassUnit): string {
+  return formatQuantity({ kind: "mass", value: massG }, { ...SI_READER_UNITS, mass: unit });
+}
+
 /** The refusal in plain words, every mass in the reader's unit and the date on the shop's calendar. */
 export function ledgerRefusalMessage(
   refusal: LedgerRefusal,
   opts: { cylinderLabel: string; massUnit: MassUnit; timeZone: string },
 ): string {
-  const m = (g: number) => formatMass(g, opts.massUnit);
+  const m = (g: number) => massIn(g, opts.massUnit);
   const changeG = Math.abs(refusal.afterG - refusal.beforeG);
   const when = refusal.now ? "" : ` on ${dayIn(refusal.atIso, opts.timeZone)}`;
   const held = refusal.now ? "It holds" : "It held";
@@ -153,6 +164,6 @@ export function fillSentence(
 ): string {
   const pct = `${formatPercent(fill.fillPct)} full`;
   return fill.roomG >= 0
-    ? `${pct}; ${formatMass(fill.roomG, massUnit)} of room before the ${fill.limitPct} % limit.`
-    : `${pct}: ${formatMass(-fill.roomG, massUnit)} past the ${fill.limitPct} % limit. Stop filling this cylinder and change to an empty one.`;
+    ? `${pct}; ${massIn(fill.roomG, massUnit)} of room before the ${fill.limitPct} % limit.`
+    : `${pct}: ${massIn(-fill.roomG, massUnit)} past the ${fill.limitPct} % limit. Stop filling this cylinder and change to an empty one.`;
 }

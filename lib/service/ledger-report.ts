@@ -1,5 +1,6 @@
 import Papa from "papaparse";
 import type { RefrigerantId } from "@/lib/refrigerants";
+import { type MassUnit, massFromG } from "@/lib/units";
 import type { CylinderMovement, MovementType } from "./ledger";
 
 export interface MonthlyReportRow {
@@ -88,36 +89,56 @@ export function monthlyReport(
   );
 }
 
-export const MONTHLY_REPORT_CSV_COLUMNS = [
-  "month",
-  "technician",
-  "refrigerant",
-  "recovered_g",
-  "recycled_g",
-  "charged_g",
-  "sent_out_g",
-  "adjustment_g",
-  "corrections",
-] as const;
+/** The CSV's columns; each mass column names its unit ("recovered_lb"), as the reader chose it. */
+export function monthlyReportCsvColumns(massUnit: MassUnit = "g"): string[] {
+  const mass = (name: string) => `${name}_${massUnit}`;
+  return [
+    "month",
+    "technician",
+    "refrigerant",
+    mass("recovered"),
+    mass("recycled"),
+    mass("charged"),
+    mass("sent_out"),
+    mass("adjustment"),
+    "corrections",
+  ];
+}
 
-/** CSV for the shop's records; names starting with = + - @ are defused so a spreadsheet will not run them. */
+/** The columns of a report in grams, the ledger's own unit. */
+export const MONTHLY_REPORT_CSV_COLUMNS = monthlyReportCsvColumns("g");
+
+// As the ledger's scale reads: whole grams, kilograms to the gram, ounces to a tenth, pounds to a hundredth.
+const CSV_MASS_DECIMALS: Readonly<Record<MassUnit, number>> = { g: 0, kg: 3, oz: 1, lb: 2 };
+
+function massCell(massG: number, unit: MassUnit): number {
+  const f = 10 ** CSV_MASS_DECIMALS[unit];
+  const value = Math.round(massFromG(massG, unit) * f) / f;
+  return Object.is(value, -0) ? 0 : value;
+}
+
+/**
+ * CSV for the shop's records, every mass in the reader's unit with the unit in its column's name;
+ * names starting with = + - @ are defused so a spreadsheet will not run them.
+ */
 export function toCsv(
   rows: readonly MonthlyReportRow[],
-  opts: { technicianNames?: Readonly<Record<string, string>> } = {},
+  opts: { technicianNames?: Readonly<Record<string, string>>; massUnit?: MassUnit } = {},
 ): string {
+  const unit = opts.massUnit ?? "g";
   const data = rows.map((r) => [
     r.month,
     opts.technicianNames?.[r.technicianId] ?? r.technicianId,
     r.refrigerant,
-    r.recoveredG,
-    r.recycledG,
-    r.chargedG,
-    r.sentOutG,
-    r.adjustmentG,
+    massCell(r.recoveredG, unit),
+    massCell(r.recycledG, unit),
+    massCell(r.chargedG, unit),
+    massCell(r.sentOutG, unit),
+    massCell(r.adjustmentG, unit),
     r.corrections,
   ]);
   return Papa.unparse(
-    { fields: [...MONTHLY_REPORT_CSV_COLUMNS], data },
+    { fields: monthlyReportCsvColumns(unit), data },
     { escapeFormulae: true, newline: "\r\n" },
   );
 }

@@ -341,6 +341,21 @@ describe("toCsv", () => {
     expect(back[2]).toEqual(["2026-10", "Lena Brandt", "R-134a", "0", "0", "650", "0", "0", "0"]);
   });
 
+  it("writes every mass in the reader's unit with the unit in each column's name (NIST SP 811: 1 lb = 453.59237 g, 1 oz = 28.349523125 g)", () => {
+    const lines = toCsv(rows, { massUnit: "lb" }).split("\r\n");
+    expect(lines[0]).toBe(
+      "month,technician,refrigerant,recovered_lb,recycled_lb,charged_lb,sent_out_lb,adjustment_lb,corrections",
+    );
+    // 700 g = 1.543 lb, 650 g = 1.433 lb, to the hundredth a cylinder scale reads.
+    expect(lines[1]).toBe("2026-10,t1,R-134a,1.54,0,0,0,0,0");
+    expect(lines[2]).toBe("2026-10,t2,R-134a,0,0,1.43,0,0,0");
+    const ounces = toCsv(rows, { massUnit: "oz" }).split("\r\n");
+    expect(ounces[0]).toContain("recovered_oz");
+    // 700 g = 24.69 oz.
+    expect(ounces[1]).toBe("2026-10,t1,R-134a,24.7,0,0,0,0,0");
+    expect(toCsv(rows).split("\r\n")[0]).not.toMatch(/_lb|_oz/);
+  });
+
   it("defuses a name a spreadsheet would run as a formula (OWASP CSV injection)", () => {
     const csv = toCsv(rows, { technicianNames: { t1: "=HYPERLINK(1)" } });
     expect(csv).toContain("'=HYPERLINK(1)");

@@ -1,5 +1,5 @@
 import type { RefrigerantId } from "@/lib/refrigerants";
-import { formatGrams, formatPercent } from "./format";
+import { formatPercent, sayGrams } from "./format";
 import { SERVICE_SOURCES } from "./sources";
 
 /**
@@ -119,8 +119,8 @@ export function fillLevelCheck(cylinder: Cylinder, netG: number): FillLevel {
   const verdict = roomG >= 0 ? "ok" : "over_limit";
   const message =
     verdict === "ok"
-      ? `${formatPercent(fillPct)} full; ${formatGrams(roomG)} of room before the ${limitPct} % limit.`
-      : `${formatPercent(fillPct)} full: ${formatGrams(-roomG)} past the ${limitPct} % limit. Stop filling this cylinder and change to an empty one.`;
+      ? `${formatPercent(fillPct)} full; ${sayGrams(roomG)} of room before the ${limitPct} % limit.`
+      : `${formatPercent(fillPct)} full: ${sayGrams(-roomG)} past the ${limitPct} % limit. Stop filling this cylinder and change to an empty one.`;
   return { fillPct, limitPct, roomG, verdict, message, source: SERVICE_SOURCES.recoveryCylinderFill };
 }
 

@@ -1,3 +1,5 @@
+import { sayInUnits } from "@/lib/units/quantity";
+import { unitsOfSystem } from "@/lib/units/reader";
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import {
@@ -123,8 +125,12 @@ describe("estimateOilPulledMl", () => {
     expect(r.oilMassG).toBeCloseTo(36, 10);
     expect(r.oilMl).toBeCloseTo(36 / 0.99, 10);
     expect(r.sumpComparison).toBe("less_than_sump");
-    expect(r.sentence).toBe(
+    expect(sayInUnits(r.sentence)).toBe(
       "About 36 mL of oil left with 900 g of liquid — less than a compressor sump holds (60–90 mL).",
+    );
+    // 1 US fl oz = 29.5735295625 mL, 1 oz = 28.349523125 g (NIST SP 811).
+    expect(sayInUnits(r.sentence, unitsOfSystem("imperial"))).toBe(
+      "About 1.2 fl oz of oil left with 31.7 oz of liquid — less than a compressor sump holds (2.0–3.0 fl oz).",
     );
     expect(r.sources.join(" ")).toContain("common practice");
   });

@@ -1,5 +1,6 @@
+import { quantityRangeMarker } from "@/lib/units/quantity";
 import { z } from "zod";
-import { formatGrams, formatMillilitres } from "./format";
+import { sayGrams, sayMillilitres } from "./format";
 import { SERVICE_SOURCES } from "./sources";
 
 export const REPLACED_PART_IDS = [
@@ -101,7 +102,7 @@ export function oilToAddBack(input: {
     assertVolume("estimatedPulledMl", input.estimatedPulledMl);
     if (input.drainedDuringRecoveryMl < input.estimatedPulledMl * FAR_LESS_THAN_ESTIMATE_FRACTION) {
       warnings.push(
-        `Only ${formatMillilitres(input.drainedDuringRecoveryMl)} drained into the recovery machine's bottle, far less than the ${formatMillilitres(
+        `Only ${sayMillilitres(input.drainedDuringRecoveryMl)} drained into the recovery machine's bottle, far less than the ${sayMillilitres(
           input.estimatedPulledMl,
         )} the liquid would have carried out: check the machine's oil separator and drain it, then add back what you measure. The record asks for the measured amount.`,
       );
@@ -138,7 +139,7 @@ export function oilToAddBack(input: {
   const totalMl = lines.reduce((sum, line) => sum + (line.volumeMl ?? 0), 0);
   if (input.totalSystemOilMl !== undefined && totalMl > input.totalSystemOilMl) {
     warnings.push(
-      `${formatMillilitres(totalMl)} is more than the system's total oil (${formatMillilitres(input.totalSystemOilMl)}): recheck before adding; too much oil cuts cooling.`,
+      `${sayMillilitres(totalMl)} is more than the system's total oil (${sayMillilitres(input.totalSystemOilMl)}): recheck before adding; too much oil cuts cooling.`,
     );
   }
   return { totalMl, lines, complete, warnings };
@@ -181,14 +182,14 @@ export function estimateOilPulledMl(input: {
   const oilMl = oilMassG / densityGPerMl;
   const sumpComparison: SumpComparison =
     oilMl < sump.minMl ? "less_than_sump" : oilMl <= sump.maxMl ? "about_a_sump" : "more_than_sump";
-  const range = `${sump.minMl}–${formatMillilitres(sump.maxMl)}`;
+  const range = quantityRangeMarker("volume", sump.minMl, sump.maxMl);
   const compared =
     sumpComparison === "less_than_sump"
       ? `less than a compressor sump holds (${range})`
       : sumpComparison === "about_a_sump"
         ? `about what a whole compressor sump holds (${range}): add it back before running the compressor`
         : `more than a compressor sump holds (${range}): check the compressor for oil starvation and measure what drained`;
-  const sentence = `About ${formatMillilitres(oilMl)} of oil left with ${formatGrams(liquidRecoveredG)} of liquid — ${compared}.`;
+  const sentence = `About ${sayMillilitres(oilMl)} of oil left with ${sayGrams(liquidRecoveredG)} of liquid — ${compared}.`;
   return {
     oilMassG,
     oilMl,

@@ -1,5 +1,7 @@
 import { describe, expect, it } from "vitest";
-import { summariseServiceRecord } from "./record-summary";
+import { sayInUnits } from "@/lib/units/quantity";
+import { unitsOfSystem } from "@/lib/units/reader";
+import { sayServiceRecordSummary, summariseServiceRecord } from "./record-summary";
 
 // 1 inHg = 3.386389 kPa (NIST SP 811, App. B).
 const KPA_PER_INHG = 3.386389;
@@ -110,5 +112,48 @@ describe("summariseServiceRecord", () => {
       null,
     ]);
     expect(s.problems).toEqual([]);
+  });
+});
+
+describe("sayServiceRecordSummary", () => {
+  it("says every line of the record in an imperial reader's units, with no metric unit left (NIST SP 811 factors)", () => {
+    const imperial = unitsOfSystem("imperial");
+    const at = { altitudeM: 0 };
+    const s = summariseServiceRecord(
+      {
+        refrigerant: "R-134a",
+        labelChargeG: 800,
+        specChargeG: 1000,
+        recoveredChargeG: 1000,
+        oilPulled: true,
+        oilRemovedMl: 10,
+        oilAddedMl: 60,
+        deepestKpaAbs: 10,
+        holdStartKpaAbs: 2,
+        holdEndKpaAbs: 12,
+        holdMinutes: 3,
+        chargedG: 760,
+      },
+      { altitudeM: 0 },
+    );
+    const said = sayServiceRecordSummary(s, (text) => sayInUnits(text, imperial, at));
+    const lines = [
+      said.recovered?.sentence,
+      said.pulledOil?.sentence,
+      said.oilAddedSentence,
+      said.charge?.sentence,
+      said.hold?.message,
+      ...(said.evacuation?.messages ?? []),
+      ...(said.hold?.warnings ?? []),
+      ...(said.addBack?.warnings ?? []),
+      ...(said.target?.warnings ?? []),
+    ];
+    expect(lines.every((l) => typeof l === "string" && l.length > 0)).toBe(true);
+    const text = lines.join(" ");
+    expect(text).not.toMatch(/\{\{|kPa|°C|\d g\b|mL/);
+    // 1,000 g = 35.3 oz and 800 g = 28.2 oz; 10 kPa of rise = 2.95 inHg.
+    expect(said.recovered?.sentence).toContain("Recovered 35.3 oz against a label charge of 28.2 oz");
+    expect(said.hold?.message).toContain("2.95 inHg in 3 min");
+    expect(said.target?.warnings[0]).toContain("28.2 oz but the spec table says 35.3 oz");
   });
 });

@@ -7,7 +7,7 @@ import {
   recoveredAgainstLabel,
   targetCharge,
 } from "./charge";
-import { formatMillilitres } from "./format";
+import { sayMillilitres } from "./format";
 import {
   type OilAddBack,
   type OilPulledEstimate,
@@ -126,8 +126,8 @@ export function summariseServiceRecord(
     // Within 5 mL is as close as a graduated oil injector reads (common practice).
     oilAddedSentence =
       Math.abs(oilAddedDeltaMl) <= 5
-        ? `Added ${formatMillilitres(v.oilAddedMl)}: matches the ${formatMillilitres(addBack.totalMl)} the record asks for.`
-        : `Added ${formatMillilitres(v.oilAddedMl)} against ${formatMillilitres(addBack.totalMl)} asked for: ${formatMillilitres(oilAddedDeltaMl)} ${oilAddedDeltaMl > 0 ? "too much" : "short"}.`;
+        ? `Added ${sayMillilitres(v.oilAddedMl)}: matches the ${sayMillilitres(addBack.totalMl)} the record asks for.`
+        : `Added ${sayMillilitres(v.oilAddedMl)} against ${sayMillilitres(addBack.totalMl)} asked for: ${sayMillilitres(oilAddedDeltaMl)} ${oilAddedDeltaMl > 0 ? "too much" : "short"}.`;
   }
 
   const oilWarnings = v.oilAddedType?.trim()
@@ -175,5 +175,28 @@ export function summariseServiceRecord(
     evacuation,
     hold,
     problems,
+  };
+}
+
+/**
+ * The summary with every sentence said by `say` (sayInUnits with the reader's units and the shop's
+ * altitude): the computations keep quantity markers, the screen shows the reader's units.
+ */
+export function sayServiceRecordSummary(
+  s: ServiceRecordSummary,
+  say: (text: string) => string,
+): ServiceRecordSummary {
+  const all = (list: readonly string[]) => list.map(say);
+  return {
+    ...s,
+    recovered: s.recovered && { ...s.recovered, sentence: say(s.recovered.sentence) },
+    pulledOil: s.pulledOil && { ...s.pulledOil, sentence: say(s.pulledOil.sentence) },
+    addBack: s.addBack && { ...s.addBack, warnings: all(s.addBack.warnings) },
+    oilAddedSentence: s.oilAddedSentence && say(s.oilAddedSentence),
+    target: s.target && { ...s.target, warnings: all(s.target.warnings) },
+    charge: s.charge && { ...s.charge, sentence: say(s.charge.sentence) },
+    evacuation: s.evacuation && { ...s.evacuation, messages: all(s.evacuation.messages) },
+    hold: s.hold && { ...s.hold, message: say(s.hold.message), warnings: all(s.hold.warnings) },
+    problems: all(s.problems),
   };
 }

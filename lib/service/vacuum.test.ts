@@ -1,3 +1,5 @@
+import { sayInUnits } from "@/lib/units/quantity";
+import { type ReaderUnits, unitsOfSystem } from "@/lib/units/reader";
 import fc from "fast-check";
 import psychrolib from "psychrolib";
 import { describe, expect, it } from "vitest";
@@ -10,6 +12,8 @@ import {
   vacuumHoldTest,
 } from "./vacuum";
 import { waterSaturationKpaAbs } from "./water-boiling";
+
+const metricKpa: ReaderUnits = unitsOfSystem("metric");
 
 describe("evacuationTarget", () => {
   it("is below water's saturation pressure at the shop's temperature, 2.339 kPa absolute at the default 20 °C (ASHRAE Handbook—Fundamentals ch. 1 table 3)", () => {
@@ -95,7 +99,14 @@ describe("evaluateEvacuation", () => {
     const shallow = evaluateEvacuation({ deepestKpaAbs: 10, altitudeM: 0 });
     expect(shallow.reached).toBe(false);
     expect(shallow.messages[0]).toContain("Keep evacuating");
-    expect(shallow.messages[0]).toContain("water boils below 2.34 kPa absolute");
+    expect(sayInUnits(shallow.messages[0]!, metricKpa, { altitudeM: 0 })).toContain(
+      "water boils below 2.34 kPa abs",
+    );
+    // The same line to an imperial reader: a compound gauge in inHg below one standard atmosphere
+    // (101.325 kPa, ISO 2533), 1 inHg = 3.386389 kPa (NIST SP 811): 2.34 kPa absolute reads 29.23 inHg.
+    const imperialLine = sayInUnits(shallow.messages[0]!, unitsOfSystem("imperial"), { altitudeM: 0 });
+    expect(imperialLine).toMatch(/at 68\.0 °F water boils below 29\.2\d? inHg/);
+    expect(imperialLine).not.toMatch(/kPa|°C/);
   });
 
   it("judges by the shop's temperature when it is entered: 3 kPa is not enough at 21 °C (water boils below ≈2.49 kPa, ASHRAE ch. 1)", () => {
@@ -110,7 +121,7 @@ describe("evaluateEvacuation", () => {
     const r = evaluateEvacuation({ deepestKpaAbs: 1, micronGauge: true });
     expect(r.waterBoils).toBe(true);
     expect(r.reached).toBe(false);
-    expect(r.messages[0]).toContain("500 microns");
+    expect(sayInUnits(r.messages[0]!, { ...metricKpa, vacuum: "micron" })).toContain("500 microns");
     expect(evaluateEvacuation({ deepestKpaAbs: 0.05, micronGauge: true }).reached).toBe(true);
   });
 });

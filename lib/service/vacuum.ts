@@ -5,7 +5,7 @@ import {
   pressureToKpa,
   vacuumInHgToKpaAbs,
 } from "@/lib/units";
-import { formatNumber } from "./format";
+import { formatNumber, sayCelsius, sayVacuum, sayVacuumChange } from "./format";
 import { SERVICE_SOURCES } from "./sources";
 import { waterSaturationKpaAbs } from "./water-boiling";
 
@@ -82,21 +82,22 @@ export function evaluateEvacuation(
   const waterBoilsBelowKpaAbs = waterSaturationKpaAbs(target.shopC);
   const waterBoils = deepestKpaAbs < waterBoilsBelowKpaAbs;
   const reached = deepestKpaAbs < target.maxKpaAbs;
-  const reachedInHg = formatNumber(pressureFromKpa(target.barometricKpa - deepestKpaAbs, "inHg"));
-  const at = `${formatNumber(deepestKpaAbs, 2)} kPa absolute`;
-  const where = `at ${formatNumber(target.shopC)} °C water boils below ${formatNumber(waterBoilsBelowKpaAbs, 2)} kPa absolute (about ${formatNumber(pressureFromKpa(target.barometricKpa - waterBoilsBelowKpaAbs, "inHg"))} inHg here)`;
+  // Said as the reader's vacuum gauge shows it (inHg below the local atmosphere, microns, kPa or mbar
+  // absolute): the screen passes the shop's altitude with the reader's units.
+  const reachedText = sayVacuum(deepestKpaAbs);
+  const where = `at ${sayCelsius(target.shopC)} water boils below ${sayVacuum(waterBoilsBelowKpaAbs)}`;
   const messages: string[] = [];
   if (reached) {
     messages.push(
       input.micronGauge
-        ? `Reached ${at}: below the ${MICRON_GAUGE_TARGET_MICRONS}-micron target, so moisture can boil off.`
-        : `Reached ${reachedInHg} inHg of vacuum (${at}): ${where}, so moisture can boil off.`,
+        ? `Reached ${reachedText}: below the ${MICRON_GAUGE_TARGET_MICRONS}-micron target, so moisture can boil off.`
+        : `Reached ${reachedText}: ${where}, so moisture can boil off.`,
     );
   } else {
     messages.push(
       input.micronGauge && waterBoils
-        ? `Reached ${at}: moisture can boil off, but the micron gauge's target is ${MICRON_GAUGE_TARGET_MICRONS} microns (${formatNumber(target.maxKpaAbs, 3)} kPa absolute). Keep evacuating.`
-        : `Reached only ${reachedInHg} inHg of vacuum (${at}); ${where}. Keep evacuating; if it will not go deeper, look for a leak or a tired pump.`,
+        ? `Reached ${reachedText}: moisture can boil off, but the micron gauge's target is ${sayVacuum(target.maxKpaAbs)}. Keep evacuating.`
+        : `Reached only ${reachedText}; ${where}. Keep evacuating; if it will not go deeper, look for a leak or a tired pump.`,
     );
   }
   return { reached, waterBoils, waterBoilsBelowKpaAbs, messages, sources: target.sources };
@@ -139,8 +140,8 @@ export function vacuumHoldTest(input: {
   const riseKpa = endKpaAbs - startKpaAbs;
   const allowedRiseKpa = (limit.riseKpa * minutes) / limit.perMinutes;
   const verdict = riseKpa <= allowedRiseKpa ? "pass" : "fail";
-  const limitText = `${formatNumber(pressureFromKpa(limit.riseKpa, "inHg"))} inHg in ${formatNumber(limit.perMinutes)} min`;
-  const riseText = `${formatNumber(Math.max(riseKpa, 0), 2)} kPa (${formatNumber(pressureFromKpa(Math.max(riseKpa, 0), "inHg"), 2)} inHg) in ${formatNumber(minutes)} min`;
+  const limitText = `${sayVacuumChange(limit.riseKpa)} in ${formatNumber(limit.perMinutes)} min`;
+  const riseText = `${sayVacuumChange(Math.max(riseKpa, 0))} in ${formatNumber(minutes)} min`;
   const message =
     verdict === "pass"
       ? `Vacuum rose ${riseText}, within the shop's limit of ${limitText}: no gross leak. A vacuum hold cannot prove a small leak: leak-test under pressure after charging.`

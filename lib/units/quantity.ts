@@ -6,8 +6,8 @@ import {
   temperatureFromC,
   volumeFromMl,
 } from "./convert";
-import { type ReaderUnits, unitsOfSystem } from "./reader";
-import { formatVacuum } from "./vacuum";
+import { type ReaderUnits, UNIT_LABELS, unitsOfSystem } from "./reader";
+import { formatVacuum, KPA_PER_VACUUM_UNIT } from "./vacuum";
 
 /**
  * A number with what it measures, in the internal unit of its kind. Computations return these; the
@@ -22,6 +22,8 @@ export type QuantityKind =
   | "pressure_difference"
   /** a vacuum, stored as kPa absolute and said the way the reader's vacuum gauge shows it */
   | "vacuum"
+  /** a change of a vacuum (kPa), said in the unit of the reader's vacuum gauge */
+  | "vacuum_change"
   /** °C */
   | "temperature"
   /** K */
@@ -43,10 +45,18 @@ export interface Quantity {
 /** The engine's own units, and the default where nobody has chosen. */
 export const SI_READER_UNITS: ReaderUnits = unitsOfSystem("metric");
 
-function fixed(value: number, decimals: number): string {
+function fixed(value: number, decimals: number, group = false): string {
   const text = value.toFixed(decimals);
   if (Number(text) === 0) return (0).toFixed(decimals);
-  return text.startsWith("-") ? `−${text.slice(1)}` : text;
+  const grouped = group ? groupThousands(text) : text;
+  return grouped.startsWith("-") ? `−${grouped.slice(1)}` : grouped;
+}
+
+/** "4660" → "4,660": masses and volumes are read off scales and labels, where the separator is common practice. */
+function groupThousands(text: string): string {
+  const [whole = "", fraction] = text.split(".");
+  const groupedWhole = whole.replace(/\B(?=(\d{3})+(?!\d))/g, ",");
+  return fraction === undefined ? groupedWhole : `${groupedWhole}.${fraction}`;
 }
 
 const PRESSURE_SUFFIX: Record<ReaderUnits["pressure"], { gauge: string; abs: string; plain: string }> = {
@@ -55,6 +65,7 @@ const PRESSURE_SUFFIX: Record<ReaderUnits["pressure"], { gauge: string; abs: str
   psi: { gauge: "psig", abs: "psia", plain: "psi" },
 };
 const MASS_DECIMALS = { g: 0, kg: 3, oz: 1, lb: 2 } as const;
+const VACUUM_CHANGE_DECIMALS = { inHg: 2, kPa: 2, mbar: 1, micron: 0 } as const;
 
 function pressureDecimals(value: number, unit: ReaderUnits["pressure"]): number {
   if (unit === "kPa") return 0;
@@ -83,6 +94,11 @@ export function quantityParts(
       const space = text.indexOf(" ");
       return [text.slice(0, space), text.slice(space + 1)];
     }
+    case "vacuum_change": {
+      const value = q.value / KPA_PER_VACUUM_UNIT[units.vacuum];
+      const decimals = q.decimals ?? VACUUM_CHANGE_DECIMALS[units.vacuum];
+      return [fixed(value, decimals, true), UNIT_LABELS[units.vacuum] ?? units.vacuum];
+    }
     case "temperature":
       return [
         fixed(temperatureFromC(q.value, units.temperature), q.decimals ?? 1),
@@ -93,11 +109,14 @@ export function quantityParts(
         ? [fixed(temperatureDifferenceFromK(q.value, "F"), q.decimals ?? 1), "°F"]
         : [fixed(q.value, q.decimals ?? 1), "K"];
     case "mass":
-      return [fixed(massFromG(q.value, units.mass), q.decimals ?? MASS_DECIMALS[units.mass]), units.mass];
+      return [
+        fixed(massFromG(q.value, units.mass), q.decimals ?? MASS_DECIMALS[units.mass], true),
+        units.mass,
+      ];
     case "volume":
       return units.volume === "floz"
-        ? [fixed(volumeFromMl(q.value, "floz"), q.decimals ?? 1), "fl oz"]
-        : [fixed(q.value, q.decimals ?? 0), "mL"];
+        ? [fixed(volumeFromMl(q.value, "floz"), q.decimals ?? 1, true), "fl oz"]
+        : [fixed(q.value, q.decimals ?? 0, true), "mL"];
     case "percent":
       return [fixed(q.value, q.decimals ?? (Number.isInteger(q.value) ? 0 : 1)), "%"];
     case "duration":

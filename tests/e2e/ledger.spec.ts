@@ -42,7 +42,7 @@ test("a technician is refused a shipment bigger than the cylinder holds, with th
     destination: "Valley Reclaim",
   });
   await expect(ledger.status()).toContainText(
-    `Refused: ${label} would go below empty. It holds 4660 g and this takes out 5000 g.`,
+    `Refused: ${label} would go below empty. It holds 4,660 g and this takes out 5,000 g.`,
   );
   await expect(ledger.status()).toContainText("what you typed is kept");
   await expect(page.getByLabel("Mass")).toHaveValue("5 kg");

@@ -67,7 +67,7 @@ describe("the ledger cannot go wrong", () => {
       expect(response.status).toBe(409);
       const { error } = await response.json();
       expect(error.message).toContain("below empty");
-      expect(error.message).toContain("It holds 4660 g and this takes out");
+      expect(error.message).toContain("It holds 4,660 g and this takes out");
       expect(error.fieldErrors.massG[0]).toBe(error.message);
     }
     expect(await netOf(shop.id, recovery.id)).toBe(4_660);
@@ -154,7 +154,7 @@ describe("the ledger cannot go wrong", () => {
       note: "Weighed on the bench scale",
     });
     expect(over.status).toBe(409);
-    expect((await over.json()).error.message).toContain("safe fill of 17600 g (80 % of 22000 g)");
+    expect((await over.json()).error.message).toContain("safe fill of 17,600 g (80 % of 22,000 g)");
     const fits = await post(sessionId, {
       cylinderId: recovery.id,
       type: "adjustment",

@@ -8,6 +8,7 @@ import { getShop } from "@/lib/server/shops";
 import { getProfile } from "@/lib/server/profile";
 import { ledgerReport, listCylinderPage, listMovementPage } from "@/lib/server/ledger";
 import { cautionsFor } from "@/lib/service/cautions";
+import { ledgerMassUnit } from "@/lib/service/ledger-guard";
 import { LedgerView } from "@/components/ledger/ledger-view";
 import { CautionsList } from "@/components/cautions/cautions-list";
 
@@ -30,8 +31,6 @@ export default async function LedgerPage() {
     ledgerReport({ shopId }),
     getProfile({ user }),
   ]);
-  // Cylinders are weighed in pounds by a reader of ounces (common practice); metric readers keep their unit.
-  const mass = profile.units.mass;
   const queryClient = getQueryClient();
   queryClient.setQueryData(ledgerKeys.cylinders(), { pages: [cylinders], pageParams: [null] });
   queryClient.setQueryData(ledgerKeys.movements(), { pages: [movements], pageParams: [null] });
@@ -42,7 +41,7 @@ export default async function LedgerPage() {
       <HydrationBoundary state={dehydrate(queryClient)}>
         <LedgerView
           viewer={{
-            massUnit: mass === "oz" || mass === "lb" ? "lb" : mass,
+            massUnit: ledgerMassUnit(profile.units.mass),
             timeZone: shop.timeZone,
             canWrite: can(user.role, "ledger:write"),
             canCancelAny: user.role === "owner" || user.role === "senior",

@@ -5,7 +5,7 @@ import { reportQuerySchema } from "@/lib/contracts/ledger";
 export const GET = handler(
   { permission: "ledger:read", query: reportQuerySchema },
   async ({ user, query }) => {
-    const report = await ledgerReport({ shopId: user.shopId });
+    const report = await ledgerReport({ shopId: user.shopId, reader: user });
     if (query.format === "csv") {
       return new Response(`\uFEFF${report.csv}\r\n`, {
         headers: {

@@ -7,6 +7,7 @@ export const GET = handler(
   async ({ user, query }) => {
     const csv = await exportSpecsCsv({
       shopId: user.shopId,
+      reader: user,
       units: { charge: query.charge, oil: query.oil },
     });
     return new Response(`\uFEFF${csv}\r\n`, {
