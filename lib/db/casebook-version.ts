@@ -15,11 +15,22 @@ export async function bumpCasebookVersion(
   );
 }
 
-/** The shop's casebook version now (0 before its first change). */
-export async function casebookVersion(sequelize: Sequelize, shopId: number): Promise<number> {
-  const [row] = await sequelize.query<{ version: number | string }>(
-    "SELECT version FROM casebook_version WHERE shop_id = :shopId",
-    { replacements: { shopId }, type: QueryTypes.SELECT },
+/**
+ * The shop's casebook version now (0 before its first change), in one read; with a case id, that case's
+ * row version joins it ("12.7"), or "12.-" when the shop has no such case.
+ */
+export async function casebookVersion(
+  sequelize: Sequelize,
+  shopId: number,
+  caseId?: number,
+): Promise<string> {
+  const [row] = await sequelize.query<{ version: number | string | null; caseVersion: number | null }>(
+    caseId === undefined
+      ? "SELECT (SELECT version FROM casebook_version WHERE shop_id = :shopId) AS version"
+      : `SELECT (SELECT version FROM casebook_version WHERE shop_id = :shopId) AS version,
+                (SELECT version FROM service_case WHERE shop_id = :shopId AND id = :caseId) AS caseVersion`,
+    { replacements: { shopId, caseId: caseId ?? 0 }, type: QueryTypes.SELECT },
   );
-  return Number(row?.version ?? 0);
+  const shopVersion = String(row?.version ?? 0);
+  return caseId === undefined ? shopVersion : `${shopVersion}.${row?.caseVersion ?? "-"}`;
 }

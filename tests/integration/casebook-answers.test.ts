@@ -1,6 +1,7 @@
 import { afterAll, describe, expect, it } from "vitest";
 import { GET as searchRoute } from "@/app/api/casebook/route";
 import { GET as facetsRoute } from "@/app/api/casebook/facets/route";
+import { GET as similarRoute } from "@/app/api/cases/[id]/similar/route";
 import { DELETE as signOutRoute } from "@/app/api/session/route";
 import { GET as meRoute } from "@/app/api/me/route";
 import { refreshCasebookEntry } from "@/lib/db/casebook-refresh";
@@ -49,10 +50,10 @@ describe("remembered casebook answers", () => {
     expect((other.json as Page).rows.map((r) => r.caseId)).toEqual([theirs.serviceCase.id]);
 
     // A change to one of the shop's cases raises its version: the next search is answered afresh.
-    const before = await casebookVersion(models.sequelize, mine.shop.id);
+    const before = Number(await casebookVersion(models.sequelize, mine.shop.id));
     await mine.serviceCase.update({ complaint: "Warm at idle, no smell at all" });
     await refreshCasebookEntry({ shopId: mine.shop.id, caseId: mine.serviceCase.id });
-    expect(await casebookVersion(models.sequelize, mine.shop.id)).toBe(before + 1);
+    expect(await casebookVersion(models.sequelize, mine.shop.id)).toBe(String(before + 1));
     const after = await callRoute(searchRoute, path, { sessionId: me.sessionId });
     expect(after.headers.get("x-casebook-cache")).toBe("miss");
     expect((after.json as Page).rows).toEqual([]);
@@ -86,6 +87,34 @@ describe("remembered casebook answers", () => {
     const after = await callRoute(facetsRoute, "/api/casebook/facets", { sessionId: me.sessionId });
     expect(after.headers.get("x-casebook-cache")).toBe("miss");
     expect((after.json as { total: number }).total).toBe(2);
+  });
+});
+
+describe("remembered similar cases", () => {
+  it("asks again once the case itself changed, as an autosave of a draft's readings does", async () => {
+    const models = getModels();
+    const mine = await createShopWithCase(models);
+    await refreshCasebookEntry({ shopId: mine.shop.id, caseId: mine.serviceCase.id });
+    const me = await signedInUser(models, mine.shop.id, "technician");
+    const path = `/api/cases/${mine.serviceCase.id}/similar`;
+    const ask = () =>
+      callRoute(similarRoute, path, { sessionId: me.sessionId, params: { id: String(mine.serviceCase.id) } });
+    expect((await ask()).headers.get("x-casebook-cache")).toBe("miss");
+    expect((await ask()).headers.get("x-casebook-cache")).toBe("hit");
+    // An autosave raises the case's row version without a casebook refresh.
+    await models.Case.update(
+      { version: mine.serviceCase.version + 1 },
+      { where: { id: mine.serviceCase.id } },
+    );
+    expect((await ask()).headers.get("x-casebook-cache")).toBe("miss");
+    // Another shop asking for this case id gets a 404, never the remembered panel.
+    const stranger = await createShopWithCase(models);
+    const them = await signedInUser(models, stranger.shop.id, "technician");
+    const theirs = await callRoute(similarRoute, path, {
+      sessionId: them.sessionId,
+      params: { id: String(mine.serviceCase.id) },
+    });
+    expect(theirs.status).toBe(404);
   });
 });
 

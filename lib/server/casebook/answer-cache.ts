@@ -27,11 +27,15 @@ function answers(): Map<string, Entry> {
 /** The header that tells a benchmark (or a curious developer) whether an answer came from memory. */
 export const ANSWER_CACHE_HEADER = "X-Casebook-Cache";
 
+/**
+ * `caseId`: the answer also depends on that case as it is now (a draft's similar cases are read from its
+ * interview, which autosaves change without touching the casebook), so its row version joins the key.
+ */
 export async function rememberedAnswer<T>(
-  { shopId, question }: { shopId: number; question: string },
+  { shopId, question, caseId }: { shopId: number; question: string; caseId?: number },
   compute: () => Promise<T>,
 ): Promise<{ value: T; hit: boolean }> {
-  const version = await casebookVersion(getModels().sequelize, shopId);
+  const version = await casebookVersion(getModels().sequelize, shopId, caseId);
   const key = `${shopId}\u0000${version}\u0000${question}`;
   const map = answers();
   const now = Date.now();

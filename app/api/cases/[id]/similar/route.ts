@@ -9,7 +9,7 @@ export const GET = handler(
   { permission: "casebook:search", params: caseParamsSchema, query: similarCasesQuerySchema },
   async ({ user, params, query, responseHeaders }) => {
     const { value, hit } = await rememberedAnswer(
-      { shopId: user.shopId, question: `similar:${params.id}:${query.k}` },
+      { shopId: user.shopId, caseId: params.id, question: `similar:${params.id}:${query.k}` },
       () => similarCases({ shopId: user.shopId, caseId: params.id, k: query.k }),
     );
     responseHeaders.set(ANSWER_CACHE_HEADER, hit ? "hit" : "miss");
