@@ -20,6 +20,8 @@ import * as m8002 from "./20261203-8002-keep-vacuum-readings-to-the-micron";
 import * as m9001 from "./20261203-9001-add-vehicle-plate-and-phone-search";
 import * as m9002 from "./20261203-9002-add-case-conclusion-writers";
 import * as m4301 from "./20261204-3001-keep-each-case-figure-once";
+import * as m1204x5001 from "./20261204-5001-create-casebook-version";
+import * as m1204x5002 from "./20261204-5002-index-short-casebook-words";
 import * as m9101 from "./20261204-9001-index-vehicles-by-last-seen";
 
 // Listed by hand, not globbed, so the same list works under tsx, vitest and a Next bundle.
@@ -45,5 +47,7 @@ export const migrations: RunnableMigration<QueryInterface>[] = [
   { name: "20261203-9001-add-vehicle-plate-and-phone-search", ...m9001 },
   { name: "20261203-9002-add-case-conclusion-writers", ...m9002 },
   { name: "20261204-3001-keep-each-case-figure-once", ...m4301 },
+  { name: "20261204-5001-create-casebook-version", ...m1204x5001 },
+  { name: "20261204-5002-index-short-casebook-words", ...m1204x5002 },
   { name: "20261204-9001-index-vehicles-by-last-seen", ...m9101 },
 ];

@@ -3,17 +3,22 @@ import { cache } from "react";
 import { cookies } from "next/headers";
 import type { Session, User } from "lucia";
 import { getLucia } from "./lucia";
+import { forgetSession, recalledSession, rememberSession } from "./session-cache";
 
 export type SessionResult = { user: User; session: Session } | { user: null; session: null };
 
-/** Validates a session id and drops sessions of deactivated users. */
+/** Validates a session id and drops sessions of deactivated users (briefly remembered: ./session-cache.ts). */
 export async function validateSessionId(sessionId: string | null | undefined): Promise<SessionResult> {
   if (!sessionId) return { user: null, session: null };
+  const recalled = recalledSession(sessionId);
+  if (recalled) return recalled;
   const result = await getLucia().validateSession(sessionId);
   if (result.user && !result.user.active) {
+    forgetSession(result.session.id);
     await getLucia().invalidateSession(result.session.id);
     return { user: null, session: null };
   }
+  if (result.session) rememberSession(result);
   return result;
 }
 

@@ -1,7 +1,14 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import Papa from "papaparse";
-import { searchWords, shopIndexTerms, shopQueryTerms, shopTermPrefix, wholeWordPattern } from "./words";
+import {
+  searchWords,
+  shopBooleanTerms,
+  shopIndexTerms,
+  shopQueryTerms,
+  shopTermPrefix,
+  wholeWordPattern,
+} from "./words";
 import { diagnose } from "@/lib/diagnosis";
 import { caseFeaturesFrom, draftFeaturesFrom, featureDistance, FEATURE_KEYS } from "./features";
 import { neighbourSummary, neighbourSummaryLine } from "./summary";
@@ -14,9 +21,17 @@ describe("search words", () => {
     expect(searchWords("Warm at IDLE, A/C clicks; the R-134a fan")).toEqual({
       indexed: ["warm", "idle", "clicks", "134a", "fan"],
       short: ["c", "r"],
+      stopwords: [],
     });
-    expect(searchWords("at the")).toEqual({ indexed: [], short: ["at", "the"] });
-    expect(searchWords("  !! ")).toEqual({ indexed: [], short: [] });
+    expect(searchWords("at the")).toEqual({ indexed: [], short: [], stopwords: ["at", "the"] });
+    expect(searchWords("  !! ")).toEqual({ indexed: [], short: [], stopwords: [] });
+  });
+
+  it("requires each short word and one of the others in a boolean search of the shop's terms", () => {
+    expect(shopBooleanTerms({ indexed: ["light", "flashes"], short: ["ac"] }, 7)).toBe(
+      "+qaaaahac +(qaaaahlight qaaaahflashes)",
+    );
+    expect(shopBooleanTerms({ indexed: [], short: ["ac", "r"] }, 7)).toBe("+qaaaahac +qaaaahr");
   });
 
   it("gives every shop its own letters-only prefix, so no two shops' terms can ever coincide", () => {
@@ -32,6 +47,8 @@ describe("search words", () => {
       ),
     );
     expect(shopIndexTerms("Warm at idle; warm again", 7)).toBe("qaaaahwarm qaaaahidle qaaaahagain");
+    // Short words are terms too (the prefix makes them long enough for the index); stopwords are not.
+    expect(shopIndexTerms("A/C off at idle", 7)).toBe("qaaaahc qaaaahoff qaaaahidle");
     expect(shopQueryTerms(["idle"], 7)).toBe("qaaaahidle");
   });
 

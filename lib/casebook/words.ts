@@ -43,17 +43,19 @@ export const INNODB_STOPWORDS: ReadonlySet<string> = new Set([
 ]);
 
 /**
- * Words shorter than this are not put in the index, as MariaDB would skip them at its
- * innodb_ft_min_token_size (3 on the server scripts/db.sh starts; an integration test checks it), and
- * are found with a whole-word pattern instead.
+ * The server's innodb_ft_min_token_size (3 on the server scripts/db.sh starts; an integration test checks
+ * it). The index holds shop terms (a six-letter shop prefix and the word), so even a one-letter word
+ * makes a term well over this minimum: short words such as "ac" are in the index like any other.
  */
 export const MIN_INDEXED_WORD_CHARS = 3;
 
 export interface SearchWords {
-  /** Words the index holds: matched in natural-language mode, ranked by relevance. */
+  /** Words of the index's usual length: matched in natural-language mode, ranked by relevance. */
   indexed: string[];
-  /** Words shorter than the index's minimum (such as "ac"): each must appear as a whole word. */
+  /** Words shorter than MIN_INDEXED_WORD_CHARS (such as "ac"): each must appear, read from the same index. */
   short: string[];
+  /** A search of stopwords only ("on", "at the"): the index skips them, so they are looked for whole. */
+  stopwords: string[];
 }
 
 const MAX_WORDS = 12;
@@ -65,11 +67,11 @@ const MAX_WORDS = 12;
 export function searchWords(text: string | undefined, minTokenSize = MIN_INDEXED_WORD_CHARS): SearchWords {
   const all = [...new Set((text ?? "").toLowerCase().match(/[\p{L}\p{N}]+/gu) ?? [])].slice(0, MAX_WORDS);
   const words = all.filter((w) => !INNODB_STOPWORDS.has(w));
-  // Only stopwords ("on", "at"): the index cannot help, so look for them whole in the text.
-  if (words.length === 0) return { indexed: [], short: all };
+  if (words.length === 0) return { indexed: [], short: [], stopwords: all };
   return {
     indexed: words.filter((w) => [...w].length >= minTokenSize),
     short: words.filter((w) => [...w].length < minTokenSize),
+    stopwords: [],
   };
 }
 
@@ -96,13 +98,11 @@ export function shopTermPrefix(shopId: number): string {
   return `q${code}`;
 }
 
-/** The words of a text the index holds, each with its shop's prefix, once each. */
+/** The words of a text the index holds (every word but the stopwords), each with its shop's prefix, once each. */
 export function shopIndexTerms(text: string, shopId: number): string {
   const prefix = shopTermPrefix(shopId);
   const words = new Set(
-    (text.toLowerCase().match(/[\p{L}\p{N}]+/gu) ?? []).filter(
-      (w) => [...w].length >= MIN_INDEXED_WORD_CHARS && !INNODB_STOPWORDS.has(w),
-    ),
+    (text.toLowerCase().match(/[\p{L}\p{N}]+/gu) ?? []).filter((w) => !INNODB_STOPWORDS.has(w)),
   );
   return [...words].map((w) => `${prefix}${w}`).join(" ");
 }
@@ -111,4 +111,19 @@ export function shopIndexTerms(text: string, shopId: number): string {
 export function shopQueryTerms(words: readonly string[], shopId: number): string {
   const prefix = shopTermPrefix(shopId);
   return words.map((w) => `${prefix}${w}`).join(" ");
+}
+
+/**
+ * A search with short words, for MATCH … AGAINST in boolean mode: every short word is required, and so is
+ * at least one of the other words ("+qaaaahac +(qaaaahlight qaaaahflashes)"). Terms are letters and
+ * digits only, so no boolean operator can come from what was typed.
+ */
+export function shopBooleanTerms(
+  { indexed, short }: Pick<SearchWords, "indexed" | "short">,
+  shopId: number,
+): string {
+  const prefix = shopTermPrefix(shopId);
+  const required = short.map((w) => `+${prefix}${w}`);
+  if (indexed.length > 0) required.push(`+(${indexed.map((w) => `${prefix}${w}`).join(" ")})`);
+  return required.join(" ");
 }

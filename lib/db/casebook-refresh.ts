@@ -6,6 +6,7 @@ import { CASEBOOK_COMPRESSOR_TYPES } from "@/lib/contracts/casebook";
 import { caseFeaturesFrom, presentFeatures } from "@/lib/casebook/features";
 import { caseSearchText } from "@/lib/casebook/search-text";
 import { shopIndexTerms } from "@/lib/casebook/words";
+import { bumpCasebookVersion } from "./casebook-version";
 
 const dayMs = 24 * 60 * 60 * 1000;
 const causeIds = new Set<string>(CAUSE_IDS);
@@ -50,7 +51,9 @@ export async function refreshCasebookEntry({
   const { CasebookEntry, CasebookSymptom, CaseFeatures } = models;
   const options = { transaction, raw: true } as const;
   const row = await Case.findOne({ where: { id: caseId, shopId }, ...options });
-  if (!row) return; // deleting a case deletes its derived rows with it (ON DELETE CASCADE)
+  // Remembered casebook answers of this shop stop being served once this transaction commits (raised
+  // last, so the counter's row lock is held for as short a time as the transaction allows).
+  if (!row) return bumpCasebookVersion(models.sequelize, shopId, transaction); // rows go by ON DELETE CASCADE
 
   const [vehicle, reviews, record, causes, repairs, shop] = await Promise.all([
     row.vehicleId
@@ -214,6 +217,7 @@ export async function refreshCasebookEntry({
   } else {
     await CaseFeatures.destroy({ where: { shopId, caseId }, transaction });
   }
+  await bumpCasebookVersion(models.sequelize, shopId, transaction);
 }
 
 /** Rebuilds the casebook rows of every case (of one shop, or all), a batch of cases at a time. */

@@ -5,6 +5,7 @@ import { AppError } from "@/lib/errors";
 import type { Role } from "@/lib/auth/roles";
 import type { ShopUser, UserListResponse } from "@/lib/contracts/users";
 import { recordAudit } from "./audit";
+import { forgetUserSessions } from "@/lib/auth/session-cache";
 
 const PUBLIC_ATTRIBUTES = ["id", "email", "name", "role", "active"] as const;
 
@@ -57,7 +58,7 @@ export async function updateUser({
   active?: boolean;
 }): Promise<ShopUser> {
   const { User, sequelize } = getModels();
-  return sequelize.transaction(async (transaction) => {
+  const updated = await sequelize.transaction(async (transaction) => {
     const user = await User.findOne({ where: { id: userId, shopId }, transaction });
     if (!user) throw new AppError("not_found:user", "No such user in this shop.");
     if (userId === actorId && ((role && role !== "owner") || active === false)) {
@@ -77,4 +78,7 @@ export async function updateUser({
     });
     return toShopUser(user.get({ plain: true }));
   });
+  // After the commit, so no request in between can remember the old role or a deactivated person again.
+  forgetUserSessions(userId);
+  return updated;
 }

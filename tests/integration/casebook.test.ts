@@ -77,7 +77,7 @@ describe("the casebook search", () => {
     expect(caseIds(conclusion)).toEqual([ids.malibu]);
   });
 
-  it("falls back to a whole-word pattern for words shorter than the index minimum", async () => {
+  it("finds short words through the index and stopwords alone by a whole-word pattern", async () => {
     const models = getModels();
     const { shop, serviceCase } = await createShopWithCase(models, "AC light flashes, no cold air");
     const other = await models.Case.create({
@@ -93,14 +93,20 @@ describe("the casebook search", () => {
       "SELECT @@innodb_ft_min_token_size AS size",
       { type: QueryTypes.SELECT },
     );
-    // The casebook leaves out of its index the same short words the server would.
+    // A one-letter word with the shop's prefix is still longer than the server's minimum token.
     expect(Number(setting?.size)).toBe(MIN_INDEXED_WORD_CHARS);
+    expect(shopTermPrefix(shop.id).length + 1).toBeGreaterThan(Number(setting?.size));
     const short = await search(shop.id, { q: "ac" });
-    expect(short.textMode).toBe("pattern");
+    expect(short.textMode).toBe("fulltext");
     expect(caseIds(short)).toEqual([serviceCase.id]); // "vacuum" holds "ac" but not as a word
     const mixed = await search(shop.id, { q: "ac light" });
-    expect(mixed.textMode).toBe("fulltext+pattern");
+    expect(mixed.textMode).toBe("fulltext");
     expect(caseIds(mixed)).toEqual([serviceCase.id]);
+    // Each short word is required: "ac" with a word only the other case has finds neither.
+    expect(caseIds(await search(shop.id, { q: "ac vacuum" }))).toEqual([]);
+    const stop = await search(shop.id, { q: "the" });
+    expect(stop.textMode).toBe("pattern");
+    expect(caseIds(stop)).toEqual([other.id]);
   });
 
   it("filters by make, model year, technician, status, dates and comeback, and pages with a count", async () => {
@@ -362,6 +368,13 @@ describe("EXPLAIN", () => {
     expect(entry?.searchTerms.split(" ").every((t) => t.startsWith(shopTermPrefix(harbourline)))).toBe(true);
     expect(shopTermPrefix(harbourline)).not.toBe(shopTermPrefix(ridgeback));
     expect(shopTermPrefix(bigShop)).not.toBe(shopTermPrefix(harbourline));
+  });
+
+  it("reads a search with a short word from the same full-text index", async () => {
+    for (const { plan, entry } of await planFor({ q: "ac warm", status: "closed" })) {
+      expect(entry?.type, JSON.stringify(plan)).toBe("fulltext");
+      expect(entry?.key, JSON.stringify(plan)).toBe("casebook_entry_terms");
+    }
   });
 
   it("walks a shop index when a search has facets and no words", async () => {

@@ -13,6 +13,7 @@ const appTables = [
   "audit_event",
   "casebook_entry",
   "casebook_symptom",
+  "casebook_version",
   "case_confirmed_cause",
   "case_features",
   "case_repair",

@@ -1,4 +1,5 @@
 import { getLucia } from "@/lib/auth/lucia";
+import { forgetSession } from "@/lib/auth/session-cache";
 import { env } from "@/lib/env";
 import { handler } from "@/lib/server/handler";
 import { signInWithPassword } from "@/lib/server/sign-in";
@@ -23,7 +24,10 @@ export const POST = handler({ public: true, body: signInSchema }, async ({ req, 
 export const DELETE = handler({ public: true }, async ({ req, responseHeaders }) => {
   const lucia = getLucia();
   const sessionId = req.cookies.get(lucia.sessionCookieName)?.value;
-  if (sessionId) await lucia.invalidateSession(sessionId);
+  if (sessionId) {
+    forgetSession(sessionId);
+    await lucia.invalidateSession(sessionId);
+  }
   responseHeaders.append("Set-Cookie", lucia.createBlankSessionCookie().serialize());
   return { ok: true };
 });

@@ -1,6 +1,6 @@
 import "server-only";
 import type { CasebookFilters, CasebookTextMode } from "@/lib/contracts/casebook";
-import { searchWords, shopQueryTerms, wholeWordPattern } from "@/lib/casebook/words";
+import { searchWords, shopBooleanTerms, shopQueryTerms, wholeWordPattern } from "@/lib/casebook/words";
 
 // The WHERE clause every casebook query shares (search, count, facets, export), always starting with
 // the shop: the indexes on casebook_entry all begin with shop_id.
@@ -16,6 +16,8 @@ export interface CasebookWhere {
 }
 
 export const MATCH_SQL = "MATCH(e.search_terms) AGAINST (:words IN NATURAL LANGUAGE MODE)";
+/** A search with short words: each is required, read from the same index (lib/casebook/words.ts). */
+export const MATCH_BOOLEAN_SQL = "MATCH(e.search_terms) AGAINST (:words IN BOOLEAN MODE)";
 
 const dayMs = 24 * 60 * 60 * 1000;
 
@@ -81,27 +83,27 @@ export function casebookWhere(
   const q = filter("q");
   if (q) {
     const words = searchWords(q);
-    if (words.indexed.length > 0) {
+    if (words.short.length > 0) {
+      // Short words ("ac") are in the index as shop terms too: one boolean match requires each of them.
+      parts.push(MATCH_BOOLEAN_SQL);
+      replacements.words = shopBooleanTerms(words, shopId);
+      relevanceSql = MATCH_BOOLEAN_SQL;
+      textMode = "fulltext";
+    } else if (words.indexed.length > 0) {
       // The shop's own terms (lib/casebook/words.ts): the full-text index reads this shop's matches only.
       parts.push(MATCH_SQL);
       replacements.words = shopQueryTerms(words.indexed, shopId);
       relevanceSql = MATCH_SQL;
+      textMode = "fulltext";
     }
-    // Words under the index's minimum length are not in it: each must appear as a whole word.
+    // Stopwords alone are not in the index: each must appear as a whole word in the shop's text.
     // LIKE first: a cheap substring test that spares the pattern most rows.
-    words.short.forEach((word, i) => {
+    words.stopwords.forEach((word, i) => {
       parts.push(`e.search_text LIKE :shortLike${i} AND e.search_text REGEXP :short${i}`);
       replacements[`shortLike${i}`] = `%${word}%`;
       replacements[`short${i}`] = wholeWordPattern(word);
+      textMode = "pattern";
     });
-    textMode =
-      words.indexed.length > 0 && words.short.length > 0
-        ? "fulltext+pattern"
-        : words.indexed.length > 0
-          ? "fulltext"
-          : words.short.length > 0
-            ? "pattern"
-            : "none";
   }
   return { sql: parts.join("\n   AND "), replacements, relevanceSql, textMode };
 }
