@@ -18,7 +18,7 @@ import { STEP_LEADS } from "./labels";
 import { ProgressStrip } from "./progress-strip";
 import { SaveBanner } from "./save-banner";
 import { SentBackNote, type ReviewContext } from "./review-thread";
-import { SpecMatches, type SpecPick } from "./spec-matches";
+import type { SpecPick } from "./spec-matches";
 import { StepForm, type StepFormHandle } from "./step-form";
 import { useAutosave } from "./use-autosave";
 import { useShownCautions } from "./use-shown-cautions";
@@ -32,7 +32,8 @@ import type { ValuesMode } from "./use-group-form";
 const StepCautions = memo(CautionsList);
 const Progress = memo(ProgressStrip);
 const ReviewNote = memo(SentBackNote);
-const Specs = memo(SpecMatches);
+// The spec table's matches show on the system step only, and load with it.
+const Specs = memo(dynamic(() => import("./spec-matches").then((m) => m.SpecMatches)));
 
 /**
  * The view of the interview, recomputed only when something it shows has changed. A keystroke changes
