@@ -1,18 +1,24 @@
 "use client";
 
-import { useCallback, useEffect, useMemo, useRef, useSyncExternalStore } from "react";
+import { memo, useCallback, useEffect, useMemo, useRef, useSyncExternalStore } from "react";
 import dynamic from "next/dynamic";
 import { useMachine } from "@xstate/react";
 import { interviewMachine } from "@/machines/interview";
-import { savedInterviewOf, viewOf, type SavedInterview } from "@/machines/interview-view";
-import { STEP_LABELS, type GroupId } from "@/lib/interview/steps";
+import {
+  savedInterviewOf,
+  viewOf,
+  type InterviewSnapshot,
+  type InterviewView,
+  type SavedInterview,
+} from "@/machines/interview-view";
+import { STEP_LABELS, type GroupId, type StepId } from "@/lib/interview/steps";
 import { altitudeFor } from "@/lib/interview/branches";
 import { CautionsList } from "@/components/cautions/cautions-list";
 import { STEP_LEADS } from "./labels";
 import { ProgressStrip } from "./progress-strip";
 import { SaveBanner } from "./save-banner";
 import { SentBackNote, type ReviewContext } from "./review-thread";
-import { SpecMatches } from "./spec-matches";
+import type { SpecPick } from "./spec-matches";
 import { StepForm, type StepFormHandle } from "./step-form";
 import { useAutosave } from "./use-autosave";
 import { useShownCautions } from "./use-shown-cautions";
@@ -20,6 +26,33 @@ import type { PhysicsContext } from "@/lib/interview/readouts";
 import type { ReaderUnits } from "@/lib/units";
 import { attentionOf } from "./attention";
 import type { ValuesMode } from "./use-group-form";
+
+// A keystroke re-renders the interview; the parts that did not change skip it (their props keep
+// their identity while only a draft changes, see useView).
+const StepCautions = memo(CautionsList);
+const Progress = memo(ProgressStrip);
+const ReviewNote = memo(SentBackNote);
+// The spec table's matches show on the system step only, and load with it.
+const Specs = memo(dynamic(() => import("./spec-matches").then((m) => m.SpecMatches)));
+
+/**
+ * The view of the interview, recomputed only when something it shows has changed. A keystroke changes
+ * the drafts (and the group's messages) only: the route, the progress and the cautions, which come
+ * from the answers, keep their identity, so the memoised parts of the screen skip that keystroke.
+ */
+function useView(snapshot: InterviewSnapshot): InterviewView {
+  const { answers, step, visited, skipped, shop, errors, drafts } = snapshot.context;
+  // The messages are new objects on every keystroke; their text is what the progress strip reads.
+  const errorsKey = JSON.stringify(errors);
+  const stateKey = JSON.stringify(snapshot.value);
+  const settled = useMemo(
+    () => viewOf(snapshot),
+    // The snapshot itself is new on every keystroke; these are what viewOf reads from it.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+    [answers, step, visited, skipped, shop, errorsKey, stateKey],
+  );
+  return useMemo(() => ({ ...settled, errors, drafts }), [settled, errors, drafts]);
+}
 
 // The findings step carries the diagnosis engine; it loads when the technician reaches it.
 const FindingsStep = dynamic(() => import("./findings-step").then((m) => m.FindingsStep), {
@@ -45,6 +78,7 @@ export interface InterviewProps {
 }
 
 const noChange = () => () => {};
+const reload = () => window.location.reload();
 
 export function Interview({
   caseId,
@@ -68,7 +102,7 @@ export function Interview({
   const readingLocale = locale ?? deviceLocale;
   const machineShop = useMemo(() => ({ altitudeM: shop.altitudeM }), [shop.altitudeM]);
   const [snapshot, send, actor] = useMachine(interviewMachine, { input: { ...record, shop: machineShop } });
-  const view = viewOf(snapshot);
+  const view = useView(snapshot);
   const { answers, drafts, step } = snapshot.context;
   const autosave = useAutosave({ caseId, initialVersion: version });
   const formRef = useRef<StepFormHandle>(null);
@@ -131,6 +165,15 @@ export function Interview({
     [send, view.group],
   );
 
+  const openStep = useCallback((target: StepId) => send({ type: "GOTO", step: target }), [send]);
+  const applySpec = useCallback((pick: SpecPick) => formRef.current?.apply({ ...pick }), []);
+  const attention = useMemo(
+    () => attentionOf(snapshot.context, units),
+    // attentionOf reads these four from the context.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+    [answers, drafts, view.errors, view.skipped, units],
+  );
+
   async function next() {
     if (formRef.current && view.group) {
       const values = await formRef.current.check();
@@ -146,14 +189,10 @@ export function Interview({
     <div className="space-y-4">
       <div>
         <p className="text-sm font-bold text-ink-soft">{heading}</p>
-        <ProgressStrip entries={view.progress} onOpen={(target) => send({ type: "GOTO", step: target })} />
+        <Progress entries={view.progress} onOpen={openStep} />
       </div>
-      <SentBackNote review={review} />
-      <SaveBanner
-        status={autosave.status}
-        attention={attentionOf(snapshot.context, units)}
-        onReload={() => window.location.reload()}
-      />
+      <ReviewNote review={review} />
+      <SaveBanner status={autosave.status} attention={attention} onReload={reload} />
       <section id="interview-step" aria-labelledby="step-heading" className="card space-y-4">
         <header>
           <h1 id="step-heading" ref={headingRef} tabIndex={-1} className="text-2xl font-bold outline-none">
@@ -161,10 +200,8 @@ export function Interview({
           </h1>
           {STEP_LEADS[step] && <p className="text-ink-soft">{STEP_LEADS[step]}</p>}
         </header>
-        {step !== "findings" && <CautionsList cautions={stepCautions} shownEarlier={shownEarlier} />}
-        {step === "system" && vehicleId !== null && (
-          <SpecMatches vehicleId={vehicleId} onPick={(pick) => formRef.current?.apply({ ...pick })} />
-        )}
+        {step !== "findings" && <StepCautions cautions={stepCautions} shownEarlier={shownEarlier} />}
+        {step === "system" && vehicleId !== null && <Specs vehicleId={vehicleId} onPick={applySpec} />}
         {group && (
           <form
             noValidate

@@ -116,6 +116,7 @@ export const StepForm = forwardRef<StepFormHandle, Props>(function StepForm(
   const internal = useMemo(() => answerValuesOf(fields, values, reading), [fields, values, reading]);
   const physicsLines = useMemo(() => liveReadouts(group, internal, physics), [group, internal, physics]);
   const readouts: Record<string, React.ReactNode> = {};
+  const readoutKeys: Record<string, string> = {};
   for (const def of fields) {
     const value = internal[def.name];
     const kind = def.kind as QuantityKind;
@@ -124,8 +125,11 @@ export const StepForm = forwardRef<StepFormHandle, Props>(function StepForm(
     const conversion =
       quantity && typeof value === "number" ? equivalents(kind, value, fieldUnits[kind]) : undefined;
     const lines = physicsLines[def.name] ?? [];
-    if (conversion || lines.length)
+    if (conversion || lines.length) {
       readouts[def.name] = <Readout conversion={conversion} lines={lines} units={units} />;
+      // The person's units are in the field's reading too: a change there re-renders the field anyway.
+      readoutKeys[def.name] = JSON.stringify([conversion, lines]);
+    }
   }
 
   return (
@@ -136,6 +140,7 @@ export const StepForm = forwardRef<StepFormHandle, Props>(function StepForm(
       setFieldUnit={setFieldUnit}
       commit={commit}
       readouts={readouts}
+      readoutKeys={readoutKeys}
       serverIssues={issues}
     />
   );

@@ -1,5 +1,3 @@
-import type { RefrigerantId } from "@/lib/refrigerants/catalog";
-
 /**
  * Published Wagner-form vapour-pressure equations, each with the critical point it was fitted with:
  *   ln(p / pc) = (Tc / T) · Σ nᵢ · θ^tᵢ,   θ = 1 − T / Tc
@@ -8,7 +6,8 @@ import type { RefrigerantId } from "@/lib/refrigerants/catalog";
  * gauge can read.
  */
 export interface VapourPressureEquation {
-  id: RefrigerantId;
+  /** The refrigerant's ASHRAE Standard 34 designation, as lib/refrigerants/catalog.ts lists it (which checks each one). */
+  id: string;
   fileName: string;
   name: string;
   criticalTempK: number;

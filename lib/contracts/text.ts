@@ -1,44 +1,15 @@
 import { z } from "zod";
+import { textRefinement, type TextLines } from "./text-rules";
 
 // The shared rules for text and dates that arrive from outside: every text field and every date of
 // every contract is built from these, so odd input is refused once, with a clear message, before it
-// reaches the database (where a lone surrogate or year 0 would fail or be changed silently).
+// reaches the database (where a lone surrogate or year 0 would fail or be changed silently). The text
+// rules themselves live in text-rules.ts, which the interview's zod/mini schemas share.
 
-/** Half of a UTF-16 pair with no other half: not a character, and not storable as utf8mb4. */
-const LONE_SURROGATE = /[\uD800-\uDFFF]/u;
-/** Bidi embeddings, overrides and isolates: they make stored text read differently from what it is. */
-const BIDI_CONTROL = /[\u202A-\u202E\u2066-\u2069]/u;
-/** C0 and C1 controls (NUL included), DEL, and the Unicode line and paragraph separators. */
-const CONTROL_SINGLE_LINE = /[\u0000-\u001F\u007F-\u009F\u2028\u2029]/u;
-/** The same, less tab, line feed and carriage return, which multi-line text may hold. */
-const CONTROL_MULTI_LINE = /[\u0000-\u0008\u000B-\u000C\u000E-\u001F\u007F-\u009F]/u;
+export { isWellFormedText, TEXT_MESSAGES, textProblem } from "./text-rules";
 
-export const TEXT_MESSAGES = {
-  illFormed: "This text has a broken character in it (half of an emoji or symbol). Type it again.",
-  bidi: "This text has an invisible direction-changing character in it. Type it again without it.",
-  control: "This text has an invisible control character in it. Type it again without it.",
-  singleLine: "Keep this to one line, without tabs.",
-} as const;
-
-/** Every string must be well-formed Unicode; used by the JSON body reader for values no schema names. */
-export function isWellFormedText(text: string): boolean {
-  return !LONE_SURROGATE.test(text);
-}
-
-/** The first problem with a piece of text, or null when it may be stored. */
-export function textProblem(text: string, lines: "single" | "multi"): string | null {
-  if (!isWellFormedText(text)) return TEXT_MESSAGES.illFormed;
-  if (BIDI_CONTROL.test(text)) return TEXT_MESSAGES.bidi;
-  if (lines === "multi") return CONTROL_MULTI_LINE.test(text) ? TEXT_MESSAGES.control : null;
-  if (/[\t\n\r\u2028\u2029]/u.test(text)) return TEXT_MESSAGES.singleLine;
-  return CONTROL_SINGLE_LINE.test(text) ? TEXT_MESSAGES.control : null;
-}
-
-function checked(lines: "single" | "multi", params?: { message?: string }) {
-  return z.string(params).superRefine((text, ctx) => {
-    const problem = textProblem(text, lines);
-    if (problem) ctx.addIssue({ code: "custom", message: problem });
-  });
+function checked(lines: TextLines, params?: { message?: string }) {
+  return z.string(params).superRefine(textRefinement(lines));
 }
 
 /** A name, label, model or search: one line of well-formed text with no control or bidi characters. */

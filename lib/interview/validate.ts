@@ -1,4 +1,4 @@
-import type { z } from "zod";
+import type { $ZodError } from "zod/v4/core";
 import { answerSchemas, type InterviewAnswers } from "./answers";
 import type { ShopSettings } from "./branches";
 import { crossCheck } from "./cross-checks";
@@ -10,7 +10,7 @@ export type { AnswerIssue };
 export type GroupCheck =
   { ok: true; value: NonNullable<InterviewAnswers[GroupId]> } | { ok: false; issues: AnswerIssue[] };
 
-function toIssues(error: z.ZodError): AnswerIssue[] {
+function toIssues(error: $ZodError): AnswerIssue[] {
   return error.issues.map((issue) => ({ field: issue.path.map(String).join("."), message: issue.message }));
 }
 

@@ -1,7 +1,5 @@
-import r12Table from "@/data/refrigerants/r-12.json";
-import r1234yfTable from "@/data/refrigerants/r-1234yf.json";
-import r134aTable from "@/data/refrigerants/r-134a.json";
-import r744Table from "@/data/refrigerants/r-744.json";
+import { buildSaturationTable } from "@/data/refrigerants/build-table";
+import { VAPOUR_PRESSURE_EQUATIONS } from "@/data/refrigerants/equations";
 
 /**
  * The one list of refrigerants (tests/unit/vocabulary.test.ts fails on a second one). REFRIGERANT_IDS
@@ -79,12 +77,22 @@ export interface SaturationTableData {
   pressureKpaAbs: number[];
 }
 
-export const SATURATION_TABLES: Readonly<Record<RefrigerantId, SaturationTableData>> = {
-  "R-134a": r134aTable,
-  "R-1234yf": r1234yfTable,
-  "R-744": r744Table,
-  "R-12": r12Table,
-};
+/**
+ * The saturation tables, built when this module loads from the published vapour-pressure equations
+ * (data/refrigerants/equations.ts) by the code that wrote the committed data/refrigerants/*.json files:
+ * the same grid and the same values (catalog.test.ts compares them number for number, tables.test.ts
+ * the files with the equations). A few coefficients travel to the browser instead of some 40 kB of
+ * numbers, and a few milliseconds of arithmetic at load replace the download.
+ */
+export const SATURATION_TABLES: Readonly<Record<RefrigerantId, SaturationTableData>> = (() => {
+  // The equations name their refrigerant by its designation (data/ imports nothing from lib/refrigerants).
+  const tables: Partial<Record<string, SaturationTableData>> = Object.fromEntries(
+    VAPOUR_PRESSURE_EQUATIONS.map((eq) => [eq.id, buildSaturationTable(eq)]),
+  );
+  for (const id of REFRIGERANT_IDS)
+    if (!tables[id]) throw new TypeError(`No vapour-pressure equation for ${id}.`);
+  return tables as Record<RefrigerantId, SaturationTableData>;
+})();
 
 // ASHRAE Standard 34 safety groups (from memory): only R-1234yf is flammable (A2L, mildly flammable).
 const SAFETY: Record<

@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import { psychrolibSi } from "@/lib/psychro/psychrolib-si";
 import { saturationPressure } from "@/lib/refrigerants";
 import {
   absoluteToGaugeKpa,
@@ -19,6 +20,11 @@ describe("standard atmosphere (US Standard Atmosphere 1976; ASHRAE Handbook—Fu
     [4000, 61.64],
   ])("at %d m the barometer reads %d kPa", (altitudeM, kpa) => {
     expect(Math.abs(standardBarometricKpa(altitudeM) - kpa)).toBeLessThan(0.002);
+  });
+
+  it("computes exactly what psychrolib's GetStandardAtmPressure does, from -500 to 9000 m", () => {
+    for (let altitudeM = -500; altitudeM <= 9000; altitudeM += 12.5)
+      expect(standardBarometricKpa(altitudeM)).toBe(psychrolibSi().GetStandardAtmPressure(altitudeM) / 1000);
   });
 
   it("refuses altitudes no shop has", () => {

@@ -1,4 +1,3 @@
-import { psychrolibSi } from "@/lib/psychro/psychrolib-si";
 import { KPA_PER_UNIT } from "./factors";
 
 export interface BarometricSource {
@@ -13,12 +12,17 @@ export const STANDARD_ATMOSPHERE_KPA = 101.325;
 // The standard-atmosphere formula is meant for the troposphere; shops sit well inside these bounds.
 const ALTITUDE_RANGE_M = { min: -500, max: 9000 } as const;
 
-/** Standard-atmosphere barometric pressure, kPa (US Standard Atmosphere 1976; ASHRAE Handbook—Fundamentals 2017 ch. 1 eq. 3). */
+/**
+ * Standard-atmosphere barometric pressure, kPa (US Standard Atmosphere 1976; ASHRAE Handbook—Fundamentals
+ * 2017 ch. 1 eq. 3): p = 101.325 · (1 − 2.25577·10⁻⁵ · Z)^5.2559, Z in metres. Written out here rather
+ * than taken from psychrolib, which computes the same expression, so that the interview's screen does
+ * not carry the whole psychrometric library for one line (barometric.test.ts compares the two).
+ */
 export function standardBarometricKpa(altitudeM: number): number {
   if (!(altitudeM >= ALTITUDE_RANGE_M.min && altitudeM <= ALTITUDE_RANGE_M.max)) {
     throw new RangeError(`Altitude must be between ${ALTITUDE_RANGE_M.min} and ${ALTITUDE_RANGE_M.max} m.`);
   }
-  return psychrolibSi().GetStandardAtmPressure(altitudeM) / 1000;
+  return (101325 * Math.pow(1 - 2.25577e-5 * altitudeM, 5.2559)) / 1000;
 }
 
 export function barometricKpa(at?: BarometricSource): number {
