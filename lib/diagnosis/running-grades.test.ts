@@ -359,3 +359,116 @@ describe("bands without the tables", () => {
     expect(extraction.observations.map((o) => o.id)).toContain("high_side:normal");
   });
 });
+
+describe("exactly on an edge (the grading table's edges are inclusive where it says 'up to')", () => {
+  // The reading's saturation temperature is taken from the physics core first, then the edge is put exactly
+  // on it: through the ambient for the high side's band (edges ambient + 14 and + 30 K, far 10 K below and
+  // 8 K above), and through the line temperature for subcooling and superheat. Temperatures between 32 and
+  // 64 °C keep these sums exact in binary floating point.
+  const condensingOf = (highKpaGauge: number) =>
+    extractEvidence({ ...base, highKpaGauge }).computed.condensingC!;
+
+  it("grades a high side exactly on each band edge as the inner grade", () => {
+    const high = atSat(52);
+    const c = condensingOf(high);
+    const at = (ambientC: number) =>
+      gradeOf({ ...base, ambientC, relativeHumidityPct: undefined, highKpaGauge: high }, "high_side");
+    // c = ambient + 14 − 10: the far edge below belongs to "low".
+    expect(at(c - CONDENSING_ABOVE_AMBIENT_K.min + HIGH_SIDE_FAR_K.below)).toEqual(["high_side:low"]);
+    // c = ambient + 14: the lower edge belongs to "normal".
+    expect(at(c - CONDENSING_ABOVE_AMBIENT_K.min)).toEqual(["high_side:normal"]);
+    // c = ambient + 30 + 8: the far edge above belongs to "high".
+    expect(at(c - CONDENSING_ABOVE_AMBIENT_K.max - HIGH_SIDE_FAR_K.above)).toEqual(["high_side:high"]);
+  });
+
+  it("grades subcooling exactly on each edge as the lower grade", () => {
+    const c = condensingOf(atSat(50));
+    for (const device of ["txv", "orifice_tube"] as const) {
+      const t = SUBCOOLING_K[device];
+      const at = (k: number) =>
+        gradeOf(
+          { ...base, expansionDevice: device, highKpaGauge: atSat(50), liquidLineC: c - k },
+          "subcooling",
+        );
+      expect(at(t.none)).toEqual(["subcooling:none"]);
+      expect(at(t.low)).toEqual(["subcooling:normal"]);
+      expect(at(t.high)).toEqual(["subcooling:normal"]);
+      expect(at(t.veryHigh)).toEqual(["subcooling:high"]);
+    }
+  });
+
+  it("grades superheat exactly on each edge", () => {
+    // A low side evaporating near 33 °C is no working system, but superheat is graded on its own.
+    const low = atSat(33);
+    const e = extractEvidence({ ...base, lowKpaGauge: low }).computed.evaporatingC!;
+    const at = (device: "txv" | "orifice_tube", k: number) =>
+      gradeOf({ ...base, expansionDevice: device, lowKpaGauge: low, suctionLineC: e + k }, "superheat");
+    expect(at("txv", SUPERHEAT_K.txv.nearZero)).toEqual(["superheat:normal"]);
+    expect(at("txv", SUPERHEAT_K.txv.high)).toEqual(["superheat:normal"]);
+    expect(at("txv", SUPERHEAT_K.txv.veryHigh)).toEqual(["superheat:high"]);
+  });
+
+  it("reads a high side exactly at the critical pressure as transcritical (Span & Wagner 1996: 7,377.3 kPa abs)", () => {
+    const critical = 7377.3;
+    const highKpaGauge = critical - SEA_LEVEL_KPA;
+    const input = { refrigerant: "R-744", expansionDevice: "txv", ambientC: 25, highKpaGauge } as const;
+    const extraction = extractEvidence(input);
+    expect(extraction.computed.highKpaAbs).toBe(critical);
+    expect(extraction.computed.highSideTranscritical).toBe(true);
+    expect(extraction.computed.condensingC).toBeUndefined();
+    expect(extraction.notes.map((n) => n.key)).toContain("note:transcritical");
+  });
+});
+
+describe("what the running notes say", () => {
+  const noteText = (input: DiagnosisInput, key: string) => {
+    const note = extractEvidence(input).notes.find((n) => n.key === key);
+    return note ? formatMessage(note) : "";
+  };
+
+  it("names the refrigerant and the reading when a side cannot be graded", () => {
+    expect(noteText({ ...base, highKpaGauge: -60 }, "note:high_outside_table")).toBe(
+      "High side −60 kPa gauge is outside the saturation table for R-134a; it was not graded.",
+    );
+    // Above the critical pressure no saturation temperature exists (Tillner-Roth & Baehr 1994: 4,059.3 kPa abs).
+    expect(noteText({ ...base, lowKpaGauge: 4000 }, "note:low_outside_table")).toBe(
+      "Low side 4,000 kPa gauge is outside the saturation table for R-134a; it was not graded.",
+    );
+    expect(gradeOf({ ...base, lowKpaGauge: 4000 }, "low_side")).toEqual([]);
+    expect(
+      noteText(
+        { refrigerant: "R-744", expansionDevice: "txv", ambientC: 35, highKpaGauge: 9500 },
+        "note:transcritical",
+      ),
+    ).toMatch(/^High side 9,500 kPa gauge is above the critical pressure of R-744/);
+  });
+
+  it("says a vacuum on the low side in its own sentence", () => {
+    const observation = extractEvidence({ ...base, lowKpaGauge: -20 }).observations.find(
+      (o) => o.id === "low_side:vacuum",
+    );
+    expect(observation?.message.key).toBe("low_side:vacuum");
+    expect(observation && formatMessage(observation.message)).toBe(
+      "Low side −20 kPa gauge is at or below atmospheric pressure (vacuum) while running.",
+    );
+  });
+
+  it("works out no lift from one side alone", () => {
+    expect(gradeOf({ ...base, highKpaGauge: atSat(50) }, "lift")).toEqual([]);
+    expect(gradeOf({ ...base, lowKpaGauge: atSat(2) }, "lift")).toEqual([]);
+    expect(extractEvidence({ ...base, highKpaGauge: atSat(50) }).computed.liftK).toBeUndefined();
+  });
+
+  it("grades a cycling clutch's low side when the cut-out is off the table, as one point of the swing", () => {
+    const extraction = extractEvidence({
+      ...base,
+      compressorType: "cycling_clutch",
+      lowKpaGauge: atSat(2),
+      lowCutOutKpaGauge: -60,
+      lowCutInKpaGauge: atSat(10),
+    });
+    expect(extraction.observations.find((o) => o.id === "low_side:normal")?.strength).toBe(
+      CYCLING.snapshotStrength,
+    );
+  });
+});
