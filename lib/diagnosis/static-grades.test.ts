@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { refrigerantInfo, saturationPressure } from "@/lib/refrigerants";
+import { saturationTemperatureOrNull } from "@/lib/refrigerants/saturation-guard";
 import { NEARLY_EMPTY_STATIC } from "@/lib/refrigerants/static-charge";
 import { standardBarometricKpa } from "@/lib/units/barometric";
 import { extractEvidence } from "./evidence";
@@ -162,6 +163,44 @@ describe("where the static check cannot judge", () => {
     expect(extraction.computed.staticExcessKpa).toBeCloseTo(
       500 + standardBarometricKpa(1500) - saturationPressure("R-134a", 25),
       6,
+    );
+  });
+});
+
+describe("the static check exactly on its edges", () => {
+  it("judges a reference of exactly −5 °C, and only colder is too cold", () => {
+    const edge = { ...base, ambientC: STATIC_CHECK.minReferenceC, staticKpaGauge: 10 } as const;
+    expect(staticObservation(edge)?.id).toBe("static:empty");
+    expect(noteKeys(edge)).not.toContain("note:static_too_cold");
+  });
+
+  it("calls a static of exactly 70 kPa gauge not empty: the line is under 70 (at 0 °C, where it is the higher line)", () => {
+    const edge = { ...base, ambientC: 0, staticKpaGauge: NEARLY_EMPTY_STATIC.belowKpaGauge } as const;
+    expect(staticObservation(edge)?.id).toBe("static:no_liquid");
+  });
+
+  it("grades an excess of exactly 4 K and 7 K as the lower grade (grading table: up to 4, up to 7)", () => {
+    // The parts' soak temperature is put exactly the excess under the reading's own saturation temperature.
+    const staticKpaGauge = 900;
+    const saturationC = saturationTemperatureOrNull("R-134a", staticKpaGauge + SEA_LEVEL_KPA)!;
+    const at = (excessK: number) =>
+      staticObservation({ ...soaked, staticSoakC: saturationC - excessK, staticKpaGauge })?.id;
+    expect(at(STATIC_CHECK.highAboveK)).toBe("static:slightly_high");
+    expect(at(STATIC_CHECK.veryHighAboveK)).toBe("static:high");
+    expect(at(STATIC_CHECK.normalUpToK)).toBe("static:normal");
+  });
+
+  it("counts a judged static among the readings measured", () => {
+    expect(extractEvidence(atExcess(0.5)).observedGroups.has("static")).toBe(true);
+  });
+
+  it("says so when the reference lies past the refrigerant's table (an input the schema would refuse)", () => {
+    // R-134a's table ends at its critical temperature, 101.06 °C (Tillner-Roth & Baehr 1994).
+    const input = { ...base, staticSoakC: 105, staticKpaGauge: 3000 } as const;
+    expect(staticObservation(input)).toBeUndefined();
+    const note = extractEvidence(input).notes.find((n) => n.key === "note:static_outside_table");
+    expect(note && formatMessage(note)).toBe(
+      "Static pressure check not possible: 105.0 °C is outside the R-134a saturation table.",
     );
   });
 });
