@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { saturationPressure } from "@/lib/refrigerants";
-import { CONDENSING_ABOVE_AMBIENT_K, EVAPORATING_C } from "@/lib/refrigerants/expected-bands";
+import { CONDENSING_ABOVE_AMBIENT_K, EVAPORATING_C, humidityShiftK } from "@/lib/refrigerants/expected-bands";
 import { extractEvidence } from "./evidence";
 import {
   CYCLING,
@@ -470,5 +470,35 @@ describe("what the running notes say", () => {
     expect(extraction.observations.find((o) => o.id === "low_side:normal")?.strength).toBe(
       CYCLING.snapshotStrength,
     );
+  });
+});
+
+describe("the low side exactly on its band's edges", () => {
+  // The low band's edges move with the humidity (expected-bands: up to 2 K at the extremes). For a reading's
+  // own evaporating temperature, find the humidity that puts an edge exactly on it: the shift changes far
+  // more finely with the humidity than the temperatures' last digit, so an exact match exists nearby.
+  const valve = { ...base, expansionDevice: "txv" } as const;
+  const humidityPutting = (edgeC: (shiftK: number) => number, targetC: number, guessPct: number) => {
+    for (let k = 0; k < 20000; k++) {
+      for (const sign of [1, -1]) {
+        const pct = guessPct + sign * k * 4e-15 * guessPct;
+        if (edgeC(humidityShiftK(pct)) === targetC) return pct;
+      }
+    }
+    throw new Error(`no humidity puts the edge on ${targetC}`);
+  };
+  const gradeAtEdge = (satC: number, edgeC: (shiftK: number) => number) => {
+    const lowKpaGauge = atSat(satC);
+    const e = extractEvidence({ ...valve, lowKpaGauge }).computed.evaporatingC!;
+    const guess = 50 + 25 * (e - edgeC(0));
+    const relativeHumidityPct = humidityPutting(edgeC, e, guess);
+    const extraction = extractEvidence({ ...valve, relativeHumidityPct, lowKpaGauge });
+    return extraction.observations.filter((o) => o.id.startsWith("low_side:")).map((o) => o.id);
+  };
+
+  it("takes the lower edge and the far edge below as the inner grade, and the upper edge as normal", () => {
+    expect(gradeAtEdge(-3.5, (s) => EVAPORATING_C.min + s)).toEqual(["low_side:normal"]);
+    expect(gradeAtEdge(-11.5, (s) => EVAPORATING_C.min + s - LOW_SIDE_FAR_BELOW_K)).toEqual(["low_side:low"]);
+    expect(gradeAtEdge(8.5, (s) => EVAPORATING_C.max + s + 0)).toEqual(["low_side:normal"]);
   });
 });
