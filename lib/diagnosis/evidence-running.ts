@@ -186,6 +186,7 @@ export function addRunningEvidence(input: DiagnosisInput, barometricKpa: number,
     addSubcooling(input, condensingC, input.liquidLineC, out);
   if (
     evaporatingC !== null &&
+    // Stryker disable next-line ConditionalExpression: equivalent, an evaporating temperature implies a low side
     input.lowKpaGauge !== undefined &&
     input.lowKpaGauge > 0 &&
     input.suctionLineC !== undefined

@@ -377,8 +377,22 @@ describe("exactly on an edge (the grading table's edges are inclusive where it s
     expect(at(c - CONDENSING_ABOVE_AMBIENT_K.min + HIGH_SIDE_FAR_K.below)).toEqual(["high_side:low"]);
     // c = ambient + 14: the lower edge belongs to "normal".
     expect(at(c - CONDENSING_ABOVE_AMBIENT_K.min)).toEqual(["high_side:normal"]);
+    // c = ambient + 30: the upper edge belongs to "normal".
+    expect(at(c - CONDENSING_ABOVE_AMBIENT_K.max)).toEqual(["high_side:normal"]);
     // c = ambient + 30 + 8: the far edge above belongs to "high".
     expect(at(c - CONDENSING_ABOVE_AMBIENT_K.max - HIGH_SIDE_FAR_K.above)).toEqual(["high_side:high"]);
+  });
+
+  it("calls a lift exactly at the margin under the smallest normal lift normal: only less is close", () => {
+    const valve = { ...base, expansionDevice: "txv", relativeHumidityPct: undefined } as const;
+    const sides = { highKpaGauge: atSat(45), lowKpaGauge: atSat(2) };
+    const liftK = extractEvidence({ ...valve, ...sides }).computed.liftK!;
+    // Smallest normal lift = (ambient + 14) − 8 on a valve system at neutral humidity; the margin is 5 K.
+    const ambientC = liftK - (CONDENSING_ABOVE_AMBIENT_K.min - EVAPORATING_C.max - LIFT_CLOSE_MARGIN_K);
+    const extraction = extractEvidence({ ...valve, ...sides, ambientC });
+    const lift = extraction.observations.find((o) => o.id.startsWith("lift:"));
+    expect(lift?.message.values?.minLift?.value).toBe(liftK + LIFT_CLOSE_MARGIN_K);
+    expect(lift?.id).toBe("lift:normal");
   });
 
   it("grades subcooling exactly on each edge as the lower grade", () => {
