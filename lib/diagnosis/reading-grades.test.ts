@@ -180,7 +180,23 @@ describe("the centre vent (grading table VENT_C)", () => {
   });
 });
 
+describe("the vent limit outside the psychrometric range", () => {
+  it("falls back to the mild-weather limit with no wet bulb when the air is past the psychrometric range", () => {
+    // The psychrometric functions refuse air past their range (lib/psychro); the vent limit then stays at its base.
+    const hot = ventColdLimitC({ ambientC: 250, relativeHumidityPct: 50 });
+    expect(hot).toEqual({ coldMaxC: VENT_C.coldBaseC, wetBulbC: null });
+    const extraction = extractEvidence({ ...base, ambientC: 250, ventC: 6 });
+    expect(extraction.computed.wetBulbC).toBeUndefined();
+    expect(extraction.computed.ventColdMaxC).toBe(VENT_C.coldBaseC);
+    expect(extraction.observations.find((o) => o.id.startsWith("vent:"))?.id).toBe("vent:cold");
+  });
+});
+
 describe("symptoms", () => {
+  it("adds no symptom when none was reported", () => {
+    expect(idsOf(base).filter((id) => id.startsWith("symptom:"))).toEqual([]);
+  });
+
   it("adds each reported symptom once and leaves the clutch ones to the clutch rules", () => {
     const ids = idsOf({
       ...base,
