@@ -1,6 +1,6 @@
 // Prints the mutation score per area from Stryker's JSON report (npm run test:mutation runs it after
 // Stryker) and fails when the whole, or lib/diagnosis, is under the goal of issue 16.
-import { readFileSync } from "node:fs";
+import { existsSync, readdirSync, readFileSync, statSync } from "node:fs";
 import { join } from "node:path";
 
 export const MUTATION_AREAS = [
@@ -18,6 +18,8 @@ interface Report {
 }
 export interface AreaScore {
   area: string;
+  /** source files of the area with results in the report (a partial run shows fewer than the area has) */
+  files: number;
   killed: number;
   timeout: number;
   survived: number;
@@ -31,6 +33,7 @@ export function scoreAreas(report: Report, areas: readonly string[] = MUTATION_A
   const tally = (area: string, inArea: (file: string) => boolean): AreaScore => {
     const s: AreaScore = {
       area,
+      files: 0,
       killed: 0,
       timeout: 0,
       survived: 0,
@@ -40,6 +43,7 @@ export function scoreAreas(report: Report, areas: readonly string[] = MUTATION_A
     };
     for (const [file, { mutants }] of Object.entries(report.files)) {
       if (!inArea(file)) continue;
+      s.files++;
       for (const { status } of mutants) {
         if (status === "Killed") s.killed++;
         else if (status === "Timeout") s.timeout++;
@@ -57,11 +61,11 @@ export function scoreAreas(report: Report, areas: readonly string[] = MUTATION_A
 }
 
 export function formatScores(scores: readonly AreaScore[]): string {
-  const head = ["area", "score %", "killed", "timeout", "survived", "no coverage", "ignored"];
+  const head = ["area", "score %", "files", "killed", "timeout", "survived", "no coverage", "ignored"];
   const rows = scores.map((s) => [
     s.area,
     s.scorePct === null ? "–" : s.scorePct.toFixed(1),
-    ...[s.killed, s.timeout, s.survived, s.noCoverage, s.ignored].map(String),
+    ...[s.files, s.killed, s.timeout, s.survived, s.noCoverage, s.ignored].map(String),
   ]);
   const widths = head.map((h, i) => Math.max(h.length, ...rows.map((r) => r[i]!.length)));
   const line = (cells: string[]) =>
@@ -77,9 +81,23 @@ export function belowGoal(scores: readonly AreaScore[]): AreaScore[] {
 }
 
 if (process.argv[1]?.endsWith("mutation-score.ts")) {
-  // One report by default; several (runs of different areas, each given with --mutate) are merged file by file.
+  // By default every area's last report (reports/mutation/<area>.json, written by scripts/mutation.sh), oldest
+  // first, merged file by file so the newest result for a file wins; or the reports given as arguments.
   const paths = process.argv.slice(2);
-  if (paths.length === 0) paths.push(join(process.cwd(), "reports", "mutation", "mutation.json"));
+  if (paths.length === 0) {
+    const dir = join(process.cwd(), "reports", "mutation");
+    if (existsSync(dir))
+      paths.push(
+        ...readdirSync(dir)
+          .filter((name) => name.endsWith(".json"))
+          .map((name) => join(dir, name))
+          .sort((a, b) => statSync(a).mtimeMs - statSync(b).mtimeMs),
+      );
+  }
+  if (paths.length === 0) {
+    console.error("No mutation report under reports/mutation: run `npm run test:mutation` first.");
+    process.exit(1);
+  }
   const merged: Report = { files: {} };
   for (const path of paths)
     Object.assign(merged.files, (JSON.parse(readFileSync(path, "utf8")) as Report).files);

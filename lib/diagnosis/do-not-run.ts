@@ -31,6 +31,7 @@ export interface DoNotRun {
 /** A mass charged back counts as a recharge from half the label up (judgement: a partial charge is not one). */
 export function recharged(input: Pick<DiagnosisInput, "chargedG" | "labelChargeG">): boolean {
   const { chargedG, labelChargeG } = input;
+  // Stryker disable next-line ConditionalExpression: equivalent, !(undefined > 0) also returns false
   if (chargedG === undefined || !(chargedG > 0)) return false;
   return labelChargeG === undefined || chargedG >= labelChargeG * DO_NOT_RUN.rechargedFromFractionOfLabel;
 }
@@ -85,6 +86,7 @@ function worstDeficitK(deficits: StaticDeficits | null): number | null {
 }
 
 function subcoolingNone(input: DiagnosisInput, barometricKpa: number): boolean {
+  // Stryker disable next-line ConditionalExpression,LogicalOperator: equivalent, a missing reading gives NaN and false below
   if (input.highKpaGauge === undefined || input.liquidLineC === undefined) return false;
   const condensingC = saturationTemperatureOrNull(input.refrigerant, input.highKpaGauge + barometricKpa);
   return condensingC !== null && condensingC - input.liquidLineC <= SUBCOOLING_K[input.expansionDevice].none;
@@ -113,6 +115,7 @@ export function doNotRunState(input: DiagnosisInput): DoNotRun {
   // The shared empty-system test (the interview's branch) as well as the deficit at the soak temperature:
   // they draw the same line at the air temperature, and the shared one also reads a gauge at zero in the cold.
   const noLiquid =
+    // Stryker disable next-line ConditionalExpression: equivalent, null > 5 is false
     (deficitK !== null && deficitK > STATIC_CHECK.noLiquidBelowK) ||
     staticShowsNoCharge({
       refrigerant: input.refrigerant,
@@ -122,6 +125,7 @@ export function doNotRunState(input: DiagnosisInput): DoNotRun {
     });
   if (noLiquid) reasons.push("no_liquid");
   if (input.recoveredChargeG !== undefined) reasons.push("recovered_not_recharged");
+  // Stryker disable next-line ArrayDeclaration: equivalent, any other default still has no "leak_found"
   const symptoms = input.symptoms ?? [];
   if (
     symptoms.includes("leak_found") &&

@@ -24,8 +24,9 @@ import {
 function bandsFor(
   input: DiagnosisInput,
   barometricKpa: number,
-): { high: SaturationBand; low: SaturationBand; fromTables: boolean } {
+): { high: SaturationBand; low: SaturationBand } {
   // Skip the call when the band would leave the table (R-744 above ~0 °C ambient): it would only return null.
+  // Stryker disable next-line ArithmeticOperator: equivalent, a speed guard; expectedBands returns null wherever it skips
   const hottestC = input.ambientC + CONDENSING_ABOVE_AMBIENT_K.max + HUMIDITY_SHIFT_MAX_K;
   const bands = tempInTable(input.refrigerant, hottestC)
     ? expectedBands({
@@ -42,7 +43,7 @@ function bandsFor(
       minKpaGauge: b.minKpaAbs - barometricKpa,
       maxKpaGauge: b.maxKpaAbs - barometricKpa,
     });
-    return { high: gauge(bands.high), low: gauge(bands.low), fromTables: true };
+    return { high: gauge(bands.high), low: gauge(bands.low) };
   }
   return {
     high: {
@@ -53,7 +54,6 @@ function bandsFor(
       minSaturationC: FALLBACK_EVAPORATING_C.min,
       maxSaturationC: FALLBACK_EVAPORATING_C.max,
     },
-    fromTables: false,
   };
 }
 
@@ -63,6 +63,7 @@ function bandValues(band: SaturationBand, ambientC: number): Record<string, Quan
     bandMaxSat: tempC(band.maxSaturationC),
     ambient: tempC(ambientC),
   };
+  // Stryker disable next-line LogicalOperator,ConditionalExpression: equivalent, bandsFor sets both edges or neither
   if (band.minKpaGauge !== undefined && band.maxKpaGauge !== undefined) {
     values.bandMin = gaugeKpa(band.minKpaGauge);
     values.bandMax = gaugeKpa(band.maxKpaGauge);
@@ -185,6 +186,7 @@ export function addRunningEvidence(input: DiagnosisInput, barometricKpa: number,
     addSubcooling(input, condensingC, input.liquidLineC, out);
   if (
     evaporatingC !== null &&
+    // Stryker disable next-line ConditionalExpression: equivalent, an evaporating temperature implies a low side
     input.lowKpaGauge !== undefined &&
     input.lowKpaGauge > 0 &&
     input.suctionLineC !== undefined
@@ -198,6 +200,7 @@ export function addRunningEvidence(input: DiagnosisInput, barometricKpa: number,
  * says nothing more; one well below the cut-out does (the switch should have opened).
  */
 function snapshotInSwing(input: DiagnosisInput, evaporatingC: number): boolean {
+  // Stryker disable next-line ConditionalExpression: equivalent, a missing cut-out gives a null saturation below
   if (input.compressorType !== "cycling_clutch" || input.lowCutOutKpaGauge === undefined) return false;
   if (input.lowCutInKpaGauge === undefined) return false;
   const cutOutC = saturationOrNull(input.refrigerant, input.lowCutOutKpaGauge + barometricOf(input));

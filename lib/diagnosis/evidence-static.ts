@@ -14,6 +14,7 @@ export type SoakQuality = "measured" | "short" | "unmeasured";
  * the parts', counts for STATIC_SOAK.weakFactor of the evidence.
  */
 export function soakQuality(input: Pick<DiagnosisInput, "staticSoakC" | "staticSoakMin">): SoakQuality {
+  // Stryker disable next-line ConditionalExpression: equivalent, undefined < minMinutes is false
   if (input.staticSoakMin !== undefined && input.staticSoakMin < STATIC_SOAK.minMinutes) return "short";
   return input.staticSoakC !== undefined && input.staticSoakMin !== undefined ? "measured" : "unmeasured";
 }
