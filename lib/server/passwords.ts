@@ -13,6 +13,7 @@ import {
   type PasswordResetResponse,
 } from "@/lib/contracts/passwords";
 import { recordAudit } from "./audit";
+import { forgetUserSessions } from "@/lib/auth/session-cache";
 
 /** Wrong current passwords allowed per person in the window before the check pauses. */
 const CURRENT_PASSWORD_TRIES = 5;
@@ -107,6 +108,9 @@ export async function changeOwnPassword({
       where: { userId: user.id, id: { [Op.ne]: sessionId } },
       transaction,
     });
+    // The ended sessions must not live on in this process's short session memory (lib/auth/session-cache.ts);
+    // this one is read again too, so the "must change" flag is not remembered past the change.
+    forgetUserSessions(user.id);
     await recordAudit({
       shopId: user.shopId,
       actorId: user.id,
@@ -168,6 +172,7 @@ export async function resetPassword({
       { where: { id: row.id, shopId: actor.shopId }, transaction },
     );
     const sessionsEnded = await Session.destroy({ where: { userId: row.id }, transaction });
+    forgetUserSessions(row.id);
     // The temporary password itself is never written anywhere but the answer to the owner.
     await recordAudit({
       shopId: actor.shopId,
