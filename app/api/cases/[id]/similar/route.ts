@@ -1,6 +1,6 @@
 import { handler } from "@/lib/server/handler";
-import { similarCases } from "@/lib/server/casebook/similar";
-import { ANSWER_CACHE_HEADER, rememberedAnswer } from "@/lib/server/casebook/answer-cache";
+import { ANSWER_CACHE_HEADER } from "@/lib/server/casebook/answer-cache";
+import { rememberedSimilar } from "@/lib/server/casebook/remembered";
 import { caseParamsSchema } from "@/lib/contracts/cases";
 import { similarCasesQuerySchema } from "@/lib/contracts/casebook";
 
@@ -8,10 +8,7 @@ import { similarCasesQuerySchema } from "@/lib/contracts/casebook";
 export const GET = handler(
   { permission: "casebook:search", params: caseParamsSchema, query: similarCasesQuerySchema },
   async ({ user, params, query, responseHeaders }) => {
-    const { value, hit } = await rememberedAnswer(
-      { shopId: user.shopId, caseId: params.id, question: `similar:${params.id}:${query.k}` },
-      () => similarCases({ shopId: user.shopId, caseId: params.id, k: query.k }),
-    );
+    const { value, hit } = await rememberedSimilar({ shopId: user.shopId, caseId: params.id, k: query.k });
     responseHeaders.set(ANSWER_CACHE_HEADER, hit ? "hit" : "miss");
     return value;
   },
