@@ -37,6 +37,11 @@ const text = (max: number) =>
   multiLineText().trim().max(max, `At most ${max} characters.`).nullable().optional();
 
 /** A save of the service record: every value in internal units (g, mL, kPa absolute, °C); empty fields are null. */
+/** True when `step` is `target` or comes after it in the record's order. */
+function reached(step: ServiceStepId, target: ServiceStepId): boolean {
+  return SERVICE_STEPS.indexOf(step) >= SERVICE_STEPS.indexOf(target);
+}
+
 export const serviceRecordInputSchema = z
   .object({
     baseVersion: z
@@ -91,11 +96,18 @@ export const serviceRecordInputSchema = z
       path: ["recoveryEndedAt"],
     },
   )
-  .refine((r) => !(r.recoveredChargeG && r.recoveredChargeG > 0) || r.recoveryCylinderId, {
-    message: "Choose the recovery cylinder the refrigerant went into: the ledger needs it.",
-    path: ["recoveryCylinderId"],
-  })
-  .refine((r) => !(r.chargedG && r.chargedG > 0) || r.chargeCylinderId, {
+  // A mass needs its cylinder once the technician saves the step that asks for the cylinder (or a later
+  // one). A mass brought over from the interview may sit on the record before then: the ledger line is
+  // written when the cylinder is named, so an earlier step never refuses for a field it does not show.
+  .refine(
+    (r) =>
+      !reached(r.step, "recovery") || !(r.recoveredChargeG && r.recoveredChargeG > 0) || r.recoveryCylinderId,
+    {
+      message: "Choose the recovery cylinder the refrigerant went into: the ledger needs it.",
+      path: ["recoveryCylinderId"],
+    },
+  )
+  .refine((r) => !reached(r.step, "recharge") || !(r.chargedG && r.chargedG > 0) || r.chargeCylinderId, {
     message: "Choose the cylinder the charge came from: the ledger needs it.",
     path: ["chargeCylinderId"],
   });
