@@ -3,7 +3,7 @@
 import { useMemo, useState } from "react";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { clsx } from "clsx";
-import { SERVICE_STEPS, type ServiceStepId } from "@/lib/contracts/service-records";
+import { SERVICE_STEP_OF_FIELD, SERVICE_STEPS, type ServiceStepId } from "@/lib/contracts/service-records";
 import { ApiError } from "@/lib/queries/api-fetch";
 import { saveServiceRecord, serviceRecordKeys } from "@/lib/queries/service-record";
 import { ledgerKeys } from "@/lib/queries/ledger";
@@ -102,7 +102,20 @@ export function ServiceRecordForm(props: ServiceRecordFormProps) {
         const mapped: Record<string, string> = {};
         for (const [k, v] of Object.entries(error.fieldErrors ?? {})) if (v[0]) mapped[k] = v[0];
         setServerErrors(mapped);
-        setMessage({ tone: "error", text: `${error.message} Nothing you typed was lost.` });
+        // A field asked on another step is not on screen: say there which step asks for it.
+        const elsewhere = Object.entries(mapped)
+          .filter(([field]) => {
+            const asked = SERVICE_STEP_OF_FIELD[field as keyof typeof SERVICE_STEP_OF_FIELD];
+            return asked !== undefined && asked !== step;
+          })
+          .map(([field, text]) => {
+            const asked = SERVICE_STEP_OF_FIELD[field as keyof typeof SERVICE_STEP_OF_FIELD];
+            return `Step ${SERVICE_STEPS.indexOf(asked) + 1}, ${STEP_TITLES[asked]}: ${text}`;
+          });
+        setMessage({
+          tone: "error",
+          text: [error.message, ...elsewhere, "Nothing you typed was lost."].join(" "),
+        });
       } else
         setMessage({
           tone: "error",

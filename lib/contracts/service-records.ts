@@ -37,9 +37,42 @@ const text = (max: number) =>
   multiLineText().trim().max(max, `At most ${max} characters.`).nullable().optional();
 
 /** A save of the service record: every value in internal units (g, mL, kPa absolute, °C); empty fields are null. */
-/** True when `step` is `target` or comes after it in the record's order. */
-function reached(step: ServiceStepId, target: ServiceStepId): boolean {
-  return SERVICE_STEPS.indexOf(step) >= SERVICE_STEPS.indexOf(target);
+/** The step that asks for each field of the record: the rules above and the screen's messages read it. */
+export const SERVICE_STEP_OF_FIELD = {
+  specEntryId: "identify",
+  labelChargeG: "identify",
+  purityPct: "identify",
+  airPct: "identify",
+  recoveryStartedAt: "recovery",
+  recoveryEndedAt: "recovery",
+  recoveredChargeG: "recovery",
+  recoveryCylinderId: "recovery",
+  oilRemovedMl: "recovery",
+  oilPulled: "recovery",
+  slowRecoveryNote: "recovery",
+  deepestKpaAbs: "evacuation",
+  holdStartKpaAbs: "evacuation",
+  holdEndKpaAbs: "evacuation",
+  holdMinutes: "evacuation",
+  oilAddedType: "oil",
+  oilAddedMl: "oil",
+  partsReplaced: "oil",
+  targetG: "recharge",
+  chargedG: "recharge",
+  chargeCylinderId: "recharge",
+  finalAmbientC: "final",
+  finalHighKpaGauge: "final",
+  finalLowKpaGauge: "final",
+  finalVentC: "final",
+  notes: "final",
+} as const satisfies Record<string, ServiceStepId>;
+
+/**
+ * The record's `step` is where it resumes: saving a step sends the step after it. So a step's fields are
+ * settled once the record's step has moved past it.
+ */
+function movedPast(step: ServiceStepId, asked: ServiceStepId): boolean {
+  return SERVICE_STEPS.indexOf(step) > SERVICE_STEPS.indexOf(asked);
 }
 
 export const serviceRecordInputSchema = z
@@ -96,23 +129,38 @@ export const serviceRecordInputSchema = z
       path: ["recoveryEndedAt"],
     },
   )
-  // A mass needs its cylinder once the technician saves the step that asks for the cylinder (or a later
-  // one). A mass brought over from the interview may sit on the record before then: the ledger line is
-  // written when the cylinder is named, so an earlier step never refuses for a field it does not show.
+  // A mass needs its cylinder once the step that asks for the cylinder is saved. A mass brought over from
+  // the interview may sit on the record before then (the ledger line is written when the cylinder is
+  // named), so an earlier step never refuses for a field it does not show.
   .refine(
     (r) =>
-      !reached(r.step, "recovery") || !(r.recoveredChargeG && r.recoveredChargeG > 0) || r.recoveryCylinderId,
+      !movedPast(r.step, SERVICE_STEP_OF_FIELD.recoveryCylinderId) ||
+      !(r.recoveredChargeG && r.recoveredChargeG > 0) ||
+      r.recoveryCylinderId,
     {
       message: "Choose the recovery cylinder the refrigerant went into: the ledger needs it.",
       path: ["recoveryCylinderId"],
     },
   )
-  .refine((r) => !reached(r.step, "recharge") || !(r.chargedG && r.chargedG > 0) || r.chargeCylinderId, {
-    message: "Choose the cylinder the charge came from: the ledger needs it.",
-    path: ["chargeCylinderId"],
-  });
+  .refine(
+    (r) =>
+      !movedPast(r.step, SERVICE_STEP_OF_FIELD.chargeCylinderId) ||
+      !(r.chargedG && r.chargedG > 0) ||
+      r.chargeCylinderId,
+    {
+      message: "Choose the cylinder the charge came from: the ledger needs it.",
+      path: ["chargeCylinderId"],
+    },
+  );
 export type ServiceRecordInput = z.infer<typeof serviceRecordInputSchema>;
 export type ServiceRecordDraft = z.input<typeof serviceRecordInputSchema>;
+/** Every field of the record has its step above: a new field without one fails the typecheck here. */
+export type ServiceFieldsWithoutAStep = Exclude<
+  keyof ServiceRecordInput,
+  "baseVersion" | "step" | keyof typeof SERVICE_STEP_OF_FIELD
+>;
+const everyFieldHasAStep: [ServiceFieldsWithoutAStep] extends [never] ? true : false = true;
+void everyFieldHasAStep;
 
 /** How a typed entry is written and read: a quantity in the shop's units, a moment, or plain text. */
 export type ServiceEntryKind =
