@@ -1,6 +1,6 @@
 import type { SnapshotFrom } from "xstate";
 import type { DiagnosisInput } from "@/lib/diagnosis";
-import { cautionsFor, type Caution } from "@/lib/interview/cautions";
+import { cautionIdsFor, type CautionRef } from "@/lib/interview/caution-ids";
 import { progressFor, type ProgressEntry } from "@/lib/interview/progress";
 import type { SavedInterview } from "@/lib/interview/saved";
 import { groupForStep, isOptionalGroup, type GroupId, type StepId } from "@/lib/interview/steps";
@@ -18,7 +18,8 @@ export interface InterviewView {
   /** The answer group this step asks; null on findings. */
   group: GroupId | null;
   progress: ProgressEntry[];
-  cautions: Caution[];
+  /** The cautions in force, by catalogue id: their words come rendered from the server. */
+  cautions: CautionRef[];
   canGoNext: boolean;
   canGoBack: boolean;
   canSkip: boolean;
@@ -39,7 +40,7 @@ export function viewOf(snapshot: InterviewSnapshot): InterviewView {
     step,
     group,
     progress: progressFor(context, step, context.visited),
-    cautions: cautionsFor(context.answers, { shop: context.shop, step }),
+    cautions: cautionIdsFor(context.answers, { shop: context.shop, step }).map((id) => ({ id })),
     canGoNext: snapshot.can({ type: "NEXT" }),
     canGoBack: snapshot.can({ type: "BACK" }),
     canSkip: group !== null && isOptionalGroup(group),

@@ -14,7 +14,8 @@ import {
   type DiagnosisInput,
   type ReaderUnits,
 } from "@/lib/diagnosis";
-import type { Caution as InterviewCaution } from "@/lib/interview/cautions";
+import { cautionsById } from "@/lib/cautions/catalog";
+import type { CautionRef } from "@/lib/interview/caution-ids";
 import { ApiError } from "@/lib/queries/api-fetch";
 import { submitCase, type CaseSubmitResult } from "@/lib/queries/case-submit";
 import { CautionsList, type CautionItem } from "@/components/cautions/cautions-list";
@@ -39,7 +40,8 @@ interface Props {
   input: DiagnosisInput | null;
   /** The technician's units: every number in the findings is shown in them. */
   units?: ReaderUnits;
-  interviewCautions: InterviewCaution[];
+  /** The interview's cautions in force, by id; the findings screen words them from the catalogue. */
+  interviewCautions: CautionRef[];
   /** whether submitting sends the case to a senior (lib/cases/rules.ts) rather than signing it off */
   waitsForSignOff: boolean;
   /** The review so far; a resubmission starts from the conclusion sent before. */
@@ -112,7 +114,7 @@ export function FindingsStep({
 
   const chosen = cause || findings.suspects[0]?.cause || "";
   // The engine's cautions are the catalogue's (a repair in its conditional wording): one caution, one level.
-  const allCautions: CautionItem[] = [...interviewCautions];
+  const allCautions: CautionItem[] = cautionsById(interviewCautions.map((c) => c.id));
   for (const c of findings.cautions) if (!allCautions.some((x) => x.id === c.id)) allCautions.push(c);
   // While the system must not be run, its cautions follow the next check and never fold, however often seen.
   const pinned = findings.doNotRun.active ? allCautions.filter((c) => DO_NOT_RUN_CAUTIONS.has(c.id)) : [];

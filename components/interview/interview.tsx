@@ -13,7 +13,7 @@ import {
 } from "@/machines/interview-view";
 import { STEP_LABELS, type GroupId, type StepId } from "@/lib/interview/steps";
 import { altitudeFor } from "@/lib/interview/branches";
-import { CautionsList } from "@/components/cautions/cautions-list";
+import { CautionsFold } from "@/components/cautions/cautions-fold";
 import { STEP_LEADS } from "./labels";
 import { ProgressStrip } from "./progress-strip";
 import { SaveBanner } from "./save-banner";
@@ -22,6 +22,7 @@ import type { SpecPick } from "./spec-matches";
 import { StepForm, type StepFormHandle } from "./step-form";
 import { useAutosave } from "./use-autosave";
 import { useShownCautions } from "./use-shown-cautions";
+import type { StepCautionCards } from "./step-caution-cards";
 import type { PhysicsContext } from "@/lib/interview/readouts";
 import type { ReaderUnits } from "@/lib/units";
 import { attentionOf } from "./attention";
@@ -29,7 +30,7 @@ import type { ValuesMode } from "./use-group-form";
 
 // A keystroke re-renders the interview; the parts that did not change skip it (their props keep
 // their identity while only a draft changes, see useView).
-const StepCautions = memo(CautionsList);
+const StepCautions = memo(CautionsFold);
 const Progress = memo(ProgressStrip);
 const ReviewNote = memo(SentBackNote);
 // The spec table's matches show on the system step only, and load with it.
@@ -75,6 +76,8 @@ export interface InterviewProps {
   review: ReviewContext;
   heading: string;
   vehicleId: number | null;
+  /** Every caution a step can show, drawn on the server in the technician's units. */
+  cautionCards: StepCautionCards;
 }
 
 const noChange = () => () => {};
@@ -92,6 +95,7 @@ export function Interview({
   review,
   heading,
   vehicleId,
+  cautionCards,
 }: InterviewProps) {
   // Without a locale on the profile, numbers are read the way this device's language writes them.
   const deviceLocale = useSyncExternalStore(
@@ -145,6 +149,10 @@ export function Interview({
     caseId,
     step,
     stepCautions.map((c) => c.id),
+  );
+  const stepCards = useMemo(
+    () => stepCautions.map((c) => cautionCards.cards[c.id]),
+    [stepCautions, cautionCards],
   );
 
   const physics: PhysicsContext = useMemo(
@@ -200,7 +208,9 @@ export function Interview({
           </h1>
           {STEP_LEADS[step] && <p className="text-ink-soft">{STEP_LEADS[step]}</p>}
         </header>
-        {step !== "findings" && <StepCautions cautions={stepCautions} shownEarlier={shownEarlier} />}
+        {step !== "findings" && (
+          <StepCautions cards={stepCards} shownEarlier={shownEarlier} foldMark={cautionCards.foldMark} />
+        )}
         {step === "system" && vehicleId !== null && <Specs vehicleId={vehicleId} onPick={applySpec} />}
         {group && (
           <form

@@ -1,21 +1,8 @@
-import { refrigerantInfo, type RefrigerantId } from "@/lib/refrigerants/catalog";
-import { type Caution, type CautionId, cautionsById } from "./catalog";
+import type { RefrigerantId } from "@/lib/refrigerants/catalog";
+import { type Caution, cautionsById } from "./catalog";
+import { refrigerantCautionIds, ventingBanApplies } from "./refrigerant-rules";
 
-/** The cautions a refrigerant brings of its own, most serious first. */
-export function refrigerantCautionIds(refrigerant: RefrigerantId): CautionId[] {
-  if (refrigerant === "R-1234yf") return ["flammable_r1234yf"];
-  if (refrigerant === "R-744") return ["r744_pressure", "co2_asphyxiation"];
-  return [];
-}
-
-/**
- * The venting bans cover the HFCs, HFOs and CFCs; releasing an R-744 charge follows the vehicle maker's
- * procedure instead (the US ban under Clean Air Act §608(c) exempts CO₂, from memory). An unknown
- * refrigerant keeps the ban on screen: better once too often than missed.
- */
-export function ventingBanApplies(refrigerant: RefrigerantId | undefined): boolean {
-  return refrigerant === undefined || refrigerantInfo(refrigerant).chemistry !== "natural";
-}
+export { refrigerantCautionIds, ventingBanApplies } from "./refrigerant-rules";
 
 /** Cautions to show wherever a technician works on a system with this refrigerant, most specific first. */
 export function refrigerantCautions(refrigerant: RefrigerantId): Caution[] {

@@ -8,6 +8,7 @@ import { getProfile } from "@/lib/server/profile";
 import { formatShopTime } from "@/lib/units/clock";
 import { isAppError } from "@/lib/errors";
 import { InterviewBoot } from "@/components/interview/interview-boot";
+import { stepCautionCards } from "@/components/interview/step-caution-cards";
 import type { SavedInterview } from "@/machines/interview-view";
 
 export const metadata: Metadata = { title: "Interview" };
@@ -52,6 +53,7 @@ export default async function InterviewPage({ params }: { params: Promise<{ id: 
       }}
       heading={`Case ${caseId} · ${detail.vehicle ?? "vehicle"}`}
       vehicleId={detail.vehicleId}
+      cautionCards={stepCautionCards(profile.units, { altitudeM: shop.altitudeM })}
     />
   );
 }
