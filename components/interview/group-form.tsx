@@ -1,16 +1,18 @@
 "use client";
 
 import { memo, useCallback } from "react";
-import { Controller, type UseFormReturn } from "react-hook-form";
 import { clsx } from "clsx";
 import { sayInUnits } from "@/lib/units";
 import type { FieldDef, FormValues } from "./field-defs";
 import { unreadableFields, type Reading } from "./form-values";
 import { QuantityInput } from "./quantity-input";
+import type { FieldMessages, GroupFormControl } from "./use-group-form";
 import { unitsForField, type QuantityKind } from "./unit-preferences";
 
 interface Props {
-  form: UseFormReturn<FormValues>;
+  control: GroupFormControl;
+  values: FormValues;
+  errors: FieldMessages;
   fields: FieldDef[];
   reading: Reading;
   /** A tap on one field's unit button: says what its digits mean, changes nothing else. */
@@ -27,7 +29,9 @@ interface Props {
 const QUANTITY_KINDS = new Set(["pressure", "temperature", "mass", "volume"]);
 
 export function GroupForm({
-  form,
+  control,
+  values,
+  errors,
   fields,
   reading,
   setFieldUnit,
@@ -36,9 +40,8 @@ export function GroupForm({
   readoutKeys = {},
   serverIssues = [],
 }: Props) {
-  const { formState, getValues } = form;
   const questions = new Map(
-    unreadableFields(fields, getValues(), reading)
+    unreadableFields(fields, values, reading)
       .filter((u) => u.problem.ambiguous)
       .map((u) => [u.field, u.problem.ambiguous!]),
   );
@@ -57,13 +60,14 @@ export function GroupForm({
       {fields.map((def) => {
         const serverMessage = serverIssues.find((i) => i.field === def.name)?.message;
         const error =
-          formState.errors[def.name]?.message ??
+          errors[def.name] ??
           (serverMessage === undefined ? undefined : sayInUnits(serverMessage, reading.units));
         return (
           <Field
             key={def.name}
-            form={form}
+            control={control}
             def={def}
+            value={values[def.name] ?? (def.kind === "multi" ? NO_CHOICES : "")}
             reading={reading}
             setFieldUnit={setFieldUnit}
             commit={commit}
@@ -79,9 +83,13 @@ export function GroupForm({
   );
 }
 
+const NO_CHOICES: string[] = [];
+
 interface FieldProps {
-  form: UseFormReturn<FormValues>;
+  control: GroupFormControl;
   def: FieldDef;
+  /** the field's text as typed, or the options ticked */
+  value: string | string[];
   reading: Reading;
   setFieldUnit: (name: string, unit: string) => void;
   commit: () => void;
@@ -95,12 +103,21 @@ interface FieldProps {
 
 /**
  * One question of the group. A keystroke in one field leaves the others' props unchanged (their readout
- * keys included), so they skip the re-render; each choice field follows its own value through its
- * Controller.
+ * keys included), so they skip the re-render.
  */
 const Field = memo(
-  function Field({ form, def, reading, setFieldUnit, commit, leave, readout, error, question }: FieldProps) {
-    const { register, control, setValue } = form;
+  function Field({
+    control,
+    def,
+    value,
+    reading,
+    setFieldUnit,
+    commit,
+    leave,
+    readout,
+    error,
+    question,
+  }: FieldProps) {
     const id = `f-${def.name}`;
     const describedBy =
       [def.hint ? `${id}-hint` : null, readout ? `${id}-readout` : null, error ? `${id}-error` : null]
@@ -110,65 +127,59 @@ const Field = memo(
     return (
       <div data-field={def.name}>
         {def.kind === "multi" || def.kind === "choice" || def.kind === "yesno" ? (
-          <Controller
-            control={control}
-            name={def.name}
-            render={({ field }) => (
-              <fieldset aria-describedby={describedBy}>
-                <legend className="field-label">{def.label}</legend>
-                <div
-                  className={clsx(
-                    "grid gap-2",
-                    def.kind === "multi" ? "sm:grid-cols-2" : "grid-cols-2 sm:grid-cols-3",
-                  )}
-                >
-                  {(def.kind === "yesno"
-                    ? [
-                        { value: "yes", label: "Yes" },
-                        { value: "no", label: "No" },
-                      ]
-                    : def.options
-                  ).map((option) => {
-                    const selected =
-                      def.kind === "multi"
-                        ? (field.value as string[]).includes(option.value)
-                        : field.value === option.value;
-                    return (
-                      <button
-                        key={option.value}
-                        type="button"
-                        aria-pressed={selected}
-                        onClick={() => {
-                          if (def.kind === "multi") {
-                            const list = field.value as string[];
-                            field.onChange(
-                              selected ? list.filter((v) => v !== option.value) : [...list, option.value],
-                            );
-                          } else {
-                            field.onChange(
-                              selected && (def.kind === "yesno" || ("optional" in def && def.optional))
-                                ? ""
-                                : option.value,
-                            );
-                          }
-                          field.onBlur();
-                          commit();
-                        }}
-                        className={clsx(
-                          "min-h-glove rounded-card border-2 px-3 py-2 text-left font-bold",
-                          selected
-                            ? "border-glacier-700 bg-glacier-700 text-white"
-                            : "border-ink-muted bg-paper text-ink",
-                        )}
-                      >
-                        {option.label}
-                      </button>
-                    );
-                  })}
-                </div>
-              </fieldset>
-            )}
-          />
+          <fieldset aria-describedby={describedBy}>
+            <legend className="field-label">{def.label}</legend>
+            <div
+              className={clsx(
+                "grid gap-2",
+                def.kind === "multi" ? "sm:grid-cols-2" : "grid-cols-2 sm:grid-cols-3",
+              )}
+            >
+              {(def.kind === "yesno"
+                ? [
+                    { value: "yes", label: "Yes" },
+                    { value: "no", label: "No" },
+                  ]
+                : def.options
+              ).map((option) => {
+                const selected =
+                  def.kind === "multi" ? (value as string[]).includes(option.value) : value === option.value;
+                return (
+                  <button
+                    key={option.value}
+                    type="button"
+                    aria-pressed={selected}
+                    onClick={() => {
+                      if (def.kind === "multi") {
+                        const list = value as string[];
+                        control.change(
+                          def.name,
+                          selected ? list.filter((v) => v !== option.value) : [...list, option.value],
+                        );
+                      } else {
+                        control.change(
+                          def.name,
+                          selected && (def.kind === "yesno" || ("optional" in def && def.optional))
+                            ? ""
+                            : option.value,
+                        );
+                      }
+                      control.blur(def.name);
+                      commit();
+                    }}
+                    className={clsx(
+                      "min-h-glove rounded-card border-2 px-3 py-2 text-left font-bold",
+                      selected
+                        ? "border-glacier-700 bg-glacier-700 text-white"
+                        : "border-ink-muted bg-paper text-ink",
+                    )}
+                  >
+                    {option.label}
+                  </button>
+                );
+              })}
+            </div>
+          </fieldset>
         ) : (
           <>
             <label htmlFor={id} className="field-label">
@@ -183,7 +194,13 @@ const Field = memo(
                 unitGroupLabel={`Unit for ${def.label.toLowerCase()}`}
                 onUnitChange={(unit) => setFieldUnit(def.name, unit)}
                 {...common}
-                {...register(def.name, { onBlur: leave })}
+                name={def.name}
+                value={value as string}
+                onChange={(e) => control.change(def.name, e.target.value)}
+                onBlur={(e) => {
+                  leave(e);
+                  control.blur(def.name);
+                }}
               />
             ) : def.kind === "text" && def.multiline ? (
               <textarea
@@ -191,7 +208,13 @@ const Field = memo(
                 rows={3}
                 className="field-input py-2"
                 {...common}
-                {...register(def.name, { onBlur: leave })}
+                name={def.name}
+                value={value as string}
+                onChange={(e) => control.change(def.name, e.target.value)}
+                onBlur={(e) => {
+                  leave(e);
+                  control.blur(def.name);
+                }}
               />
             ) : (
               <input
@@ -202,7 +225,13 @@ const Field = memo(
                 placeholder={def.kind === "plain" ? def.placeholder : undefined}
                 className={clsx("field-input", def.kind === "plain" && "font-mono text-2xl")}
                 {...common}
-                {...register(def.name, { onBlur: leave })}
+                name={def.name}
+                value={value as string}
+                onChange={(e) => control.change(def.name, e.target.value)}
+                onBlur={(e) => {
+                  leave(e);
+                  control.blur(def.name);
+                }}
               />
             )}
           </>
@@ -230,7 +259,7 @@ const Field = memo(
                 type="button"
                 className="btn-quiet min-h-glove flex-1 font-mono"
                 onClick={() => {
-                  setValue(def.name, String(value), { shouldDirty: true, shouldValidate: true });
+                  control.setValue(def.name, String(value));
                   commit();
                 }}
               >
@@ -243,8 +272,9 @@ const Field = memo(
     );
   },
   (before, after) =>
-    before.form === after.form &&
+    before.control === after.control &&
     before.def === after.def &&
+    before.value === after.value &&
     before.reading === after.reading &&
     before.setFieldUnit === after.setFieldUnit &&
     before.commit === after.commit &&

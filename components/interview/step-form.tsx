@@ -13,7 +13,6 @@ import { answerValuesOf, formValuesOf } from "./form-values";
 import { equivalents } from "./quantities";
 import { useGroupForm, type ValuesMode } from "./use-group-form";
 import { unitsForField, type QuantityKind, type UnitPreferences } from "./unit-preferences";
-import type { FormValues } from "./field-defs";
 
 export interface StepFormHandle {
   /** Validates the group; returns its values, or null after focusing the first problem. */
@@ -81,7 +80,7 @@ export const StepForm = forwardRef<StepFormHandle, Props>(function StepForm(
   const compressorType = answers.system?.compressorType;
   // eslint-disable-next-line react-hooks/exhaustive-deps -- only the compressor type decides which fields show
   const fields = useMemo(() => fieldsFor(group, answers), [group, compressorType]);
-  const { form, reading, setFieldUnit, commit } = useGroupForm({
+  const { control, values, errors, reading, setFieldUnit, commit } = useGroupForm({
     group,
     fields,
     saved,
@@ -91,23 +90,21 @@ export const StepForm = forwardRef<StepFormHandle, Props>(function StepForm(
     shop,
     onValues,
   });
-  const values = form.watch() as FormValues;
 
   useImperativeHandle(ref, () => ({
     check: async () => {
-      const ok = await form.trigger();
-      if (!ok) {
-        const first = fields.find((f) => form.formState.errors[f.name]);
-        if (first) form.setFocus(first.name);
+      const problems = control.trigger();
+      if (Object.keys(problems).length > 0) {
+        const first = fields.find((f) => problems[f.name] !== undefined);
+        if (first) control.setFocus(first.name);
         return null;
       }
-      return answerValuesOf(fields, form.getValues(), reading);
+      return answerValuesOf(fields, control.getValues(), reading);
     },
-    apply: (values) => {
-      const shown = formValuesOf(fields, values, reading);
+    apply: (picked) => {
+      const shown = formValuesOf(fields, picked, reading);
       for (const [name, value] of Object.entries(shown)) {
-        if (values[name] !== undefined)
-          form.setValue(name, value, { shouldDirty: true, shouldValidate: true });
+        if (picked[name] !== undefined) control.setValue(name, value);
       }
       commit();
     },
@@ -134,7 +131,9 @@ export const StepForm = forwardRef<StepFormHandle, Props>(function StepForm(
 
   return (
     <GroupForm
-      form={form}
+      control={control}
+      values={values}
+      errors={errors}
       fields={fields}
       reading={reading}
       setFieldUnit={setFieldUnit}

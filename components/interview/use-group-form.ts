@@ -1,7 +1,6 @@
 "use client";
 
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
-import { useForm, type FieldErrors, type Resolver } from "react-hook-form";
 import { sayInUnits } from "@/lib/units";
 import type { InterviewAnswers } from "@/lib/interview/answers";
 import type { GroupId } from "@/lib/interview/steps";
@@ -20,11 +19,32 @@ export type ValuesMode = "typing" | "commit";
  */
 export const COMMIT_PAUSE_MS = 2500;
 
+/** A message per field name, in the reader's units. */
+export type FieldMessages = Partial<Record<string, string>>;
+
 /**
- * One question group as a react-hook-form form. Values are the text typed, in each field's unit;
- * validation reads them by the person's locale, converts them and runs the same zod schemas the
- * server uses. Every change goes to the interview machine as a draft at once, so nothing typed is
- * lost; it becomes the answer only on leaving the field, on Next, or after a pause.
+ * What a field does with the group's values. The object keeps its identity for the life of the step,
+ * so a field whose own value, message and readout did not change skips a keystroke elsewhere.
+ */
+export interface GroupFormControl {
+  getValues: () => FormValues;
+  /** A keystroke or a tap: the new text (or list) of one field; a field already left is checked again. */
+  change: (name: string, value: string | string[]) => void;
+  /** Leaving a field: from now on it is checked as it changes, and it is checked now. */
+  blur: (name: string) => void;
+  /** Sets a field's text as if typed (a spec-table row, a tap on a reading's meaning) and checks it. */
+  setValue: (name: string, value: string | string[]) => void;
+  /** Checks these fields (every field when none are named); returns every field's messages. */
+  trigger: (names?: readonly string[]) => FieldMessages;
+  setFocus: (name: string) => void;
+}
+
+/**
+ * One question group as a small form of its own. Values are the text typed, in each field's unit;
+ * checking reads them by the person's locale, converts them and runs the same zod schemas the server
+ * uses. A field's message shows once it has been left (or on Next) and then follows every keystroke.
+ * Every change goes to the interview machine as a draft at once, so nothing typed is lost; it becomes
+ * the answer only on leaving the field, on Next, or after a pause.
  */
 export function useGroupForm({
   group,
@@ -52,53 +72,78 @@ export function useGroupForm({
     latest.current = { otherAnswers, reading, shop, onValues };
   }, [otherAnswers, reading, shop, onValues]);
 
-  const resolver = useMemo<Resolver<FormValues>>(
-    () => async (values) => {
+  // The values as typed live in a ref, read at once by commit() after a tap; the state redraws.
+  const [values, setValues] = useState<FormValues>(() => formValuesOf(fields, saved, { units, locale }));
+  const current = useRef(values);
+  const [errors, setErrors] = useState<FieldMessages>({});
+  const shownErrors = useRef<FieldMessages>({});
+  const touched = useRef(new Set<string>());
+
+  /** Every field's message for these values: unreadable numbers first, then the group's schema. */
+  const problemsOf = useCallback(
+    (all: FormValues): FieldMessages => {
       const { otherAnswers: others, reading: r, shop: s } = latest.current;
-      const errors: FieldErrors<FormValues> = {};
-      for (const { field, problem } of unreadableFields(fields, values, r))
-        errors[field] = { type: "validate", message: problem.message };
-      if (Object.keys(errors).length > 0) return { values: {}, errors };
-      const check = validateGroup(group, answerValuesOf(fields, values, r), others, s);
-      if (check.ok) return { values, errors: {} };
+      const found: FieldMessages = {};
+      for (const { field, problem } of unreadableFields(fields, all, r)) found[field] = problem.message;
+      if (Object.keys(found).length > 0) return found;
+      const check = validateGroup(group, answerValuesOf(fields, all, r), others, s);
+      if (check.ok) return found;
       for (const issue of check.issues) {
         const key = fields.some((f) => f.name === issue.field) ? issue.field : (fields[0]?.name ?? "root");
-        errors[key] ??= { type: "validate", message: sayInUnits(issue.message, r.units) };
+        found[key] ??= sayInUnits(issue.message, r.units);
       }
-      return { values: {}, errors };
+      return found;
     },
     [group, fields],
   );
 
-  const form = useForm<FormValues>({
-    defaultValues: formValuesOf(fields, saved, { units, locale }),
-    resolver,
-    mode: "onTouched",
-  });
-  const { subscribe, getValues } = form;
-
   const pause = useRef<ReturnType<typeof setTimeout> | undefined>(undefined);
   const commit = useCallback(() => {
     clearTimeout(pause.current);
-    latest.current.onValues(answerValuesOf(fields, getValues(), latest.current.reading), "commit");
-  }, [fields, getValues]);
+    latest.current.onValues(answerValuesOf(fields, current.current, latest.current.reading), "commit");
+  }, [fields]);
   useEffect(() => () => clearTimeout(pause.current), []);
 
-  useEffect(
-    () =>
-      subscribe({
-        formState: { values: true },
-        callback: ({ values }) => {
-          latest.current.onValues(
-            answerValuesOf(fields, values as FormValues, latest.current.reading),
-            "typing",
-          );
-          clearTimeout(pause.current);
-          pause.current = setTimeout(commit, COMMIT_PAUSE_MS);
-        },
-      }),
-    [subscribe, fields, commit],
-  );
+  const control = useMemo<GroupFormControl>(() => {
+    const check = (names: readonly string[] | undefined): FieldMessages => {
+      const found = problemsOf(current.current);
+      let next = found;
+      if (names !== undefined) {
+        next = { ...shownErrors.current };
+        for (const name of names) {
+          if (found[name] === undefined) delete next[name];
+          else next[name] = found[name];
+        }
+      }
+      shownErrors.current = next;
+      setErrors(next);
+      return found;
+    };
+    const write = (name: string, value: string | string[]) => {
+      current.current = { ...current.current, [name]: value };
+      setValues(current.current);
+      latest.current.onValues(answerValuesOf(fields, current.current, latest.current.reading), "typing");
+      clearTimeout(pause.current);
+      pause.current = setTimeout(commit, COMMIT_PAUSE_MS);
+    };
+    return {
+      getValues: () => current.current,
+      change: (name, value) => {
+        write(name, value);
+        if (touched.current.has(name)) check([name]);
+      },
+      blur: (name) => {
+        touched.current.add(name);
+        check([name]);
+      },
+      setValue: (name, value) => {
+        write(name, value);
+        check([name]);
+      },
+      trigger: (names) => check(names),
+      setFocus: (name) => document.getElementById(`f-${name}`)?.focus(),
+    };
+  }, [fields, commit, problemsOf]);
 
   // A tap on a unit says what the digits already typed mean: the text stays, the value follows.
   const firstUnits = useRef(true);
@@ -109,13 +154,13 @@ export function useGroupForm({
     }
     commit();
     // A message about the digits in the old unit no longer applies.
-    const stale = Object.keys(form.formState.errors);
-    if (stale.length > 0) void form.trigger(stale);
-  }, [fieldUnits, commit, form]);
+    const stale = Object.keys(shownErrors.current);
+    if (stale.length > 0) control.trigger(stale);
+  }, [fieldUnits, commit, control]);
 
   const setFieldUnit = useCallback((name: string, unit: string) => {
-    setFieldUnits((current) => (current[name] === unit ? current : { ...current, [name]: unit }));
+    setFieldUnits((now) => (now[name] === unit ? now : { ...now, [name]: unit }));
   }, []);
 
-  return { form, reading, setFieldUnit, commit };
+  return { control, values, errors, reading, setFieldUnit, commit };
 }
