@@ -39,6 +39,15 @@ const DEFAULT_MESSAGE: Record<ErrorKind, string> = {
 
 export type FieldErrors = Record<string, string[]>;
 
+/**
+ * Beside an API error's SI wording: its message and field messages as written, with quantity markers
+ * (lib/units/quantity.ts), where any has one, for a screen to say in its reader's units.
+ */
+export interface MarkedErrorText {
+  message?: string;
+  fieldErrors?: FieldErrors;
+}
+
 export class AppError extends Error {
   readonly kind: ErrorKind;
   readonly resource: string;

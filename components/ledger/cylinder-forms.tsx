@@ -88,8 +88,8 @@ export function AddCylinderForm({ massUnit }: { massUnit: MassUnit }) {
   const [status, setStatus] = useState<string | null>(null);
   const reader = useReaderUnits();
   // The schema's limits are said in the ledger's mass unit, as every figure on this screen.
-  const say = (text: string | undefined) =>
-    text === undefined ? undefined : sayInUnits(text, { ...reader.units, mass: massUnit }, reader.at);
+  const sayMarked = (text: string) => sayInUnits(text, { ...reader.units, mass: massUnit }, reader.at);
+  const say = (text: string | undefined) => (text === undefined ? undefined : sayMarked(text));
   const imperial = massUnit === "lb" || massUnit === "oz";
   const create = useMutation({
     mutationFn: (body: CreateCylinderInput) => apiFetch("/api/cylinders", { method: "POST", body }),
@@ -99,7 +99,7 @@ export function AddCylinderForm({ massUnit }: { massUnit: MassUnit }) {
       return queryClient.invalidateQueries({ queryKey: ledgerKeys.all });
     },
     onError: (e) => {
-      const { fieldErrors, message } = saveErrorOf(e);
+      const { fieldErrors, message } = saveErrorOf(e, sayMarked);
       setErrors(fieldErrors);
       setStatus(message);
     },

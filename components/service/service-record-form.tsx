@@ -4,7 +4,7 @@ import { useMemo, useState } from "react";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { clsx } from "clsx";
 import { SERVICE_STEP_OF_FIELD, SERVICE_STEPS, type ServiceStepId } from "@/lib/contracts/service-records";
-import { ApiError } from "@/lib/queries/api-fetch";
+import { ApiError, apiErrorText } from "@/lib/queries/api-fetch";
 import { saveServiceRecord, serviceRecordKeys } from "@/lib/queries/service-record";
 import { ledgerKeys } from "@/lib/queries/ledger";
 import { cautionsFor } from "@/lib/service/cautions";
@@ -90,8 +90,8 @@ export function ServiceRecordForm(props: ServiceRecordFormProps) {
           ? ` ${result.posted} ledger ${result.posted === 1 ? "entry" : "entries"} posted.`
           : "";
       setMessage({
-        tone: result.warnings.length ? "error" : "ok",
-        text: `${STEP_TITLES[step]} saved.${posted}${result.warnings.length ? ` ${result.warnings.map(say).join(" ")}` : ""}`,
+        tone: result.markedWarnings.length ? "error" : "ok",
+        text: `${STEP_TITLES[step]} saved.${posted}${result.markedWarnings.length ? ` ${result.markedWarnings.map(say).join(" ")}` : ""}`,
       });
       setStep(nextStep);
       void queryClient.invalidateQueries({ queryKey: serviceRecordKeys.forCase(caseId) });
@@ -99,8 +99,8 @@ export function ServiceRecordForm(props: ServiceRecordFormProps) {
     },
     onError: (error) => {
       if (error instanceof ApiError) {
-        const mapped: Record<string, string> = {};
-        for (const [k, v] of Object.entries(error.fieldErrors ?? {})) if (v[0]) mapped[k] = v[0];
+        const said = apiErrorText(error, say);
+        const mapped = Object.fromEntries(Object.entries(said.fieldErrors).filter(([, text]) => text));
         setServerErrors(mapped);
         // A field asked on another step is not on screen: say there which step asks for it.
         const elsewhere = Object.entries(mapped)
@@ -114,7 +114,7 @@ export function ServiceRecordForm(props: ServiceRecordFormProps) {
           });
         setMessage({
           tone: "error",
-          text: [error.message, ...elsewhere, "Nothing you typed was lost."].join(" "),
+          text: [said.message, ...elsewhere, "Nothing you typed was lost."].join(" "),
         });
       } else
         setMessage({

@@ -249,7 +249,10 @@ export interface ServiceRecordResponse {
 export interface ServiceRecordSaveResponse {
   record: ServiceRecordDto;
   posted: number;
+  /** said in SI */
   warnings: string[];
+  /** the same, with quantity markers, for a screen to say in its reader's units (lib/units/quantity.ts) */
+  markedWarnings: string[];
 }
 
 /** DELETE /api/cases/[id]/service: how many correction rows cancelled the record's postings. */

@@ -1,4 +1,4 @@
-import type { FieldErrors } from "@/lib/errors";
+import type { FieldErrors, MarkedErrorText } from "@/lib/errors";
 import { retryAfterMs } from "./retry-after";
 
 export class ApiError extends Error {
@@ -9,6 +9,8 @@ export class ApiError extends Error {
     readonly fieldErrors?: FieldErrors,
     /** How long the server asked us to wait (its Retry-After header), when it said. */
     readonly retryAfterMs?: number,
+    /** The wording with quantity markers, where the server's SI sentence had some: say it in the reader's units. */
+    readonly marked?: MarkedErrorText,
   ) {
     super(message);
     this.name = "ApiError";
@@ -28,7 +30,8 @@ export async function apiFetch<T = unknown>(
     credentials: "same-origin",
   });
   const data = (await response.json().catch(() => null)) as
-    (T & { error?: { code: string; message: string; fieldErrors?: FieldErrors } }) | null;
+    | (T & { error?: { code: string; message: string; fieldErrors?: FieldErrors; marked?: MarkedErrorText } })
+    | null;
   if (!response.ok) {
     throw new ApiError(
       data?.error?.message ?? `The server answered ${response.status}.`,
@@ -36,18 +39,38 @@ export async function apiFetch<T = unknown>(
       data?.error?.code ?? "unknown",
       data?.error?.fieldErrors,
       retryAfterMs(response.headers.get("retry-after")),
+      data?.error?.marked,
     );
   }
   return data as T;
 }
 
-/** A failed save as a form shows it: the first message per field, and a line saying nothing typed was lost. */
-export function saveErrorOf(error: unknown): { fieldErrors: Record<string, string>; message: string } {
+/**
+ * An API error's first message per field and its message. With `say` (sayInUnits in the reader's
+ * units), a message the server also sent with quantity markers is said in the reader's units.
+ */
+export function apiErrorText(
+  error: ApiError,
+  say?: (marked: string) => string,
+): { fieldErrors: Record<string, string>; message: string } {
+  const fieldErrors = Object.fromEntries(
+    Object.entries(error.fieldErrors ?? {}).map(([field, messages]) => {
+      const marked = say && error.marked?.fieldErrors?.[field]?.[0];
+      return [field, marked ? say(marked) : (messages[0] ?? "")];
+    }),
+  );
+  const message = say && error.marked?.message !== undefined ? say(error.marked.message) : error.message;
+  return { fieldErrors, message };
+}
+
+/** A failed save as a form shows it: apiErrorText, and a line saying nothing typed was lost. */
+export function saveErrorOf(
+  error: unknown,
+  say?: (marked: string) => string,
+): { fieldErrors: Record<string, string>; message: string } {
   if (error instanceof ApiError) {
-    const fieldErrors = Object.fromEntries(
-      Object.entries(error.fieldErrors ?? {}).map(([field, messages]) => [field, messages[0] ?? ""]),
-    );
-    return { fieldErrors, message: `${error.message} What you typed is kept.` };
+    const { fieldErrors, message } = apiErrorText(error, say);
+    return { fieldErrors, message: `${message} What you typed is kept.` };
   }
   return { fieldErrors: {}, message: "No answer from the server; what you typed is kept." };
 }

@@ -7,7 +7,8 @@ import { validateSessionId } from "@/lib/auth/session";
 import { can, type Permission } from "@/lib/auth/roles";
 import { env } from "@/lib/env";
 import { isDatabaseUnavailable } from "@/lib/db/unavailable";
-import { AppError, isAppError } from "@/lib/errors";
+import { AppError, isAppError, type MarkedErrorText } from "@/lib/errors";
+import { hasQuantityMarkers, sayInUnits } from "@/lib/units/quantity";
 import { API_CACHE_CONTROL } from "@/lib/security/headers";
 import { isOwnOrigin, STATE_CHANGING_METHODS } from "@/lib/security/origin";
 import { fieldErrorsOf } from "@/lib/validation";
@@ -157,10 +158,39 @@ function parse<S extends Schema>(schema: S, value: unknown, where: string): Infe
   return result.data as Infer<S>;
 }
 
+/**
+ * An error as the API answers it. Messages written once with quantity markers (a schema's limit) are
+ * said in SI, the product's own units, so any caller reads a sentence; `marked` keeps the marked
+ * wording beside it, so our screens can say it again in their reader's units.
+ */
+export function errorBody(error: AppError) {
+  const body = error.toJSON();
+  const { message, fieldErrors } = body.error;
+  const markedFields = Object.entries(fieldErrors ?? {}).filter(([, list]) => list.some(hasQuantityMarkers));
+  const marked: MarkedErrorText = {
+    ...(hasQuantityMarkers(message) ? { message } : {}),
+    ...(markedFields.length ? { fieldErrors: Object.fromEntries(markedFields) } : {}),
+  };
+  return {
+    error: {
+      ...body.error,
+      message: sayInUnits(message),
+      ...(fieldErrors
+        ? {
+            fieldErrors: Object.fromEntries(
+              Object.entries(fieldErrors).map(([field, list]) => [field, list.map((m) => sayInUnits(m))]),
+            ),
+          }
+        : {}),
+      ...(marked.message !== undefined || marked.fieldErrors ? { marked } : {}),
+    },
+  };
+}
+
 export function errorResponse(error: unknown, headers = new Headers()): Response {
   if (isAppError(error)) {
     for (const [key, value] of Object.entries(error.headers ?? {})) headers.set(key, value);
-    return NextResponse.json(error.toJSON(), { status: error.status, headers });
+    return NextResponse.json(errorBody(error), { status: error.status, headers });
   }
   const name = (error as { name?: string } | null)?.name;
   if (name === "SequelizeUniqueConstraintError") {

@@ -2,6 +2,7 @@ import "server-only";
 import { Op, type Transaction } from "sequelize";
 import { getModels, type CylinderKind } from "@/models";
 import { AppError } from "@/lib/errors";
+import { sayInUnits } from "@/lib/units/quantity";
 import { recordAudit } from "./audit";
 import type { User } from "lucia";
 import { getProfile } from "./profile";
@@ -125,7 +126,11 @@ export async function cylinderMovementRows({
   return rows as unknown as MovementRow[];
 }
 
-function toCylinderDto(c: CylinderRow, movements: CylinderMovement[]): CylinderDto {
+function toCylinderDto(
+  c: CylinderRow,
+  movements: CylinderMovement[],
+  say: (text: string) => string,
+): CylinderDto {
   const ledgerCylinder = toLedgerCylinder(c);
   // A correction always cancels a movement of the same cylinder, so `movements` holds both ends of it.
   const state = applyMovements(ledgerCylinder, movements);
@@ -145,8 +150,8 @@ function toCylinderDto(c: CylinderRow, movements: CylinderMovement[]): CylinderD
     limitPct: state.fill.limitPct,
     safeFillG: safeFillG(ledgerCylinder),
     roomG: state.fill.roomG,
-    fillMessage: state.fill.message,
-    problems: state.problems,
+    fillMessage: say(state.fill.message),
+    problems: state.problems.map(say),
   };
 }
 
@@ -161,6 +166,7 @@ export async function listCylinders({
   limit,
   after,
   transaction,
+  say = (text) => sayInUnits(text),
 }: {
   shopId: number;
   includeRetired?: boolean;
@@ -168,6 +174,8 @@ export async function listCylinders({
   limit?: number;
   after?: string;
   transaction?: Transaction;
+  /** How the fill sentence and problems are said: in SI for an API answer (the default). */
+  say?: (text: string) => string;
 }): Promise<CylinderDto[]> {
   if (ids && ids.length === 0) return [];
   const rows = (await getModels().Cylinder.findAll({
@@ -189,6 +197,7 @@ export async function listCylinders({
     toCylinderDto(
       c,
       movements.filter((m) => m.cylinderId === String(c.id)),
+      say,
     ),
   );
 }

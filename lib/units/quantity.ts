@@ -157,6 +157,11 @@ export function quantityRangeMarker(
   return `{{r:${kind}:${low}:${high}${decimals === undefined ? "" : `:${decimals}`}}}`;
 }
 
+/** Whether a text still carries quantity or range markers (a sentence not yet said in anyone's units). */
+export function hasQuantityMarkers(text: string): boolean {
+  return /\{\{[qr]:[a-z_]+:/.test(text);
+}
+
 /** A message with quantity markers, said in the reader's units (SI when no reader is known). */
 export function sayInUnits(
   message: string,

@@ -6,6 +6,7 @@ import { AppError } from "@/lib/errors";
 import type { ServiceRecordInput, ServiceRecordSaveResponse } from "@/lib/contracts/service-records";
 import { RECORD_CONFLICT, serviceRecordRefusal } from "@/lib/service/record-rules";
 import { formatShopTime } from "@/lib/units/clock";
+import { sayInUnits } from "@/lib/units/quantity";
 import { recordAudit } from "../audit";
 import { listCylinders } from "../ledger";
 import { getShop } from "../shops";
@@ -107,9 +108,10 @@ export async function saveServiceRecord({
         transaction,
       });
       const touched = [input.recoveryCylinderId, input.chargeCylinderId].filter((id): id is number => !!id);
-      const warnings = (await listCylinders({ shopId, ids: touched, transaction })).flatMap((c) =>
-        c.problems.map((p) => `${c.label}: ${p}`),
-      );
+      // Kept with their quantity markers: the answer says them in SI and sends the marked form beside it.
+      const markedWarnings = (
+        await listCylinders({ shopId, ids: touched, transaction, say: (text) => text })
+      ).flatMap((c) => c.problems.map((p) => `${c.label}: ${p}`));
       await saveRecordFigures({
         user,
         caseRow: figures.caseRow,
@@ -128,7 +130,12 @@ export async function saveServiceRecord({
         detail: { version: saved.version, ledgerPostings: posted },
         transaction,
       });
-      return { record: saved, posted, warnings };
+      return {
+        record: saved,
+        posted,
+        warnings: markedWarnings.map((w) => sayInUnits(w)),
+        markedWarnings,
+      };
     });
   } catch (error) {
     if (error instanceof UniqueConstraintError)
