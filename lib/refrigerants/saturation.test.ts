@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import { sayInUnits, unitsOfSystem } from "@/lib/units";
 import { refrigerantInfo, SaturationRangeError, saturationPressure, saturationTemperature } from "./index";
 
 const relativeError = (actual: number, expected: number) => Math.abs(actual / expected - 1);
@@ -188,7 +189,35 @@ describe("out-of-range readings", () => {
     expect(error).toBeInstanceOf(SaturationRangeError);
     expect(error).toBeInstanceOf(RangeError);
     expect(error).toMatchObject({ refrigerant: "R-134a", quantity: "temperature", limit: "below" });
-    expect((error as Error).message).toBe("Below −40 °C the tables for R-134a do not apply.");
+    expect(sayInUnits((error as Error).message)).toBe("Below −40 °C the tables for R-134a do not apply.");
+    // The message carries its limit as a quantity: an imperial reader is told °F, not °C.
+    expect(sayInUnits((error as Error).message, unitsOfSystem("imperial"))).toBe(
+      "Below −40 °F the tables for R-134a do not apply.",
+    );
+    expect((error as SaturationRangeError).limitQuantity).toEqual({
+      kind: "temperature",
+      value: -40,
+      decimals: 0,
+    });
+  });
+
+  it("a pressure below the table is said in the reader's pressure and temperature units", () => {
+    const error = (() => {
+      try {
+        saturationTemperature("R-134a", 1);
+      } catch (e) {
+        return e as SaturationRangeError;
+      }
+    })()!;
+    expect(error.limitQuantity.kind).toBe("pressure_abs");
+    const imperial = sayInUnits(error.message, unitsOfSystem("imperial"));
+    expect(imperial).toMatch(
+      /^Below \d+(\.\d)? psia the tables for R-134a do not apply \(a saturation temperature under −40 °F\)\.$/,
+    );
+    expect(imperial).not.toMatch(/kPa|°C/);
+    expect(sayInUnits(error.message)).toMatch(
+      /^Below \d+(\.\d)? kPa absolute the tables for R-134a do not apply \(a saturation temperature under −40 °C\)\.$/,
+    );
   });
 
   it("above the critical point, says why there is no saturation", () => {
