@@ -16,6 +16,13 @@ export const CASE_FIGURES = {
   chargedG: { group: "chargeAudit", decimals: 0, label: "Charged mass" },
 } as const satisfies Record<string, { group: GroupId; decimals: number; label: string }>;
 
+/**
+ * The most refrigerant one vehicle's recovery or charge may weigh, grams: above it the figure is
+ * taken for a unit slip. The interview and the service record both read it. Light-vehicle charges
+ * stay far below it (common practice); the larger systems of buses are out of scope.
+ */
+export const VEHICLE_CHARGE_MASS_MAX_G = 10_000;
+
 export type FigureId = keyof typeof CASE_FIGURES;
 export const FIGURE_IDS = Object.keys(CASE_FIGURES) as FigureId[];
 

@@ -3,7 +3,7 @@ import { multiLineText, plausibleInstant, singleLineText } from "./text";
 import type { RefrigerantId } from "@/lib/refrigerants";
 import type { ExpansionDevice } from "@/lib/vehicles/expansion-devices";
 import { REPLACED_PART_IDS } from "@/lib/service/oil";
-import type { CaseFigures } from "./case-figures";
+import { type CaseFigures, VEHICLE_CHARGE_MASS_MAX_G } from "./case-figures";
 
 export const SERVICE_STEPS = ["identify", "recovery", "evacuation", "oil", "recharge", "final"] as const;
 export type ServiceStepId = (typeof SERVICE_STEPS)[number];
@@ -88,7 +88,7 @@ export const serviceRecordInputSchema = z
     airPct: num("Air", 0, 100, "%"),
     recoveryStartedAt: instant,
     recoveryEndedAt: instant,
-    recoveredChargeG: whole("Recovered mass", 0, 10_000, "g"),
+    recoveredChargeG: whole("Recovered mass", 0, VEHICLE_CHARGE_MASS_MAX_G, "g"),
     recoveryCylinderId: id("Recovery cylinder"),
     oilRemovedMl: whole("Oil drained", 0, 1000, "mL"),
     oilPulled: z.boolean().default(false),
@@ -110,7 +110,7 @@ export const serviceRecordInputSchema = z
       .max(12, "At most 12 replaced parts.")
       .default([]),
     targetG: whole("Target charge", 50, 5000, "g"),
-    chargedG: whole("Charged mass", 0, 10_000, "g"),
+    chargedG: whole("Charged mass", 0, VEHICLE_CHARGE_MASS_MAX_G, "g"),
     chargeCylinderId: id("Charging cylinder"),
     finalAmbientC: num("Ambient temperature", -30, 60, "°C"),
     finalHighKpaGauge: num("High side", -101, 4000, "kPa gauge"),

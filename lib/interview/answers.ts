@@ -1,4 +1,5 @@
 import { z } from "zod/mini";
+import { VEHICLE_CHARGE_MASS_MAX_G } from "@/lib/contracts/case-figures";
 import { multiLineText } from "@/lib/contracts/text-mini";
 import { ensureEnglishMessages } from "@/lib/contracts/zod-mini-messages";
 import { FULL_VACUUM_KPA_GAUGE, MAX_READING_KPA_GAUGE } from "@/lib/refrigerants/gauge-limits";
@@ -207,8 +208,8 @@ export const chargeAuditAnswersSchema = z
     recoveredChargeG: z.optional(
       z.number({ error: "Recovered mass: enter a number" }).check(
         z.gte(0, { error: "Recovered mass cannot be negative" }),
-        z.lte(6000, {
-          error: `Recovered mass: over ${limitG(6000)} is not one vehicle's charge — check the unit`,
+        z.lte(VEHICLE_CHARGE_MASS_MAX_G, {
+          error: `Recovered mass: over ${limitG(VEHICLE_CHARGE_MASS_MAX_G)} is not one vehicle's charge — check the unit`,
         }),
       ),
     ),
@@ -224,8 +225,8 @@ export const chargeAuditAnswersSchema = z
     chargedG: z.optional(
       z.number({ error: "Charged mass: enter a number" }).check(
         z.gte(0, { error: "Charged mass cannot be negative" }),
-        z.lte(6000, {
-          error: `Charged mass: over ${limitG(6000)} is not one vehicle's charge — check the unit`,
+        z.lte(VEHICLE_CHARGE_MASS_MAX_G, {
+          error: `Charged mass: over ${limitG(VEHICLE_CHARGE_MASS_MAX_G)} is not one vehicle's charge — check the unit`,
         }),
       ),
     ),
