@@ -86,6 +86,11 @@ describe("the case page's service summary", () => {
     expect(valueOf(lines, "Oil in")).toBe("20 mL against 20 mL asked for");
     expect(valueOf(lines, "Vacuum hold")).toMatch(/^held: .* over 15 min$/);
     expect(valueOf(lines, "Charged")).toBe("450 g against a 450 g target (within tolerance)");
+    // The article goes by how the number is spoken: "an 800 g target".
+    Object.assign(values, { chargedG: 800, targetG: 800 });
+    expect(valueOf(serviceSummaryLines({ values, units: metric }), "Charged")).toBe(
+      "800 g against an 800 g target (within tolerance)",
+    );
     expect(valueOf(serviceSummaryLines({ values, units: imperial }), "Oil out")).toBe("0.7 fl oz");
     expect(emptiedNotRecharged(values)).toBe(false);
   });

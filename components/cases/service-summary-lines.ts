@@ -1,5 +1,6 @@
 import { summariseServiceRecord, type ServiceRecordValues } from "@/lib/service/record-summary";
 import { formatMass, formatVacuum, formatVolume } from "@/lib/units";
+import { withArticle } from "@/lib/article";
 import type { ReaderUnits } from "@/lib/units/reader";
 import type { RefrigerantId } from "@/lib/refrigerants";
 import type { PartOilAllowancesMl } from "@/lib/service/oil";
@@ -111,7 +112,7 @@ export function serviceSummaryLines({
     const { within, deltaG } = summary.charge;
     lines.push({
       name: "Charged",
-      value: `${mass(values.chargedG)} against a ${mass(targetG)} target (${
+      value: `${mass(values.chargedG)} against ${withArticle(mass(targetG))} target (${
         within ? "within tolerance" : `${signed(mass(deltaG), deltaG)}, outside tolerance`
       })`,
       flagged: !within,

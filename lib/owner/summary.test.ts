@@ -33,6 +33,15 @@ describe("owner summary", () => {
     expect(imperial.facts[0]?.fact).toContain("15.9 oz");
   });
 
+  it("puts the article a number is spoken with before the day's temperature", () => {
+    const vent = (ambientC: number) =>
+      buildOwnerSummary({ ...base, facts: { units: "metric", ventC: 8, ambientC } }).facts.find((f) =>
+        f.fact.startsWith("During our test"),
+      )?.fact;
+    expect(vent(18)).toMatch(/ on an 18 °C day\.$/);
+    expect(vent(30)).toMatch(/ on a 30 °C day\.$/);
+  });
+
   it("reads only the cause order and the next check from a findings snapshot, whatever else it carries", () => {
     const findings = {
       suspects: [

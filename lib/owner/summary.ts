@@ -10,6 +10,7 @@ import type {
   OwnerSummary,
 } from "@/lib/contracts/owner-summary";
 import { REPAIR_CATALOG, isRepairId, type RepairId } from "@/lib/repairs/catalog";
+import { withArticle } from "@/lib/article";
 import { OWNER_CAUSES, isCauseId } from "./causes";
 import { OWNER_CHECKS } from "./checks";
 import type { OwnerFacts } from "./facts";
@@ -118,7 +119,7 @@ function ventFact(facts: OwnerFacts): OwnerFactLine | null {
         ? "That is a little warmer than it should be."
         : "That is much warmer than a working system gives.";
   return {
-    fact: `During our test, air from the middle vent was ${ownerTemperature(ventC, units)} on a ${ownerTemperature(ambientC, units)} day.`,
+    fact: `During our test, air from the middle vent was ${ownerTemperature(ventC, units)} on ${withArticle(ownerTemperature(ambientC, units))} day.`,
     meaning,
   };
 }
