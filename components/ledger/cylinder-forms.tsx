@@ -7,7 +7,7 @@ import { apiFetch, ApiError, saveErrorOf } from "@/lib/queries/api-fetch";
 import { ledgerKeys } from "@/lib/queries/ledger";
 import { SERVICE_REFRIGERANT_OPTIONS } from "@/lib/refrigerants/catalog";
 import { readMassG } from "@/lib/service/entry";
-import { type MassUnit, formatMass } from "@/lib/units";
+import { type MassUnit, formatMassGrouped } from "@/lib/units";
 import { sayInUnits } from "@/lib/units/quantity";
 import { useReaderUnits } from "@/components/shell/reader-units";
 import { EntryInput } from "@/components/service/entry-input";
@@ -56,9 +56,9 @@ export function RetireButton({ cylinder, massUnit }: { cylinder: CylinderDto; ma
         onCancel={() => setAsking(false)}
       >
         <p>
-          {label} ({cylinder.refrigerant}, {cylinder.kind}) holds {formatMass(cylinder.netG, massUnit)} by the
-          ledger. Once retired it is no longer offered for recovery, charging or shipments; its lines stay in
-          the ledger, and it can be reactivated.
+          {label} ({cylinder.refrigerant}, {cylinder.kind}) holds {formatMassGrouped(cylinder.netG, massUnit)}{" "}
+          by the ledger. Once retired it is no longer offered for recovery, charging or shipments; its lines
+          stay in the ledger, and it can be reactivated.
         </p>
         {cylinder.netG > 0 && (
           <p className="font-bold">

@@ -3,14 +3,14 @@
 import { useInfiniteQuery } from "@tanstack/react-query";
 import { clsx } from "clsx";
 import { fillSentence } from "@/lib/service/ledger-guard";
-import { type MassUnit, formatMass } from "@/lib/units";
+import { type MassUnit, formatMassGrouped } from "@/lib/units";
 import { cylindersQuery } from "@/lib/queries/ledger";
 import { AddCylinderForm, RetireButton } from "./cylinder-forms";
 
 export function CylinderList({ massUnit, canWrite }: { massUnit: MassUnit; canWrite: boolean }) {
   const { data, fetchNextPage, hasNextPage, isFetchingNextPage } = useInfiniteQuery(cylindersQuery());
   const cylinders = data?.pages.flatMap((p) => p.cylinders) ?? [];
-  const m = (g: number) => formatMass(g, massUnit);
+  const m = (g: number) => formatMassGrouped(g, massUnit);
   return (
     <section aria-labelledby="cylinders-heading" className="card">
       <h2 id="cylinders-heading" className="mb-3 text-xl font-bold">

@@ -1,14 +1,14 @@
 "use client";
 
 import { useQuery } from "@tanstack/react-query";
-import { type MassUnit, formatMass } from "@/lib/units";
+import { type MassUnit, formatMassGrouped } from "@/lib/units";
 import type { LedgerReportRow } from "@/lib/contracts/ledger";
 import { ledgerReportQuery } from "@/lib/queries/ledger";
 
 /** The monthly figures, the same rows and corrections the CSV carries. */
 export function LedgerReport({ massUnit }: { massUnit: MassUnit }) {
   const { data: report } = useQuery(ledgerReportQuery());
-  const m = (g: number) => formatMass(g, massUnit);
+  const m = (g: number) => formatMassGrouped(g, massUnit);
   const rows = report?.rows ?? [];
   const key = (r: LedgerReportRow) => `${r.month}-${r.technicianId}-${r.refrigerant}`;
   // The CSV's columns, in its order.

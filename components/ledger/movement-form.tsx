@@ -7,7 +7,7 @@ import { LEDGER_MASS_MAX_G, type ManualMovementInput } from "@/lib/contracts/led
 import { apiFetch, ApiError, saveErrorOf } from "@/lib/queries/api-fetch";
 import { ledgerKeys } from "@/lib/queries/ledger";
 import { readMassG } from "@/lib/service/entry";
-import { type MassUnit, formatMass } from "@/lib/units";
+import { type MassUnit, formatMassGrouped } from "@/lib/units";
 import { EntryInput } from "@/components/service/entry-input";
 
 const EMPTY = { cylinderId: "", type: "recycled", mass: "", when: "", destination: "", note: "" };
@@ -57,7 +57,7 @@ export function MovementForm({ cylinders, massUnit }: { cylinders: CylinderDto[]
     else if (mass.value > Math.min(LEDGER_MASS_MAX_G, largestG || LEDGER_MASS_MAX_G))
       next.massG = `${asTyped(typed, massUnit)} is more than any cylinder here holds. Check the figure and its unit.`;
     else if (cylinder && mass.value > cylinder.capacityG)
-      next.massG = `${asTyped(typed, massUnit)} is more than ${cylinder.label} holds when full (${formatMass(cylinder.capacityG, massUnit)}).`;
+      next.massG = `${asTyped(typed, massUnit)} is more than ${cylinder.label} holds when full (${formatMassGrouped(cylinder.capacityG, massUnit)}).`;
     const when = form.when ? new Date(form.when) : null;
     if (when && Number.isNaN(when.getTime())) next.occurredAt = "The date and time could not be read.";
     else if (when && when.getTime() > Date.now())

@@ -7,7 +7,7 @@ import { clsx } from "clsx";
 import type { MovementDto, ReversalResponse } from "@/lib/contracts/ledger";
 import { apiFetch, ApiError } from "@/lib/queries/api-fetch";
 import { ledgerKeys, movementsQuery } from "@/lib/queries/ledger";
-import { type MassUnit, formatMass } from "@/lib/units";
+import { type MassUnit, formatMassGrouped } from "@/lib/units";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { MOVEMENT_WORDS, shopDateTime } from "./words";
 
@@ -21,7 +21,7 @@ export interface LedgerViewer {
 }
 
 function amount(mv: MovementDto, massUnit: MassUnit) {
-  return `${formatMass(Math.abs(mv.massG), massUnit)}${mv.type === "adjustment" && mv.massG < 0 ? " out" : ""}`;
+  return `${formatMassGrouped(Math.abs(mv.massG), massUnit)}${mv.type === "adjustment" && mv.massG < 0 ? " out" : ""}`;
 }
 
 /** The ledger's lines, newest first, a page at a time; a wrong line is cancelled with a reason. */

@@ -1,5 +1,5 @@
 import type { MassUnit } from "@/lib/units";
-import { formatQuantity, SI_READER_UNITS } from "@/lib/units/quantity";
+import { formatMassGrouped } from "@/lib/units/quantity";
 import {
   type Cylinder,
   type CylinderMovement,
@@ -123,9 +123,7 @@ export function ledgerMassUnit(readerMass: MassUnit): MassUnit {
 }
 
 /** A mass in the reader's unit, with thousands separators: "4,660 g", "10.27 lb". */
-function massIn(massG: number, unit: MassUnit): string {
-  return formatQuantity({ kind: "mass", value: massG }, { ...SI_READER_UNITS, mass: unit });
-}
+const massIn = formatMassGrouped;
 
 /** The refusal in plain words, every mass in the reader's unit and the date on the shop's calendar. */
 export function ledgerRefusalMessage(

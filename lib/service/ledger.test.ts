@@ -11,6 +11,7 @@ import {
 } from "./ledger";
 import { postingsForRecordChange, postingsForServiceRecord } from "./ledger-corrections";
 import { monthInTimeZone, monthlyReport, toCsv } from "./ledger-report";
+import { formatMassGrouped } from "@/lib/units";
 import { propertyRuns } from "@/tests/support/property-runs";
 
 const tank: Cylinder = {
@@ -354,6 +355,16 @@ describe("toCsv", () => {
     // 700 g = 24.69 oz.
     expect(ounces[1]).toBe("2026-10,t1,R-134a,24.7,0,0,0,0,0");
     expect(toCsv(rows).split("\r\n")[0]).not.toMatch(/_lb|_oz/);
+  });
+
+  it("writes masses of a thousand and more as plain numbers, though the screen groups them", () => {
+    const big = monthlyReport([mv({ type: "recovered_into", massG: 12_500, at: "2026-10-05T14:00:00Z" })], {
+      timeZone: "UTC",
+    });
+    const line = toCsv(big).split("\r\n")[1]!;
+    expect(line).toMatch(/,12500,/);
+    expect(Papa.parse<string[]>(toCsv(big), { skipEmptyLines: true }).data[1]).toHaveLength(9);
+    expect(formatMassGrouped(12_500, "g")).toBe("12,500 g");
   });
 
   it("defuses a name a spreadsheet would run as a formula (OWASP CSV injection)", () => {

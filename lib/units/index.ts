@@ -61,6 +61,7 @@ export {
   unitsOfSystem,
 } from "./reader";
 export {
+  formatMassGrouped,
   formatQuantity,
   gaugeKpaQuantity,
   massGQuantity,

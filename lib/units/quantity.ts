@@ -6,6 +6,8 @@ import {
   temperatureFromC,
   volumeFromMl,
 } from "./convert";
+import { groupThousands } from "./group";
+import type { MassUnit } from "./factors";
 import { type ReaderUnits, UNIT_LABELS, unitsOfSystem } from "./reader";
 import { formatVacuum, KPA_PER_VACUUM_UNIT } from "./vacuum";
 
@@ -50,13 +52,6 @@ function fixed(value: number, decimals: number, group = false): string {
   if (Number(text) === 0) return (0).toFixed(decimals);
   const grouped = group ? groupThousands(text) : text;
   return grouped.startsWith("-") ? `−${grouped.slice(1)}` : grouped;
-}
-
-/** "4660" → "4,660": masses and volumes are read off scales and labels, where the separator is common practice. */
-function groupThousands(text: string): string {
-  const [whole = "", fraction] = text.split(".");
-  const groupedWhole = whole.replace(/\B(?=(\d{3})+(?!\d))/g, ",");
-  return fraction === undefined ? groupedWhole : `${groupedWhole}.${fraction}`;
 }
 
 const PRESSURE_SUFFIX: Record<ReaderUnits["pressure"], { gauge: string; abs: string; plain: string }> = {
@@ -132,6 +127,14 @@ export function formatQuantity(
 ): string {
   const [number, unit] = quantityParts(q, units, at);
   return unit === "%" ? `${number} %` : `${number} ${unit}`;
+}
+
+/**
+ * A mass for reading in one mass unit, with thousands separators: "12,500 g", "27.56 lb". A field's
+ * text that is read back keeps formatMass (ungrouped); CSVs write plain numbers.
+ */
+export function formatMassGrouped(massG: number, unit: MassUnit): string {
+  return formatQuantity({ kind: "mass", value: massG }, { ...SI_READER_UNITS, mass: unit });
 }
 
 /*

@@ -47,6 +47,10 @@ describe("parseVacuum reads a vacuum as the gauge shows it", () => {
       "29.90 inHg vacuum (500 microns)".replace("29.90", "29.9"),
     );
     expect(formatVacuum(0.0666612, "micron")).toBe("500 microns");
+    // Shown with thousands separators; the field's own text stays as typed, without them.
+    expect(formatVacuum(0.1999836, "micron")).toBe("1,500 microns");
+    expect(formatVacuum(0.1999836, "inHg", seaLevel)).toMatch(/ \(1,500 microns\)$/);
+    expect(vacuumFieldText(0.1999836, "micron", seaLevel)).toBe("1500 microns");
     expect(vacuumFieldText(0.06666, "inHg", seaLevel)).toBe("500 microns");
     expect(vacuumFieldText(0.07197, "micron", seaLevel)).toBe("29.9 inHg");
     expect(vacuumFieldText(0.35, "inHg", seaLevel)).toBe("0.35 kPa");

@@ -1,6 +1,7 @@
 import { type BarometricSource, barometricKpa, STANDARD_ATMOSPHERE_KPA } from "./barometric";
 import { KPA_PER_UNIT } from "./factors";
 import { normaliseNumbers } from "./number";
+import { groupThousands } from "./group";
 
 /**
  * A vacuum reading as the technician's gauge shows it: inches of mercury below the local atmosphere
@@ -149,7 +150,8 @@ const DECIMALS: Record<VacuumUnit, number> = { inHg: 2, kPa: 2, mbar: 1, micron:
  * vacuum an inHg dial cannot resolve is said in microns too, so 500 and 1000 microns never read alike.
  */
 export function formatVacuum(kpaAbs: number, unit: VacuumUnit, at?: BarometricSource): string {
-  const text = (u: VacuumUnit) => `${round(vacuumFromKpaAbs(kpaAbs, u, at), DECIMALS[u])} ${LABEL[u]}`;
+  const text = (u: VacuumUnit) =>
+    `${groupThousands(String(round(vacuumFromKpaAbs(kpaAbs, u, at), DECIMALS[u])))} ${LABEL[u]}`;
   if (unit !== "micron" && kpaAbs < MICRON_RANGE_KPA_ABS) return `${text(unit)} (${text("micron")})`;
   return text(unit);
 }

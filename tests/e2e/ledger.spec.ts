@@ -32,7 +32,7 @@ test("a technician is refused a shipment bigger than the cylinder holds, with th
   await new SignInPage(page).signInAs("technician");
   const ledger = new LedgerPage(page);
   await ledger.goto();
-  await expect(ledger.netMass(label)).toHaveText("4660 g");
+  await expect(ledger.netMass(label)).toHaveText("4,660 g");
 
   // 5 kg out of 4,660 g: refused before it posts, with both figures.
   await ledger.post({
@@ -46,7 +46,7 @@ test("a technician is refused a shipment bigger than the cylinder holds, with th
   );
   await expect(ledger.status()).toContainText("what you typed is kept");
   await expect(page.getByLabel("Mass")).toHaveValue("5 kg");
-  await expect(ledger.netMass(label)).toHaveText("4660 g");
+  await expect(ledger.netMass(label)).toHaveText("4,660 g");
 
   // 999 kg: a plain message, not "Enter the mass".
   await ledger.post({ cylinder: label, what: "Sent out for reclaim or destruction", mass: "999 kg" });
@@ -80,7 +80,7 @@ test("a technician is refused a shipment bigger than the cylinder holds, with th
   await expect(
     page.getByText(/Line #\d+ is cancelled by correction #\d+\. Both stay in the ledger\./),
   ).toBeVisible();
-  await expect(ledger.netMass(label)).toHaveText("4660 g");
+  await expect(ledger.netMass(label)).toHaveText("4,660 g");
   const correction = ledger.line(`Correction cancelling`).filter({ hasText: label });
   await expect(correction).toContainText("reason: Typed 4 kg; the scale showed 400 g");
   await expect(wrong).toContainText(/cancelled by #\d+/);

@@ -95,7 +95,7 @@ test("a technician completes a service record on the phone and the ledger shows 
       .filter({ hasText: "Charged from HL-SUP-YF" }),
   ).toContainText("486 g");
   // HL-REC-YF started the demo holding 880 g (invented), so it now holds 880 + 510 g.
-  await expect(page.getByTestId("cylinder-HL-REC-YF").getByTestId("cylinder-net")).toHaveText("1390 g");
+  await expect(page.getByTestId("cylinder-HL-REC-YF").getByTestId("cylinder-net")).toHaveText("1,390 g");
 });
 
 test("an apprentice can read the service record but not enter it", async ({ page }) => {
