@@ -8,6 +8,7 @@ import {
   caseRefusal,
   conclusionWritersWith,
   isOwnConclusionRefusal,
+  ownerMayViewCase,
   statusAfterSubmit,
   type CaseAction,
 } from "./rules";
@@ -88,6 +89,15 @@ describe("the case's rules", () => {
       expect(statusAfterSubmit(role)).toBe("signed_off");
     // No technician found for the case reads as "not an apprentice", as it always has.
     expect(statusAfterSubmit(null)).toBe("signed_off");
+  });
+
+  it("open the owner's page once the diagnosis stands: at once for a non-apprentice, after sign-off for an apprentice", () => {
+    const open = (role: Role | null) => CASE_STATUSES.filter((status) => ownerMayViewCase(status, role));
+    expect(open("apprentice")).toEqual(["signed_off", "closed"]);
+    for (const role of ["technician", "senior", "owner"] as const)
+      expect(open(role)).toEqual(["awaiting_signoff", "signed_off", "closed"]);
+    // Waiting for sign-off with no technician known: the verdict is still to come.
+    expect(open(null)).toEqual(["signed_off", "closed"]);
   });
 
   it("lead each verdict and the closing steps to the status the brief names", () => {

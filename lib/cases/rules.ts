@@ -151,6 +151,20 @@ export function statusAfterSubmit(technicianRole: Role | null): "awaiting_signof
   return technicianRole === "apprentice" ? "awaiting_signoff" : "signed_off";
 }
 
+/**
+ * Whether the owner's page may show the case: once its diagnosis stands. Signed off or closed, it
+ * stands; waiting for sign-off, it stands only where its technician's submission needs no second
+ * person (statusAfterSubmit), and a case whose technician is not known waits for the verdict.
+ */
+export function ownerMayViewCase(status: CaseStatus, technicianRole: Role | null): boolean {
+  if (status === "signed_off" || status === "closed") return true;
+  return (
+    status === "awaiting_signoff" &&
+    technicianRole !== null &&
+    statusAfterSubmit(technicianRole) === "signed_off"
+  );
+}
+
 /** Where each of the other steps leads. */
 export const STATUS_AFTER = {
   sign_off: "signed_off",

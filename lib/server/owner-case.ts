@@ -1,9 +1,9 @@
 import "server-only";
 import type { User } from "lucia";
-import { caseRefusal } from "@/lib/cases/rules";
+import { caseRefusal, ownerMayViewCase } from "@/lib/cases/rules";
 import type { CaseStatus } from "@/lib/contracts/cases";
 import { AppError } from "@/lib/errors";
-import { ownerSummaryAvailable } from "@/lib/owner/availability";
+import { isRole } from "@/lib/auth/roles";
 import type { ServiceRecordFacts } from "@/lib/owner/case-facts";
 import type { ProposalRecord } from "@/lib/owner/summary";
 import type { OwnerUnits } from "@/lib/owner/units";
@@ -103,7 +103,7 @@ export async function loadOwnerCase({
     shopName: c.Shop.name,
     units: c.Shop.units,
     timeZone: c.Shop.timeZone,
-    available: ownerSummaryAvailable(c.status, technicianRole),
+    available: ownerMayViewCase(c.status, isRole(technicianRole) ? technicianRole : null),
   };
 }
 
