@@ -8,6 +8,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { caseOutcomeSchema, type CaseOutcomeInput } from "@/lib/contracts/case-outcome";
 import { closeCase } from "@/lib/queries/case-outcome";
 import { saveErrorOf } from "@/lib/queries/api-fetch";
+import { CaseTextArea, FormFooter } from "./form-parts";
 
 export interface OutcomeChoice {
   id: string;
@@ -140,32 +141,17 @@ export function CaseOutcomeForm({
           </p>
         )}
       </fieldset>
-      <div>
-        <label htmlFor="close-note" className="field-label">
-          Note on the repair (optional)
-        </label>
-        <textarea
-          id="close-note"
-          rows={3}
-          className="field-input py-2"
-          aria-invalid={errors.note ? true : undefined}
-          aria-describedby={errors.note ? "close-note-error" : undefined}
-          {...register("note")}
-        />
-        {errors.note && (
-          <p id="close-note-error" role="alert" className="field-error">
-            {errors.note.message}
-          </p>
-        )}
-      </div>
-      {formError && (
-        <p role="alert" className="field-error">
-          {formError}
-        </p>
-      )}
-      <button type="submit" className="btn-primary w-full" disabled={close.isPending}>
-        Close the case
-      </button>
+      <CaseTextArea
+        id="close-note"
+        label="Note on the repair (optional)"
+        error={errors.note?.message}
+        registration={register("note")}
+      />
+      <FormFooter error={formError}>
+        <button type="submit" className="btn-primary w-full" disabled={close.isPending}>
+          Close the case
+        </button>
+      </FormFooter>
     </form>
   );
 }

@@ -8,6 +8,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { caseReopenSchema, type CaseReopenInput } from "@/lib/contracts/case-outcome";
 import { reopenCase } from "@/lib/queries/case-outcome";
 import { saveErrorOf } from "@/lib/queries/api-fetch";
+import { CaseTextArea, FormFooter } from "./form-parts";
 
 /** A senior or the owner reopens a closed case; the reason is required and shows on the case. */
 export function CaseReopenForm({ caseId }: { caseId: number }) {
@@ -41,32 +42,17 @@ export function CaseReopenForm({ caseId }: { caseId: number }) {
         The case goes back to signed off, and its confirmed cause and repairs are set aside until it is closed
         again.
       </p>
-      <div>
-        <label htmlFor="reopen-reason" className="field-label">
-          Reason for reopening
-        </label>
-        <textarea
-          id="reopen-reason"
-          rows={3}
-          className="field-input py-2"
-          aria-invalid={errors.reason ? true : undefined}
-          aria-describedby={errors.reason ? "reopen-reason-error" : undefined}
-          {...register("reason")}
-        />
-        {errors.reason && (
-          <p id="reopen-reason-error" role="alert" className="field-error">
-            {errors.reason.message}
-          </p>
-        )}
-      </div>
-      {formError && (
-        <p role="alert" className="field-error">
-          {formError}
-        </p>
-      )}
-      <button type="submit" className="btn-quiet" disabled={reopen.isPending}>
-        Reopen the case
-      </button>
+      <CaseTextArea
+        id="reopen-reason"
+        label="Reason for reopening"
+        error={errors.reason?.message}
+        registration={register("reason")}
+      />
+      <FormFooter error={formError}>
+        <button type="submit" className="btn-quiet" disabled={reopen.isPending}>
+          Reopen the case
+        </button>
+      </FormFooter>
     </form>
   );
 }

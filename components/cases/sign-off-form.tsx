@@ -6,6 +6,7 @@ import { useForm } from "react-hook-form";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { signOffSchema, type SignOffInput, type SignOffResponse } from "@/lib/contracts/cases";
 import { apiFetch, ApiError } from "@/lib/queries/api-fetch";
+import { CaseTextArea, FormFooter } from "./form-parts";
 
 /** A senior's verdict on an apprentice's diagnosis, with the comment the apprentice will read. */
 export function SignOffForm({ caseId }: { caseId: number }) {
@@ -58,42 +59,32 @@ export function SignOffForm({ caseId }: { caseId: number }) {
         Check the readings and the findings against the apprentice&apos;s conclusion.
       </p>
       <input type="hidden" {...register("verdict")} />
-      <div>
-        <label htmlFor="signoff-comment" className="field-label">
-          Comment for the apprentice
-        </label>
-        <textarea
-          id="signoff-comment"
-          rows={3}
-          className="field-input py-2"
-          aria-invalid={errors.comment ? true : undefined}
-          aria-describedby={errors.comment ? "signoff-comment-error" : undefined}
-          {...register("comment")}
-        />
-        {errors.comment && (
-          <p id="signoff-comment-error" role="alert" className="field-error">
-            {errors.comment.message}
-          </p>
-        )}
-      </div>
-      {formError && (
-        <p role="alert" className="field-error">
-          {formError}
-        </p>
-      )}
-      <div className="flex flex-wrap gap-2">
-        <button
-          type="button"
-          className="btn-primary"
-          disabled={isSubmitting}
-          onClick={submitWith("signed_off")}
-        >
-          Sign off
-        </button>
-        <button type="button" className="btn-quiet" disabled={isSubmitting} onClick={submitWith("sent_back")}>
-          Send back
-        </button>
-      </div>
+      <CaseTextArea
+        id="signoff-comment"
+        label="Comment for the apprentice"
+        error={errors.comment?.message}
+        registration={register("comment")}
+      />
+      <FormFooter error={formError}>
+        <div className="flex flex-wrap gap-2">
+          <button
+            type="button"
+            className="btn-primary"
+            disabled={isSubmitting}
+            onClick={submitWith("signed_off")}
+          >
+            Sign off
+          </button>
+          <button
+            type="button"
+            className="btn-quiet"
+            disabled={isSubmitting}
+            onClick={submitWith("sent_back")}
+          >
+            Send back
+          </button>
+        </div>
+      </FormFooter>
     </form>
   );
 }
