@@ -9,6 +9,7 @@ import {
   type CompressorType,
 } from "@/lib/vehicles/compressor-types";
 import { SpecLookup } from "./spec-lookup";
+import { SelectField } from "@/components/ui/select-field";
 import { normaliseVin, vinCheckDigitMatches, vinFormatError } from "@/lib/vehicles/vin";
 
 export interface NewVehicleDraft {
@@ -137,40 +138,20 @@ export function NewVehicleFields({
         {vinProblem && <p className="field-error">{vinProblem}</p>}
         {vinWarning && <p className="mt-1 font-bold text-caution-700">{vinWarning}</p>}
       </div>
-      <div>
-        <label htmlFor="nv-refrigerant" className="field-label">
-          Refrigerant on the label
-        </label>
-        <select
-          id="nv-refrigerant"
-          className="field-input"
-          value={f.refrigerant}
-          onChange={(e) => setF({ ...f, refrigerant: e.target.value })}
-        >
-          {SERVICE_REFRIGERANT_OPTIONS.map((o) => (
-            <option key={o.value} value={o.value}>
-              {o.label}
-            </option>
-          ))}
-        </select>
-      </div>
-      <div>
-        <label htmlFor="nv-device" className="field-label">
-          Expansion device
-        </label>
-        <select
-          id="nv-device"
-          className="field-input"
-          value={f.expansionDevice}
-          onChange={(e) => setF({ ...f, expansionDevice: e.target.value })}
-        >
-          {EXPANSION_DEVICE_OPTIONS.map((o) => (
-            <option key={o.value} value={o.value}>
-              {o.label}
-            </option>
-          ))}
-        </select>
-      </div>
+      <SelectField
+        id="nv-refrigerant"
+        label="Refrigerant on the label"
+        value={f.refrigerant}
+        options={SERVICE_REFRIGERANT_OPTIONS}
+        onChange={(refrigerant) => setF({ ...f, refrigerant })}
+      />
+      <SelectField
+        id="nv-device"
+        label="Expansion device"
+        value={f.expansionDevice}
+        options={EXPANSION_DEVICE_OPTIONS}
+        onChange={(expansionDevice) => setF({ ...f, expansionDevice })}
+      />
       <div className="sm:col-span-2">
         <label htmlFor="nv-compressor" className="field-label">
           Compressor

@@ -2,7 +2,7 @@
 
 import { useState } from "react";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import type { CreateCylinderInput, CylinderDto } from "@/lib/contracts/cylinders";
+import type { CreateCylinderInput, CylinderDto, CylinderKind } from "@/lib/contracts/cylinders";
 import { apiFetch, ApiError, saveErrorOf } from "@/lib/queries/api-fetch";
 import { ledgerKeys } from "@/lib/queries/ledger";
 import { SERVICE_REFRIGERANT_OPTIONS } from "@/lib/refrigerants/catalog";
@@ -12,6 +12,7 @@ import { sayInUnits } from "@/lib/units/quantity";
 import { useReaderUnits } from "@/components/shell/reader-units";
 import { EntryInput } from "@/components/service/entry-input";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
+import { SelectField } from "@/components/ui/select-field";
 
 /** Retiring asks first; reactivating a retired cylinder does not. */
 export function RetireButton({ cylinder, massUnit }: { cylinder: CylinderDto; massUnit: MassUnit }) {
@@ -70,6 +71,12 @@ export function RetireButton({ cylinder, massUnit }: { cylinder: CylinderDto; ma
     </span>
   );
 }
+
+const CYLINDER_KIND_OPTIONS = [
+  { value: "recovery", label: "Recovery" },
+  { value: "virgin", label: "Virgin" },
+  { value: "recycled", label: "Recycled" },
+] as const satisfies readonly { value: CylinderKind; label: string }[];
 
 const EMPTY = {
   label: "",
@@ -156,38 +163,20 @@ export function AddCylinderForm({ massUnit }: { massUnit: MassUnit }) {
         error={errors.serial}
       />
       <div className="grid grid-cols-2 gap-3">
-        <div>
-          <label htmlFor="cyl-refrigerant" className="field-label">
-            Refrigerant
-          </label>
-          <select
-            id="cyl-refrigerant"
-            className="field-input"
-            value={form.refrigerant}
-            onChange={(e) => set("refrigerant")(e.target.value)}
-          >
-            {SERVICE_REFRIGERANT_OPTIONS.map((o) => (
-              <option key={o.value} value={o.value}>
-                {o.label}
-              </option>
-            ))}
-          </select>
-        </div>
-        <div>
-          <label htmlFor="cyl-kind" className="field-label">
-            Kind
-          </label>
-          <select
-            id="cyl-kind"
-            className="field-input"
-            value={form.kind}
-            onChange={(e) => set("kind")(e.target.value)}
-          >
-            <option value="recovery">Recovery</option>
-            <option value="virgin">Virgin</option>
-            <option value="recycled">Recycled</option>
-          </select>
-        </div>
+        <SelectField
+          id="cyl-refrigerant"
+          label="Refrigerant"
+          value={form.refrigerant}
+          options={SERVICE_REFRIGERANT_OPTIONS}
+          onChange={set("refrigerant")}
+        />
+        <SelectField
+          id="cyl-kind"
+          label="Kind"
+          value={form.kind}
+          options={CYLINDER_KIND_OPTIONS}
+          onChange={set("kind")}
+        />
       </div>
       <EntryInput
         label="Tare (stamped on the collar)"

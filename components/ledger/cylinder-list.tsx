@@ -6,6 +6,7 @@ import { fillSentence } from "@/lib/service/ledger-guard";
 import { type MassUnit, formatMassGrouped } from "@/lib/units";
 import { cylindersQuery } from "@/lib/queries/ledger";
 import { AddCylinderForm, RetireButton } from "./cylinder-forms";
+import { MoreButton } from "@/components/ui/more-button";
 
 export function CylinderList({ massUnit, canWrite }: { massUnit: MassUnit; canWrite: boolean }) {
   const { data, fetchNextPage, hasNextPage, isFetchingNextPage } = useInfiniteQuery(cylindersQuery());
@@ -65,16 +66,12 @@ export function CylinderList({ massUnit, canWrite }: { massUnit: MassUnit; canWr
           );
         })}
       </ul>
-      {hasNextPage && (
-        <button
-          type="button"
-          className="btn-quiet mt-3 w-full"
-          onClick={() => fetchNextPage()}
-          disabled={isFetchingNextPage}
-        >
-          {isFetchingNextPage ? "Loading…" : "Show more cylinders"}
-        </button>
-      )}
+      <MoreButton
+        hasNextPage={hasNextPage}
+        isFetchingNextPage={isFetchingNextPage}
+        fetchNextPage={fetchNextPage}
+        label="Show more cylinders"
+      />
       {canWrite && <AddCylinderForm massUnit={massUnit} />}
     </section>
   );

@@ -9,6 +9,7 @@ import { apiFetch, ApiError } from "@/lib/queries/api-fetch";
 import { ledgerKeys, movementsQuery } from "@/lib/queries/ledger";
 import { type MassUnit, formatMassGrouped } from "@/lib/units";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
+import { MoreButton } from "@/components/ui/more-button";
 import { MOVEMENT_WORDS, shopDateTime } from "./words";
 
 export interface LedgerViewer {
@@ -112,16 +113,12 @@ export function MovementList({ viewer }: { viewer: LedgerViewer }) {
           </li>
         ))}
       </ul>
-      {hasNextPage && (
-        <button
-          type="button"
-          className="btn-quiet mt-3 w-full"
-          onClick={() => fetchNextPage()}
-          disabled={isFetchingNextPage}
-        >
-          {isFetchingNextPage ? "Loading…" : "Show older lines"}
-        </button>
-      )}
+      <MoreButton
+        hasNextPage={hasNextPage}
+        isFetchingNextPage={isFetchingNextPage}
+        fetchNextPage={fetchNextPage}
+        label="Show older lines"
+      />
       <p role="status" className="mt-2 min-h-6 font-bold">
         {status}
       </p>

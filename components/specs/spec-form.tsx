@@ -10,6 +10,7 @@ import { readMassG, readVolumeMl } from "@/lib/service/entry";
 import { LABEL_CHARGE_RANGE_G, TOTAL_OIL_RANGE_ML } from "@/lib/specs";
 import { type MassUnit, type VolumeUnit, formatMass, formatVolume } from "@/lib/units";
 import { EntryInput } from "@/components/service/entry-input";
+import { SelectField } from "@/components/ui/select-field";
 import {
   COMPRESSOR_TYPE_LABELS,
   COMPRESSOR_TYPES,
@@ -163,23 +164,13 @@ export function SpecForm({
         />
         <span className="font-bold">Front and rear A/C</span>
       </label>
-      <div>
-        <label htmlFor="spec-refrigerant" className="field-label">
-          Refrigerant
-        </label>
-        <select
-          id="spec-refrigerant"
-          className="field-input"
-          value={form.refrigerant}
-          onChange={(e) => set("refrigerant")(e.target.value)}
-        >
-          {SERVICE_REFRIGERANT_OPTIONS.map((o) => (
-            <option key={o.value} value={o.value}>
-              {o.label}
-            </option>
-          ))}
-        </select>
-      </div>
+      <SelectField
+        id="spec-refrigerant"
+        label="Refrigerant"
+        value={form.refrigerant}
+        options={SERVICE_REFRIGERANT_OPTIONS}
+        onChange={set("refrigerant")}
+      />
       <EntryInput
         label="Label charge"
         value={form.charge}
