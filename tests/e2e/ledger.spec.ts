@@ -116,6 +116,11 @@ test("an imperial shop reads the refusal in pounds, and retiring a cylinder asks
   });
   await expect(ledger.status()).toContainText("It holds 2.65 lb and this takes out 3.00 lb.");
 
+  // The server's limit is said in pounds too: 500 g = 1.10 lb (NIST SP 811: 1 lb = 453.59237 g).
+  await ledger.addCylinder({ label: `${label}-T`, tare: "0.5", capacity: "50", initial: "0" });
+  await expect(ledger.addCylinderForm()).toContainText("A tare under 1.10 lb is not a refrigerant cylinder.");
+  await expect(ledger.addCylinderForm()).not.toContainText(/\b500 g\b|\{\{/);
+
   const card = page.getByTestId(`cylinder-${label}`);
   await card.getByRole("button", { name: `Retire ${label}` }).click();
   const dialog = page.getByRole("dialog", { name: `Retire ${label}?` });

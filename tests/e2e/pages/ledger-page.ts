@@ -28,6 +28,26 @@ export class LedgerPage {
     return this.page.getByTestId("movement-form-status");
   }
 
+  /** The add-a-cylinder form, its masses typed one key at a time in the ledger's mass unit. */
+  async addCylinder(opts: { label: string; tare: string; capacity: string; initial: string }) {
+    const form = this.addCylinderForm();
+    await form.getByLabel("Label on the cylinder").fill(opts.label);
+    for (const [name, text] of [
+      ["Tare (stamped on the collar)", opts.tare],
+      ["Refrigerant capacity", opts.capacity],
+      ["Refrigerant in it now", opts.initial],
+    ] as const) {
+      const field = form.getByLabel(name);
+      await field.fill("");
+      await field.pressSequentially(text, { delay: 30 });
+    }
+    await form.getByRole("button", { name: "Add the cylinder" }).click();
+  }
+
+  addCylinderForm() {
+    return this.page.locator("form").filter({ hasText: "Add a cylinder" });
+  }
+
   netMass(label: string) {
     return this.page.getByTestId(`cylinder-${label}`).getByTestId("cylinder-net");
   }
