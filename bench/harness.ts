@@ -8,7 +8,7 @@ import { loadavg } from "node:os";
 import path from "node:path";
 import { randomBytes } from "node:crypto";
 import autocannon from "autocannon";
-import type { Sequelize } from "sequelize";
+import { QueryTypes, type Sequelize } from "sequelize";
 import { ensureBenchDatabase } from "./casebook-data";
 
 export const REPO = path.resolve(__dirname, "..");
@@ -142,12 +142,27 @@ export async function benchServer(defaultPort: number): Promise<BenchServer> {
     },
     async start() {
       await closeSequelize();
+      // BENCH_CPU_PROF=<folder>: the server writes a V8 CPU profile there when it stops.
+      const profile = process.env.BENCH_CPU_PROF;
+      const nextArgs = ["start", "-H", "127.0.0.1", "-p", String(port)];
       server = spawn(
-        path.join(REPO, "node_modules/.bin/next"),
-        ["start", "-H", "127.0.0.1", "-p", String(port)],
+        profile ? process.execPath : path.join(REPO, "node_modules/.bin/next"),
+        profile
+          ? [
+              "--cpu-prof",
+              `--cpu-prof-dir=${path.resolve(profile)}`,
+              path.join(REPO, "node_modules/next/dist/bin/next"),
+              ...nextArgs,
+            ]
+          : nextArgs,
         {
           cwd: REPO,
-          env: { ...process.env, NODE_ENV: "production", DATABASE_URL: databaseUrl, APP_ORIGIN: base },
+          env: {
+            ...process.env,
+            NODE_ENV: "production",
+            DATABASE_URL: databaseUrl,
+            APP_ORIGIN: base,
+          },
           stdio: ["ignore", "ignore", "inherit"],
         },
       );
@@ -349,4 +364,33 @@ export function printLoad(title: string, figures: LoadFigures, conflictGroups: S
   console.log(
     `errors ${figures.errors} · timeouts ${figures.timeouts}${cpu ? ` · CPU per answer: app ${cpu.app.toFixed(2)} ms, database ${cpu.db.toFixed(2)} ms` : ""}`,
   );
+}
+
+/** An invented ledger for every shop, once: two cylinders per refrigerant and a movement per closed case. */
+export async function ensureLedger(sequelize: Sequelize) {
+  const [row] = await sequelize.query<{ n: number }>("SELECT COUNT(*) AS n FROM refrigerant_movement", {
+    type: QueryTypes.SELECT,
+  });
+  if (Number(row?.n ?? 0) > 0) return;
+  const started = performance.now();
+  await sequelize.query(
+    `INSERT INTO cylinder (shop_id, label, refrigerant, kind, tare_g, capacity_g, initial_net_g)
+     SELECT s.id, CONCAT(r.refrigerant, ' ', k.kind, ' cylinder'), r.refrigerant, k.kind, 7000, 1000000,
+            IF(k.kind = 'virgin', 900000, 0)
+       FROM shop s
+       CROSS JOIN (SELECT 'R-134a' AS refrigerant UNION ALL SELECT 'R-1234yf') r
+       CROSS JOIN (SELECT 'virgin' AS kind UNION ALL SELECT 'recovery') k`,
+  );
+  // Each closed case recovered what was in the system and was charged again from the virgin cylinder.
+  await sequelize.query(
+    `INSERT INTO refrigerant_movement (shop_id, cylinder_id, case_id, technician_id, type, refrigerant, mass_g, occurred_at)
+     SELECT c.shop_id, y.id, c.id, c.technician_id,
+            IF(y.kind = 'virgin', 'charged_from', 'recovered_into'), y.refrigerant,
+            IF(y.kind = 'virgin', 450 + c.id % 300, 200 + c.id % 350), COALESCE(c.closed_at, c.created_at)
+       FROM service_case c
+       JOIN casebook_entry e ON e.case_id = c.id
+       JOIN cylinder y ON y.shop_id = c.shop_id AND y.refrigerant = e.refrigerant
+      WHERE c.status = 'closed'`,
+  );
+  console.log(`invented a refrigerant ledger in ${((performance.now() - started) / 1000).toFixed(0)} s`);
 }

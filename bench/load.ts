@@ -12,7 +12,16 @@
 //   npm run bench:load     (BENCH_SECONDS=60 per run, BENCH_CONNECTIONS="50 200", BENCH_PORT=3541,
 //                           BENCH_KEEP_DB=1 leaves the database's server running afterwards)
 import { QueryTypes } from "sequelize";
-import { benchServer, loadNow, printLoad, recordFigure, runLoad, seeded, type Shot } from "./harness";
+import {
+  benchServer,
+  ensureLedger,
+  loadNow,
+  printLoad,
+  recordFigure,
+  runLoad,
+  seeded,
+  type Shot,
+} from "./harness";
 
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 60);
 const CONNECTION_STEPS = (process.env.BENCH_CONNECTIONS ?? "50 200").split(/[ ,]+/).map(Number);
@@ -44,35 +53,6 @@ const ROUND = [
 ] as const;
 
 type Draft = { caseId: number; cookie: string; version: number; n: number };
-
-/** An invented ledger for every shop, once: two cylinders per refrigerant and a movement per closed case. */
-async function ensureLedger(sequelize: import("sequelize").Sequelize) {
-  const [row] = await sequelize.query<{ n: number }>("SELECT COUNT(*) AS n FROM refrigerant_movement", {
-    type: QueryTypes.SELECT,
-  });
-  if (Number(row?.n ?? 0) > 0) return;
-  const started = performance.now();
-  await sequelize.query(
-    `INSERT INTO cylinder (shop_id, label, refrigerant, kind, tare_g, capacity_g, initial_net_g)
-     SELECT s.id, CONCAT(r.refrigerant, ' ', k.kind, ' cylinder'), r.refrigerant, k.kind, 7000, 1000000,
-            IF(k.kind = 'virgin', 900000, 0)
-       FROM shop s
-       CROSS JOIN (SELECT 'R-134a' AS refrigerant UNION ALL SELECT 'R-1234yf') r
-       CROSS JOIN (SELECT 'virgin' AS kind UNION ALL SELECT 'recovery') k`,
-  );
-  // Each closed case recovered what was in the system and was charged again from the virgin cylinder.
-  await sequelize.query(
-    `INSERT INTO refrigerant_movement (shop_id, cylinder_id, case_id, technician_id, type, refrigerant, mass_g, occurred_at)
-     SELECT c.shop_id, y.id, c.id, c.technician_id,
-            IF(y.kind = 'virgin', 'charged_from', 'recovered_into'), y.refrigerant,
-            IF(y.kind = 'virgin', 450 + c.id % 300, 200 + c.id % 350), COALESCE(c.closed_at, c.created_at)
-       FROM service_case c
-       JOIN casebook_entry e ON e.case_id = c.id
-       JOIN cylinder y ON y.shop_id = c.shop_id AND y.refrigerant = e.refrigerant
-      WHERE c.status = 'closed'`,
-  );
-  console.log(`invented a refrigerant ledger in ${((performance.now() - started) / 1000).toFixed(0)} s`);
-}
 
 async function main() {
   const started = loadNow();
