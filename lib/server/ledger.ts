@@ -10,11 +10,13 @@ import type { RefrigerantId } from "@/lib/refrigerants";
 import {
   type Cylinder as LedgerCylinder,
   type CylinderMovement,
+  type CylinderState,
   type MovementType,
   applyMovements,
 } from "@/lib/service/ledger";
 import { ledgerMassUnit, safeFillG } from "@/lib/service/ledger-guard";
 import { monthlyReport, toCsv } from "@/lib/service/ledger-report";
+import { derivedFrom, rememberedLedger } from "./ledger-memory";
 import {
   CYLINDER_PAGE_DEFAULT,
   type CreateCylinderInput,
@@ -96,6 +98,11 @@ async function movementRows(shopId: number, transaction?: Transaction): Promise<
   return rows as unknown as MovementRow[];
 }
 
+/** Every line of the shop as the ledger's rules read them, kept while the shop adds none (./ledger-memory.ts). */
+function shopLedger(shopId: number) {
+  return rememberedLedger(shopId, async () => (await movementRows(shopId)).map(toLedgerMovement));
+}
+
 /** The lines of the given cylinders only, oldest first. */
 export async function cylinderMovementRows({
   shopId,
@@ -128,12 +135,13 @@ export async function cylinderMovementRows({
 
 function toCylinderDto(
   c: CylinderRow,
-  movements: CylinderMovement[],
+  movements: readonly CylinderMovement[],
   say: (text: string) => string,
+  // The replay, when it was worked out before (./ledger-memory.ts keeps it per state of the lines).
+  state: CylinderState = applyMovements(toLedgerCylinder(c), movements),
 ): CylinderDto {
-  const ledgerCylinder = toLedgerCylinder(c);
   // A correction always cancels a movement of the same cylinder, so `movements` holds both ends of it.
-  const state = applyMovements(ledgerCylinder, movements);
+  const ledgerCylinder = toLedgerCylinder(c);
   return {
     id: c.id,
     label: c.label,
@@ -190,16 +198,29 @@ export async function listCylinders({
     raw: true,
     transaction,
   })) as unknown as CylinderRow[];
-  const movements = (
-    await cylinderMovementRows({ shopId, cylinderIds: rows.map((c) => c.id), transaction })
-  ).map(toLedgerMovement);
-  return rows.map((c) =>
-    toCylinderDto(
-      c,
-      movements.filter((m) => m.cylinderId === String(c.id)),
-      say,
-    ),
-  );
+  if (transaction) {
+    // Inside a transaction: its own snapshot of these cylinders' lines, never the kept ones.
+    const movements = (
+      await cylinderMovementRows({ shopId, cylinderIds: rows.map((c) => c.id), transaction })
+    ).map(toLedgerMovement);
+    return rows.map((c) =>
+      toCylinderDto(
+        c,
+        movements.filter((m) => m.cylinderId === String(c.id)),
+        say,
+      ),
+    );
+  }
+  const ledger = await shopLedger(shopId);
+  // A cylinder's contents are replayed once per state of the shop's lines and of the cylinder's own row;
+  // only the saying is done per request.
+  return rows.map((c) => {
+    const movements = ledger.byCylinder.get(String(c.id)) ?? [];
+    const state = derivedFrom(ledger, `cylinder:${JSON.stringify(c)}`, () =>
+      applyMovements(toLedgerCylinder(c), movements),
+    );
+    return toCylinderDto(c, movements, say, state);
+  });
 }
 
 /** GET /api/cylinders: one page, and the cursor of the next one. */
@@ -415,7 +436,32 @@ export async function getMovement({
   return toMovementDto(m, await reversalsOf(shopId, [m.id], transaction));
 }
 
+/** The shop's time zone, its people's names and the monthly report (worked out once per state of the lines). */
+async function reportParts(shopId: number) {
+  const { Shop, User } = getModels();
+  const [shop, users, ledger] = await Promise.all([
+    Shop.findOne({ where: { id: shopId }, attributes: ["timeZone"], raw: true }),
+    User.findAll({ where: { shopId }, attributes: ["id", "name"], raw: true }),
+    shopLedger(shopId),
+  ]);
+  const timeZone = shop?.timeZone ?? "UTC";
+  const names: Record<string, string> = Object.fromEntries(users.map((u) => [u.id, u.name]));
+  const report = derivedFrom(ledger, `report:${timeZone}`, () =>
+    monthlyReport(ledger.movements, { timeZone }),
+  );
+  return { timeZone, names, report };
+}
+
 /** Recovered, recycled, charged and sent out per month × technician × refrigerant, in the shop's time zone. */
+export async function ledgerReportRows({ shopId }: { shopId: number }): Promise<LedgerReportResponse> {
+  const { timeZone, names, report } = await reportParts(shopId);
+  return {
+    rows: report.map((r) => ({ ...r, technician: names[r.technicianId] ?? r.technicianId })),
+    timeZone,
+  };
+}
+
+/** The monthly report and its CSV, in the reader's mass unit. */
 export async function ledgerReport({
   shopId,
   reader,
@@ -424,12 +470,7 @@ export async function ledgerReport({
   /** whose units the CSV is written in; grams when nobody is named */
   reader?: Pick<User, "id" | "shopId">;
 }): Promise<LedgerReportResponse & { csv: string }> {
-  const { Shop, User } = getModels();
-  const shop = await Shop.findOne({ where: { id: shopId }, attributes: ["timeZone"], raw: true });
-  const timeZone = shop?.timeZone ?? "UTC";
-  const users = await User.findAll({ where: { shopId }, attributes: ["id", "name"], raw: true });
-  const names = Object.fromEntries(users.map((u) => [u.id, u.name]));
-  const report = monthlyReport((await movementRows(shopId)).map(toLedgerMovement), { timeZone });
+  const { timeZone, names, report } = await reportParts(shopId);
   return {
     rows: report.map((r) => ({ ...r, technician: names[r.technicianId] ?? r.technicianId })),
     csv: toCsv(report, {

@@ -6,7 +6,7 @@ import { getQueryClient } from "@/lib/query-client";
 import { ledgerKeys } from "@/lib/queries/ledger";
 import { getShop } from "@/lib/server/shops";
 import { getProfile } from "@/lib/server/profile";
-import { ledgerReport, listCylinderPage, listMovementPage } from "@/lib/server/ledger";
+import { ledgerReportRows, listCylinderPage, listMovementPage } from "@/lib/server/ledger";
 import { cautionsFor } from "@/lib/service/cautions";
 import { ledgerMassUnit } from "@/lib/service/ledger-guard";
 import { LedgerView } from "@/components/ledger/ledger-view";
@@ -28,7 +28,7 @@ export default async function LedgerPage() {
     getShop({ shopId }),
     listCylinderPage({ shopId, query: {} }),
     listMovementPage({ shopId, query: {} }),
-    ledgerReport({ shopId }),
+    ledgerReportRows({ shopId }),
     getProfile({ user }),
   ]);
   const queryClient = getQueryClient();
