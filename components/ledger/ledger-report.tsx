@@ -1,15 +1,25 @@
 "use client";
 
+import { useState } from "react";
 import { useQuery } from "@tanstack/react-query";
 import { type MassUnit, formatMassGrouped } from "@/lib/units";
 import type { LedgerReportRow } from "@/lib/contracts/ledger";
+import { latestMonths } from "@/lib/service/report-months";
 import { ledgerReportQuery } from "@/lib/queries/ledger";
+
+/** Months shown at first: a shop's whole history is hundreds of rows, most of them read only in the CSV. */
+export const REPORT_RECENT_MONTHS = 12;
 
 /** The monthly figures, the same rows and corrections the CSV carries. */
 export function LedgerReport({ massUnit }: { massUnit: MassUnit }) {
   const { data: report } = useQuery(ledgerReportQuery());
+  const [allMonths, setAllMonths] = useState(false);
   const m = (g: number) => formatMassGrouped(g, massUnit);
-  const rows = report?.rows ?? [];
+  const everyRow = report?.rows ?? [];
+  // The latest months are the ones a technician checks; the rest wait behind a button and in the CSV.
+  const recent = latestMonths(everyRow, REPORT_RECENT_MONTHS);
+  const rows = allMonths ? everyRow : recent.rows;
+  const monthCount = recent.monthCount;
   const key = (r: LedgerReportRow) => `${r.month}-${r.technicianId}-${r.refrigerant}`;
   // The CSV's columns, in its order.
   const figures = (r: LedgerReportRow): [string, string][] => [
@@ -38,6 +48,18 @@ export function LedgerReport({ massUnit }: { massUnit: MassUnit }) {
       </p>
       <div data-testid="ledger-report">
         {rows.length === 0 && <p className="text-ink-soft">Nothing posted yet.</p>}
+        {monthCount > REPORT_RECENT_MONTHS && (
+          <p className="mb-3 flex flex-wrap items-center gap-2">
+            <span className="text-ink-soft">
+              {allMonths
+                ? `All ${monthCount} months.`
+                : `The last ${REPORT_RECENT_MONTHS} months. The CSV holds all ${monthCount}.`}
+            </span>
+            <button type="button" className="btn-quiet" onClick={() => setAllMonths((shown) => !shown)}>
+              {allMonths ? `Show the last ${REPORT_RECENT_MONTHS} months` : `Show all ${monthCount} months`}
+            </button>
+          </p>
+        )}
         {/* A phone gets one card per row; a wider screen the table. */}
         <ul className="space-y-3 sm:hidden">
           {rows.map((r) => (
