@@ -44,6 +44,8 @@ export async function listCases({
   const { Case } = getModels();
   const rows = await Case.findAll({
     where: { shopId, ...(status ? { status } : {}) },
+    // What a list line shows: not the interview record, the findings or the notes of fifty cases.
+    attributes: ["id", "status", "complaint", "updatedAt", "vehicleId", "customerId", "technicianId"],
     include: includes(),
     order: [
       ["updatedAt", "DESC"],
@@ -79,7 +81,15 @@ export async function getCase({ shopId, caseId }: { shopId: number; caseId: numb
     where: { id: caseId, shopId },
     include: [
       ...includes(),
-      { model: SignOff, as: "signOffs", include: [{ model: User, as: "reviewer", attributes: ["name"] }] },
+      {
+        model: SignOff,
+        as: "signOffs",
+        // Joined on the shop too, so the lookup uses sign_off_shop_id_case_id instead of reading
+        // every sign-off of every shop.
+        where: { shopId },
+        required: false,
+        include: [{ model: User, as: "reviewer", attributes: ["name"] }],
+      },
     ],
     order: [[{ model: SignOff, as: "signOffs" }, "createdAt", "ASC"]],
   });
