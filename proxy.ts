@@ -1,7 +1,6 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { env } from "@/lib/env";
 import {
-  API_CACHE_CONTROL,
   API_CONTENT_SECURITY_POLICY,
   STATIC_SECURITY_HEADERS,
   STRICT_TRANSPORT_SECURITY,
@@ -11,8 +10,10 @@ import {
 import { isOwnOrigin, STATE_CHANGING_METHODS } from "@/lib/security/origin";
 
 // Cheap checks only: the real session check happens in every page, handler and action.
-// Here: the Origin check for state-changing requests, the security headers with a fresh CSP nonce
-// for each page, and a redirect to sign-in when there is no session cookie at all.
+// Here, for pages and server actions: the Origin check for state-changing requests, the security
+// headers with a fresh CSP nonce for each page, and a redirect to sign-in when there is no session
+// cookie at all. API routes are left out by the matcher: lib/server/handler.ts checks their Origin
+// and sets no-store, and next.config.mjs gives them their headers, so no request pays for it twice.
 const SESSION_COOKIE = "cw_session";
 // Pages reached without a session. "/s/" is the owner summary (app/s/[token]): the vehicle's owner
 // has no account, so the page is public and lets in only a link token that is unguessable, stored
@@ -23,13 +24,11 @@ export function proxy(req: NextRequest) {
   const { pathname } = req.nextUrl;
   const { APP_ORIGIN, NODE_ENV } = env();
   const https = APP_ORIGIN.startsWith("https://");
-  const isApi = pathname.startsWith("/api/");
 
   const withHeaders = (res: NextResponse, csp: string) => {
     for (const [name, value] of Object.entries(STATIC_SECURITY_HEADERS)) res.headers.set(name, value);
     if (https) res.headers.set("Strict-Transport-Security", STRICT_TRANSPORT_SECURITY);
     res.headers.set("Content-Security-Policy", csp);
-    if (isApi) res.headers.set("Cache-Control", API_CACHE_CONTROL);
     return res;
   };
 
@@ -47,8 +46,6 @@ export function proxy(req: NextRequest) {
       API_CONTENT_SECURITY_POLICY,
     );
   }
-
-  if (isApi) return withHeaders(NextResponse.next(), API_CONTENT_SECURITY_POLICY);
 
   // Next.js reads the nonce from the request's CSP header and puts it on its own scripts; the
   // x-nonce request header is there for any inline script of ours (there is none today).
@@ -70,6 +67,9 @@ export function proxy(req: NextRequest) {
 }
 
 export const config = {
-  // Files anyone may fetch without a session: the favicon, the app icons and the web app manifest.
-  matcher: ["/((?!_next/static|_next/image|favicon.ico|icon|apple-icon|manifest.webmanifest|robots.txt).*)"],
+  // Left out: JSON answers under /api (see above), and files anyone may fetch without a session: the
+  // favicon, the app icons and the web app manifest.
+  matcher: [
+    "/((?!api/|_next/static|_next/image|favicon.ico|icon|apple-icon|manifest.webmanifest|robots.txt).*)",
+  ],
 };

@@ -3,6 +3,7 @@ import { pathToFileURL } from "node:url";
 import type { NextConfig } from "next";
 import { describe, expect, it } from "vitest";
 import {
+  API_CACHE_CONTROL,
   API_CONTENT_SECURITY_POLICY,
   PERMISSIONS_POLICY,
   STATIC_SECURITY_HEADERS,
@@ -23,11 +24,17 @@ describe("security headers", () => {
     const configUrl = pathToFileURL(path.resolve(__dirname, "../../next.config.mjs")).href;
     const nextConfig = ((await import(configUrl)) as { default: NextConfig }).default;
     const rules = await nextConfig.headers!();
-    expect(rules).toHaveLength(1);
+    expect(rules).toHaveLength(2);
     expect(rules[0]!.source).toBe("/:path*");
     expect(Object.fromEntries(rules[0]!.headers.map((h) => [h.key, h.value]))).toEqual(
       STATIC_SECURITY_HEADERS,
     );
+    // API answers never pass through the proxy: their policy and no-store come from the config.
+    expect(rules[1]!.source).toBe("/api/:path*");
+    expect(Object.fromEntries(rules[1]!.headers.map((h) => [h.key, h.value]))).toEqual({
+      "Content-Security-Policy": API_CONTENT_SECURITY_POLICY,
+      "Cache-Control": API_CACHE_CONTROL,
+    });
   });
 
   it("allows the camera for our own pages and turns every other listed feature off", () => {

@@ -9,7 +9,7 @@ import { env } from "@/lib/env";
 import { isDatabaseUnavailable } from "@/lib/db/unavailable";
 import { AppError, isAppError, type MarkedErrorText } from "@/lib/errors";
 import { hasQuantityMarkers, sayInUnits } from "@/lib/units/quantity";
-import { API_CACHE_CONTROL } from "@/lib/security/headers";
+import { API_CACHE_CONTROL, STRICT_TRANSPORT_SECURITY } from "@/lib/security/headers";
 import { isOwnOrigin, STATE_CHANGING_METHODS } from "@/lib/security/origin";
 import { fieldErrorsOf } from "@/lib/validation";
 import { illFormedTextPath, JSON_BODY_MESSAGES, jsonDepth, MAX_JSON_DEPTH } from "@/lib/contracts/json-body";
@@ -73,6 +73,9 @@ export function handler<B extends Schema, Q extends Schema, P extends Schema>(
   return async (req: NextRequest, routeCtx: RouteContext): Promise<Response> => {
     // Answers hold one shop's data: never kept by a browser or proxy cache.
     const responseHeaders = new Headers({ "Cache-Control": API_CACHE_CONTROL });
+    // The proxy never sees API requests (proxy.ts): HTTPS-only is announced here for them.
+    if (env().APP_ORIGIN.startsWith("https://"))
+      responseHeaders.set("Strict-Transport-Security", STRICT_TRANSPORT_SECURITY);
     try {
       if (STATE_CHANGING_METHODS.has(req.method)) checkOrigin(req);
 
