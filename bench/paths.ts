@@ -113,8 +113,9 @@ async function main() {
     for (const name of chosen) {
       const next = paths[name];
       if (!next) throw new Error(`no path called ${name}: ${Object.keys(paths).join(", ")}`);
-      // Warm the path (code and database pages), and stop at once on a refused answer.
-      for (let i = 0; i < 20; i++) {
+      // Warm the path (code, database pages, and what the app keeps per shop: twice as many requests
+      // as shops), and stop at once on a refused answer.
+      for (let i = 0; i < Math.max(20, 2 * people.length); i++) {
         const shot = next();
         const response = await fetch(`${bench.base}${shot.path}`, {
           headers: { cookie: shot.cookie },
