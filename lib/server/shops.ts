@@ -1,4 +1,5 @@
 import "server-only";
+import { cache } from "react";
 import { getModels } from "@/models";
 import { AppError } from "@/lib/errors";
 
@@ -11,7 +12,10 @@ export interface ShopSummary {
   locale: string;
 }
 
-export async function getShop({ shopId }: { shopId: number }): Promise<ShopSummary> {
+// The shell, the page and the reader's profile each ask for the shop while one page renders: React's
+// cache makes that one read per render (outside a render, as in route handlers, it reads each time).
+// No server action changes a shop, so nothing within one render reads it before and after a change.
+const shopOnce = cache(async (shopId: number): Promise<ShopSummary> => {
   const { Shop } = getModels();
   const shop = await Shop.findByPk(shopId, {
     attributes: ["id", "name", "units", "altitudeM", "timeZone", "locale"],
@@ -26,4 +30,8 @@ export async function getShop({ shopId }: { shopId: number }): Promise<ShopSumma
     timeZone: shop.timeZone,
     locale: shop.locale,
   };
+});
+
+export async function getShop({ shopId }: { shopId: number }): Promise<ShopSummary> {
+  return { ...(await shopOnce(shopId)) };
 }
