@@ -8,14 +8,16 @@ import type { CylinderMovement } from "@/lib/service/ledger";
  *
  * The ledger is append-only (models/refrigerant-movement.ts refuses updates and deletes; a mistake is
  * cancelled by a new line), so the set of a shop's lines only ever grows: its count and its highest id
- * name it. Each use asks the database for those two numbers (one index lookup on
- * refrigerant_movement_shop_occurred) and reads the lines again only when they differ from what is kept.
+ * name it. Each use asks the database for those two numbers (a count over the shop's entries of the
+ * index refrigerant_movement_shop_id_id, no row read) and reads the lines again only when they differ
+ * from what is kept.
  * A line committed by another request or another app instance changes the count, so nothing stale is
  * served, whichever instance answers. Reads inside a transaction (posting, saving a service record) do
  * not come here: they read their own snapshot, with locks where they need them.
  *
  * What is worked out from the lines (cylinder contents, the monthly report) is kept beside them and
- * dropped with them.
+ * dropped with them. A database restored from a backup under a running app can repeat a count and an
+ * id with other lines: restart the app servers after a restore.
  */
 export interface RememberedLedger {
   count: number;
