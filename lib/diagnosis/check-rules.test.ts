@@ -227,6 +227,18 @@ describe("when each check is offered", () => {
     }
   });
 
+  it("drains the compressor's oil once the charge is out, until it is found short or normal", () => {
+    const recoveredInput = { ...base, recoveredChargeG: 500 };
+    for (const answer of ["oil_short_at_drain", "oil_normal_at_drain"] as const)
+      expect(available("drain_compressor_oil", { ...recoveredInput, symptoms: [answer] }), answer).toBe(
+        false,
+      );
+    expect(check("drain_compressor_oil").outcomes(ctxOf(recoveredInput))).toEqual([
+      ["symptom:oil_short_at_drain"],
+      ["symptom:oil_normal_at_drain"],
+    ]);
+  });
+
   it("offers the valve's bulb test only on a valve system and the cut points only on a cycling clutch", () => {
     expect(available("txv_bulb_test", base)).toBe(false);
     expect(available("cycling_points", base)).toBe(false);
@@ -277,6 +289,15 @@ describe("what each check can come back with", () => {
     expect(outcomes("recover_and_weigh", withLiquid)).not.toContain("charge:empty");
     const empty = { ...base, labelChargeG: 600, staticKpaGauge: 10 };
     expect(outcomes("recover_and_weigh", empty)).toContain("charge:empty");
+    // 10 K below saturation at the soak temperature, yet above the empty line: no liquid is left, so the
+    // recovery may still come back empty.
+    const noLiquid = {
+      ...base,
+      labelChargeG: 600,
+      staticKpaGauge: saturationPressure("R-134a", 20) - SEA_LEVEL_KPA,
+    };
+    expect(extractEvidence(noLiquid).observations.map((o) => o.id)).toContain("static:no_liquid");
+    expect(outcomes("recover_and_weigh", noLiquid)).toContain("charge:empty");
   });
 
   it("asks only for the side still missing, both sides together otherwise", () => {

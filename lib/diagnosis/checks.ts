@@ -50,6 +50,7 @@ export interface CheckDefinition {
 const GRADE_OUTCOMES = new Map<ReadingGroup, ObservationId[][]>();
 const grades = (group: ReadingGroup): ObservationId[][] => {
   let outcomes = GRADE_OUTCOMES.get(group);
+  // Stryker disable next-line ConditionalExpression: the cache only spares rebuilding a list with the same contents
   if (!outcomes) {
     outcomes = READING_GRADES[group].map((grade) => [`${group}:${grade}` as ObservationId]);
     GRADE_OUTCOMES.set(group, outcomes);
@@ -63,6 +64,7 @@ const EITHER = new Map<string, ObservationId[][]>();
 const either = (a: SymptomId, b: SymptomId): ObservationId[][] => {
   const key = `${a}|${b}`;
   let outcomes = EITHER.get(key);
+  // Stryker disable next-line ConditionalExpression: the cache only spares rebuilding a list with the same contents
   if (!outcomes) {
     outcomes = [[`symptom:${a}`], [`symptom:${b}`]];
     EITHER.set(key, outcomes);
