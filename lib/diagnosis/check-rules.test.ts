@@ -551,3 +551,155 @@ describe("choosing the next check, rule by rule", () => {
     expect(next.runsSystem).toBe(true);
   });
 });
+
+describe("choosing the next check: what each rule leaves to the others", () => {
+  it("recovers and weighs an overcharge before recharging, the leak comes first only for an undercharge", () => {
+    const step = confirmingStep("overcharge", ctxOf(base));
+    expect(step).toMatch(/^Recover the charge, weigh it against the label/);
+    expect(step).not.toMatch(/leak/);
+  });
+
+  it("names only the cause it confirms, and a single suspect alone", () => {
+    const input = { ...hosed, highKpaGauge: 1900, lowKpaGauge: 300 } as const;
+    expect(chooseNextCheck(ctxOf(input), ranking(["overcharge", 0.5]), idle).separates).toEqual([
+      "overcharge",
+    ]);
+    // the sealant and identifier rules keep the suspect they were asked about
+    expect(chooseNextCheck(ctxOf(base), ranking(["overcharge", 0.9]), idle).separates).toEqual([
+      "overcharge",
+    ]);
+    const everything = {
+      ...hosed,
+      highKpaGauge: 1200,
+      lowKpaGauge: 250,
+      staticKpaGauge: 700,
+      ventC: 6,
+      liquidLineC: 40,
+      suctionLineC: 8,
+      labelChargeG: 600,
+      recoveredChargeG: 600,
+      symptoms: [
+        "no_sealant_found",
+        "condenser_fan_running",
+        "water_spray_no_change",
+        "low_side_steady",
+        "liquid_line_even_temperature",
+        "no_leak_found",
+        "oil_normal_at_drain",
+      ],
+    } satisfies DiagnosisInput;
+    expect(
+      chooseNextCheck(ctxOf(everything), ranking(["no_refrigerant_fault", 0.5], ["moisture", 0.3]), idle)
+        .separates,
+    ).toEqual(["no_refrigerant_fault"]);
+  });
+
+  it("keeps to the repair path in the do-not-run state unless a static alone can lift it", () => {
+    // An electric compressor with no static and a leak found with bubbles in the sight glass: a static
+    // with liquid would not lift the leak, so no static is asked for.
+    const leaking = {
+      ...base,
+      compressorType: "electric",
+      symptoms: ["leak_found", "bubbles_in_sight_glass"],
+    } satisfies DiagnosisInput;
+    const state = doNotRunState(leaking);
+    expect(state.reasons).toEqual(["leak_with_short_charge", "electric_static_unknown"]);
+    const next = chooseNextCheck(ctxOf(leaking), ranking(["undercharge", 0.6]), state);
+    expect(next.check).toBe("repair_path");
+    expect(next.runsSystem).toBe(false);
+    expect(next.separates).toEqual(["undercharge"]);
+  });
+
+  it("repeats an electric compressor's static that is low only against the air, and says which suspect", () => {
+    // Parts soaked to 28 °C in a 30 °C shop, static at saturation for 27 °C: 3 K low against the air
+    // (over the 2 K an electric compressor allows), 1 K against the parts.
+    const input = {
+      ...base,
+      compressorType: "electric",
+      staticSoakC: 28,
+      staticSoakMin: 90,
+      staticKpaGauge: saturationPressure("R-134a", 27) - SEA_LEVEL_KPA,
+    } satisfies DiagnosisInput;
+    const state = doNotRunState(input);
+    expect(state.reasons).toEqual(["electric_static_low"]);
+    const next = chooseNextCheck(ctxOf(input), ranking(["undercharge", 0.6]), state);
+    expect(next.check).toBe("static_repeat");
+    expect(next.separates).toEqual(["undercharge"]);
+    const low = { ...input, staticKpaGauge: saturationPressure("R-134a", 10) - SEA_LEVEL_KPA };
+    const repair = chooseNextCheck(ctxOf(low), ranking(["undercharge", 0.6]), doNotRunState(low));
+    expect(repair.check).toBe("repair_path");
+    expect(repair.separates).toEqual(["undercharge"]);
+  });
+
+  it("repeats any static above saturation on a short soak, from slightly high to very high", () => {
+    const pair = ranking(["overcharge", 0.45], ["non_condensables", 0.4]);
+    // 3 K, 6 K and 10 K over saturation at the 30 °C air the soak is judged against
+    for (const [overK, grade] of [
+      [3, "static:slightly_high"],
+      [6, "static:high"],
+      [10, "static:very_high"],
+    ] as const) {
+      const input = {
+        ...hosed,
+        identifierAirPct: undefined,
+        staticSoakMin: 20,
+        staticKpaGauge: saturationPressure("R-134a", 30 + overK) - SEA_LEVEL_KPA,
+      };
+      expect(extractEvidence(input).observations.map((o) => o.id)).toContain(grade);
+      const next = chooseNextCheck(ctxOf(input), pair, idle);
+      expect(next.check, grade).toBe("static_repeat");
+      expect(next.reason, grade).toBe(
+        "The static pressure sits above saturation, but after a short or unmeasured soak: repeat it before condemning the charge.",
+      );
+    }
+  });
+
+  it("weighs the charge first only when the compressor leads", () => {
+    const input = { ...hosed, labelChargeG: 600 };
+    const next = chooseNextCheck(ctxOf(input), ranking(["overcharge", 0.9], ["undercharge", 0.05]), idle);
+    expect(next.check).toBe("confirm");
+    expect(next.reason).toMatch(/^Overcharge is clear/);
+  });
+
+  it("settles only overcharge against air by the close-call rule, in either order, below its gap", () => {
+    const input: DiagnosisInput = {
+      ...base,
+      identifierPurityPct: 99.5,
+      symptoms: ["no_sealant_found"],
+      highKpaGauge: 1900,
+    };
+    const closeRule = /look alike on the gauges/;
+    const reasonFor = (gapLogOdds: number, first: CauseId, second: CauseId) =>
+      chooseNextCheck(ctxOf(input, { gapLogOdds }), ranking([first, 0.45], [second, 0.4]), idle).reason;
+    expect(reasonFor(0.5, "non_condensables", "overcharge")).toMatch(closeRule);
+    expect(reasonFor(0.5, "overcharge", "non_condensables")).toMatch(closeRule);
+    expect(reasonFor(0.5, "overcharge", "undercharge")).not.toMatch(closeRule);
+    expect(reasonFor(0.5, "non_condensables", "undercharge")).not.toMatch(closeRule);
+    expect(reasonFor(0.5, "undercharge", "overcharge")).not.toMatch(closeRule);
+    expect(reasonFor(0.5, "condenser_airflow", "non_condensables")).not.toMatch(closeRule);
+    // at the gap itself the two are no longer close
+    expect(reasonFor(NEXT_CHECK.closePairLogOdds, "overcharge", "non_condensables")).not.toMatch(closeRule);
+    expect(
+      chooseNextCheck(ctxOf(input, { gapLogOdds: 0.5 }), ranking(["overcharge", 0.45]), idle).reason,
+    ).not.toMatch(closeRule);
+    // with the static and the identifier both in, the check that tells the most decides
+    const both = { ...input, staticKpaGauge: 700 };
+    const next = chooseNextCheck(
+      ctxOf(both, { gapLogOdds: 0.5 }),
+      ranking(["overcharge", 0.45], ["non_condensables", 0.4]),
+      idle,
+    );
+    expect(next.reason).toBe("Best separates overcharge from air in the system.");
+  });
+
+  it("keeps the close-call rule's own reason when the identifier it picks is also the first hose", () => {
+    const input: DiagnosisInput = { ...base, symptoms: ["no_sealant_found"] };
+    const next = chooseNextCheck(
+      ctxOf(input, { gapLogOdds: 0.5 }),
+      ranking(["overcharge", 0.45], ["non_condensables", 0.4]),
+      idle,
+    );
+    expect(next.check).toBe("identify_refrigerant");
+    expect(next.reason).toBe("Overcharge and air look alike on the gauges; the identifier tells them apart.");
+  });
+});

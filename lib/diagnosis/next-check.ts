@@ -107,6 +107,7 @@ const fromCheck = (
 
 function entropy(p: Float64Array): number {
   let h = 0;
+  // Stryker disable next-line EqualityOperator: a typed array reads one past its end as undefined, taken as 0
   for (let i = 0; i < p.length; i++) {
     const v = p[i] ?? 0;
     if (v > 1e-15) h -= v * Math.log(v);
@@ -125,6 +126,7 @@ export function expectedGain(outcomes: readonly (readonly ObservationId[])[], sh
   const norms = new Float64Array(n);
   for (const outcome of outcomes) {
     const { expWeights } = outcomeVector(outcome);
+    // Stryker disable next-line EqualityOperator: a typed array reads one past its end as undefined, taken as 0, and ignores a write there
     for (let c = 0; c < n; c++) norms[c] = (norms[c] ?? 0) + (expWeights[c] ?? 0);
   }
   const before = entropy(shares);
@@ -133,12 +135,15 @@ export function expectedGain(outcomes: readonly (readonly ObservationId[])[], sh
   for (const outcome of outcomes) {
     const { expWeights } = outcomeVector(outcome);
     let chance = 0;
+    // Stryker disable next-line EqualityOperator: a typed array reads one past its end as undefined, taken as 0, and ignores a write there
     for (let c = 0; c < n; c++) {
       const joint = (shares[c] ?? 0) * ((expWeights[c] ?? 0) / (norms[c] ?? 1));
       posterior[c] = joint;
       chance += joint;
     }
+    // Stryker disable next-line ConditionalExpression,EqualityOperator: exp() of a weight is above 0, so chance is 0 only when every share is; its NaN posterior adds 0 × 0
     if (chance <= 0) continue;
+    // Stryker disable next-line EqualityOperator: a typed array reads one past its end as undefined, taken as 0, and ignores a write there
     for (let c = 0; c < n; c++) posterior[c] = (posterior[c] ?? 0) / chance;
     after += chance * entropy(posterior);
   }
@@ -166,7 +171,9 @@ function firstThingsFirst(
   separates: CauseId[],
 ): NextCheck {
   if (!needsHose || hoseReadingsTaken(ctx)) return next;
+  // Stryker disable next-line ConditionalExpression: the sealant check is the first of CHECKS
   const sealant = CHECKS.find((c) => c.id === "look_for_sealant");
+  // Stryker disable next-line OptionalChaining: CHECKS always holds the checks looked up by id here
   if (sealant?.available(ctx))
     return fromCheck(
       sealant,
@@ -175,6 +182,7 @@ function firstThingsFirst(
       separates,
     );
   const identify = CHECKS.find((c) => c.id === "identify_refrigerant");
+  // Stryker disable next-line OptionalChaining: CHECKS always holds the checks looked up by id here
   if (next.check !== "identify_refrigerant" && identify?.available(ctx))
     return fromCheck(
       identify,
@@ -204,6 +212,7 @@ export function chooseNextCheck(ctx: CheckContext, ranking: readonly Ranked[], s
 
   if (state.active) {
     const staticCheck = CHECKS.find((c) => c.id === "static_pressure");
+    // Stryker disable next-line OptionalChaining: CHECKS always holds the checks looked up by id here
     if (state.reasons.every((r) => r === "electric_static_unknown") && staticCheck?.available(ctx))
       return fromCheck(
         staticCheck,
@@ -215,6 +224,7 @@ export function chooseNextCheck(ctx: CheckContext, ranking: readonly Ranked[], s
     const deficits = staticDeficits(ctx.input);
     const onlyStatic = state.reasons.every((r) => r === "no_liquid" || r === "electric_static_low");
     const limitK = electric(ctx) ? DO_NOT_RUN.electricStaticBelowK : STATIC_CHECK.noLiquidBelowK;
+    // Stryker disable next-line OptionalChaining: a static reason means a static reading, so the deficits are there
     if (onlyStatic && deficits?.soakK != null && deficits.soakK <= limitK)
       return ruled(
         "static_repeat",
@@ -245,6 +255,7 @@ export function chooseNextCheck(ctx: CheckContext, ranking: readonly Ranked[], s
 
   // Confirm the charge by weight before condemning a compressor (common practice).
   const weigh = CHECKS.find((c) => c.id === "recover_and_weigh");
+  // Stryker disable next-line OptionalChaining: CHECKS always holds the checks looked up by id here
   if (first === "weak_compressor" && weigh?.available(ctx))
     return firstThingsFirst(
       fromCheck(weigh, ctx, "Confirm the charge by weight before condemning the compressor.", pair),
@@ -253,6 +264,7 @@ export function chooseNextCheck(ctx: CheckContext, ranking: readonly Ranked[], s
       pair,
     );
 
+  // Stryker disable next-line OptionalChaining: the ranking has a first entry, checked above
   const leaderShare = ranking[0]?.share ?? 0;
   if (leaderShare >= NEXT_CHECK.leaderClearShare) {
     return firstThingsFirst(
@@ -260,6 +272,7 @@ export function chooseNextCheck(ctx: CheckContext, ranking: readonly Ranked[], s
         "confirm",
         confirmingStep(first, ctx),
         `${CAUSE_SHORT_NAMES[first]} is clear, with ${Math.round(leaderShare * 100)} % of the likelihood: confirm it and repair.`.replace(
+          // Stryker disable next-line Regex: without the anchor the first match is still the first character
           /^./,
           (c) => c.toUpperCase(),
         ),
