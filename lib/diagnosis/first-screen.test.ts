@@ -277,3 +277,30 @@ describe("strongestReasons: the two or three strongest reasons each way", () => 
     expect(reasons.against.length + reasons.moreAgainst.length).toBe(overcharge.evidenceAgainst.length);
   });
 });
+
+describe("first screen: the limits of each rule", () => {
+  it("lifts trailing parts to 1 only while there are points enough for every part with a share", () => {
+    // quotas 1.5 and five of 0.3 over 3 points: the largest remainders alone give 2, 1 and four 0s
+    expect(apportion([0.5, 0.1, 0.1, 0.1, 0.1, 0.1], 3)).toEqual([2, 1, 0, 0, 0, 0]);
+    // two parts with a share over 2 points (parts without one do not count): 1.8 and 0.2 show 1 and 1
+    expect(apportion([0.9, 0.1, 0, 0], 2)).toEqual([1, 1, 0, 0]);
+  });
+
+  it("gives zeros for a total below zero", () => {
+    expect(apportion([0.5, 0.5], -3)).toEqual([0, 0]);
+  });
+
+  it("says the others were assessed when any of them was", () => {
+    const screen = firstScreenRanking([
+      { share: 0.9, assessed: true },
+      { share: 0.05, assessed: false },
+      { share: 0.05, assessed: true },
+    ]);
+    expect(screen.othersAssessed).toBe(true);
+  });
+
+  it("keeps two reasons against as well for findings stored without weights", () => {
+    const reasons = strongestReasons({ evidenceFor: ["a"], evidenceAgainst: ["x", "y", "z"] });
+    expect(reasons).toEqual({ for: ["a"], against: ["x", "y"], moreFor: [], moreAgainst: ["z"] });
+  });
+});

@@ -35,6 +35,7 @@ export function apportion(shares: readonly number[], total = 100): number[] {
   let left = total - whole.reduce((a, b) => a + b, 0);
   const order = quotas
     .map((q, i) => ({ i, remainder: q - Math.floor(q), share: clean[i] ?? 0 }))
+    // Stryker disable next-line ArithmeticOperator: the parts start in index order and the sort is stable (ES2019)
     .sort((a, b) => b.remainder - a.remainder || b.share - a.share || a.i - b.i);
   for (const { i } of order) {
     if (left <= 0) break;
@@ -43,9 +44,11 @@ export function apportion(shares: readonly number[], total = 100): number[] {
   }
   const positive = clean.filter((s) => s > 0).length;
   if (positive <= total) {
+    // Stryker disable next-line EqualityOperator: one past the end reads undefined, taken as a share of 0
     for (let i = 0; i < whole.length; i++) {
       if ((clean[i] ?? 0) === 0 || whole[i] !== 0) continue;
       const donor = largestIndex(whole);
+      // Stryker disable next-line ConditionalExpression: unreachable while positive <= total: with a part at 0, the others hold at least one point more than their number, so the largest holds 2
       if ((whole[donor] ?? 0) < 2) break;
       whole[donor] = (whole[donor] ?? 0) - 1;
       whole[i] = 1;
@@ -112,6 +115,7 @@ export function firstScreenRanking<S extends Ranked>(suspects: readonly S[]): Fi
   const rest = suspects.slice(count);
   const restShare = rest.reduce((a, s) => a + shareOf(s), 0);
   const shown = apportion([...lead.map(shareOf), restShare]);
+  // Stryker disable next-line ConditionalExpression: with no rest its share is 0, and apportion gives a share of 0 no point
   const restPercent = rest.length === 0 ? 0 : (shown[count] ?? 0);
   const otherPercents = apportion(rest.map(shareOf), restPercent);
   return {
@@ -147,6 +151,7 @@ function strongest<M>(items: readonly WeighedReason<M>[], rule: ReasonsRule): [M
   const top = Math.abs(sorted[0]?.weight ?? 0);
   let take = Math.min(rule.always, sorted.length);
   while (take < Math.min(rule.most, sorted.length)) {
+    // Stryker disable next-line OptionalChaining: take stays below the list's length here
     if (Math.abs(sorted[take]?.weight ?? 0) < top * rule.thirdFromFraction) break;
     take += 1;
   }
