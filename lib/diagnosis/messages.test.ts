@@ -4,6 +4,7 @@ import { MESSAGE_TEMPLATES } from "./message-templates";
 import { formatMessage, type ReaderUnits, renderQuantity } from "./messages";
 import { READING_GRADES } from "./observations";
 import { gaugeKpa, grams, kelvin, percent, tempC } from "./quantities";
+import { pressureToKpa } from "@/lib/units";
 import { SYMPTOM_IDS } from "./symptoms";
 
 const IMPERIAL: ReaderUnits = { pressure: "psi", temperature: "F", mass: "oz", volume: "floz" };
@@ -76,5 +77,18 @@ describe("formatMessage", () => {
   it("puts no unit of its own into a template: every number comes from a quantity", () => {
     for (const [key, template] of Object.entries(MESSAGE_TEMPLATES))
       expect(template, key).not.toMatch(/\d\s*(kPa|psi|bar|°C|°F|K\b|g\b|oz|mL)/);
+  });
+});
+
+describe("the edges of the reader's numbers and words", () => {
+  it("shows psi to a tenth below 100 and whole from 100 up", () => {
+    expect(renderQuantity(gaugeKpa(pressureToKpa(100, "psi")), IMPERIAL)).toEqual(["100", "psig"]);
+    expect(renderQuantity(gaugeKpa(pressureToKpa(99.5, "psi")), IMPERIAL)).toEqual(["99.5", "psig"]);
+  });
+
+  it("shows a gap for a missing word as for a missing value, never a crash", () => {
+    expect(formatMessage({ key: "note:static_outside_table", values: { ambient: tempC(30) } })).toBe(
+      "Static pressure check not possible: 30.0 °C is outside the … saturation table.",
+    );
   });
 });
