@@ -42,8 +42,9 @@ export interface Findings {
 const CAUSE_ORDER = new Map<CauseId, number>(CAUSE_IDS.map((cause, i) => [cause, i]));
 const byStrength = (a: EvidenceItem, b: EvidenceItem) => Math.abs(b.weight) - Math.abs(a.weight);
 const byRank = (a: Suspect, b: Suspect) =>
+  b.logOdds - a.logOdds ||
   // Stryker disable next-line ArithmeticOperator,LogicalOperator: the suspects arrive in CAUSE_IDS order, the sort is stable and every cause is in CAUSE_ORDER
-  b.logOdds - a.logOdds || (CAUSE_ORDER.get(a.cause) ?? 0) - (CAUSE_ORDER.get(b.cause) ?? 0);
+  (CAUSE_ORDER.get(a.cause) ?? 0) - (CAUSE_ORDER.get(b.cause) ?? 0);
 
 /**
  * Each cause's share of the likelihood: exp(log-odds) normalised over all causes, so the shares sum to 1
