@@ -113,6 +113,11 @@ describe("targetCharge: the edges", () => {
     expect(targetCharge({ labelChargeG: 700, specChargeG: 715 })?.warnings).toEqual([]);
     expect(targetCharge({ labelChargeG: 700, specChargeG: 716 })?.warnings).toHaveLength(1);
     expect(targetCharge({ labelChargeG: 700 })?.warnings).toEqual([]);
+    // a figure the form sends as null is no figure: no disagreement to flag
+    expect(targetCharge({ labelChargeG: 700, specChargeG: null })?.warnings).toEqual([]);
+    expect(targetCharge({ labelChargeG: null, specChargeG: 900 })?.warnings).toEqual([
+      "No label charge recorded: the target comes from the shop's spec table.",
+    ]);
     expect(targetCharge({ specChargeG: 900 })?.warnings).toEqual([
       "No label charge recorded: the target comes from the shop's spec table.",
     ]);

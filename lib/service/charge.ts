@@ -149,6 +149,7 @@ export function recoveredAgainstLabel(input: {
   } else if (deltaG === 0) {
     sentence = `${head}: exactly the label charge.`;
   } else {
+    // Stryker disable next-line EqualityOperator: a delta of 0 took the branch above
     const side = deltaG > 0 ? "over" : "under";
     sentence = `${head}: ${size} ${side} — within what recovery leaves behind and the machine's accuracy, so not evidence of a leak or an overcharge.`;
   }
