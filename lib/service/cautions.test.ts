@@ -54,3 +54,17 @@ describe("cautionsFor", () => {
     expect(ids({ step: "recharge", refrigerant: "R-134a" })).not.toContain("recovery_cylinder_fill");
   });
 });
+
+describe("cautionsFor while the job is not fully known", () => {
+  it("keeps the refrigerant's and the device's cautions on screen until they are entered (better once too often than missed)", () => {
+    const unknown = ids({ step: "recovery" });
+    for (const id of ["recover_slowly_accumulator", "r744_pressure", "flammable_r1234yf"] as const)
+      expect(unknown, id).toContain(id);
+  });
+
+  it("gives the R-744 pressure caution to R-744 only once the refrigerant is known", () => {
+    expect(ids({ step: "recovery", refrigerant: "R-744" })).toContain("r744_pressure");
+    expect(ids({ step: "recovery", refrigerant: "R-134a" })).not.toContain("r744_pressure");
+    expect(ids({ step: "recovery", refrigerant: "R-1234yf" })).not.toContain("r744_pressure");
+  });
+});

@@ -86,3 +86,14 @@ describe("vacuum hold: the limit's edges", () => {
       );
   });
 });
+
+describe("water's saturation pressure: the range it is computed for", () => {
+  it("takes 0 to 200 °C and refuses the rest by name", () => {
+    expect(waterSaturationKpaAbs(0)).toBeGreaterThan(0);
+    expect(waterSaturationKpaAbs(200)).toBeGreaterThan(waterSaturationKpaAbs(100));
+    for (const bad of [-0.1, 200.1, Number.NaN])
+      expect(() => waterSaturationKpaAbs(bad), String(bad)).toThrow(
+        `Water saturation pressure is computed for 0–200 °C only, got ${bad} °C`,
+      );
+  });
+});
