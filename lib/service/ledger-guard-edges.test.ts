@@ -92,6 +92,27 @@ describe("checkLedgerChange: the worst moment", () => {
   });
 });
 
+describe("checkLedgerChange: the worst moment before a later, milder one", () => {
+  it("keeps the deepest moment below empty even when a later one is shallower", () => {
+    const existing = [line({ type: "recovered_into", massG: 500, at: day(3) })];
+    // taking 800 g on day 2 leaves −800 g that day and −300 g on day 3
+    const refusal = checkLedgerChange(small, existing, [
+      line({ type: "charged_from", massG: 800, at: day(2) }),
+    ]);
+    expect(refusal).toMatchObject({ reason: "below_empty", afterG: -800, beforeG: 0, now: false });
+    expect(refusal?.atIso).toBe(day(2).replace("Z", ".000Z"));
+  });
+
+  it("keeps the moment furthest past the safe fill even when a later one is nearer", () => {
+    const existing = [line({ type: "charged_from", massG: 500, at: day(3) })];
+    // 1,700 g on day 2 is 900 g past the 800 g safe fill that day and 400 g past on day 3
+    const refusal = checkLedgerChange(small, existing, [
+      line({ type: "recovered_into", massG: 1_700, at: day(2) }),
+    ]);
+    expect(refusal).toMatchObject({ reason: "over_fill", afterG: 1_700, beforeG: 0, now: false });
+  });
+});
+
 describe("the guard's words", () => {
   it("refuses a supply cylinder past its capacity in its own words", () => {
     const supply: Cylinder = { ...small, kind: "supply", initialNetG: 900 };

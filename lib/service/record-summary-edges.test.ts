@@ -69,6 +69,14 @@ describe("summariseServiceRecord: a result only once its figures are in", () => 
       hold: null,
       problems: [],
     });
+    expect(summariseServiceRecord({ ...base, holdStartKpaAbs: 3, holdMinutes: 5 })).toMatchObject({
+      hold: null,
+      problems: [],
+    });
+    expect(summariseServiceRecord({ ...base, holdEndKpaAbs: 4, holdMinutes: 5 })).toMatchObject({
+      hold: null,
+      problems: [],
+    });
   });
 });
 
