@@ -65,3 +65,31 @@ describe("the service record's rules", () => {
     expect(cylinderProblem({ ...virgin, retired: true }, use("charge", 8))).toBeNull();
   });
 });
+
+describe("the service record's refusals, whole", () => {
+  it("say the same three parts for each refusal: the code, the message and the page's notice", () => {
+    const senior = { id: "s1", role: "senior" as const };
+    expect(serviceRecordRefusal("save", { id: "a1", role: "apprentice" }, open)).toEqual({
+      code: "forbidden:service",
+      message: "Your role does not allow this.",
+      notice: "Your role can read this record; a technician or senior enters it.",
+    });
+    expect(serviceRecordRefusal("save", senior, { ...open, caseStatus: "closed" })).toEqual({
+      code: "conflict:case",
+      message: "This case is closed; its service record can no longer change.",
+      notice: "This case is closed: its service record is kept as it was saved.",
+    });
+    expect(serviceRecordRefusal("save", senior, { ...open, refrigerant: null })).toEqual({
+      code: "conflict:case",
+      message: "Record the vehicle on the case before its service record.",
+      notice: "Record the vehicle on the case before its service record.",
+    });
+  });
+
+  it("names another technician when the starter's name is unknown", () => {
+    const started: RecordFacts = { ...open, startedBy: { id: "t1", name: null } };
+    expect(serviceRecordRefusal("save", { id: "t2", role: "technician" }, started)?.notice).toBe(
+      "Another technician started this record; only they or a senior can change it.",
+    );
+  });
+});
