@@ -87,7 +87,7 @@ describe("the service record's refusals, whole", () => {
   });
 
   it("names another technician when the starter's name is unknown", () => {
-    const started: RecordFacts = { ...open, startedBy: { id: "t1", name: null } };
+    const started: RecordFacts = { ...open, startedBy: { id: "t1" } };
     expect(serviceRecordRefusal("save", { id: "t2", role: "technician" }, started)?.notice).toBe(
       "Another technician started this record; only they or a senior can change it.",
     );
