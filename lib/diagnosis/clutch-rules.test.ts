@@ -19,6 +19,8 @@ const noteKeys = (input: DiagnosisInput) => extractEvidence(input).notes.map((n)
 const find = (input: DiagnosisInput, id: string) =>
   extractEvidence(input).observations.find((o) => o.id === id);
 
+const neverCycles: DiagnosisInput = { ...cycling, symptoms: ["clutch_not_cycling"] };
+
 describe("a clutch that never switches off", () => {
   const never: DiagnosisInput = { ...cycling, symptoms: ["clutch_not_cycling"] };
 
@@ -59,6 +61,27 @@ describe("a clutch that never switches off", () => {
       expect(observation?.message.values?.cutOut?.value).toBe(CYCLING.cutOutC.min);
       expect(observation?.message.values?.ambient?.value).toBe(24);
     }
+  });
+});
+
+describe("a clutch that never switches off, with the low side past the saturation table", () => {
+  it("counts a deep vacuum as icing even where no evaporating temperature can be read from it", () => {
+    const deep = { ...neverCycles, lowKpaGauge: -95 };
+    expect(extractEvidence(deep).computed.evaporatingC).toBeUndefined();
+    expect(find(deep, "symptom:clutch_not_cycling")?.message.key).toBe("clutch:never_cycles_icing");
+    expect(noteKeys({ ...neverCycles, lowKpaGauge: undefined })).toContain(
+      "note:never_cycles_low_side_unknown",
+    );
+  });
+
+  it("needs both cut points before it says anything about them", () => {
+    const variable = { ...cycling, compressorType: "variable_displacement" } as const;
+    expect(noteKeys({ ...variable, lowCutOutKpaGauge: gaugeAt(-3) })).not.toContain(
+      "note:cycling_points_not_cycling",
+    );
+    expect(noteKeys({ ...variable, lowCutInKpaGauge: gaugeAt(10) })).not.toContain(
+      "note:cycling_points_not_cycling",
+    );
   });
 });
 
