@@ -81,3 +81,19 @@ describe("limits said in words", () => {
     );
   });
 });
+
+describe("the kind of each cross-field refusal", () => {
+  it("reports every pressure, cut-point and scale refusal as a custom issue on its field", () => {
+    const codes = (input: Record<string, unknown>) => {
+      const result = diagnosisInputSchema.safeParse({ ...base, ...input });
+      return result.success ? [] : result.error.issues.map((i) => `${i.code} ${i.path.join(".")}`);
+    };
+    expect(codes({ lowKpaGauge: -90, altitudeM: 2000 })).toEqual(["custom lowKpaGauge"]);
+    expect(codes({ highKpaGauge: MAX_KPA_GAUGE_BY_REFRIGERANT["R-134a"] + 1 })).toEqual([
+      "custom highKpaGauge",
+    ]);
+    expect(codes({ highKpaGauge: 100, lowKpaGauge: 300 })).toEqual(["custom highKpaGauge"]);
+    expect(codes({ lowCutOutKpaGauge: 300, lowCutInKpaGauge: 100 })).toEqual(["custom lowCutInKpaGauge"]);
+    expect(codes({ labelChargeG: 500, recoveredChargeG: 1600 })).toEqual(["custom recoveredChargeG"]);
+  });
+});
