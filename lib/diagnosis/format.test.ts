@@ -25,3 +25,13 @@ describe("evidence number formatting edge cases", () => {
     expect(grams(1001)).toBe("1,001 g");
   });
 });
+
+describe("thousands grouping at the edges of each group", () => {
+  it("pads a group to three digits from 0 up to 99, and not from 100", () => {
+    expect(grams(1009)).toBe("1,009 g");
+    expect(grams(1010)).toBe("1,010 g");
+    expect(grams(1099)).toBe("1,099 g");
+    expect(grams(1100)).toBe("1,100 g");
+    expect(grams(1_000_005)).toBe("1,000,005 g");
+  });
+});
