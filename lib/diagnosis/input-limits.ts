@@ -1,3 +1,4 @@
+import { VEHICLE_CHARGE_MASS_MAX_G } from "@/lib/contracts/case-figures";
 import { FULL_VACUUM_KPA_GAUGE, MAX_READING_KPA_GAUGE } from "@/lib/refrigerants/gauge-limits";
 import { formatMessage, type ReaderUnits, SI_UNITS } from "./messages";
 import { gaugeKpa, grams, minutes, percent, type Quantity, tempC } from "./quantities";
@@ -42,8 +43,8 @@ export const INPUT_LIMITS = {
   suctionLineC: { what: "suction-line temperature", min: whole(tempC(-50)), max: whole(tempC(80)) },
   ventC: { what: "vent temperature", min: whole(tempC(-30)), max: whole(tempC(60)) },
   labelChargeG: { what: "label charge", min: grams(0), max: grams(5000) },
-  recoveredChargeG: { what: "recovered mass", min: grams(0), max: grams(6000) },
-  chargedG: { what: "charged mass", min: grams(0), max: grams(6000) },
+  recoveredChargeG: { what: "recovered mass", min: grams(0), max: grams(VEHICLE_CHARGE_MASS_MAX_G) },
+  chargedG: { what: "charged mass", min: grams(0), max: grams(VEHICLE_CHARGE_MASS_MAX_G) },
   identifierPurityPct: { what: "purity", min: whole(percent(0)), max: whole(percent(100)) },
   identifierAirPct: { what: "air", min: whole(percent(0)), max: whole(percent(100)) },
 } as const satisfies Record<string, { what: string; min: Quantity; max: Quantity }>;

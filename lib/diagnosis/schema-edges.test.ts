@@ -33,7 +33,7 @@ describe("pressures against the local atmosphere and the system's limit", () => 
     for (const field of fields) {
       expect(issues({ [field]: max }), field).toEqual([]);
       expect(issues({ [field]: max + 1 }), field).toEqual([
-        `${field}: ${max + 1} kPa gauge is above what a R-134a system can hold (${max} kPa gauge)`,
+        `${field}: ${max + 1} kPa gauge is above what an R-134a system can hold (${max} kPa gauge)`,
       ]);
     }
     expect(issues({ refrigerant: "R-744", expansionDevice: "txv", highKpaGauge: max + 1 })).toEqual([]);

@@ -48,12 +48,12 @@ describe("diagnosisInputSchema", () => {
       "low-side pressure cannot be below a perfect vacuum (−14.7 psig)",
     );
     expect(inputLimitMessage("recoveredChargeG", "max", imperial)).toBe(
-      "recovered mass above 211.6 oz is not plausible",
+      "recovered mass above 352.7 oz is not plausible",
     );
   });
 
   it("rejects HFC pressures past the relief-valve range but allows R-744 high sides (from memory: CO2 high sides run to ~13 MPa)", () => {
-    expect(messages({ ...base, highKpaGauge: 6000 })[0]).toMatch(/above what a R-134a system can hold/);
+    expect(messages({ ...base, highKpaGauge: 6000 })[0]).toMatch(/above what an R-134a system can hold/);
     expect(
       diagnosisInputSchema.safeParse({ ...base, refrigerant: "R-744", highKpaGauge: 11000 }).success,
     ).toBe(true);

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { withArticle } from "@/lib/article";
 import { MAX_KPA_GAUGE_BY_REFRIGERANT } from "@/lib/refrigerants/gauge-limits";
 import { SERVICE_REFRIGERANT_IDS, SERVICE_REFRIGERANTS_IN_WORDS } from "@/lib/refrigerants/catalog";
 import { standardBarometricKpa } from "@/lib/units/barometric";
@@ -80,7 +81,7 @@ export const diagnosisInputSchema = z
         ctx.addIssue({
           code: "custom",
           path: [key],
-          message: `${value} kPa gauge is above what a ${input.refrigerant} system can hold (${maxKpa} kPa gauge)`,
+          message: `${value} kPa gauge is above what ${withArticle(input.refrigerant)} system can hold (${maxKpa} kPa gauge)`,
         });
       }
     }
