@@ -4,23 +4,39 @@ import type { RefrigerantId } from "@/lib/refrigerants";
 import type { ExpansionDevice } from "@/lib/vehicles/expansion-devices";
 import { REPLACED_PART_IDS } from "@/lib/service/oil";
 import { type CaseFigures, VEHICLE_CHARGE_MASS_MAX_G } from "./case-figures";
+import {
+  gaugeKpaQuantity,
+  massGQuantity,
+  type Quantity,
+  quantityMarker,
+  tempCQuantity,
+  vacuumKpaAbsQuantity,
+  volumeMlQuantity,
+} from "@/lib/units/quantity";
 
 export const SERVICE_STEPS = ["identify", "recovery", "evacuation", "oil", "recharge", "final"] as const;
 export type ServiceStepId = (typeof SERVICE_STEPS)[number];
 
-const num = (label: string, min: number, max: number, unit: string) =>
+/**
+ * A limit's figure: a quantity kind becomes a marker, so the message reaches each reader in their own
+ * units (the route answers it in SI with the marked wording beside it); a plain unit stays as written.
+ */
+type LimitUnit = "%" | "min" | ((value: number) => Quantity);
+const figure = (value: number, unit: LimitUnit) =>
+  typeof unit === "function" ? quantityMarker(unit(value)) : `${value} ${unit}`;
+const num = (label: string, min: number, max: number, unit: LimitUnit) =>
   z
     .number({ message: `${label} is a number.` })
-    .min(min, `${label} cannot be below ${min} ${unit}.`)
-    .max(max, `${label} cannot be above ${max} ${unit}.`)
+    .min(min, `${label} cannot be below ${figure(min, unit)}.`)
+    .max(max, `${label} cannot be above ${figure(max, unit)}.`)
     .nullable()
     .optional();
-const whole = (label: string, min: number, max: number, unit: string) =>
+const whole = (label: string, min: number, max: number, unit: LimitUnit, wholeUnit: string) =>
   z
     .number({ message: `${label} is a number.` })
-    .int(`${label} is in whole ${unit}.`)
-    .min(min, `${label} cannot be below ${min} ${unit}.`)
-    .max(max, `${label} cannot be above ${max} ${unit}.`)
+    .int(`${label} is in whole ${wholeUnit}.`)
+    .min(min, `${label} cannot be below ${figure(min, unit)}.`)
+    .max(max, `${label} cannot be above ${figure(max, unit)}.`)
     .nullable()
     .optional();
 const id = (label: string) =>
@@ -83,39 +99,39 @@ export const serviceRecordInputSchema = z
       .min(0),
     step: z.enum(SERVICE_STEPS, { message: "Unknown step." }),
     specEntryId: id("Spec row"),
-    labelChargeG: whole("Label charge", 50, 5000, "g"),
+    labelChargeG: whole("Label charge", 50, 5000, massGQuantity, "grams"),
     purityPct: num("Purity", 0, 100, "%"),
     airPct: num("Air", 0, 100, "%"),
     recoveryStartedAt: instant,
     recoveryEndedAt: instant,
-    recoveredChargeG: whole("Recovered mass", 0, VEHICLE_CHARGE_MASS_MAX_G, "g"),
+    recoveredChargeG: whole("Recovered mass", 0, VEHICLE_CHARGE_MASS_MAX_G, massGQuantity, "grams"),
     recoveryCylinderId: id("Recovery cylinder"),
-    oilRemovedMl: whole("Oil drained", 0, 1000, "mL"),
+    oilRemovedMl: whole("Oil drained", 0, 1000, volumeMlQuantity, "millilitres"),
     oilPulled: z.boolean().default(false),
     slowRecoveryNote: text(2000),
-    deepestKpaAbs: num("Deepest vacuum", 0, 110, "kPa absolute"),
-    holdStartKpaAbs: num("Vacuum at the start of the hold", 0, 110, "kPa absolute"),
-    holdEndKpaAbs: num("Vacuum at the end of the hold", 0, 110, "kPa absolute"),
+    deepestKpaAbs: num("Deepest vacuum", 0, 110, vacuumKpaAbsQuantity),
+    holdStartKpaAbs: num("Vacuum at the start of the hold", 0, 110, vacuumKpaAbsQuantity),
+    holdEndKpaAbs: num("Vacuum at the end of the hold", 0, 110, vacuumKpaAbsQuantity),
     holdMinutes: num("Hold time", 0.5, 240, "min"),
     oilAddedType: line(60),
-    oilAddedMl: whole("Oil added", 0, 1000, "mL"),
+    oilAddedMl: whole("Oil added", 0, 1000, volumeMlQuantity, "millilitres"),
     partsReplaced: z
       .array(
         z.object({
           part: z.enum(REPLACED_PART_IDS, { message: "Unknown part." }),
           count: z.number().int().min(1).max(10).default(1),
-          measuredMl: whole("Oil measured from the part", 0, 500, "mL"),
+          measuredMl: whole("Oil measured from the part", 0, 500, volumeMlQuantity, "millilitres"),
         }),
       )
       .max(12, "At most 12 replaced parts.")
       .default([]),
-    targetG: whole("Target charge", 50, 5000, "g"),
-    chargedG: whole("Charged mass", 0, VEHICLE_CHARGE_MASS_MAX_G, "g"),
+    targetG: whole("Target charge", 50, 5000, massGQuantity, "grams"),
+    chargedG: whole("Charged mass", 0, VEHICLE_CHARGE_MASS_MAX_G, massGQuantity, "grams"),
     chargeCylinderId: id("Charging cylinder"),
-    finalAmbientC: num("Ambient temperature", -30, 60, "°C"),
-    finalHighKpaGauge: num("High side", -101, 4000, "kPa gauge"),
-    finalLowKpaGauge: num("Low side", -101, 1500, "kPa gauge"),
-    finalVentC: num("Centre vent temperature", -10, 50, "°C"),
+    finalAmbientC: num("Ambient temperature", -30, 60, (v) => tempCQuantity(v)),
+    finalHighKpaGauge: num("High side", -101, 4000, gaugeKpaQuantity),
+    finalLowKpaGauge: num("Low side", -101, 1500, gaugeKpaQuantity),
+    finalVentC: num("Centre vent temperature", -10, 50, (v) => tempCQuantity(v)),
     notes: text(4000),
   })
   .strict()
