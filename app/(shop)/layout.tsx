@@ -4,7 +4,7 @@ import { navigationFor } from "@/lib/auth/navigation";
 import { ROLE_LABELS } from "@/lib/auth/roles";
 import { getShop } from "@/lib/server/shops";
 import { ShopClockProvider } from "@/components/shell/shop-clock";
-import { ReaderUnitsProvider } from "@/components/shell/reader-units";
+import { ReaderUnitsProvider } from "@/components/shell/reader-units-provider";
 import { getProfile } from "@/lib/server/profile";
 import { passwordMustChange } from "@/lib/server/passwords";
 import { ChangePasswordOnDemand } from "@/components/account/change-password-on-demand";
