@@ -1,5 +1,5 @@
 import { COMPRESSOR_TYPES } from "@/lib/vehicles/compressor-types";
-import { BEHAVIOUR_SYMPTOM_IDS } from "@/lib/diagnosis/symptoms";
+import { BEHAVIOUR_SYMPTOM_IDS } from "@/lib/diagnosis/behaviour-symptoms";
 import { SERVICE_REFRIGERANT_IDS } from "@/lib/refrigerants/catalog";
 import { EXPANSION_DEVICE_IDS } from "@/lib/vehicles/expansion-devices";
 
