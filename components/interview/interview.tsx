@@ -34,7 +34,7 @@ const StepCautions = memo(CautionsFold);
 const Progress = memo(ProgressStrip);
 const ReviewNote = memo(SentBackNote);
 // The spec table's matches show on the system step only, and load with it.
-const Specs = memo(dynamic(() => import("./spec-matches").then((m) => m.SpecMatches)));
+const Specs = memo(dynamic(() => import("./spec-matches").then((m) => m.SpecMatchesWithQueries)));
 
 /**
  * The view of the interview, recomputed only when something it shows has changed. A keystroke changes
@@ -73,7 +73,7 @@ function useInterviewRunner(input: InterviewInput) {
 }
 
 // The findings step carries the diagnosis engine; it loads when the technician reaches it.
-const FindingsStep = dynamic(() => import("./findings-step").then((m) => m.FindingsStep), {
+const FindingsStep = dynamic(() => import("./findings-step").then((m) => m.FindingsStepWithQueries), {
   loading: () => <p role="status">Working out the findings…</p>,
 });
 
