@@ -1,7 +1,6 @@
 import type { Metadata, Viewport } from "next";
 import { connection } from "next/server";
 import { bodyFont, figuresFont } from "./fonts";
-import { Providers } from "@/components/providers";
 import "./globals.css";
 
 export const metadata: Metadata = {
@@ -22,9 +21,7 @@ export default async function RootLayout({ children }: { children: React.ReactNo
   await connection();
   return (
     <html lang="en" className={`${bodyFont.variable} ${figuresFont.variable}`}>
-      <body className="min-h-dvh font-sans text-ink antialiased">
-        <Providers>{children}</Providers>
-      </body>
+      <body className="min-h-dvh font-sans text-ink antialiased">{children}</body>
     </html>
   );
 }

@@ -2,12 +2,10 @@
 
 import { useState } from "react";
 import { useRouter } from "next/navigation";
-import { useQueryClient } from "@tanstack/react-query";
 import { apiFetch } from "@/lib/queries/api-fetch";
 
 export function SignOutButton() {
   const router = useRouter();
-  const queryClient = useQueryClient();
   const [pending, setPending] = useState(false);
   return (
     <button
@@ -19,7 +17,13 @@ export function SignOutButton() {
         try {
           await apiFetch("/api/session", { method: "DELETE" });
         } finally {
-          queryClient.clear();
+          // The cached answers go with the session. The client is loaded here, not with the button:
+          // the interview's first load carries none (app/(at-vehicle)/layout.tsx). When it cannot
+          // load, no page has loaded it, so there is no cache to clear.
+          await import("@/lib/query-client").then(
+            ({ getQueryClient }) => getQueryClient().clear(),
+            () => undefined,
+          );
           router.replace("/sign-in");
           router.refresh();
         }

@@ -1,8 +1,8 @@
 import type { ReactNode } from "react";
 import { clsx } from "clsx";
-import { Info, OctagonAlert, TriangleAlert, type LucideIcon } from "lucide-react";
 import { CAUTION_LEVEL_LABELS, type CautionLevel } from "@/lib/cautions/catalog";
 import type { CautionCardItem } from "./cautions-fold";
+import { DangerMark, NoticeMark, WarningMark } from "./level-marks";
 
 // How a caution is drawn, open and folded. No hooks: a server page can render these once and hand
 // them to a client screen as props, so neither the catalogue nor the marks travel in its script.
@@ -16,18 +16,18 @@ export interface CautionItem {
 }
 
 /** Each level's own look: a tinted card with a heavy left edge, and a tag with its mark and its name. */
-const LOOK: Record<CautionLevel, { card: string; tag: string; Mark: LucideIcon }> = {
+const LOOK: Record<CautionLevel, { card: string; tag: string; Mark: typeof NoticeMark }> = {
   danger: {
     card: "border-ember-500 bg-ember-50 text-ember-700",
     tag: "bg-ember-700 text-white",
-    Mark: OctagonAlert,
+    Mark: DangerMark,
   },
   warning: {
     card: "border-caution-500 bg-caution-50 text-caution-700",
     tag: "bg-caution-700 text-white",
-    Mark: TriangleAlert,
+    Mark: WarningMark,
   },
-  notice: { card: "border-paper-line bg-paper text-ink", tag: "bg-ink-soft text-white", Mark: Info },
+  notice: { card: "border-paper-line bg-paper text-ink", tag: "bg-ink-soft text-white", Mark: NoticeMark },
 };
 
 /** The level, said once: by the tag's shape, colour, mark and word, never as a prefix in the text. */
@@ -90,4 +90,4 @@ export function cautionCard(caution: CautionItem, withSource: boolean, said: Rea
 }
 
 /** The mark in front of the folded line. */
-export const FOLD_MARK = <Info aria-hidden className="mr-1 inline h-5 w-5" />;
+export const FOLD_MARK = <NoticeMark aria-hidden className="mr-1 inline h-5 w-5" />;

@@ -31,6 +31,7 @@ import {
 } from "@/lib/cases/conclusion";
 import type { SaveStatus } from "./use-autosave";
 import { DetailsLine } from "@/components/ui/details-line";
+import { Providers } from "@/components/providers";
 
 /** The cautions that say the system must not be run (lib/cautions/catalog.ts). */
 const DO_NOT_RUN_CAUTIONS: ReadonlySet<string> = new Set(["empty_system", "electric_never_without_charge"]);
@@ -51,6 +52,18 @@ interface Props {
   saveStatus: SaveStatus;
   currentVersion: () => number;
   onBack: () => void;
+}
+
+/**
+ * The findings step inside TanStack Query's client: the interview's layout has none in its first load
+ * (app/(at-vehicle)/layout.tsx), so the client comes with this step when it is reached.
+ */
+export function FindingsStepWithQueries(props: Props) {
+  return (
+    <Providers>
+      <FindingsStep {...props} />
+    </Providers>
+  );
 }
 
 export function FindingsStep({

@@ -1,9 +1,9 @@
 "use client";
 
-import { memo, useCallback, useEffect, useMemo, useRef, useSyncExternalStore } from "react";
+import { memo, useCallback, useEffect, useMemo, useRef, useState, useSyncExternalStore } from "react";
 import dynamic from "next/dynamic";
-import { useMachine } from "@xstate/react";
-import { interviewMachine } from "@/machines/interview";
+import type { InterviewInput } from "@/machines/interview-context";
+import { createInterviewRunner } from "@/machines/interview-runner";
 import {
   savedInterviewOf,
   viewOf,
@@ -34,7 +34,7 @@ const StepCautions = memo(CautionsFold);
 const Progress = memo(ProgressStrip);
 const ReviewNote = memo(SentBackNote);
 // The spec table's matches show on the system step only, and load with it.
-const Specs = memo(dynamic(() => import("./spec-matches").then((m) => m.SpecMatches)));
+const Specs = memo(dynamic(() => import("./spec-matches").then((m) => m.SpecMatchesWithQueries)));
 
 /**
  * The view of the interview, recomputed only when something it shows has changed. A keystroke changes
@@ -55,8 +55,25 @@ function useView(snapshot: InterviewSnapshot): InterviewView {
   return useMemo(() => ({ ...settled, errors, drafts }), [settled, errors, drafts]);
 }
 
+/**
+ * The interview's chart run for this screen (machines/interview-runner.ts: the xstate machine's moves,
+ * without loading xstate on the phone). Created once from the saved interview, like an actor.
+ */
+function useInterviewRunner(input: InterviewInput) {
+  const [runner] = useState(() => createInterviewRunner(input));
+  const subscribe = useCallback(
+    (onChange: () => void) => {
+      const subscription = runner.subscribe(onChange);
+      return () => subscription.unsubscribe();
+    },
+    [runner],
+  );
+  const snapshot = useSyncExternalStore(subscribe, runner.getSnapshot, runner.getSnapshot);
+  return [snapshot, runner.send, runner] as const;
+}
+
 // The findings step carries the diagnosis engine; it loads when the technician reaches it.
-const FindingsStep = dynamic(() => import("./findings-step").then((m) => m.FindingsStep), {
+const FindingsStep = dynamic(() => import("./findings-step").then((m) => m.FindingsStepWithQueries), {
   loading: () => <p role="status">Working out the findings…</p>,
 });
 
@@ -105,7 +122,7 @@ export function Interview({
   );
   const readingLocale = locale ?? deviceLocale;
   const machineShop = useMemo(() => ({ altitudeM: shop.altitudeM }), [shop.altitudeM]);
-  const [snapshot, send, actor] = useMachine(interviewMachine, { input: { ...record, shop: machineShop } });
+  const [snapshot, send, actor] = useInterviewRunner({ ...record, shop: machineShop });
   const view = useView(snapshot);
   const { answers, drafts, step } = snapshot.context;
   const autosave = useAutosave({ caseId, initialVersion: version });

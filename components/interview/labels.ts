@@ -1,4 +1,4 @@
-import { SYMPTOM_LABELS } from "@/lib/diagnosis/symptoms";
+import { BEHAVIOUR_SYMPTOM_LABELS } from "@/lib/diagnosis/behaviour-symptoms";
 import { COMPRESSOR_TYPE_LABELS } from "@/lib/vehicles/compressor-types";
 import {
   behaviourSymptomIds,
@@ -86,5 +86,5 @@ export const METHOD_OPTIONS = options(leakMethodChoices, METHOD_LABELS);
 export const PLACE_OPTIONS = options(leakPlaceChoices, PLACE_LABELS);
 export const SYMPTOM_OPTIONS: ChoiceOption[] = behaviourSymptomIds.map((id) => ({
   value: id,
-  label: SYMPTOM_LABELS[id],
+  label: BEHAVIOUR_SYMPTOM_LABELS[id],
 }));

@@ -6,6 +6,7 @@ import { clsx } from "clsx";
 import type { SpecMatchDto } from "@/lib/contracts/specs";
 import { specMatchesQuery } from "@/lib/queries/spec-matches";
 import { COMPRESSOR_TYPE_LABELS } from "@/lib/vehicles/compressor-types";
+import { Providers } from "@/components/providers";
 
 export interface SpecPick {
   refrigerant?: string;
@@ -84,5 +85,14 @@ export function SpecMatches({ vehicleId, onPick }: { vehicleId: number; onPick: 
         ))}
       </ul>
     </section>
+  );
+}
+
+/** The matches inside TanStack Query's client, which the interview's first load does not carry. */
+export function SpecMatchesWithQueries(props: { vehicleId: number; onPick: (pick: SpecPick) => void }) {
+  return (
+    <Providers>
+      <SpecMatches {...props} />
+    </Providers>
   );
 }

@@ -1,28 +1,12 @@
 "use client";
 
-import { createContext, useContext, useMemo } from "react";
+import { useContext, useMemo } from "react";
 import { useQuery } from "@tanstack/react-query";
-import type { ProfileResponse } from "@/lib/contracts/profile";
 import { profileQuery } from "@/lib/queries/profile";
 import type { BarometricSource } from "@/lib/units/barometric";
 import { formatQuantity, type Quantity, sayInUnits, SI_READER_UNITS } from "@/lib/units/quantity";
 import type { ReaderUnits } from "@/lib/units/reader";
-
-/** The signed-in person's profile and the shop's altitude, handed down once by the shop's layout. */
-interface ReaderSeed {
-  profile: ProfileResponse | null;
-  altitudeM: number;
-}
-
-const ReaderUnitsContext = createContext<ReaderSeed>({ profile: null, altitudeM: 0 });
-
-export function ReaderUnitsProvider({
-  profile,
-  altitudeM,
-  children,
-}: ReaderSeed & { children: React.ReactNode }) {
-  return <ReaderUnitsContext.Provider value={{ profile, altitudeM }}>{children}</ReaderUnitsContext.Provider>;
-}
+import { ReaderUnitsContext } from "./reader-units-provider";
 
 export interface ReaderUnitsView {
   units: ReaderUnits;

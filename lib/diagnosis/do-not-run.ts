@@ -1,5 +1,5 @@
 import { staticShowsNoCharge } from "@/lib/refrigerants/static-charge";
-import { chargeDeviationVerdict } from "@/lib/service/charge";
+import { chargeDeviationVerdict } from "@/lib/service/charge-verdict";
 import { standardBarometricKpa } from "@/lib/units/barometric";
 import { DO_NOT_RUN, STATIC_CHECK, STATIC_EMPTY, SUBCOOLING_K } from "./grading";
 import { saturationPressureOrNull, saturationTemperatureOrNull } from "@/lib/refrigerants/saturation-guard";

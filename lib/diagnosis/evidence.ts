@@ -1,4 +1,4 @@
-import { chargeDeviationVerdict, type ChargeDeviationGrade } from "@/lib/service/charge";
+import { chargeDeviationVerdict, type ChargeDeviationGrade } from "@/lib/service/charge-verdict";
 import { wetBulbC } from "@/lib/psychro";
 import { standardBarometricKpa } from "@/lib/units/barometric";
 import { addRunningEvidence } from "./evidence-running";

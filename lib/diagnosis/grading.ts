@@ -7,7 +7,7 @@ import {
 } from "@/lib/refrigerants/expected-bands";
 import { STATIC_SOAK_SPREAD_K } from "@/lib/refrigerants/derived";
 import { NEARLY_EMPTY_STATIC } from "@/lib/refrigerants/static-charge";
-import { CHARGE_DEVIATION_LIMITS, chargeTolerance } from "@/lib/service/charge";
+import { CHARGE_DEVIATION_LIMITS, chargeToleranceG } from "@/lib/service/charge-verdict";
 import { PURITY_PASS_PCT } from "@/lib/service/identifier";
 
 /**
@@ -104,7 +104,7 @@ export const AIR_PCT = { some: 1, high: 3 } as const;
 // weighing; the machine's charge accuracy per refrigerant is part of it.
 export const CHARGE = {
   limits: CHARGE_DEVIATION_LIMITS,
-  accuracyG: Object.fromEntries(REFRIGERANT_IDS.map((id) => [id, chargeTolerance(id).toleranceG])),
+  accuracyG: Object.fromEntries(REFRIGERANT_IDS.map((id) => [id, chargeToleranceG(id)])),
 } as const;
 // Centre vent, °C. 3–8 °C is expected in mild weather (common practice); the target rises with the
 // evaporator's load, humid air's latent load included, which the inlet air's wet-bulb temperature tracks

@@ -1,26 +1,6 @@
-/** What the technician saw or heard at the vehicle: the interview's behaviour questions. */
-export const BEHAVIOUR_SYMPTOM_IDS = [
-  "high_pressure_cutout",
-  "clutch_rapid_cycling",
-  "clutch_not_cycling",
-  "cooling_fades_then_returns",
-  "low_side_swings_to_vacuum",
-  "worse_at_idle",
-  "condenser_fan_not_running",
-  "frost_at_metering_device",
-  "frost_on_liquid_line",
-  "suction_line_frosted",
-  "gauge_needle_flutter",
-  "compressor_noise",
-  "moisture_indicator_wet",
-  "bubbles_in_sight_glass",
-  "oil_residue_at_fitting",
-  "oil_pulled_during_recovery",
-  "recent_service_elsewhere",
-  "part_replaced_no_oil_added",
-  "part_replaced_oil_added",
-  "sealant_found",
-] as const;
+import { BEHAVIOUR_SYMPTOM_IDS, BEHAVIOUR_SYMPTOM_LABELS } from "./behaviour-symptoms";
+
+export { BEHAVIOUR_SYMPTOM_IDS } from "./behaviour-symptoms";
 
 /** What the technician saw, heard or found: the behaviour questions, then the results of next checks. */
 export const SYMPTOM_IDS = [
@@ -47,26 +27,7 @@ export const SYMPTOM_IDS = [
 export type SymptomId = (typeof SYMPTOM_IDS)[number];
 
 export const SYMPTOM_LABELS: Record<SymptomId, string> = {
-  high_pressure_cutout: "Compressor shuts off on high pressure",
-  clutch_rapid_cycling: "Compressor clutch switches on and off rapidly",
-  clutch_not_cycling: "Compressor clutch never switches off",
-  cooling_fades_then_returns: "Cools at first, goes warm, then cools again after a rest",
-  low_side_swings_to_vacuum: "Low-side gauge swings down toward vacuum and back",
-  worse_at_idle: "Cooling worse at idle than at road speed",
-  condenser_fan_not_running: "Condenser fan not running with A/C on",
-  frost_at_metering_device: "Frost at the orifice tube or expansion valve",
-  frost_on_liquid_line: "Frost or a cold spot on the liquid line",
-  suction_line_frosted: "Suction line frosted back toward the compressor",
-  gauge_needle_flutter: "Gauge needle flutters",
-  compressor_noise: "Compressor noise",
-  moisture_indicator_wet: "Moisture indicator shows wet",
-  bubbles_in_sight_glass: "Streams of bubbles or foam in the sight glass",
-  oil_residue_at_fitting: "Oily residue or dye at a fitting or component",
-  oil_pulled_during_recovery: "Much oil came out during recovery",
-  recent_service_elsewhere: "A/C was serviced elsewhere recently",
-  part_replaced_no_oil_added: "A component was replaced recently without adding oil",
-  part_replaced_oil_added: "A component was replaced recently and its oil was added",
-  sealant_found: "Leak sealant found at the service port or in the system",
+  ...BEHAVIOUR_SYMPTOM_LABELS,
   evaporator_airflow_drops: "Vent air very cold at first, then airflow weakens",
   pressures_equalise_fast: "Pressures equalise very fast at shut-off",
   clutch_or_belt_slipping: "Compressor clutch or drive belt slipping",

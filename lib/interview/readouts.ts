@@ -4,7 +4,7 @@ import { staticCheck } from "@/lib/refrigerants/derived";
 import { expectedBands } from "@/lib/refrigerants/expected-bands";
 import { runningPhysics, type RunningPhysics } from "@/lib/refrigerants/readings";
 import { saturationTemperature } from "@/lib/refrigerants/saturation";
-import { recoveredAgainstLabel } from "@/lib/service/charge";
+import { chargeDeviationVerdict, chargeVerdictOf } from "@/lib/service/charge-verdict";
 import type { ExpansionDevice } from "@/lib/vehicles/expansion-devices";
 import { quantityMarker as q, quantityRangeMarker as range } from "@/lib/units/quantity";
 
@@ -184,11 +184,12 @@ function runningLines(
 function chargeLines(refrigerant: RefrigerantId, labelChargeG: number, recoveredChargeG: number) {
   return safely(() => {
     // The service record's verdict (SAE J2788/J2843 recovery allowance), so both screens agree.
-    const { deltaG, deltaPct, verdict } = recoveredAgainstLabel({
+    const { deltaG, deltaPct, grade } = chargeDeviationVerdict({
       labelChargeG,
       recoveredChargeG,
       refrigerant,
     });
+    const verdict = chargeVerdictOf(grade);
     const status: BandStatus = verdict === "over" ? "above" : verdict === "under" ? "below" : "inside";
     return [
       {

@@ -9,7 +9,7 @@ import {
 import { groupThousands } from "./group";
 import type { MassUnit } from "./factors";
 import { type ReaderUnits, UNIT_LABELS, unitsOfSystem } from "./reader";
-import { formatVacuum, KPA_PER_VACUUM_UNIT } from "./vacuum";
+import { formatVacuum, KPA_PER_VACUUM_UNIT } from "./vacuum-format";
 
 /**
  * A number with what it measures, in the internal unit of its kind. Computations return these; the

@@ -1,5 +1,5 @@
 import type { MassUnit, VolumeUnit } from "./factors";
-import type { VacuumUnit } from "./vacuum";
+import type { VacuumUnit } from "./vacuum-format";
 
 /** The units one reader sees every number in; each person sets them once on their profile. */
 export interface ReaderUnits {

@@ -1,25 +1,17 @@
-import { type BarometricSource, barometricKpa, STANDARD_ATMOSPHERE_KPA } from "./barometric";
+import { type BarometricSource, barometricKpa } from "./barometric";
 import { KPA_PER_UNIT } from "./factors";
 import { normaliseNumbers } from "./number";
-import { groupThousands } from "./group";
+import { KPA_PER_VACUUM_UNIT, round, vacuumFromKpaAbs, type VacuumUnit } from "./vacuum-format";
 
-/**
- * A vacuum reading as the technician's gauge shows it: inches of mercury below the local atmosphere
- * (an analogue compound gauge), kPa or mbar absolute (an electronic gauge), or microns of mercury
- * absolute (a micron gauge). Stored as kPa absolute.
- */
-export type VacuumUnit = "inHg" | "kPa" | "mbar" | "micron";
+export {
+  formatVacuum,
+  KPA_PER_VACUUM_UNIT,
+  MICRON_RANGE_KPA_ABS,
+  vacuumFromKpaAbs,
+  type VacuumUnit,
+} from "./vacuum-format";
 
-/**
- * kPa per unit. 1 mbar = 0.1 kPa; 1 micron of mercury = 1 millitorr, a standard atmosphere over 760 000 (NIST SP 811,
- * appendix B: 1 torr = 101 325/760 Pa); inHg is the conventional inch of mercury (factors.ts).
- */
-export const KPA_PER_VACUUM_UNIT: Readonly<Record<VacuumUnit, number>> = {
-  inHg: KPA_PER_UNIT.inHg,
-  kPa: 1,
-  mbar: 0.1,
-  micron: STANDARD_ATMOSPHERE_KPA / 760_000,
-};
+// Reading a typed vacuum, and writing a stored one back as field text; saying one is vacuum-format.ts.
 
 const SPELLINGS: Record<string, VacuumUnit> = {
   inhg: "inHg",
@@ -65,11 +57,6 @@ export type VacuumReading =
 /** The deepest reading a vacuum gauge in inHg can show at this place: the whole local atmosphere. */
 export function deepestVacuumInHg(at?: BarometricSource): number {
   return barometricKpa(at) / KPA_PER_UNIT.inHg;
-}
-
-function round(value: number, decimals: number): number {
-  const f = 10 ** decimals;
-  return Math.round(value * f) / f;
 }
 
 /** Reads a typed vacuum ("29.9", "29.9 inHg", "-29.9 inHg", "500 microns", "0.4 kPa", "4 mbar"). */
@@ -125,35 +112,6 @@ export function parseVacuum(
       error: `${typed} ${unit === "micron" ? "microns" : unit} absolute is above the atmosphere here (${here}): not a vacuum. For a compound gauge's reading, type it in inHg.`,
     };
   return { kpaAbs, value: typed, unit, readAs };
-}
-
-const LABEL: Record<VacuumUnit, string> = {
-  inHg: "inHg vacuum",
-  kPa: "kPa abs",
-  mbar: "mbar abs",
-  micron: "microns",
-};
-
-/** Below about 2000 microns an inHg dial no longer tells readings apart; a micron gauge does (common practice). */
-export const MICRON_RANGE_KPA_ABS = 2000 * KPA_PER_VACUUM_UNIT.micron;
-
-/** The number of a vacuum in a unit; inHg is the depth below the local atmosphere, never a pressure above zero. */
-export function vacuumFromKpaAbs(kpaAbs: number, unit: VacuumUnit, at?: BarometricSource): number {
-  if (unit === "inHg") return Math.max(0, barometricKpa(at) - kpaAbs) / KPA_PER_UNIT.inHg;
-  return kpaAbs / KPA_PER_VACUUM_UNIT[unit];
-}
-
-const DECIMALS: Record<VacuumUnit, number> = { inHg: 2, kPa: 2, mbar: 1, micron: 0 };
-
-/**
- * A stored vacuum in the reader's unit: "29.92 inHg vacuum", "0.27 kPa abs", "500 microns". A deep
- * vacuum an inHg dial cannot resolve is said in microns too, so 500 and 1000 microns never read alike.
- */
-export function formatVacuum(kpaAbs: number, unit: VacuumUnit, at?: BarometricSource): string {
-  const text = (u: VacuumUnit) =>
-    `${groupThousands(String(round(vacuumFromKpaAbs(kpaAbs, u, at), DECIMALS[u])))} ${LABEL[u]}`;
-  if (unit !== "micron" && kpaAbs < MICRON_RANGE_KPA_ABS) return `${text(unit)} (${text("micron")})`;
-  return text(unit);
 }
 
 /** Stored vacuum readings keep 0.01 Pa (service_record, DECIMAL(9,5) kPa). */
