@@ -1,5 +1,5 @@
 import { getShortestPaths, getSimplePaths } from "@xstate/graph";
-import { createActor, type SnapshotFrom } from "xstate";
+import { createActor } from "xstate";
 import { describe, expect, it } from "vitest";
 import { contaminatedAnswers, exampleAnswers } from "@/lib/interview/example-answers";
 import { availableSteps, routeFor } from "@/lib/interview/route";
@@ -55,7 +55,7 @@ function statesPassed(events: readonly InterviewEvent[]): Set<string> {
     input: {},
     inspect: (inspection) => {
       if (inspection.type !== "@xstate.microstep") return;
-      seen.add(String((inspection.snapshot as SnapshotFrom<typeof interviewMachine>).value));
+      seen.add(String((inspection.snapshot as InterviewSnapshot).value));
       for (const transition of inspection._transitions)
         if (transition.source.key !== "interview") seen.add(transition.source.key);
     },

@@ -1,3 +1,4 @@
+import type { SnapshotFrom } from "xstate";
 import type { DiagnosisInput } from "@/lib/diagnosis";
 import { cautionIdsFor, type CautionRef } from "@/lib/interview/caution-ids";
 import { progressFor, type ProgressEntry } from "@/lib/interview/progress";
@@ -5,14 +6,10 @@ import type { SavedInterview } from "@/lib/interview/saved";
 import { groupForStep, isOptionalGroup, type GroupId, type StepId } from "@/lib/interview/steps";
 import { diagnosisInputFor } from "@/lib/interview/to-diagnosis-input";
 import type { AnswerIssue } from "@/lib/interview/validate";
-import type { InterviewContext, InterviewEvent } from "./interview-context";
+import type { InterviewContext } from "./interview-context";
+import type { interviewMachine } from "./interview";
 
-/** What a screen reads of the interview at a moment: the xstate machine's snapshot and the phone's runner's alike. */
-export interface InterviewSnapshot {
-  value: unknown;
-  context: InterviewContext;
-  can(event: InterviewEvent): boolean;
-}
+export type InterviewSnapshot = SnapshotFrom<typeof interviewMachine>;
 export type { SavedInterview };
 
 /** Everything a screen needs to draw the interview at this moment. */

@@ -8,48 +8,13 @@ import {
   type InterviewInput,
 } from "./interview-context";
 import * as guards from "./interview-guards";
-import { BACK_MOVES, NEXT_MOVES, type Condition, type Move } from "./interview-chart";
 
+const ready = (group: GroupId) => ({ type: "groupReady", params: { group } }) as const;
 const enter = (step: StepId) => ({ type: "enterStep", params: { step } }) as const;
-
-type GuardRef =
-  | "systemLooksEmpty"
-  | "pressureLeft"
-  | "refrigerantContaminated"
-  | { type: "groupReady"; params: { group: GroupId } }
-  | ReturnType<typeof not>;
-
-function guardOf(condition: Condition): GuardRef {
-  if (typeof condition === "string") return condition;
-  if ("not" in condition) return not(condition.not);
-  return { type: "groupReady", params: { group: condition.ready } };
-}
-
-/** A move of the chart (interview-chart.ts) as an xstate transition. */
-function transitionOf(move: Move) {
-  const [only, ...more] = move.when.map(guardOf);
-  const guard = only === undefined ? undefined : more.length === 0 ? only : and([only, ...more]);
-  return guard === undefined ? { target: move.target } : { guard, target: move.target };
-}
-
-type StepMoves = { NEXT?: ReturnType<typeof transitionOf>[]; BACK?: ReturnType<typeof transitionOf>[] };
-
-/** Each step: its entry records it, NEXT and BACK follow the chart. */
-function stepStates() {
-  return Object.fromEntries(
-    stepIds.map((step) => {
-      const on: StepMoves = {};
-      if (NEXT_MOVES[step].length > 0) on.NEXT = NEXT_MOVES[step].map(transitionOf);
-      if (BACK_MOVES[step].length > 0) on.BACK = BACK_MOVES[step].map(transitionOf);
-      return [step, { entry: enter(step), on }];
-    }),
-  ) as Record<StepId, { entry: ReturnType<typeof enter>; on: StepMoves }>;
-}
 
 /**
  * The interview at the vehicle. Each state is one step; NEXT and BACK follow the route the answers
- * call for (lib/interview/route.ts describes the same route for the progress strip), as the chart in
- * interview-chart.ts sets them out. The phone runs the same chart without xstate (interview-runner.ts).
+ * call for (lib/interview/route.ts describes the same route for the progress strip).
  */
 export const interviewMachine = setup({
   types: {} as { context: InterviewContext; events: InterviewEvent; input: InterviewInput | undefined },
@@ -99,6 +64,73 @@ export const interviewMachine = setup({
         target: step,
       })),
     },
-    ...stepStates(),
+    complaint: {
+      entry: enter("complaint"),
+      on: { NEXT: { guard: ready("complaint"), target: "system" } },
+    },
+    system: {
+      entry: enter("system"),
+      on: { NEXT: { guard: ready("system"), target: "conditions" }, BACK: "complaint" },
+    },
+    conditions: {
+      entry: enter("conditions"),
+      on: { NEXT: { guard: ready("conditions"), target: "static" }, BACK: "system" },
+    },
+    static: {
+      entry: enter("static"),
+      on: {
+        NEXT: [
+          { guard: and([ready("static"), "systemLooksEmpty"]), target: "leakFinding" },
+          { guard: ready("static"), target: "running" },
+        ],
+        BACK: "conditions",
+      },
+    },
+    running: {
+      entry: enter("running"),
+      on: { NEXT: { guard: ready("running"), target: "behaviour" }, BACK: "static" },
+    },
+    behaviour: {
+      entry: enter("behaviour"),
+      on: { NEXT: { guard: ready("behaviour"), target: "identification" }, BACK: "running" },
+    },
+    leakFinding: {
+      entry: enter("leakFinding"),
+      on: {
+        NEXT: [
+          { guard: and([ready("leakFinding"), "pressureLeft"]), target: "identification" },
+          { guard: ready("leakFinding"), target: "findings" },
+        ],
+        BACK: "static",
+      },
+    },
+    identification: {
+      entry: enter("identification"),
+      on: {
+        NEXT: [
+          { guard: and([ready("identification"), "refrigerantContaminated"]), target: "recoveryHeld" },
+          { guard: ready("identification"), target: "chargeAudit" },
+        ],
+        BACK: [{ guard: "systemLooksEmpty", target: "leakFinding" }, { target: "behaviour" }],
+      },
+    },
+    chargeAudit: {
+      entry: enter("chargeAudit"),
+      on: { NEXT: { guard: ready("chargeAudit"), target: "findings" }, BACK: "identification" },
+    },
+    recoveryHeld: {
+      entry: enter("recoveryHeld"),
+      on: { NEXT: { guard: ready("chargeAudit"), target: "findings" }, BACK: "identification" },
+    },
+    findings: {
+      entry: enter("findings"),
+      on: {
+        BACK: [
+          { guard: and(["systemLooksEmpty", not("pressureLeft")]), target: "leakFinding" },
+          { guard: "refrigerantContaminated", target: "recoveryHeld" },
+          { target: "chargeAudit" },
+        ],
+      },
+    },
   },
 });

@@ -1,9 +1,9 @@
 "use client";
 
-import { memo, useCallback, useEffect, useMemo, useRef, useState, useSyncExternalStore } from "react";
+import { memo, useCallback, useEffect, useMemo, useRef, useSyncExternalStore } from "react";
 import dynamic from "next/dynamic";
-import type { InterviewInput } from "@/machines/interview-context";
-import { createInterviewRunner } from "@/machines/interview-runner";
+import { useMachine } from "@xstate/react";
+import { interviewMachine } from "@/machines/interview";
 import {
   savedInterviewOf,
   viewOf,
@@ -53,23 +53,6 @@ function useView(snapshot: InterviewSnapshot): InterviewView {
     [answers, step, visited, skipped, shop, errorsKey, stateKey],
   );
   return useMemo(() => ({ ...settled, errors, drafts }), [settled, errors, drafts]);
-}
-
-/**
- * The interview's chart run for this screen (machines/interview-runner.ts: the xstate machine's moves,
- * without loading xstate on the phone). Created once from the saved interview, like an actor.
- */
-function useInterviewRunner(input: InterviewInput) {
-  const [runner] = useState(() => createInterviewRunner(input));
-  const subscribe = useCallback(
-    (onChange: () => void) => {
-      const subscription = runner.subscribe(onChange);
-      return () => subscription.unsubscribe();
-    },
-    [runner],
-  );
-  const snapshot = useSyncExternalStore(subscribe, runner.getSnapshot, runner.getSnapshot);
-  return [snapshot, runner.send, runner] as const;
 }
 
 // The findings step carries the diagnosis engine; it loads when the technician reaches it.
@@ -122,7 +105,7 @@ export function Interview({
   );
   const readingLocale = locale ?? deviceLocale;
   const machineShop = useMemo(() => ({ altitudeM: shop.altitudeM }), [shop.altitudeM]);
-  const [snapshot, send, actor] = useInterviewRunner({ ...record, shop: machineShop });
+  const [snapshot, send, actor] = useMachine(interviewMachine, { input: { ...record, shop: machineShop } });
   const view = useView(snapshot);
   const { answers, drafts, step } = snapshot.context;
   const autosave = useAutosave({ caseId, initialVersion: version });

@@ -6,9 +6,8 @@ import { describe, expect, it } from "vitest";
 // What the interview screen loads before the technician reaches a lazy part (the findings, the spec
 // matches): every module its entry reaches through imports that stay in the script, so type-only
 // imports and import() calls are left out. The phone checks answers in plain TypeScript
-// (lib/interview/group-checks.ts) and runs the interview's chart without xstate
-// (machines/interview-runner.ts); zod, xstate, the server's zod schemas and the service record's
-// sentences and sources stay off it. `npm run bench:interview` prints what the route weighs.
+// (lib/interview/group-checks.ts); zod, the server's zod schemas and the service record's sentences
+// and sources stay off it. `npm run bench:interview` prints what the route weighs.
 
 const root = path.resolve(__dirname, "../..");
 const ENTRY = "components/interview/interview-boot.tsx";
@@ -78,16 +77,10 @@ function firstLoad(entry: string): { files: Set<string>; packages: Set<string> }
 describe("the interview's first load", () => {
   const { files, packages } = firstLoad(ENTRY);
 
-  it("reaches the screen, the interview's chart and runner, and the plain answer checks", () => {
+  it("reaches the screen, the machine and the plain answer checks", () => {
     expect(files).toContain("components/interview/interview.tsx");
-    expect(files).toContain("machines/interview-chart.ts");
-    expect(files).toContain("machines/interview-runner.ts");
+    expect(files).toContain("machines/interview.ts");
     expect(files).toContain("lib/interview/group-checks.ts");
-  });
-
-  it("runs the chart without xstate: the machine stays with its tests", () => {
-    expect([...packages].filter((p) => p === "xstate" || p.startsWith("@xstate/"))).toEqual([]);
-    expect(files).not.toContain("machines/interview.ts");
   });
 
   it("carries no zod and none of the server's schemas", () => {
