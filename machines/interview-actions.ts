@@ -1,7 +1,7 @@
 import type { InterviewAnswers } from "@/lib/interview/answers";
 import { crossCheck } from "@/lib/interview/cross-checks";
 import { groupForStep, isGroupId, isOptionalGroup, type GroupId, type StepId } from "@/lib/interview/steps";
-import { validateGroup } from "@/lib/interview/validate-plain";
+import { validateGroup } from "@/lib/interview/validate";
 import type { InterviewContext } from "./interview-context";
 
 /* Small pure reducers: each takes the context and returns the fields it changes. */

@@ -1,7 +1,7 @@
 import type { ShopSettings } from "@/lib/interview/branches";
 import { furthestStep, availableSteps, type InterviewRecord } from "@/lib/interview/route";
 import { isGroupId, isStepId, type GroupId, type StepId } from "@/lib/interview/steps";
-import { sortSavedAnswers, validateGroup } from "@/lib/interview/validate-plain";
+import { sortSavedAnswers, validateGroup } from "@/lib/interview/validate";
 
 export interface InterviewContext extends InterviewRecord {
   skipped: GroupId[];

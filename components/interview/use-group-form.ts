@@ -4,7 +4,7 @@ import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { sayInUnits } from "@/lib/units";
 import type { InterviewAnswers } from "@/lib/interview/answers";
 import type { GroupId } from "@/lib/interview/steps";
-import { validateGroup } from "@/lib/interview/validate-plain";
+import { validateGroup } from "@/lib/interview/validate";
 import type { ShopSettings } from "@/lib/interview/branches";
 import type { FieldDef, FormValues } from "./field-defs";
 import { answerValuesOf, formValuesOf, unreadableFields, type Reading } from "./form-values";

@@ -13,9 +13,7 @@ import {
   behaviourSymptomIds,
   compressorOilChoices,
   compressorTypeChoices,
-  compressorTypeFromOlderAnswer,
   expansionDeviceChoices,
-  GAUGE_DISAGREEMENT_KPA,
   leakMethodChoices,
   leakPlaceChoices,
   oilTypeChoices,
@@ -32,10 +30,9 @@ import {
 // The gauge limits live in lib/refrigerants/gauge-limits.ts. Tighter limits per refrigerant, and the
 // full vacuum at the shop's altitude, are checked once those are known (cross-checks.ts).
 
-// The server's judge. The phone runs the same checks written in plain TypeScript (group-checks.ts), and
-// group-checks.test.ts runs both over the same generated answers so they cannot drift apart. Built with
-// zod's mini build: each check is the one the full build's method adds (`.min(n)` on a number is
-// `z.gte(n)`, on a string `z.minLength(n)`), in the same order, with the same messages.
+// Built with zod's mini build: these schemas run in the browser on every step, and the mini build
+// weighs a fraction of the full one. Each check is the one the full build's method adds (`.min(n)` on
+// a number is `z.gte(n)`, on a string `z.minLength(n)`), in the same order, with the same messages.
 ensureEnglishMessages();
 
 function gaugeKpa(label: string) {
@@ -65,6 +62,15 @@ export const complaintAnswersSchema = z.object({
     z.maxLength(2000, { error: "Keep the complaint under 2000 characters" }),
   ),
 });
+
+/** Answers saved before the compressor type was asked said only whether it was electric. */
+function compressorTypeFromOlderAnswer(value: unknown): unknown {
+  if (typeof value !== "object" || value === null) return value;
+  const v = value as Record<string, unknown>;
+  if (v.compressorType !== undefined || typeof v.electricCompressor !== "boolean") return value;
+  const { electricCompressor, ...rest } = v;
+  return { ...rest, compressorType: electricCompressor ? "electric" : "unknown" };
+}
 
 // The full build's z.preprocess is this pipe: the older answer is rewritten, then checked.
 export const systemAnswersSchema = z.pipe(
@@ -131,6 +137,9 @@ export const staticAnswersSchema = z.object({
       ),
   ),
 });
+
+// Two service gauges on equalised pressures can disagree by a few psi; 50 kPa leaves room for that (common practice).
+export const GAUGE_DISAGREEMENT_KPA = 50;
 
 export const runningAnswersSchema = z
   .object({

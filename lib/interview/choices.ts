@@ -39,15 +39,3 @@ export const leakPlaceChoices = [
   "not_found_yet",
 ] as const;
 export type BehaviourSymptomId = (typeof behaviourSymptomIds)[number];
-
-// Two service gauges on equalised pressures can disagree by a few psi; 50 kPa leaves room for that (common practice).
-export const GAUGE_DISAGREEMENT_KPA = 50;
-
-/** Answers saved before the compressor type was asked said only whether it was electric. */
-export function compressorTypeFromOlderAnswer(value: unknown): unknown {
-  if (typeof value !== "object" || value === null) return value;
-  const v = value as Record<string, unknown>;
-  if (v.compressorType !== undefined || typeof v.electricCompressor !== "boolean") return value;
-  const { electricCompressor, ...rest } = v;
-  return { ...rest, compressorType: electricCompressor ? "electric" : "unknown" };
-}

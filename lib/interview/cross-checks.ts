@@ -1,6 +1,6 @@
 import { fullVacuumKpaGauge, MAX_KPA_GAUGE_BY_REFRIGERANT } from "@/lib/refrigerants/gauge-limits";
 import type { InterviewAnswers } from "./answers";
-import { altitudeFor, type ShopSettings } from "./engine-input";
+import { altitudeFor, type ShopSettings } from "./branches";
 import type { GroupId } from "./steps";
 import type { AnswerIssue } from "./issues";
 

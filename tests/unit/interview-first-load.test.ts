@@ -5,9 +5,9 @@ import { describe, expect, it } from "vitest";
 
 // What the interview screen loads before the technician reaches a lazy part (the findings, the spec
 // matches): every module its entry reaches through imports that stay in the script, so type-only
-// imports and import() calls are left out. The phone checks answers in plain TypeScript
-// (lib/interview/group-checks.ts); zod, the server's zod schemas and the service record's sentences
-// and sources stay off it. `npm run bench:interview` prints what the route weighs.
+// imports and import() calls are left out. The phone checks answers with the same zod/mini schemas
+// the server runs (lib/interview/answers.ts, one home for each limit and message); the full zod build,
+// the server-only schemas and the service record's sentences and sources stay off it. `npm run bench:interview` prints what the route weighs.
 
 const root = path.resolve(__dirname, "../..");
 const ENTRY = "components/interview/interview-boot.tsx";
@@ -77,17 +77,16 @@ function firstLoad(entry: string): { files: Set<string>; packages: Set<string> }
 describe("the interview's first load", () => {
   const { files, packages } = firstLoad(ENTRY);
 
-  it("reaches the screen, the machine and the plain answer checks", () => {
+  it("reaches the screen, the machine and the answer schemas", () => {
     expect(files).toContain("components/interview/interview.tsx");
     expect(files).toContain("machines/interview.ts");
-    expect(files).toContain("lib/interview/group-checks.ts");
+    expect(files).toContain("lib/interview/answers.ts");
   });
 
-  it("carries no zod and none of the server's schemas", () => {
-    expect([...packages].filter((p) => p === "zod" || p.startsWith("zod/"))).toEqual([]);
-    expect(files).not.toContain("lib/interview/answers.ts");
-    expect(files).not.toContain("lib/interview/validate.ts");
-    expect(files).not.toContain("lib/interview/checked-answers.ts");
+  it("carries zod's mini build only, never its full build", () => {
+    // zod/mini stands on zod's core and its English messages; the full build is the package root.
+    expect(packages).toContain("zod/mini");
+    expect([...packages].filter((p) => p === "zod" || p === "zod/v4" || p === "zod/v4/classic")).toEqual([]);
   });
 
   it("carries no service-record sentences, sources or findings screen", () => {
