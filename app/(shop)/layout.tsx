@@ -16,7 +16,7 @@ export default async function ShopLayout({ children }: { children: React.ReactNo
   const user = await requireUser();
   const [shop, mustChange, profile] = await Promise.all([
     getShop({ shopId: user.shopId }),
-    passwordMustChange({ userId: user.id }),
+    passwordMustChange({ userId: user.id, shopId: user.shopId }),
     getProfile({ user }),
   ]);
   // Signed in with a temporary password an owner set: nothing else until they choose their own.

@@ -1,5 +1,5 @@
 import "server-only";
-import { Op, type Transaction } from "sequelize";
+import { Op, QueryTypes, type Transaction } from "sequelize";
 import { getModels, type CylinderKind } from "@/models";
 import { AppError } from "@/lib/errors";
 import { sayInUnits } from "@/lib/units/quantity";
@@ -367,32 +367,67 @@ export async function listMovements({
   before?: string;
 }): Promise<MovementDto[]> {
   const [beforeAt, beforeId] = before ? before.split("~") : [];
-  const rows = await getModels().RefrigerantMovement.findAll({
-    where: {
-      shopId,
-      ...(cylinderId ? { cylinderId } : {}),
-      ...(beforeAt && beforeId
-        ? {
-            [Op.or]: [
-              { occurredAt: { [Op.lt]: new Date(beforeAt) } },
-              { occurredAt: new Date(beforeAt), id: { [Op.lt]: Number(beforeId) } },
-            ],
-          }
-        : {}),
+  const after = Boolean(beforeAt && beforeId);
+  // One read of rows (index refrigerant_movement_shop_occurred), with the cylinder's label, the
+  // technician's name and the correction cancelling each line (the unique index on reverses_id).
+  const rows = await getModels().sequelize.query<
+    Omit<
+      MovementRow,
+      "cylinderId" | "caseId" | "serviceRecordId" | "technicianId" | "massG" | "occurredAt" | "reversesId"
+    > & {
+      cylinder_id: number;
+      case_id: number | null;
+      service_record_id: number | null;
+      technician_id: string;
+      mass_g: number;
+      occurred_at: Date;
+      reverses_id: number | null;
+      cylinder_label: string;
+      technician: string;
+      reversed_by_id: number | null;
+    }
+  >(
+    `SELECT m.id, m.cylinder_id, m.case_id, m.service_record_id, m.technician_id, m.type, m.refrigerant,
+            m.mass_g, m.occurred_at, m.reverses_id, m.destination, m.note,
+            y.label AS cylinder_label, u.name AS technician,
+            (SELECT r.id FROM refrigerant_movement r WHERE r.reverses_id = m.id AND r.shop_id = m.shop_id)
+              AS reversed_by_id
+       FROM refrigerant_movement m
+       JOIN cylinder y ON y.id = m.cylinder_id
+       JOIN user u ON u.id = m.technician_id
+      WHERE m.shop_id = :shopId${cylinderId ? " AND m.cylinder_id = :cylinderId" : ""}${
+        after ? " AND (m.occurred_at < :beforeAt OR (m.occurred_at = :beforeAt AND m.id < :beforeId))" : ""
+      }
+      ORDER BY m.occurred_at DESC, m.id DESC
+      LIMIT :limit`,
+    {
+      replacements: {
+        shopId,
+        cylinderId: cylinderId ?? null,
+        beforeAt: after ? new Date(beforeAt!) : null,
+        beforeId: after ? Number(beforeId) : null,
+        limit,
+      },
+      type: QueryTypes.SELECT,
     },
-    include: movementIncludes(),
-    order: [
-      ["occurredAt", "DESC"],
-      ["id", "DESC"],
-    ],
-    limit,
-  });
-  const plain = rows.map((r) => r.get({ plain: true }) as unknown as MovementWithNames);
-  const reversedBy = await reversalsOf(
-    shopId,
-    plain.map((m) => m.id),
   );
-  return plain.map((m) => toMovementDto(m, reversedBy));
+  return rows.map((m) => ({
+    id: m.id,
+    cylinderId: m.cylinder_id,
+    cylinderLabel: m.cylinder_label,
+    caseId: m.case_id,
+    serviceRecordId: m.service_record_id,
+    technicianId: m.technician_id,
+    technician: m.technician,
+    type: m.type,
+    refrigerant: m.refrigerant,
+    massG: m.mass_g,
+    occurredAt: new Date(m.occurred_at).toISOString(),
+    reversesId: m.reverses_id,
+    reversedById: m.reversed_by_id ?? null,
+    destination: m.destination,
+    note: m.note,
+  }));
 }
 
 /** GET /api/ledger/movements: one page, and the cursor of the next one. */
