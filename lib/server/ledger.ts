@@ -6,6 +6,7 @@ import { sayInUnits } from "@/lib/units/quantity";
 import { recordAudit } from "./audit";
 import type { User } from "lucia";
 import { getProfile } from "./profile";
+import { getShop } from "./shops";
 import type { RefrigerantId } from "@/lib/refrigerants";
 import {
   type Cylinder as LedgerCylinder,
@@ -16,6 +17,7 @@ import {
 } from "@/lib/service/ledger";
 import { ledgerMassUnit, safeFillG } from "@/lib/service/ledger-guard";
 import { monthlyReport, toCsv } from "@/lib/service/ledger-report";
+import { latestMonths } from "@/lib/service/report-months";
 import { derivedFrom, rememberedLedger } from "./ledger-memory";
 import {
   CYLINDER_PAGE_DEFAULT,
@@ -473,9 +475,10 @@ export async function getMovement({
 
 /** The shop's time zone, its people's names and the monthly report (worked out once per state of the lines). */
 async function reportParts(shopId: number) {
-  const { Shop, User } = getModels();
+  const { User } = getModels();
   const [shop, users, ledger] = await Promise.all([
-    Shop.findOne({ where: { id: shopId }, attributes: ["timeZone"], raw: true }),
+    // The page's shell reads the shop too: once per render (./shops.ts).
+    getShop({ shopId }).catch(() => null),
     User.findAll({ where: { shopId }, attributes: ["id", "name"], raw: true }),
     shopLedger(shopId),
   ]);
@@ -487,12 +490,23 @@ async function reportParts(shopId: number) {
   return { timeZone, names, report };
 }
 
-/** Recovered, recycled, charged and sent out per month × technician × refrigerant, in the shop's time zone. */
-export async function ledgerReportRows({ shopId }: { shopId: number }): Promise<LedgerReportResponse> {
+/**
+ * Recovered, recycled, charged and sent out per month × technician × refrigerant, in the shop's time zone;
+ * `months`: the latest this many months only (the page's first view), with the count of all of them.
+ */
+export async function ledgerReportRows({
+  shopId,
+  months,
+}: {
+  shopId: number;
+  months?: number;
+}): Promise<LedgerReportResponse> {
   const { timeZone, names, report } = await reportParts(shopId);
+  const latest = latestMonths(report, months ?? Number.POSITIVE_INFINITY);
   return {
-    rows: report.map((r) => ({ ...r, technician: names[r.technicianId] ?? r.technicianId })),
+    rows: latest.rows.map((r) => ({ ...r, technician: names[r.technicianId] ?? r.technicianId })),
     timeZone,
+    monthCount: latest.monthCount,
   };
 }
 
@@ -508,6 +522,7 @@ export async function ledgerReport({
   const { timeZone, names, report } = await reportParts(shopId);
   return {
     rows: report.map((r) => ({ ...r, technician: names[r.technicianId] ?? r.technicianId })),
+    monthCount: new Set(report.map((r) => r.month)).size,
     csv: toCsv(report, {
       technicianNames: names,
       massUnit: reader ? ledgerMassUnit((await getProfile({ user: reader })).units.mass) : "g",

@@ -87,3 +87,31 @@ describe("the kept ledger", () => {
     expect((await ledgerReportRows({ shopId: b.shop.id })).rows).toEqual([]);
   });
 });
+
+describe("the report's latest months", () => {
+  it("gives only the latest months asked for, with the count of every month the report holds", async () => {
+    const models = getModels();
+    const { shop, supply, technician } = await createShopWithCylinders(models);
+    // One charge in each of three months, the oldest first.
+    for (const [month, massG] of [
+      [8, 100],
+      [9, 200],
+      [10, 300],
+    ] as const)
+      await models.sequelize.query(
+        `INSERT INTO refrigerant_movement (shop_id, cylinder_id, technician_id, type, refrigerant, mass_g, occurred_at)
+         VALUES (?, ?, ?, 'charged_from', 'R-134a', ?, ?)`,
+        { replacements: [shop.id, supply.id, technician.id, massG, new Date(Date.UTC(2026, month, 14, 10))] },
+      );
+    const latest = await ledgerReportRows({ shopId: shop.id, months: 2 });
+    expect(latest.monthCount).toBe(3);
+    expect(latest.rows.map((r) => [r.month, r.chargedG])).toEqual([
+      ["2026-10", 200],
+      ["2026-11", 300],
+    ]);
+    const every = await ledgerReportRows({ shopId: shop.id });
+    expect(every.monthCount).toBe(3);
+    expect(every.rows.map((r) => r.month)).toEqual(["2026-09", "2026-10", "2026-11"]);
+    expect((await ledgerReport({ shopId: shop.id })).monthCount).toBe(3);
+  });
+});

@@ -5,6 +5,7 @@ import Link from "next/link";
 import { can } from "@/lib/auth/roles";
 import { CaseList } from "@/components/cases/case-list";
 import { workCounts } from "@/lib/server/work-counts";
+import { getShop } from "@/lib/server/shops";
 import { WorkCountsPanel } from "@/components/cases/work-counts";
 
 export const metadata: Metadata = { title: "Cases" };
@@ -15,9 +16,10 @@ export default async function CasesPage({ searchParams }: { searchParams: Promis
   const user = await requireUser("cases:read");
   const requested = Number((await searchParams).page ?? 1);
   const page = Number.isInteger(requested) && requested >= 1 && requested <= 2000 ? requested : 1;
-  const [{ cases, nextOffset }, counts] = await Promise.all([
+  const [{ cases, nextOffset }, counts, shop] = await Promise.all([
     listCases({ shopId: user.shopId, limit: PAGE_SIZE, offset: (page - 1) * PAGE_SIZE }),
     workCounts({ user }),
+    getShop({ shopId: user.shopId }),
   ]);
   return (
     <>
@@ -30,7 +32,11 @@ export default async function CasesPage({ searchParams }: { searchParams: Promis
         )}
       </div>
       <WorkCountsPanel counts={counts} />
-      <CaseList cases={cases} empty={page === 1 ? "No cases yet." : "No cases on this page."} />
+      <CaseList
+        cases={cases}
+        clock={{ timeZone: shop.timeZone, locale: shop.locale }}
+        empty={page === 1 ? "No cases yet." : "No cases on this page."}
+      />
       {(page > 1 || nextOffset !== null) && (
         <nav aria-label="Pages" className="mt-4 flex flex-wrap items-center justify-between gap-2">
           {page > 1 ? (

@@ -4,6 +4,7 @@ import { requireUser } from "@/lib/auth/guard";
 import { can } from "@/lib/auth/roles";
 import { getQueryClient } from "@/lib/query-client";
 import { ledgerKeys } from "@/lib/queries/ledger";
+import { REPORT_RECENT_MONTHS } from "@/lib/contracts/ledger";
 import { getShop } from "@/lib/server/shops";
 import { getProfile } from "@/lib/server/profile";
 import { ledgerReportRows, listCylinderPage, listMovementPage } from "@/lib/server/ledger";
@@ -28,13 +29,14 @@ export default async function LedgerPage() {
     getShop({ shopId }),
     listCylinderPage({ shopId, query: {} }),
     listMovementPage({ shopId, query: {} }),
-    ledgerReportRows({ shopId }),
+    // The report's latest months only: the rest are fetched if someone asks to see every month.
+    ledgerReportRows({ shopId, months: REPORT_RECENT_MONTHS }),
     getProfile({ user }),
   ]);
   const queryClient = getQueryClient();
   queryClient.setQueryData(ledgerKeys.cylinders(), { pages: [cylinders], pageParams: [null] });
   queryClient.setQueryData(ledgerKeys.movements(), { pages: [movements], pageParams: [null] });
-  queryClient.setQueryData(ledgerKeys.report(), { rows: report.rows, timeZone: report.timeZone });
+  queryClient.setQueryData(ledgerKeys.report(REPORT_RECENT_MONTHS), report);
   return (
     <>
       <h1 className="mb-4 text-2xl font-bold">Refrigerant ledger</h1>

@@ -1,10 +1,13 @@
 import { handler } from "@/lib/server/handler";
-import { ledgerReport } from "@/lib/server/ledger";
+import { ledgerReport, ledgerReportRows } from "@/lib/server/ledger";
 import { reportQuerySchema } from "@/lib/contracts/ledger";
 
 export const GET = handler(
   { permission: "ledger:read", query: reportQuerySchema },
   async ({ user, query }) => {
+    // The latest months only (the ledger page's first view): no CSV to write for that.
+    if (query.format !== "csv" && query.months !== undefined)
+      return ledgerReportRows({ shopId: user.shopId, months: query.months });
     const report = await ledgerReport({ shopId: user.shopId, reader: user });
     if (query.format === "csv") {
       return new Response(`\uFEFF${report.csv}\r\n`, {
@@ -14,6 +17,6 @@ export const GET = handler(
         },
       });
     }
-    return { rows: report.rows, timeZone: report.timeZone };
+    return { rows: report.rows, timeZone: report.timeZone, monthCount: report.monthCount };
   },
 );
