@@ -530,3 +530,22 @@ export async function ledgerReport({
     timeZone,
   };
 }
+
+/**
+ * GET /api/ledger/report: the CSV (every month, in the reader's mass unit), or the JSON rows, every month
+ * or the latest `months` only; the JSON answer writes no CSV.
+ */
+export async function ledgerReportAnswer({
+  shopId,
+  reader,
+  format,
+  months,
+}: {
+  shopId: number;
+  reader: Pick<User, "id" | "shopId">;
+  format?: "json" | "csv";
+  months?: number;
+}): Promise<{ csv: string } | { json: LedgerReportResponse }> {
+  if (format === "csv") return { csv: (await ledgerReport({ shopId, reader })).csv };
+  return { json: await ledgerReportRows({ shopId, months }) };
+}
