@@ -1,23 +1,24 @@
+"use client";
+
 import Link from "next/link";
 import type { CaseListItem } from "@/lib/contracts/cases";
 import { StatusBadge } from "./status-badge";
-import { formatShopTime, type ShopClock } from "@/lib/units/clock";
+
+/** A case line as the list shows it: `updated` is the time already said on the shop's clock. */
+export type CaseLine = Pick<
+  CaseListItem,
+  "id" | "status" | "complaint" | "vehicle" | "customer" | "technician"
+> & {
+  updatedAt: string;
+  updated: string;
+};
 
 /**
- * A page of case lines, rendered on the server only: each time is said on the shop's clock here (as
- * ShopTime would), so fifty lines carry no client component of their own beyond the link.
+ * A page of case lines. One client component for the whole list, given plain rows: the page's payload
+ * carries fifty short rows of data rather than fifty rendered trees handed to fifty links.
  */
-export function CaseList({
-  cases,
-  empty,
-  clock,
-}: {
-  cases: CaseListItem[];
-  empty: string;
-  clock: ShopClock;
-}) {
+export function CaseList({ cases, empty }: { cases: CaseLine[]; empty: string }) {
   if (cases.length === 0) return <p className="card text-ink-soft">{empty}</p>;
-  const now = new Date();
   return (
     <ul className="space-y-3">
       {cases.map((c) => (
@@ -30,7 +31,7 @@ export function CaseList({
             <p className="mt-1 line-clamp-2 text-ink-soft">&ldquo;{c.complaint}&rdquo;</p>
             <p className="mt-1 text-sm text-ink-muted">
               Case {c.id} · {c.customer ?? "no customer"} · {c.technician} ·{" "}
-              <time dateTime={c.updatedAt}>{formatShopTime(new Date(c.updatedAt), clock, now)}</time>
+              <time dateTime={c.updatedAt}>{c.updated}</time>
             </p>
           </Link>
         </li>

@@ -6,6 +6,7 @@ import { can } from "@/lib/auth/roles";
 import { CaseList } from "@/components/cases/case-list";
 import { workCounts } from "@/lib/server/work-counts";
 import { getShop } from "@/lib/server/shops";
+import { formatShopTime } from "@/lib/units/clock";
 import { WorkCountsPanel } from "@/components/cases/work-counts";
 
 export const metadata: Metadata = { title: "Cases" };
@@ -21,6 +22,9 @@ export default async function CasesPage({ searchParams }: { searchParams: Promis
     workCounts({ user }),
     getShop({ shopId: user.shopId }),
   ]);
+  // Each line's time is said here, on the shop's clock, so the list renders the same on both sides.
+  const clock = { timeZone: shop.timeZone, locale: shop.locale };
+  const now = new Date();
   return (
     <>
       <div className="mb-4 flex flex-wrap items-center justify-between gap-3">
@@ -33,8 +37,7 @@ export default async function CasesPage({ searchParams }: { searchParams: Promis
       </div>
       <WorkCountsPanel counts={counts} />
       <CaseList
-        cases={cases}
-        clock={{ timeZone: shop.timeZone, locale: shop.locale }}
+        cases={cases.map((c) => ({ ...c, updated: formatShopTime(new Date(c.updatedAt), clock, now) }))}
         empty={page === 1 ? "No cases yet." : "No cases on this page."}
       />
       {(page > 1 || nextOffset !== null) && (
