@@ -1,6 +1,6 @@
 "use client";
 
-import { useState } from "react";
+import { Fragment, useState } from "react";
 import { useQuery } from "@tanstack/react-query";
 import { type MassUnit, formatMassGrouped } from "@/lib/units";
 import { REPORT_RECENT_MONTHS, type LedgerReportRow } from "@/lib/contracts/ledger";
@@ -76,10 +76,11 @@ export function LedgerReport({ massUnit }: { massUnit: MassUnit }) {
               </p>
               <dl className="mt-1 grid grid-cols-2 gap-x-3">
                 {figures(r).map(([label, value]) => (
-                  <div key={label} className="contents">
+                  // dt and dd straight in the grid: a wrapper per pair (display: contents) drew nothing.
+                  <Fragment key={label}>
                     <dt className="text-ink-soft">{label}</dt>
                     <dd className="text-right">{value}</dd>
-                  </div>
+                  </Fragment>
                 ))}
               </dl>
             </li>
