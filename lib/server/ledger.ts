@@ -18,7 +18,7 @@ import {
 import { ledgerMassUnit, safeFillG } from "@/lib/service/ledger-guard";
 import { monthlyReport, toCsv } from "@/lib/service/ledger-report";
 import { latestMonths } from "@/lib/service/report-months";
-import { derivedFrom, rememberedLedger } from "./ledger-memory";
+import { derivedFrom, rememberedLedger, type RememberedLedger } from "./ledger-memory";
 import {
   CYLINDER_PAGE_DEFAULT,
   type CreateCylinderInput,
@@ -177,6 +177,7 @@ export async function listCylinders({
   after,
   transaction,
   say = (text) => sayInUnits(text),
+  ledger: kept,
 }: {
   shopId: number;
   includeRetired?: boolean;
@@ -186,6 +187,8 @@ export async function listCylinders({
   transaction?: Transaction;
   /** How the fill sentence and problems are said: in SI for an API answer (the default). */
   say?: (text: string) => string;
+  /** The shop's kept lines when the caller has already asked for them (one page reading them twice). */
+  ledger?: Promise<RememberedLedger>;
 }): Promise<CylinderDto[]> {
   if (ids && ids.length === 0) return [];
   const rows = (await getModels().Cylinder.findAll({
@@ -213,7 +216,7 @@ export async function listCylinders({
       ),
     );
   }
-  const ledger = await shopLedger(shopId);
+  const ledger = await (kept ?? shopLedger(shopId));
   // A cylinder's contents are replayed once per state of the shop's lines and of the cylinder's own row;
   // only the saying is done per request.
   return rows.map((c) => {
@@ -229,9 +232,11 @@ export async function listCylinders({
 export async function listCylinderPage({
   shopId,
   query,
+  ledger,
 }: {
   shopId: number;
   query: CylinderListQuery;
+  ledger?: Promise<RememberedLedger>;
 }): Promise<CylinderListResponse> {
   const limit = query.limit ?? CYLINDER_PAGE_DEFAULT;
   const page = await listCylinders({
@@ -239,6 +244,7 @@ export async function listCylinderPage({
     includeRetired: query.retired !== "exclude",
     limit: limit + 1,
     after: query.after,
+    ledger,
   });
   const more = page.length > limit;
   const cylinders = more ? page.slice(0, limit) : page;
@@ -474,13 +480,13 @@ export async function getMovement({
 }
 
 /** The shop's time zone, its people's names and the monthly report (worked out once per state of the lines). */
-async function reportParts(shopId: number) {
+async function reportParts(shopId: number, kept?: Promise<RememberedLedger>) {
   const { User } = getModels();
   const [shop, users, ledger] = await Promise.all([
     // The page's shell reads the shop too: once per render (./shops.ts).
     getShop({ shopId }).catch(() => null),
     User.findAll({ where: { shopId }, attributes: ["id", "name"], raw: true }),
-    shopLedger(shopId),
+    kept ?? shopLedger(shopId),
   ]);
   const timeZone = shop?.timeZone ?? "UTC";
   const names: Record<string, string> = Object.fromEntries(users.map((u) => [u.id, u.name]));
@@ -497,11 +503,13 @@ async function reportParts(shopId: number) {
 export async function ledgerReportRows({
   shopId,
   months,
+  ledger,
 }: {
   shopId: number;
   months?: number;
+  ledger?: Promise<RememberedLedger>;
 }): Promise<LedgerReportResponse> {
-  const { timeZone, names, report } = await reportParts(shopId);
+  const { timeZone, names, report } = await reportParts(shopId, ledger);
   const latest = latestMonths(report, months ?? Number.POSITIVE_INFINITY);
   return {
     rows: latest.rows.map((r) => ({ ...r, technician: names[r.technicianId] ?? r.technicianId })),
@@ -548,4 +556,19 @@ export async function ledgerReportAnswer({
 }): Promise<{ csv: string } | { json: LedgerReportResponse }> {
   if (format === "csv") return { csv: (await ledgerReport({ shopId, reader })).csv };
   return { json: await ledgerReportRows({ shopId, months }) };
+}
+
+/**
+ * What the ledger page shows from the shop's kept lines, the first page of cylinders and the report's
+ * latest `months`, with one check of those lines against the database for both.
+ */
+export async function ledgerPageParts({ shopId, months }: { shopId: number; months: number }) {
+  const ledger = shopLedger(shopId);
+  // Both wait on the one read; a failure is reported by whichever awaits it first.
+  ledger.catch(() => undefined);
+  const [cylinders, report] = await Promise.all([
+    listCylinderPage({ shopId, query: {}, ledger }),
+    ledgerReportRows({ shopId, months, ledger }),
+  ]);
+  return { cylinders, report };
 }

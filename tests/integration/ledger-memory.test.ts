@@ -2,7 +2,13 @@ import { afterAll, describe, expect, it } from "vitest";
 import { QueryTypes } from "sequelize";
 import { closeSequelize } from "@/lib/db/sequelize";
 import { getModels } from "@/models";
-import { ledgerReport, ledgerReportRows, listCylinders } from "@/lib/server/ledger";
+import {
+  ledgerPageParts,
+  ledgerReport,
+  ledgerReportRows,
+  listCylinderPage,
+  listCylinders,
+} from "@/lib/server/ledger";
 import { forgetLedgers } from "@/lib/server/ledger-memory";
 import { createShopWithCylinders } from "./service-fixtures";
 import "./helpers";
@@ -113,5 +119,11 @@ describe("the report's latest months", () => {
     expect(every.monthCount).toBe(3);
     expect(every.rows.map((r) => r.month)).toEqual(["2026-09", "2026-10", "2026-11"]);
     expect((await ledgerReport({ shopId: shop.id })).monthCount).toBe(3);
+
+    // The ledger page's parts, read from one check of the lines, are what each read gives alone.
+    expect(await ledgerPageParts({ shopId: shop.id, months: 2 })).toEqual({
+      cylinders: await listCylinderPage({ shopId: shop.id, query: {} }),
+      report: latest,
+    });
   });
 });

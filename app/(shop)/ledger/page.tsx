@@ -7,7 +7,7 @@ import { ledgerKeys } from "@/lib/queries/ledger";
 import { REPORT_RECENT_MONTHS } from "@/lib/contracts/ledger";
 import { getShop } from "@/lib/server/shops";
 import { getProfile } from "@/lib/server/profile";
-import { ledgerReportRows, listCylinderPage, listMovementPage } from "@/lib/server/ledger";
+import { ledgerPageParts, listMovementPage } from "@/lib/server/ledger";
 import { cautionsFor } from "@/lib/service/cautions";
 import { ledgerMassUnit } from "@/lib/service/ledger-guard";
 import { LedgerView } from "@/components/ledger/ledger-view";
@@ -25,12 +25,12 @@ const LEDGER_CAUTIONS: readonly string[] = [
 export default async function LedgerPage() {
   const user = await requireUser("ledger:read");
   const shopId = user.shopId;
-  const [shop, cylinders, movements, report, profile] = await Promise.all([
+  const [shop, { cylinders, report }, movements, profile] = await Promise.all([
     getShop({ shopId }),
-    listCylinderPage({ shopId, query: {} }),
+    // The cylinders and the report's latest months (the rest are fetched if someone asks to see every
+    // month), from one check of the shop's kept lines.
+    ledgerPageParts({ shopId, months: REPORT_RECENT_MONTHS }),
     listMovementPage({ shopId, query: {} }),
-    // The report's latest months only: the rest are fetched if someone asks to see every month.
-    ledgerReportRows({ shopId, months: REPORT_RECENT_MONTHS }),
     getProfile({ user }),
   ]);
   const queryClient = getQueryClient();
