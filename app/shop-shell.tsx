@@ -21,7 +21,7 @@ export async function ShopShell({ children }: { children: React.ReactNode }) {
   const user = await requireUser();
   const [shop, mustChange, profile] = await Promise.all([
     getShop({ shopId: user.shopId }),
-    passwordMustChange({ userId: user.id }),
+    passwordMustChange({ userId: user.id, shopId: user.shopId }),
     getProfile({ user }),
   ]);
   // Signed in with a temporary password an owner set: nothing else until they choose their own.

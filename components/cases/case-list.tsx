@@ -1,9 +1,23 @@
+"use client";
+
 import Link from "next/link";
 import type { CaseListItem } from "@/lib/contracts/cases";
 import { StatusBadge } from "./status-badge";
-import { ShopTime } from "@/components/shell/shop-clock";
 
-export function CaseList({ cases, empty }: { cases: CaseListItem[]; empty: string }) {
+/** A case line as the list shows it: `updated` is the time already said on the shop's clock. */
+export type CaseLine = Pick<
+  CaseListItem,
+  "id" | "status" | "complaint" | "vehicle" | "customer" | "technician"
+> & {
+  updatedAt: string;
+  updated: string;
+};
+
+/**
+ * A page of case lines. One client component for the whole list, given plain rows: the page's payload
+ * carries fifty short rows of data rather than fifty rendered trees handed to fifty links.
+ */
+export function CaseList({ cases, empty }: { cases: CaseLine[]; empty: string }) {
   if (cases.length === 0) return <p className="card text-ink-soft">{empty}</p>;
   return (
     <ul className="space-y-3">
@@ -16,7 +30,8 @@ export function CaseList({ cases, empty }: { cases: CaseListItem[]; empty: strin
             </div>
             <p className="mt-1 line-clamp-2 text-ink-soft">&ldquo;{c.complaint}&rdquo;</p>
             <p className="mt-1 text-sm text-ink-muted">
-              Case {c.id} · {c.customer ?? "no customer"} · {c.technician} · <ShopTime iso={c.updatedAt} />
+              Case {c.id} · {c.customer ?? "no customer"} · {c.technician} ·{" "}
+              <time dateTime={c.updatedAt}>{c.updated}</time>
             </p>
           </Link>
         </li>

@@ -1,25 +1,30 @@
 "use client";
 
-import { useState } from "react";
+import { Fragment, useState } from "react";
 import { useQuery } from "@tanstack/react-query";
 import { type MassUnit, formatMassGrouped } from "@/lib/units";
-import type { LedgerReportRow } from "@/lib/contracts/ledger";
+import { REPORT_RECENT_MONTHS, type LedgerReportRow } from "@/lib/contracts/ledger";
 import { latestMonths } from "@/lib/service/report-months";
 import { ledgerReportQuery } from "@/lib/queries/ledger";
 
-/** Months shown at first: a shop's whole history is hundreds of rows, most of them read only in the CSV. */
-export const REPORT_RECENT_MONTHS = 12;
+// Months shown at first: a shop's whole history is hundreds of rows, most of them read only in the CSV.
+// The page brings only those; the rest are asked for when someone shows every month.
+export { REPORT_RECENT_MONTHS };
 
 /** The monthly figures, the same rows and corrections the CSV carries. */
 export function LedgerReport({ massUnit }: { massUnit: MassUnit }) {
-  const { data: report } = useQuery(ledgerReportQuery());
   const [allMonths, setAllMonths] = useState(false);
+  const { data: latest } = useQuery(ledgerReportQuery(REPORT_RECENT_MONTHS));
+  const { data: every } = useQuery({
+    ...ledgerReportQuery(),
+    enabled: allMonths,
+  });
+  const report = (allMonths ? every : undefined) ?? latest;
   const m = (g: number) => formatMassGrouped(g, massUnit);
-  const everyRow = report?.rows ?? [];
   // The latest months are the ones a technician checks; the rest wait behind a button and in the CSV.
-  const recent = latestMonths(everyRow, REPORT_RECENT_MONTHS);
-  const rows = allMonths ? everyRow : recent.rows;
-  const monthCount = recent.monthCount;
+  const recent = latestMonths(latest?.rows ?? [], REPORT_RECENT_MONTHS);
+  const rows = allMonths && every ? every.rows : recent.rows;
+  const monthCount = latest?.monthCount ?? recent.monthCount;
   const key = (r: LedgerReportRow) => `${r.month}-${r.technicianId}-${r.refrigerant}`;
   // The CSV's columns, in its order.
   const figures = (r: LedgerReportRow): [string, string][] => [
@@ -52,7 +57,9 @@ export function LedgerReport({ massUnit }: { massUnit: MassUnit }) {
           <p className="mb-3 flex flex-wrap items-center gap-2">
             <span className="text-ink-soft">
               {allMonths
-                ? `All ${monthCount} months.`
+                ? every
+                  ? `All ${monthCount} months.`
+                  : `Fetching all ${monthCount} months…`
                 : `The last ${REPORT_RECENT_MONTHS} months. The CSV holds all ${monthCount}.`}
             </span>
             <button type="button" className="btn-quiet" onClick={() => setAllMonths((shown) => !shown)}>
@@ -69,10 +76,11 @@ export function LedgerReport({ massUnit }: { massUnit: MassUnit }) {
               </p>
               <dl className="mt-1 grid grid-cols-2 gap-x-3">
                 {figures(r).map(([label, value]) => (
-                  <div key={label} className="contents">
+                  // dt and dd straight in the grid: a wrapper per pair (display: contents) drew nothing.
+                  <Fragment key={label}>
                     <dt className="text-ink-soft">{label}</dt>
                     <dd className="text-right">{value}</dd>
-                  </div>
+                  </Fragment>
                 ))}
               </dl>
             </li>

@@ -38,8 +38,18 @@ export const movementParamsSchema = z.object({
     .positive("A ledger line id is positive."),
 });
 
+/** Months the ledger page's report shows at first (the rest on request, and always in the CSV). */
+export const REPORT_RECENT_MONTHS = 12;
+
 export const reportQuerySchema = z.object({
   format: z.enum(["json", "csv"], { message: "format is json or csv." }).optional(),
+  /** The latest this many months only (JSON); the CSV always holds every month. */
+  months: z.coerce
+    .number({ message: "months is a number." })
+    .int("months is a whole number.")
+    .min(1, "months is at least 1.")
+    .max(1200, "months is at most 1200.")
+    .optional(),
 });
 
 /** Movements a technician posts by hand; recovery and recharge are posted by the service record. */
@@ -131,4 +141,6 @@ export interface LedgerReportRow extends MonthlyReportRow {
 export interface LedgerReportResponse {
   rows: LedgerReportRow[];
   timeZone: string;
+  /** How many months the whole report holds (rows may hold only the latest of them). */
+  monthCount: number;
 }

@@ -7,7 +7,8 @@ export const ledgerKeys = {
   all: ["ledger"] as const,
   cylinders: () => [...ledgerKeys.all, "cylinders"] as const,
   movements: () => [...ledgerKeys.all, "movements"] as const,
-  report: () => [...ledgerKeys.all, "report"] as const,
+  /** `months`: the latest this many months only; none for the whole report. */
+  report: (months?: number) => [...ledgerKeys.all, "report", months ?? "all"] as const,
 };
 
 /** Pages of cylinders by label; the next page starts after the last label of the one before. */
@@ -36,8 +37,10 @@ export const movementsQuery = () =>
     getNextPageParam: (last) => last.nextCursor,
   });
 
-export const ledgerReportQuery = () =>
+/** The monthly report: the latest `months` months only, or every month. */
+export const ledgerReportQuery = (months?: number) =>
   queryOptions({
-    queryKey: ledgerKeys.report(),
-    queryFn: ({ signal }) => apiFetch<LedgerReportResponse>("/api/ledger/report", { signal }),
+    queryKey: ledgerKeys.report(months),
+    queryFn: ({ signal }) =>
+      apiFetch<LedgerReportResponse>(`/api/ledger/report${months ? `?months=${months}` : ""}`, { signal }),
   });

@@ -1,11 +1,12 @@
 import "server-only";
-import { Op, type Transaction } from "sequelize";
+import { Op, QueryTypes, type Transaction } from "sequelize";
 import { getModels, type CylinderKind } from "@/models";
 import { AppError } from "@/lib/errors";
 import { sayInUnits } from "@/lib/units/quantity";
 import { recordAudit } from "./audit";
 import type { User } from "lucia";
 import { getProfile } from "./profile";
+import { getShop } from "./shops";
 import type { RefrigerantId } from "@/lib/refrigerants";
 import {
   type Cylinder as LedgerCylinder,
@@ -16,7 +17,8 @@ import {
 } from "@/lib/service/ledger";
 import { ledgerMassUnit, safeFillG } from "@/lib/service/ledger-guard";
 import { monthlyReport, toCsv } from "@/lib/service/ledger-report";
-import { derivedFrom, rememberedLedger } from "./ledger-memory";
+import { latestMonths } from "@/lib/service/report-months";
+import { derivedFrom, rememberedLedger, type RememberedLedger } from "./ledger-memory";
 import {
   CYLINDER_PAGE_DEFAULT,
   type CreateCylinderInput,
@@ -175,6 +177,7 @@ export async function listCylinders({
   after,
   transaction,
   say = (text) => sayInUnits(text),
+  ledger: kept,
 }: {
   shopId: number;
   includeRetired?: boolean;
@@ -184,6 +187,8 @@ export async function listCylinders({
   transaction?: Transaction;
   /** How the fill sentence and problems are said: in SI for an API answer (the default). */
   say?: (text: string) => string;
+  /** The shop's kept lines when the caller has already asked for them (one page reading them twice). */
+  ledger?: Promise<RememberedLedger>;
 }): Promise<CylinderDto[]> {
   if (ids && ids.length === 0) return [];
   const rows = (await getModels().Cylinder.findAll({
@@ -211,7 +216,7 @@ export async function listCylinders({
       ),
     );
   }
-  const ledger = await shopLedger(shopId);
+  const ledger = await (kept ?? shopLedger(shopId));
   // A cylinder's contents are replayed once per state of the shop's lines and of the cylinder's own row;
   // only the saying is done per request.
   return rows.map((c) => {
@@ -227,9 +232,11 @@ export async function listCylinders({
 export async function listCylinderPage({
   shopId,
   query,
+  ledger,
 }: {
   shopId: number;
   query: CylinderListQuery;
+  ledger?: Promise<RememberedLedger>;
 }): Promise<CylinderListResponse> {
   const limit = query.limit ?? CYLINDER_PAGE_DEFAULT;
   const page = await listCylinders({
@@ -237,6 +244,7 @@ export async function listCylinderPage({
     includeRetired: query.retired !== "exclude",
     limit: limit + 1,
     after: query.after,
+    ledger,
   });
   const more = page.length > limit;
   const cylinders = more ? page.slice(0, limit) : page;
@@ -367,32 +375,67 @@ export async function listMovements({
   before?: string;
 }): Promise<MovementDto[]> {
   const [beforeAt, beforeId] = before ? before.split("~") : [];
-  const rows = await getModels().RefrigerantMovement.findAll({
-    where: {
-      shopId,
-      ...(cylinderId ? { cylinderId } : {}),
-      ...(beforeAt && beforeId
-        ? {
-            [Op.or]: [
-              { occurredAt: { [Op.lt]: new Date(beforeAt) } },
-              { occurredAt: new Date(beforeAt), id: { [Op.lt]: Number(beforeId) } },
-            ],
-          }
-        : {}),
+  const after = Boolean(beforeAt && beforeId);
+  // One read of rows (index refrigerant_movement_shop_occurred), with the cylinder's label, the
+  // technician's name and the correction cancelling each line (the unique index on reverses_id).
+  const rows = await getModels().sequelize.query<
+    Omit<
+      MovementRow,
+      "cylinderId" | "caseId" | "serviceRecordId" | "technicianId" | "massG" | "occurredAt" | "reversesId"
+    > & {
+      cylinder_id: number;
+      case_id: number | null;
+      service_record_id: number | null;
+      technician_id: string;
+      mass_g: number;
+      occurred_at: Date;
+      reverses_id: number | null;
+      cylinder_label: string;
+      technician: string;
+      reversed_by_id: number | null;
+    }
+  >(
+    `SELECT m.id, m.cylinder_id, m.case_id, m.service_record_id, m.technician_id, m.type, m.refrigerant,
+            m.mass_g, m.occurred_at, m.reverses_id, m.destination, m.note,
+            y.label AS cylinder_label, u.name AS technician,
+            (SELECT r.id FROM refrigerant_movement r WHERE r.reverses_id = m.id AND r.shop_id = m.shop_id)
+              AS reversed_by_id
+       FROM refrigerant_movement m
+       JOIN cylinder y ON y.id = m.cylinder_id
+       JOIN user u ON u.id = m.technician_id
+      WHERE m.shop_id = :shopId${cylinderId ? " AND m.cylinder_id = :cylinderId" : ""}${
+        after ? " AND (m.occurred_at < :beforeAt OR (m.occurred_at = :beforeAt AND m.id < :beforeId))" : ""
+      }
+      ORDER BY m.occurred_at DESC, m.id DESC
+      LIMIT :limit`,
+    {
+      replacements: {
+        shopId,
+        cylinderId: cylinderId ?? null,
+        beforeAt: after ? new Date(beforeAt!) : null,
+        beforeId: after ? Number(beforeId) : null,
+        limit,
+      },
+      type: QueryTypes.SELECT,
     },
-    include: movementIncludes(),
-    order: [
-      ["occurredAt", "DESC"],
-      ["id", "DESC"],
-    ],
-    limit,
-  });
-  const plain = rows.map((r) => r.get({ plain: true }) as unknown as MovementWithNames);
-  const reversedBy = await reversalsOf(
-    shopId,
-    plain.map((m) => m.id),
   );
-  return plain.map((m) => toMovementDto(m, reversedBy));
+  return rows.map((m) => ({
+    id: m.id,
+    cylinderId: m.cylinder_id,
+    cylinderLabel: m.cylinder_label,
+    caseId: m.case_id,
+    serviceRecordId: m.service_record_id,
+    technicianId: m.technician_id,
+    technician: m.technician,
+    type: m.type,
+    refrigerant: m.refrigerant,
+    massG: m.mass_g,
+    occurredAt: new Date(m.occurred_at).toISOString(),
+    reversesId: m.reverses_id,
+    reversedById: m.reversed_by_id ?? null,
+    destination: m.destination,
+    note: m.note,
+  }));
 }
 
 /** GET /api/ledger/movements: one page, and the cursor of the next one. */
@@ -437,12 +480,13 @@ export async function getMovement({
 }
 
 /** The shop's time zone, its people's names and the monthly report (worked out once per state of the lines). */
-async function reportParts(shopId: number) {
-  const { Shop, User } = getModels();
+async function reportParts(shopId: number, kept?: Promise<RememberedLedger>) {
+  const { User } = getModels();
   const [shop, users, ledger] = await Promise.all([
-    Shop.findOne({ where: { id: shopId }, attributes: ["timeZone"], raw: true }),
+    // The page's shell reads the shop too: once per render (./shops.ts).
+    getShop({ shopId }).catch(() => null),
     User.findAll({ where: { shopId }, attributes: ["id", "name"], raw: true }),
-    shopLedger(shopId),
+    kept ?? shopLedger(shopId),
   ]);
   const timeZone = shop?.timeZone ?? "UTC";
   const names: Record<string, string> = Object.fromEntries(users.map((u) => [u.id, u.name]));
@@ -452,12 +496,25 @@ async function reportParts(shopId: number) {
   return { timeZone, names, report };
 }
 
-/** Recovered, recycled, charged and sent out per month × technician × refrigerant, in the shop's time zone. */
-export async function ledgerReportRows({ shopId }: { shopId: number }): Promise<LedgerReportResponse> {
-  const { timeZone, names, report } = await reportParts(shopId);
+/**
+ * Recovered, recycled, charged and sent out per month × technician × refrigerant, in the shop's time zone;
+ * `months`: the latest this many months only (the page's first view), with the count of all of them.
+ */
+export async function ledgerReportRows({
+  shopId,
+  months,
+  ledger,
+}: {
+  shopId: number;
+  months?: number;
+  ledger?: Promise<RememberedLedger>;
+}): Promise<LedgerReportResponse> {
+  const { timeZone, names, report } = await reportParts(shopId, ledger);
+  const latest = latestMonths(report, months ?? Number.POSITIVE_INFINITY);
   return {
-    rows: report.map((r) => ({ ...r, technician: names[r.technicianId] ?? r.technicianId })),
+    rows: latest.rows.map((r) => ({ ...r, technician: names[r.technicianId] ?? r.technicianId })),
     timeZone,
+    monthCount: latest.monthCount,
   };
 }
 
@@ -473,10 +530,45 @@ export async function ledgerReport({
   const { timeZone, names, report } = await reportParts(shopId);
   return {
     rows: report.map((r) => ({ ...r, technician: names[r.technicianId] ?? r.technicianId })),
+    monthCount: new Set(report.map((r) => r.month)).size,
     csv: toCsv(report, {
       technicianNames: names,
       massUnit: reader ? ledgerMassUnit((await getProfile({ user: reader })).units.mass) : "g",
     }),
     timeZone,
   };
+}
+
+/**
+ * GET /api/ledger/report: the CSV (every month, in the reader's mass unit), or the JSON rows, every month
+ * or the latest `months` only; the JSON answer writes no CSV.
+ */
+export async function ledgerReportAnswer({
+  shopId,
+  reader,
+  format,
+  months,
+}: {
+  shopId: number;
+  reader: Pick<User, "id" | "shopId">;
+  format?: "json" | "csv";
+  months?: number;
+}): Promise<{ csv: string } | { json: LedgerReportResponse }> {
+  if (format === "csv") return { csv: (await ledgerReport({ shopId, reader })).csv };
+  return { json: await ledgerReportRows({ shopId, months }) };
+}
+
+/**
+ * What the ledger page shows from the shop's kept lines, the first page of cylinders and the report's
+ * latest `months`, with one check of those lines against the database for both.
+ */
+export async function ledgerPageParts({ shopId, months }: { shopId: number; months: number }) {
+  const ledger = shopLedger(shopId);
+  // Both wait on the one read; a failure is reported by whichever awaits it first.
+  ledger.catch(() => undefined);
+  const [cylinders, report] = await Promise.all([
+    listCylinderPage({ shopId, query: {}, ledger }),
+    ledgerReportRows({ shopId, months, ledger }),
+  ]);
+  return { cylinders, report };
 }

@@ -14,6 +14,7 @@ import {
 } from "@/lib/contracts/passwords";
 import { recordAudit } from "./audit";
 import { forgetUserSessions } from "@/lib/auth/session-cache";
+import { readerRow } from "./profile";
 
 /** Wrong current passwords allowed per person in the window before the check pauses. */
 const CURRENT_PASSWORD_TRIES = 5;
@@ -29,8 +30,15 @@ export function temporaryPassword(): string {
 }
 
 /** Whether this person signed in with a temporary password and must choose their own first. */
-export async function passwordMustChange({ userId }: { userId: string }): Promise<boolean> {
-  const row = await getModels().User.findByPk(userId, { attributes: ["passwordMustChange"], raw: true });
+export async function passwordMustChange({
+  userId,
+  shopId,
+}: {
+  userId: string;
+  shopId: number;
+}): Promise<boolean> {
+  // The same read as the person's units (./profile.ts): the shell asks for both while one page renders.
+  const row = await readerRow(userId, shopId);
   return Boolean(row?.passwordMustChange);
 }
 

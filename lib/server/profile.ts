@@ -1,4 +1,5 @@
 import "server-only";
+import { cache } from "react";
 import type { User } from "lucia";
 import { getModels } from "@/models";
 import { AppError } from "@/lib/errors";
@@ -13,15 +14,21 @@ export function unitChoiceOfRow(raw: unknown): UnitChoice {
 }
 
 /** The person's units and locale, resolved against the shop's system. */
+/**
+ * What a page's shell and the page read of the signed-in person's own row (units, locale, whether a
+ * temporary password must be changed first): one read per render through React's cache; outside a
+ * render (route handlers) it reads each time.
+ */
+export const readerRow = cache(async (userId: string, shopId: number) =>
+  getModels().User.findOne({
+    where: { id: userId, shopId },
+    attributes: ["unitChoice", "locale", "passwordMustChange"],
+    raw: true,
+  }),
+);
+
 export async function getProfile({ user }: { user: Pick<User, "id" | "shopId"> }): Promise<ProfileResponse> {
-  const [row, shop] = await Promise.all([
-    getModels().User.findOne({
-      where: { id: user.id, shopId: user.shopId },
-      attributes: ["unitChoice", "locale"],
-      raw: true,
-    }),
-    getShop({ shopId: user.shopId }),
-  ]);
+  const [row, shop] = await Promise.all([readerRow(user.id, user.shopId), getShop({ shopId: user.shopId })]);
   if (!row) throw new AppError("not_found:user");
   const choice = unitChoiceOfRow(row.unitChoice);
   return {

@@ -2,7 +2,13 @@ import { afterAll, describe, expect, it } from "vitest";
 import { QueryTypes } from "sequelize";
 import { closeSequelize } from "@/lib/db/sequelize";
 import { getModels } from "@/models";
-import { ledgerReport, ledgerReportRows, listCylinders } from "@/lib/server/ledger";
+import {
+  ledgerPageParts,
+  ledgerReport,
+  ledgerReportRows,
+  listCylinderPage,
+  listCylinders,
+} from "@/lib/server/ledger";
 import { forgetLedgers } from "@/lib/server/ledger-memory";
 import { createShopWithCylinders } from "./service-fixtures";
 import "./helpers";
@@ -85,5 +91,39 @@ describe("the kept ledger", () => {
     const other = await listCylinders({ shopId: b.shop.id });
     expect(other.find((c) => c.id === b.recovery.id)!.netG).toBe(1000);
     expect((await ledgerReportRows({ shopId: b.shop.id })).rows).toEqual([]);
+  });
+});
+
+describe("the report's latest months", () => {
+  it("gives only the latest months asked for, with the count of every month the report holds", async () => {
+    const models = getModels();
+    const { shop, supply, technician } = await createShopWithCylinders(models);
+    // One charge in each of three months, the oldest first.
+    for (const [month, massG] of [
+      [8, 100],
+      [9, 200],
+      [10, 300],
+    ] as const)
+      await models.sequelize.query(
+        `INSERT INTO refrigerant_movement (shop_id, cylinder_id, technician_id, type, refrigerant, mass_g, occurred_at)
+         VALUES (?, ?, ?, 'charged_from', 'R-134a', ?, ?)`,
+        { replacements: [shop.id, supply.id, technician.id, massG, new Date(Date.UTC(2026, month, 14, 10))] },
+      );
+    const latest = await ledgerReportRows({ shopId: shop.id, months: 2 });
+    expect(latest.monthCount).toBe(3);
+    expect(latest.rows.map((r) => [r.month, r.chargedG])).toEqual([
+      ["2026-10", 200],
+      ["2026-11", 300],
+    ]);
+    const every = await ledgerReportRows({ shopId: shop.id });
+    expect(every.monthCount).toBe(3);
+    expect(every.rows.map((r) => r.month)).toEqual(["2026-09", "2026-10", "2026-11"]);
+    expect((await ledgerReport({ shopId: shop.id })).monthCount).toBe(3);
+
+    // The ledger page's parts, read from one check of the lines, are what each read gives alone.
+    expect(await ledgerPageParts({ shopId: shop.id, months: 2 })).toEqual({
+      cylinders: await listCylinderPage({ shopId: shop.id, query: {} }),
+      report: latest,
+    });
   });
 });

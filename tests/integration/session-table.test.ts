@@ -1,6 +1,7 @@
 import { Mysql2Adapter } from "@lucia-auth/adapter-mysql";
 import { afterAll, describe, expect, it } from "vitest";
 import { closeMysqlPool, getMysqlPool } from "@/lib/db/pool";
+import { OneReadMysql2Adapter } from "@/lib/auth/lucia";
 import { closeSequelize } from "@/lib/db/sequelize";
 import { getModels } from "@/models";
 import { createShopWithCase } from "./fixtures";
@@ -90,5 +91,28 @@ describe("user_session, the table Lucia v3's MySQL adapter reads and writes", ()
     await adapter.deleteExpiredSessions();
     const left = (await adapter.getUserSessions(technician.id)).map((s) => s.id);
     expect(left).toEqual([`new-${technician.id}`]);
+  });
+
+  it("reads a session and its user in one query as the stock adapter reads them in two", async () => {
+    const models = getModels();
+    const { technician, shop } = await createShopWithCase(models);
+    const stock = new Mysql2Adapter(getMysqlPool(), { user: "user", session: "user_session" });
+    const ours = new OneReadMysql2Adapter(getMysqlPool());
+    const expiresAt = new Date(Date.now() + 3_600_000);
+    expiresAt.setMilliseconds(0);
+    const sessionId = `one-read-${technician.id}`;
+    await stock.setSession({ id: sessionId, userId: technician.id, expiresAt, attributes: {} });
+
+    const [session, user] = await ours.getSessionAndUser(sessionId);
+    const [stockSession, stockUser] = await stock.getSessionAndUser(sessionId);
+    expect(session).toEqual(stockSession);
+    expect(user?.id).toBe(stockUser?.id);
+    const picked = ["email", "name", "role", "shop_id", "active"] as const;
+    expect(user?.attributes).toEqual(Object.fromEntries(picked.map((k) => [k, stockUser?.attributes[k]])));
+    expect(user?.attributes).toMatchObject({ role: "technician", shop_id: shop.id });
+    // Never the password hash or the person's settings.
+    expect(Object.keys(user?.attributes ?? {}).sort()).toEqual([...picked].sort());
+
+    expect(await ours.getSessionAndUser(`no-such-${sessionId}`)).toEqual([null, null]);
   });
 });

@@ -5,6 +5,8 @@ import Link from "next/link";
 import { can } from "@/lib/auth/roles";
 import { CaseList } from "@/components/cases/case-list";
 import { workCounts } from "@/lib/server/work-counts";
+import { getShop } from "@/lib/server/shops";
+import { formatShopTime } from "@/lib/units/clock";
 import { WorkCountsPanel } from "@/components/cases/work-counts";
 
 export const metadata: Metadata = { title: "Cases" };
@@ -15,10 +17,14 @@ export default async function CasesPage({ searchParams }: { searchParams: Promis
   const user = await requireUser("cases:read");
   const requested = Number((await searchParams).page ?? 1);
   const page = Number.isInteger(requested) && requested >= 1 && requested <= 2000 ? requested : 1;
-  const [{ cases, nextOffset }, counts] = await Promise.all([
+  const [{ cases, nextOffset }, counts, shop] = await Promise.all([
     listCases({ shopId: user.shopId, limit: PAGE_SIZE, offset: (page - 1) * PAGE_SIZE }),
     workCounts({ user }),
+    getShop({ shopId: user.shopId }),
   ]);
+  // Each line's time is said here, on the shop's clock, so the list renders the same on both sides.
+  const clock = { timeZone: shop.timeZone, locale: shop.locale };
+  const now = new Date();
   return (
     <>
       <div className="mb-4 flex flex-wrap items-center justify-between gap-3">
@@ -30,7 +36,10 @@ export default async function CasesPage({ searchParams }: { searchParams: Promis
         )}
       </div>
       <WorkCountsPanel counts={counts} />
-      <CaseList cases={cases} empty={page === 1 ? "No cases yet." : "No cases on this page."} />
+      <CaseList
+        cases={cases.map((c) => ({ ...c, updated: formatShopTime(new Date(c.updatedAt), clock, now) }))}
+        empty={page === 1 ? "No cases yet." : "No cases on this page."}
+      />
       {(page > 1 || nextOffset !== null) && (
         <nav aria-label="Pages" className="mt-4 flex flex-wrap items-center justify-between gap-2">
           {page > 1 ? (

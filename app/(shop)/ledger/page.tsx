@@ -4,9 +4,10 @@ import { requireUser } from "@/lib/auth/guard";
 import { can } from "@/lib/auth/roles";
 import { getQueryClient } from "@/lib/query-client";
 import { ledgerKeys } from "@/lib/queries/ledger";
+import { REPORT_RECENT_MONTHS } from "@/lib/contracts/ledger";
 import { getShop } from "@/lib/server/shops";
 import { getProfile } from "@/lib/server/profile";
-import { ledgerReportRows, listCylinderPage, listMovementPage } from "@/lib/server/ledger";
+import { ledgerPageParts, listMovementPage } from "@/lib/server/ledger";
 import { cautionsFor } from "@/lib/service/cautions";
 import { ledgerMassUnit } from "@/lib/service/ledger-guard";
 import { LedgerView } from "@/components/ledger/ledger-view";
@@ -24,17 +25,18 @@ const LEDGER_CAUTIONS: readonly string[] = [
 export default async function LedgerPage() {
   const user = await requireUser("ledger:read");
   const shopId = user.shopId;
-  const [shop, cylinders, movements, report, profile] = await Promise.all([
+  const [shop, { cylinders, report }, movements, profile] = await Promise.all([
     getShop({ shopId }),
-    listCylinderPage({ shopId, query: {} }),
+    // The cylinders and the report's latest months (the rest are fetched if someone asks to see every
+    // month), from one check of the shop's kept lines.
+    ledgerPageParts({ shopId, months: REPORT_RECENT_MONTHS }),
     listMovementPage({ shopId, query: {} }),
-    ledgerReportRows({ shopId }),
     getProfile({ user }),
   ]);
   const queryClient = getQueryClient();
   queryClient.setQueryData(ledgerKeys.cylinders(), { pages: [cylinders], pageParams: [null] });
   queryClient.setQueryData(ledgerKeys.movements(), { pages: [movements], pageParams: [null] });
-  queryClient.setQueryData(ledgerKeys.report(), { rows: report.rows, timeZone: report.timeZone });
+  queryClient.setQueryData(ledgerKeys.report(REPORT_RECENT_MONTHS), report);
   return (
     <>
       <h1 className="mb-4 text-2xl font-bold">Refrigerant ledger</h1>

@@ -114,6 +114,11 @@ export async function interviewRecordWithFigures(opts: {
   transaction?: Transaction;
 }): Promise<JsonObject> {
   const { kept } = await homesOf(opts);
-  const record = jsonObject(opts.interviewRecord);
+  return interviewRecordWithKept(opts.interviewRecord, kept);
+}
+
+/** The same, from the figures kept outside the answers as a caller read them (one join instead of homesOf). */
+export function interviewRecordWithKept(interviewRecord: unknown, kept: Partial<CaseFigures>): JsonObject {
+  const record = jsonObject(interviewRecord);
   return { ...record, answers: answersWithFigures(storedAnswers(record), kept) } as JsonObject;
 }
