@@ -8,17 +8,20 @@ import type { RefrigerantId } from "@/lib/refrigerants";
 
 export type ChargeVerdict = "over" | "under" | "within";
 
-/** Recharge accuracy (±, grams): SAE J2843 for R-1234yf, SAE J2788 for R-134a (both from memory). */
-const CHARGE_ACCURACY_G: Partial<Record<RefrigerantId, number>> = { "R-1234yf": 15, "R-134a": 15 };
-/** Any other refrigerant: the same ½ oz, by analogy (common practice). */
-const CHARGE_ACCURACY_BY_ANALOGY_G = 15;
-
 /**
- * Charge accuracy a recovery/recharge machine must hold for this refrigerant (±, grams); chargeTolerance
- * (charge.ts) gives the source of each figure with it.
+ * Charge accuracy a recovery/recharge machine must hold for this refrigerant (±, grams): SAE J2843 for
+ * R-1234yf, SAE J2788 for R-134a (both from memory), and for any other refrigerant the same ½ oz by
+ * analogy (common practice). chargeTolerance (charge.ts) gives the source of each figure with it.
  */
 export function chargeToleranceG(refrigerant: RefrigerantId): number {
-  return CHARGE_ACCURACY_G[refrigerant] ?? CHARGE_ACCURACY_BY_ANALOGY_G;
+  switch (refrigerant) {
+    case "R-1234yf":
+      return 15;
+    case "R-134a":
+      return 15;
+    default:
+      return 15;
+  }
 }
 
 /**
