@@ -3,6 +3,7 @@ import type { Transaction } from "sequelize";
 import { getModels, type JsonObject, type ServiceRecord } from "@/models";
 import { FIGURE_IDS, type CaseFigures, type FigureHome, type FigureId } from "@/lib/contracts/case-figures";
 import type { InterviewAnswers } from "@/lib/interview/answers";
+import { jsonColumn } from "@/lib/db/json-column";
 import { answersWithFigures, figuresInAnswers } from "@/lib/interview/figures";
 
 /*
@@ -76,13 +77,8 @@ export const homeOf = (id: FigureId, homes: Homes): FigureHome =>
 
 /** A JSON column as read: an object, or its text when a raw read hands it back unparsed. */
 export function jsonObject(value: unknown): Json {
-  if (typeof value === "string")
-    try {
-      value = JSON.parse(value);
-    } catch {
-      return {};
-    }
-  return isObject(value) ? value : {};
+  const parsed = jsonColumn(value);
+  return isObject(parsed) ? parsed : {};
 }
 
 /** The interview record's stored `answers` part. */

@@ -1,6 +1,7 @@
 import "server-only";
 import type { User } from "lucia";
 import { Op } from "sequelize";
+import { jsonColumn } from "@/lib/db/json-column";
 import { getModels } from "@/models";
 import { AppError } from "@/lib/errors";
 import { caseRefusal, STATUS_AFTER } from "@/lib/cases/rules";
@@ -183,7 +184,7 @@ export async function caseOutcome({
       detail: unknown;
       actor: { name: string } | null;
     };
-    const detail = (typeof e.detail === "string" ? safeJson(e.detail) : e.detail) as {
+    const detail = jsonColumn(e.detail) as {
       reason?: unknown;
     } | null;
     return {
@@ -200,12 +201,4 @@ export async function caseOutcome({
     note: row.repairNote ?? null,
     history,
   };
-}
-
-function safeJson(text: string): unknown {
-  try {
-    return JSON.parse(text);
-  } catch {
-    return null;
-  }
 }

@@ -1,5 +1,6 @@
 import "server-only";
 import type { Transaction } from "sequelize";
+import { jsonColumn } from "@/lib/db/json-column";
 import type { User } from "lucia";
 import { getModels } from "@/models";
 import { AppError } from "@/lib/errors";
@@ -35,13 +36,6 @@ export async function caseForAction({
 
 /** The stored writers of the conclusion (a JSON column, which a raw read may hand back as text). */
 export function conclusionWritersOf(row: { conclusionWriterIds?: unknown }): string[] {
-  let raw = row.conclusionWriterIds;
-  if (typeof raw === "string") {
-    try {
-      raw = JSON.parse(raw);
-    } catch {
-      raw = null;
-    }
-  }
+  const raw = jsonColumn(row.conclusionWriterIds);
   return Array.isArray(raw) ? raw.filter((id): id is string => typeof id === "string") : [];
 }

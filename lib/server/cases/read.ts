@@ -8,6 +8,7 @@ import type { Role } from "@/lib/auth/roles";
 import { QueryTypes } from "sequelize";
 import type { CaseFigures } from "@/lib/contracts/case-figures";
 import { interviewRecordWithKept, type RecordFigure } from "../case-figures/homes";
+import { jsonColumn } from "@/lib/db/json-column";
 
 type VehicleRow = {
   year: number;
@@ -18,7 +19,9 @@ type VehicleRow = {
   expansionDevice: string;
 } | null;
 
-function describeVehicle(v: VehicleRow): string | null {
+function describeVehicle(
+  v: Pick<NonNullable<VehicleRow>, "year" | "make" | "model" | "engine"> | null,
+): string | null {
   return v ? `${v.year} ${v.make} ${v.model}${v.engine ? ` ${v.engine}` : ""}` : null;
 }
 
@@ -72,8 +75,6 @@ export async function listCases({
               make: c.v_make,
               model: c.v_model ?? "",
               engine: c.v_engine,
-              refrigerant: "",
-              expansionDevice: "",
             })
           : null,
       customer: c.customer ?? null,
@@ -122,16 +123,6 @@ const RECORD_FIGURE_COLUMNS = [
   ["airPct", "r_air_pct"],
   ["chargedG", "r_charged_g"],
 ] as const satisfies readonly (readonly [RecordFigure, string])[];
-
-/** A JSON column read raw: the driver may hand it back parsed or as its text. */
-function jsonColumn(value: unknown): unknown {
-  if (typeof value !== "string") return value ?? null;
-  try {
-    return JSON.parse(value);
-  } catch {
-    return null;
-  }
-}
 
 const toNumber = (v: number | string | null | undefined) =>
   v === null || v === undefined ? null : Number(v);
