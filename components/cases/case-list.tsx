@@ -5,13 +5,7 @@ import type { CaseListItem } from "@/lib/contracts/cases";
 import { StatusBadge } from "./status-badge";
 
 /** A case line as the list shows it: `updated` is the time already said on the shop's clock. */
-export type CaseLine = Pick<
-  CaseListItem,
-  "id" | "status" | "complaint" | "vehicle" | "customer" | "technician"
-> & {
-  updatedAt: string;
-  updated: string;
-};
+export type CaseLine = CaseListItem & { updated: string };
 
 /**
  * A page of case lines. One client component for the whole list, given plain rows: the page's payload

@@ -484,11 +484,11 @@ async function reportParts(shopId: number, kept?: Promise<RememberedLedger>) {
   const { User } = getModels();
   const [shop, users, ledger] = await Promise.all([
     // The page's shell reads the shop too: once per render (./shops.ts).
-    getShop({ shopId }).catch(() => null),
+    getShop({ shopId }),
     User.findAll({ where: { shopId }, attributes: ["id", "name"], raw: true }),
     kept ?? shopLedger(shopId),
   ]);
-  const timeZone = shop?.timeZone ?? "UTC";
+  const timeZone = shop.timeZone;
   const names: Record<string, string> = Object.fromEntries(users.map((u) => [u.id, u.name]));
   const report = derivedFrom(ledger, `report:${timeZone}`, () =>
     monthlyReport(ledger.movements, { timeZone }),

@@ -13,7 +13,6 @@ export function unitChoiceOfRow(raw: unknown): UnitChoice {
   return typeof raw === "object" && raw !== null && !Array.isArray(raw) ? (raw as UnitChoice) : {};
 }
 
-/** The person's units and locale, resolved against the shop's system. */
 /**
  * What a page's shell and the page read of the signed-in person's own row (units, locale, whether a
  * temporary password must be changed first): one read per render through React's cache; outside a
@@ -27,6 +26,7 @@ export const readerRow = cache(async (userId: string, shopId: number) =>
   }),
 );
 
+/** The person's units and locale, resolved against the shop's system. */
 export async function getProfile({ user }: { user: Pick<User, "id" | "shopId"> }): Promise<ProfileResponse> {
   const [row, shop] = await Promise.all([readerRow(user.id, user.shopId), getShop({ shopId: user.shopId })]);
   if (!row) throw new AppError("not_found:user");
