@@ -103,6 +103,7 @@ const BENCHES: { name: string; script: string; read?: Reader }[] = [
   { name: "interview-machine", script: "bench/interview-machine.ts", read: readInterviewMachine },
   { name: "casebook", script: "bench/casebook.ts" },
   { name: "load", script: "bench/load.ts" },
+  { name: "floor", script: "bench/floor.ts" },
 ];
 
 function run(script: string, env: NodeJS.ProcessEnv): Promise<{ code: number; output: string }> {
