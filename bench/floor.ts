@@ -19,28 +19,13 @@
 //    figure printed by bench:interview.
 import { spawn, type ChildProcess } from "node:child_process";
 import { existsSync, readFileSync, readdirSync } from "node:fs";
-import { gzipSync } from "node:zlib";
 import { chromium } from "@playwright/test";
+import { APP_BASE as BASE, recordScripts, startBenchApp, totalKb } from "./browser-app";
 import { loadNow, printLoad, recordFigure, runLoad, treeCpuMs, type LoadFigures } from "./harness";
 
-const PORT = Number(process.env.E2E_PORT ?? 3100);
-const BASE = process.env.BENCH_URL ?? `http://127.0.0.1:${PORT}`;
 const CONNECTIONS = Number(process.env.BENCH_CONNECTIONS ?? 50);
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 15);
 const DB_DIR = process.env.E2E_DB_DIR ?? "/tmp/cw-e2e-db";
-
-async function waitFor(url: string, timeoutMs: number) {
-  const until = Date.now() + timeoutMs;
-  while (Date.now() < until) {
-    try {
-      if ((await fetch(url)).ok) return;
-    } catch {
-      // not up yet
-    }
-    await new Promise((r) => setTimeout(r, 500));
-  }
-  throw new Error(`no server at ${url}`);
-}
 
 /** A bare HTTP server in its own process (so the load tool does not share its thread); resolves its port. */
 function bareServer(): Promise<{ child: ChildProcess; port: number }> {
@@ -106,11 +91,9 @@ async function load(title: string, base: string, path: string, appPid?: number):
 }
 
 async function main() {
-  let server: ChildProcess | undefined;
-  if (!process.env.BENCH_URL) server = spawn("bash", ["scripts/e2e-server.sh"], { stdio: "ignore" });
+  const app = await startBenchApp();
   const bare = await bareServer();
   try {
-    await waitFor(`${BASE}/api/health`, 180_000);
     console.log(`the floor under the speed goals (load average now ${loadNow()})`);
 
     const rows: { target: string; figures: LoadFigures }[] = [];
@@ -119,7 +102,7 @@ async function main() {
       target: "bare Node.js HTTP server",
       figures: await load("bare Node.js HTTP server (no framework)", bareBase, "/", bare.child.pid),
     });
-    const appPid = nextServerPid(server?.pid);
+    const appPid = nextServerPid(app.pid);
     // A short warm-up: the first answers of a fresh server compile and cache.
     await runLoad({
       base: BASE,
@@ -139,18 +122,10 @@ async function main() {
     // The framework's own JavaScript: a page with no client component of ours.
     const browser = await chromium.launch({ executablePath: "/usr/bin/chromium", args: ["--no-sandbox"] });
     const page = await (await browser.newContext({ baseURL: BASE })).newPage();
-    const scripts = new Map<string, number>();
-    page.on("response", async (response) => {
-      if (response.request().resourceType() !== "script" || !response.url().startsWith(BASE)) return;
-      try {
-        scripts.set(response.url(), gzipSync(await response.body()).length);
-      } catch {
-        // a redirected or aborted response has no body
-      }
-    });
+    const scripts = recordScripts(page);
     await page.goto("/credits", { waitUntil: "networkidle" });
     await browser.close();
-    const frameworkKb = [...scripts.values()].reduce((a, b) => a + b, 0) / 1024;
+    const frameworkKb = totalKb(scripts);
 
     console.log(`\nsummary at ${CONNECTIONS} connections`);
     console.log(
@@ -180,12 +155,7 @@ async function main() {
     });
   } finally {
     bare.child.kill();
-    // e2e-server.sh stops the app and its database when it is told to stop.
-    if (server && server.exitCode === null) {
-      const exited = new Promise((resolve) => server!.once("exit", resolve));
-      server.kill("SIGTERM");
-      await exited;
-    }
+    await app.stop();
   }
 }
 

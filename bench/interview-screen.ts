@@ -2,37 +2,18 @@
 // in a reading to the recomputed values on screen. Figures to read; nothing here passes or fails.
 // Needs a production build (`npx next build`). Starts its own throwaway database and server
 // (scripts/e2e-server.sh on port 3100, or E2E_PORT) unless BENCH_URL points at a running one.
-import { spawn, type ChildProcess } from "node:child_process";
-import { gzipSync } from "node:zlib";
 import { chromium } from "@playwright/test";
+import { APP_BASE as BASE, recordScripts, startBenchApp, totalKb } from "./browser-app";
 
-const BASE = process.env.BENCH_URL ?? `http://127.0.0.1:${process.env.E2E_PORT ?? 3100}`;
 const KEYSTROKES = 60;
-
-async function waitForHealth(timeoutMs: number) {
-  const until = Date.now() + timeoutMs;
-  while (Date.now() < until) {
-    try {
-      if ((await fetch(`${BASE}/api/health`)).ok) return;
-    } catch {
-      // not up yet
-    }
-    await new Promise((r) => setTimeout(r, 500));
-  }
-  throw new Error(`no server at ${BASE}`);
-}
 
 function percentile(sorted: number[], p: number) {
   return sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))]!;
 }
 
 async function main() {
-  let server: ChildProcess | undefined;
-  if (!process.env.BENCH_URL) {
-    server = spawn("bash", ["scripts/e2e-server.sh"], { stdio: "ignore" });
-  }
+  const app = await startBenchApp();
   try {
-    await waitForHealth(180_000);
     const browser = await chromium.launch({
       executablePath: "/usr/bin/chromium",
       args: [
@@ -77,18 +58,9 @@ async function main() {
     });
 
     // Every script the browser loads for the interview route, measured as a server would send it.
-    const scripts = new Map<string, number>();
-    page.on("response", async (response) => {
-      if (response.request().resourceType() !== "script" || !response.url().startsWith(BASE)) return;
-      try {
-        scripts.set(response.url(), gzipSync(await response.body()).length);
-      } catch {
-        // a redirected or aborted response has no body
-      }
-    });
+    const scripts = recordScripts(page);
     await page.goto(`/cases/${caseId}/interview`, { waitUntil: "networkidle" });
     await page.getByRole("heading", { name: "Running readings" }).waitFor();
-    const totalGzip = [...scripts.values()].reduce((a, b) => a + b, 0);
 
     // Keystroke → recomputed readout: keydown's timestamp to the mutation that rewrote the readout.
     const high = page.getByRole("textbox", { name: "High side" });
@@ -119,7 +91,7 @@ async function main() {
     await browser.close();
 
     console.log(
-      `interview route, client JavaScript: ${scripts.size} files, ${(totalGzip / 1024).toFixed(1)} kB gzip`,
+      `interview route, client JavaScript: ${scripts.size} files, ${totalKb(scripts).toFixed(1)} kB gzip`,
     );
     for (const [url, size] of [...scripts.entries()].sort((a, b) => b[1] - a[1]).slice(0, 8)) {
       console.log(`  ${(size / 1024).toFixed(1).padStart(6)} kB  ${new URL(url).pathname}`);
@@ -128,12 +100,7 @@ async function main() {
       `keystroke → recomputed values on screen (${samples.length} samples): p50 ${percentile(samples, 50).toFixed(1)} ms, p95 ${percentile(samples, 95).toFixed(1)} ms, p99 ${percentile(samples, 99).toFixed(1)} ms`,
     );
   } finally {
-    // e2e-server.sh stops the app and its database when it is told to stop.
-    if (server && server.exitCode === null) {
-      const exited = new Promise((resolve) => server!.once("exit", resolve));
-      server.kill("SIGTERM");
-      await exited;
-    }
+    await app.stop();
   }
 }
 
