@@ -10,7 +10,7 @@ export function SignOutButton() {
   return (
     <button
       type="button"
-      className="btn border-2 border-glacier-100 text-white hover:bg-glacier-700"
+      className="btn shrink-0 whitespace-nowrap border-2 border-glacier-100 text-white hover:bg-glacier-700"
       disabled={pending}
       onClick={async () => {
         setPending(true);

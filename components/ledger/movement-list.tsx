@@ -88,7 +88,10 @@ export function MovementList({ viewer }: { viewer: LedgerViewer }) {
             </p>
             {mv.caseId && (
               <p className="text-sm">
-                <Link className="underline" href={`/cases/${mv.caseId}/service`}>
+                <Link
+                  className="inline-flex min-h-touch items-center underline"
+                  href={`/cases/${mv.caseId}/service`}
+                >
                   {mv.serviceRecordId ? `From the service record of case ${mv.caseId}` : `Case ${mv.caseId}`}
                 </Link>
                 {mv.serviceRecordId && !mv.reversesId && !mv.reversedById

@@ -44,7 +44,7 @@ export function OpenInvitations() {
               <p className="font-bold">
                 {inv.name} · {ROLE_LABELS[inv.role]}
               </p>
-              <p className="truncate text-ink-soft">
+              <p className="break-all text-ink-soft">
                 {inv.email} ·{" "}
                 {inv.expired ? (
                   "link expired: invite again"

@@ -42,7 +42,7 @@ export function PeopleManager({ currentUserId }: { currentUserId: string }) {
                 <p className="font-bold">
                   {u.name} {!u.active && <span className="text-ember-700">(inactive)</span>}
                 </p>
-                <p className="truncate text-ink-soft">{u.email}</p>
+                <p className="break-all text-ink-soft">{u.email}</p>
               </div>
               <label className="sr-only" htmlFor={`role-${u.id}`}>
                 Role of {u.name}

@@ -65,7 +65,7 @@ export function SpecImport() {
         id="spec-file"
         type="file"
         accept=".csv,text/csv"
-        className="block min-h-touch"
+        className="block min-h-touch w-full max-w-full"
         onChange={async (e) => {
           const file = e.target.files?.[0];
           if (file) {
