@@ -33,7 +33,11 @@ const columns: ColumnDef<typeof features, CasebookRow>[] = [
       </Link>
     ),
   },
-  { id: "opened", header: "Opened", cell: ({ row }) => shortDate(row.original.openedAt) },
+  {
+    id: "opened",
+    header: "Opened",
+    cell: ({ row }) => <span className="whitespace-nowrap">{shortDate(row.original.openedAt)}</span>,
+  },
   { id: "vehicle", header: "Vehicle", cell: ({ row }) => row.original.vehicle ?? "—" },
   {
     id: "complaint",

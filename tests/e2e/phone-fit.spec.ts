@@ -77,3 +77,34 @@ test("the ledger's link to a service record and the profile's unit buttons are b
   for (const unit of ["g", "kg", "oz", "lb"])
     await atLeastATap(mass.getByRole("button", { name: unit, exact: true }));
 });
+
+test.describe("on a desktop", () => {
+  test.use({ viewport: { width: 1280, height: 900 } });
+
+  test("the casebook's table keeps each date on one line, and a page button that cannot be used looks it", async ({
+    page,
+  }) => {
+    await new SignInPage(page).signInAs("senior");
+    await page.goto("/casebook");
+    const table = page.getByRole("table");
+    await expect(table).toBeVisible();
+    const firstDate = table.getByRole("row").nth(1).getByRole("cell").nth(1);
+    await expect(firstDate).toHaveText(/^\d{4}-\d{2}-\d{2}$/);
+    const { height, lineHeight } = await firstDate.evaluate((el) => {
+      const range = document.createRange();
+      range.selectNodeContents(el);
+      return {
+        height: range.getBoundingClientRect().height,
+        lineHeight: parseFloat(getComputedStyle(el).lineHeight),
+      };
+    });
+    expect(height, "the date wraps").toBeLessThan(1.5 * lineHeight);
+
+    const previous = page
+      .getByRole("navigation", { name: "Pages" })
+      .getByRole("button", { name: "Previous page" });
+    await expect(previous).toBeDisabled();
+    const opacity = await previous.evaluate((el) => Number(getComputedStyle(el).opacity));
+    expect(opacity, "a disabled button looks like one that works").toBeLessThan(1);
+  });
+});
