@@ -5,17 +5,28 @@ import { formatMessage, type ReaderUnits, renderQuantity } from "./messages";
 import { READING_GRADES } from "./observations";
 import { gaugeKpa, grams, kelvin, percent, tempC } from "./quantities";
 import { pressureToKpa } from "@/lib/units";
+import { quantityParts, SI_READER_UNITS } from "@/lib/units/quantity";
 import { SYMPTOM_IDS } from "./symptoms";
 
 const IMPERIAL: ReaderUnits = { pressure: "psi", temperature: "F", mass: "oz", volume: "floz" };
 
 describe("quantities in the reader's units", () => {
   it("keeps the engine's own units by default: whole kPa gauge, °C and K to a tenth, whole grams", () => {
-    expect(renderQuantity(gaugeKpa(1849.6))).toEqual(["1,850", "kPa gauge"]);
+    expect(renderQuantity(gaugeKpa(1849.6))).toEqual(["1850", "kPa gauge"]);
     expect(renderQuantity(tempC(-3.25))).toEqual(["−3.3", "°C"]);
     expect(renderQuantity(kelvin(10))).toEqual(["10.0", "K"]);
     expect(renderQuantity(grams(1124.6))).toEqual(["1,125", "g"]);
     expect(renderQuantity(percent(97.5))).toEqual(["97.5", "%"]);
+  });
+
+  it("says a pressure with the same digits as the readings beside it (lib/units/quantity.ts)", () => {
+    for (const pressure of ["kPa", "bar", "psi"] as const)
+      for (const kpa of [190, 1150, 1849.6, 4000, 9500]) {
+        const units = { ...SI_READER_UNITS, pressure };
+        expect(renderQuantity(gaugeKpa(kpa), { ...IMPERIAL, pressure }), `${kpa} kPa in ${pressure}`).toEqual(
+          quantityParts({ kind: "pressure_gauge", value: kpa }, units),
+        );
+      }
   });
 
   it("converts for an imperial reader: 1 psi = 6.894757 kPa, °F = °C × 1.8 + 32, a kelvin of difference is 1.8 °F, 1 oz = 28.3495 g (NIST SP 811)", () => {
@@ -54,14 +65,14 @@ describe("formatMessage", () => {
       ambient: tempC(33),
     };
     expect(formatMessage({ key: "high_side:high", values: band })).toBe(
-      "High side 1,850 kPa gauge (condensing at 64.0 °C) is above the expected 47.0–63.0 °C saturation for 33.0 °C ambient.",
+      "High side 1850 kPa gauge (condensing at 64.0 °C) is above the expected 47.0–63.0 °C saturation for 33.0 °C ambient.",
     );
     expect(
       formatMessage({
         key: "high_side:high",
         values: { ...band, bandMin: gaugeKpa(1130), bandMax: gaugeKpa(1640) },
       }),
-    ).toMatch(/saturation \(1,130–1,640 kPa gauge\) for/);
+    ).toMatch(/saturation \(1130–1640 kPa gauge\) for/);
     expect(formatMessage({ key: "lift:normal" })).toBe(
       "The compressor lifts … of saturation temperature, a normal spread between the sides.",
     );

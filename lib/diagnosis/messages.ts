@@ -57,7 +57,8 @@ export function renderQuantity(q: Quantity, units: ReaderUnits = SI_UNITS): [str
       const suffix = PRESSURE_SUFFIX[units.pressure];
       const label =
         q.kind === "pressure_gauge" ? suffix.gauge : q.kind === "pressure_abs" ? suffix.abs : suffix.plain;
-      return [plain(value, q.decimals ?? pressureDecimals(value, units.pressure)), label];
+      // Plain digits, as the readings and every other screen say a pressure (lib/units/quantity.ts).
+      return [plain(value, q.decimals ?? pressureDecimals(value, units.pressure), false), label];
     }
     case "temperature":
       return [

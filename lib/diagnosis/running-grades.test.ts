@@ -446,7 +446,7 @@ describe("what the running notes say", () => {
     );
     // Above the critical pressure no saturation temperature exists (Tillner-Roth & Baehr 1994: 4,059.3 kPa abs).
     expect(noteText({ ...base, lowKpaGauge: 4000 }, "note:low_outside_table")).toBe(
-      "Low side 4,000 kPa gauge is outside the saturation table for R-134a; it was not graded.",
+      "Low side 4000 kPa gauge is outside the saturation table for R-134a; it was not graded.",
     );
     expect(gradeOf({ ...base, lowKpaGauge: 4000 }, "low_side")).toEqual([]);
     expect(
@@ -454,7 +454,7 @@ describe("what the running notes say", () => {
         { refrigerant: "R-744", expansionDevice: "txv", ambientC: 35, highKpaGauge: 9500 },
         "note:transcritical",
       ),
-    ).toMatch(/^High side 9,500 kPa gauge is above the critical pressure of R-744/);
+    ).toMatch(/^High side 9500 kPa gauge is above the critical pressure of R-744/);
   });
 
   it("says a vacuum on the low side in its own sentence", () => {
