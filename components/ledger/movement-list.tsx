@@ -10,11 +10,11 @@ import { ledgerKeys, movementsQuery } from "@/lib/queries/ledger";
 import { type MassUnit, formatMassGrouped } from "@/lib/units";
 import { ConfirmDialog } from "@/components/ui/confirm-dialog";
 import { MoreButton } from "@/components/ui/more-button";
-import { MOVEMENT_WORDS, shopDateTime } from "./words";
+import { useShopRecordTime } from "@/components/shell/shop-clock";
+import { MOVEMENT_WORDS } from "./words";
 
 export interface LedgerViewer {
   massUnit: MassUnit;
-  timeZone: string;
   canWrite: boolean;
   /** owners and seniors cancel any line; a technician only their own */
   canCancelAny: boolean;
@@ -30,6 +30,7 @@ export function MovementList({ viewer }: { viewer: LedgerViewer }) {
   const queryClient = useQueryClient();
   const { data, fetchNextPage, hasNextPage, isFetchingNextPage } = useInfiniteQuery(movementsQuery());
   const movements = data?.pages.flatMap((p) => p.movements) ?? [];
+  const shopDateTime = useShopRecordTime();
   const [target, setTarget] = useState<MovementDto | null>(null);
   const [status, setStatus] = useState<string | null>(null);
   const cancel = useMutation({
@@ -81,7 +82,7 @@ export function MovementList({ viewer }: { viewer: LedgerViewer }) {
               · {amount(mv, viewer.massUnit)} · {mv.refrigerant}
             </p>
             <p className="text-sm">
-              #{mv.id} · {shopDateTime(mv.occurredAt, viewer.timeZone)} · {mv.technician}
+              #{mv.id} · {shopDateTime(mv.occurredAt)} · {mv.technician}
               {mv.reversedById ? ` · cancelled by #${mv.reversedById}` : ""}
               {mv.destination ? ` · to ${mv.destination}` : ""}
               {mv.note ? ` · ${mv.reversesId ? "reason: " : ""}${mv.note}` : ""}
@@ -145,7 +146,7 @@ export function MovementList({ viewer }: { viewer: LedgerViewer }) {
               <strong>
                 {MOVEMENT_WORDS[target.type]} {target.cylinderLabel} · {amount(target, viewer.massUnit)}
               </strong>{" "}
-              on {shopDateTime(target.occurredAt, viewer.timeZone)} by {target.technician}.
+              on {shopDateTime(target.occurredAt)} by {target.technician}.
             </p>
             <p>
               The line stays in the ledger. A correction that cancels it is posted now, and the cylinder and

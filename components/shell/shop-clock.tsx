@@ -1,7 +1,7 @@
 "use client";
 
 import { createContext, useContext } from "react";
-import { formatShopTime, type ShopClock } from "@/lib/units/clock";
+import { formatShopRecordTime, formatShopTime, type ShopClock } from "@/lib/units/clock";
 
 // One date and time format everywhere a person reads one: the shop's locale on the shop's clock.
 const ShopClockContext = createContext<ShopClock>({ timeZone: "UTC", locale: "en" });
@@ -14,6 +14,12 @@ export function ShopClockProvider({ clock, children }: { clock: ShopClock; child
 export function useShopTime(): (iso: string) => string {
   const clock = useContext(ShopClockContext);
   return (iso) => formatShopTime(new Date(iso), clock);
+}
+
+/** A formatter for a kept record's ISO time (a ledger line): with its year, in this shop's way. */
+export function useShopRecordTime(): (iso: string) => string {
+  const clock = useContext(ShopClockContext);
+  return (iso) => formatShopRecordTime(new Date(iso), clock);
 }
 
 /** A moment as the shop's clock shows it; the server and the phone may disagree near midnight. */

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { endSentence, formatShopTime } from "./clock";
+import { endSentence, formatShopRecordTime, formatShopTime } from "./clock";
 
 // Time zone rules from the IANA time zone database; wall-clock offsets for these dates: Halifax
 // UTC−4 (daylight time until 1 Nov 2026), Denver UTC−7 (standard time from 1 Nov 2026).
@@ -29,6 +29,19 @@ describe("formatShopTime", () => {
 
   it("falls back to UTC, and says so, for a time zone the runtime does not know", () => {
     expect(formatShopTime(at, { timeZone: "Mars/Olympus", locale: "en-GB" }, at)).toBe("14:05 UTC");
+  });
+});
+
+describe("formatShopRecordTime", () => {
+  const at = new Date("2026-12-03T14:05:00Z");
+
+  it("always says the day and the year of a kept record, in the shop's own locale and clock", () => {
+    const halifaxCa = formatShopRecordTime(at, { timeZone: "America/Halifax", locale: "en-CA" });
+    expect(halifaxCa).toMatch(/^Dec 3, 2026, 10:05\sa\.m\.$/);
+    const halifaxGb = formatShopRecordTime(at, { timeZone: "America/Halifax", locale: "en-GB" });
+    expect(halifaxGb).toBe("3 Dec 2026, 10:05");
+    const denver = formatShopRecordTime(at, { timeZone: "America/Denver", locale: "en-US" });
+    expect(denver).toMatch(/^Dec 3, 2026, 7:05\sAM$/);
   });
 });
 

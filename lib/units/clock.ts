@@ -13,7 +13,9 @@ export interface ShopClock {
 const formatters = new Map<string, Intl.DateTimeFormat>();
 const MAX_FORMATTERS = 2_000;
 
-function formatter(clock: ShopClock, style: "day" | "time" | "dayTime"): Intl.DateTimeFormat {
+type Style = "day" | "time" | "dayTime" | "record";
+
+function formatter(clock: ShopClock, style: Style): Intl.DateTimeFormat {
   const key = `${clock.locale}\u0000${clock.timeZone}\u0000${style}`;
   let f = formatters.get(key);
   if (!f) {
@@ -24,10 +26,11 @@ function formatter(clock: ShopClock, style: "day" | "time" | "dayTime"): Intl.Da
   return f;
 }
 
-const STYLES: Readonly<Record<"day" | "time" | "dayTime", Intl.DateTimeFormatOptions>> = {
+const STYLES: Readonly<Record<Style, Intl.DateTimeFormatOptions>> = {
   day: { year: "numeric", month: "2-digit", day: "2-digit" },
   time: { hour: "numeric", minute: "2-digit" },
   dayTime: { month: "short", day: "numeric", hour: "numeric", minute: "2-digit" },
+  record: { year: "numeric", month: "short", day: "numeric", hour: "numeric", minute: "2-digit" },
 };
 
 function buildFormatter(clock: ShopClock, options: Intl.DateTimeFormatOptions): Intl.DateTimeFormat {
@@ -48,6 +51,11 @@ export function formatShopTime(at: Date, clock: ShopClock, now: Date = new Date(
   const day = formatter(clock, "day");
   const sameDay = day.format(at) === day.format(now);
   return formatter(clock, sameDay ? "time" : "dayTime").format(at);
+}
+
+/** A kept record's moment (a ledger line): always the day, month, year and time, on the shop's clock. */
+export function formatShopRecordTime(at: Date, clock: ShopClock): string {
+  return formatter(clock, "record").format(at);
 }
 
 /** Ends a sentence after a formatted time: "at 8:28 a.m." takes no second full stop. */

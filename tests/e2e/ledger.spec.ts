@@ -142,3 +142,14 @@ test("an apprentice cannot open the ledger", async ({ page }) => {
   const response = await page.goto("/ledger");
   expect(response?.status()).toBe(403);
 });
+
+test("a ledger line's time reads in the shop's own locale and clock, with its year, like the rest of the shop's screens", async ({
+  page,
+}) => {
+  // Harbourline keeps its clock in English (Canada): 12-hour times with a.m. and p.m. (scripts/demo/people.ts).
+  await new SignInPage(page).signInAs("senior");
+  await page.goto("/ledger");
+  const movements = page.getByRole("region", { name: "Movements" });
+  const firstLine = movements.getByText(/^#\d+ · /).first();
+  await expect(firstLine).toHaveText(/^#\d+ · [A-Z][a-z]{2} \d{1,2}, \d{4}, \d{1,2}:\d{2}\s[ap]\.m\. · /);
+});

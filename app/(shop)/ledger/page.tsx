@@ -44,7 +44,6 @@ export default async function LedgerPage() {
         <LedgerView
           viewer={{
             massUnit: ledgerMassUnit(profile.units.mass),
-            timeZone: shop.timeZone,
             canWrite: can(user.role, "ledger:write"),
             canCancelAny: user.role === "owner" || user.role === "senior",
             userId: user.id,
