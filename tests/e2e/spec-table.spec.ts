@@ -1,5 +1,6 @@
 import { expect, test } from "@playwright/test";
-import { SignInPage } from "./pages/sign-in-page";
+import { DEMO_PASSWORD, SignInPage } from "./pages/sign-in-page";
+import { createTechnician } from "./pages/people-fixtures";
 
 // Invented rows for this test; the charges are nobody's specification.
 const CSV = [
@@ -35,4 +36,29 @@ test("a technician reads the spec table but has no edit controls", async ({ page
   await expect(page.getByText(/Silverado 1500/).first()).toBeVisible();
   await expect(page.getByRole("button", { name: "Add a row" })).toHaveCount(0);
   await expect(page.getByRole("button", { name: "Preview the import" })).toHaveCount(0);
+});
+
+test("a technician who reads in imperial units reads the metric shop's spec table in ounces and fluid ounces", async ({
+  page,
+}) => {
+  // A technician of their own, so their units never change what another spec's people see.
+  const person = await createTechnician(DEMO_PASSWORD);
+  const signIn = new SignInPage(page);
+  await signIn.goto();
+  await signIn.signIn(person.email);
+  await expect(page).toHaveURL(/\/cases$/);
+  await page.goto("/profile");
+  await page.getByRole("group", { name: "Unit system" }).getByRole("button", { name: "Imperial" }).click();
+  await page.getByRole("button", { name: "Save my units" }).click();
+  await expect(page.getByText(/Saved\. Every field/)).toBeVisible();
+
+  await page.goto("/specs");
+  await page.getByLabel("Search by make, model, variant or year").fill("Focus");
+  // The demo's Focus row: 570 g and 150 mL are 20.1 oz and 5.1 fl oz (NIST SP 811: 1 oz = 28.349523125 g,
+  // 1 US fl oz = 29.5735295625 mL).
+  await expect(page.getByText(/Ford Focus/)).toBeVisible();
+  await expect(page.getByText(/R-134a · 20\.1 oz · PAG 46 · 5\.1 fl oz oil/)).toBeVisible();
+  const allowances = page.getByRole("form", { name: "Oil carried out by replaced parts" });
+  await expect(allowances).toContainText(/Condenser:\s*\d+\.\d fl oz/);
+  await expect(allowances).not.toContainText(/\d mL\b/);
 });

@@ -4,7 +4,7 @@ import { requireUser } from "@/lib/auth/guard";
 import { can } from "@/lib/auth/roles";
 import { getQueryClient } from "@/lib/query-client";
 import { specKeys } from "@/lib/queries/specs";
-import { getShop } from "@/lib/server/shops";
+import { getProfile } from "@/lib/server/profile";
 import { listSpecs } from "@/lib/server/specs";
 import { getPartOilAllowances } from "@/lib/server/oil-allowances";
 import { SERVICE_SOURCES } from "@/lib/service/sources";
@@ -16,14 +16,14 @@ export const metadata: Metadata = { title: "Spec table" };
 
 export default async function SpecsPage() {
   const user = await requireUser("specs:read");
-  const [shop, specs, allowances] = await Promise.all([
-    getShop({ shopId: user.shopId }),
+  // Every figure in the reader's own units, as on every other screen (their profile over the shop's).
+  const [{ units }, specs, allowances] = await Promise.all([
+    getProfile({ user }),
     listSpecs({ shopId: user.shopId }),
     getPartOilAllowances({ shopId: user.shopId }),
   ]);
   const queryClient = getQueryClient();
   queryClient.setQueryData(specKeys.list(""), specs);
-  const imperial = shop.units === "imperial";
   const canEdit = can(user.role, "specs:edit");
   return (
     <div className="space-y-6">
@@ -33,12 +33,12 @@ export default async function SpecsPage() {
         maker&apos;s service information come first; a row here is the fallback and a cross-check.
       </p>
       <HydrationBoundary state={dehydrate(queryClient)}>
-        <SpecTable canEdit={canEdit} mass={imperial ? "oz" : "g"} volume={imperial ? "floz" : "mL"} />
+        <SpecTable canEdit={canEdit} mass={units.mass} volume={units.volume} />
         {canEdit && <SpecImport />}
       </HydrationBoundary>
       <OilAllowancesForm
         initial={allowances}
-        volume={imperial ? "floz" : "mL"}
+        volume={units.volume}
         canEdit={canEdit}
         source={SERVICE_SOURCES.partOilAllowance}
       />
