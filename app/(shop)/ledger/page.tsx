@@ -5,7 +5,6 @@ import { can } from "@/lib/auth/roles";
 import { getQueryClient } from "@/lib/query-client";
 import { ledgerKeys } from "@/lib/queries/ledger";
 import { REPORT_RECENT_MONTHS } from "@/lib/contracts/ledger";
-import { getShop } from "@/lib/server/shops";
 import { getProfile } from "@/lib/server/profile";
 import { ledgerPageParts, listMovementPage } from "@/lib/server/ledger";
 import { cautionsFor } from "@/lib/service/cautions";
@@ -25,8 +24,7 @@ const LEDGER_CAUTIONS: readonly string[] = [
 export default async function LedgerPage() {
   const user = await requireUser("ledger:read");
   const shopId = user.shopId;
-  const [shop, { cylinders, report }, movements, profile] = await Promise.all([
-    getShop({ shopId }),
+  const [{ cylinders, report }, movements, profile] = await Promise.all([
     // The cylinders and the report's latest months (the rest are fetched if someone asks to see every
     // month), from one check of the shop's kept lines.
     ledgerPageParts({ shopId, months: REPORT_RECENT_MONTHS }),
