@@ -6,7 +6,7 @@ import type { CreateCylinderInput, CylinderDto, CylinderKind } from "@/lib/contr
 import { apiFetch, ApiError, saveErrorOf } from "@/lib/queries/api-fetch";
 import { ledgerKeys } from "@/lib/queries/ledger";
 import { SERVICE_REFRIGERANT_OPTIONS } from "@/lib/refrigerants/catalog";
-import { readMassG } from "@/lib/service/entry";
+import { massEntryHint, readMassG } from "@/lib/service/entry";
 import { type MassUnit, formatMassGrouped } from "@/lib/units";
 import { sayInUnits } from "@/lib/units/quantity";
 import { useReaderUnits } from "@/components/shell/reader-units";
@@ -97,7 +97,6 @@ export function AddCylinderForm({ massUnit }: { massUnit: MassUnit }) {
   // The schema's limits are said in the ledger's mass unit, as every figure on this screen.
   const sayMarked = (text: string) => sayInUnits(text, { ...reader.units, mass: massUnit }, reader.at);
   const say = (text: string | undefined) => (text === undefined ? undefined : sayMarked(text));
-  const imperial = massUnit === "lb" || massUnit === "oz";
   const create = useMutation({
     mutationFn: (body: CreateCylinderInput) => apiFetch("/api/cylinders", { method: "POST", body }),
     onSuccess: () => {
@@ -183,19 +182,21 @@ export function AddCylinderForm({ massUnit }: { massUnit: MassUnit }) {
         value={form.tare}
         onChange={set("tare")}
         error={say(errors.tareG)}
-        hint={`For example ${imperial ? "15 lb 14 oz" : "7.2 kg"}.`}
+        hint={massEntryHint(massUnit)}
       />
       <EntryInput
         label="Refrigerant capacity"
         value={form.capacity}
         onChange={set("capacity")}
         error={say(errors.capacityG)}
+        hint={massEntryHint(massUnit)}
       />
       <EntryInput
         label="Refrigerant in it now"
         value={form.initial}
         onChange={set("initial")}
         error={say(errors.initialNetG)}
+        hint={massEntryHint(massUnit)}
       />
       {status && (
         <p role="status" className="font-bold">

@@ -6,7 +6,7 @@ import type { CylinderDto } from "@/lib/contracts/cylinders";
 import { LEDGER_MASS_MAX_G, type ManualMovementInput } from "@/lib/contracts/ledger";
 import { apiFetch, ApiError, saveErrorOf } from "@/lib/queries/api-fetch";
 import { ledgerKeys } from "@/lib/queries/ledger";
-import { readMassG } from "@/lib/service/entry";
+import { massEntryHint, readMassG } from "@/lib/service/entry";
 import { type MassUnit, formatMassGrouped } from "@/lib/units";
 import { EntryInput } from "@/components/service/entry-input";
 
@@ -122,8 +122,8 @@ export function MovementForm({ cylinders, massUnit }: { cylinders: CylinderDto[]
         error={errors.massG}
         hint={
           form.type === "adjustment"
-            ? "Start with a minus sign when the scale shows less than the ledger."
-            : undefined
+            ? `${massEntryHint(massUnit)} Start with a minus sign when the scale shows less than the ledger.`
+            : massEntryHint(massUnit)
         }
       />
       <EntryInput

@@ -3,6 +3,7 @@
 import type { Dispatch, SetStateAction } from "react";
 import type { ServiceStepId } from "@/lib/contracts/service-records";
 import type { ServiceRecordSummary } from "@/lib/service/record-summary";
+import { massEntryHint } from "@/lib/service/entry";
 import { REPLACED_PART_IDS, REPLACED_PART_LABELS } from "@/lib/service/oil";
 import { formatMass, formatVolume, UNIT_LABELS, VACUUM_EXAMPLES } from "@/lib/units";
 import type { Draft, TextField } from "./draft";
@@ -69,8 +70,7 @@ function CylinderSelect({
 export function StepFields({ step, draft, setDraft, setText, errorOf, summary, props }: Props) {
   const u = props.units;
   // Examples in the reader's own system; any other unit typed after the number is read as well.
-  const imperialMass = u.mass === "oz" || u.mass === "lb";
-  const massHint = `Type ${u.mass === "g" ? "grams" : u.mass} or add a unit: ${imperialMass ? "23 oz, 1 lb 7 oz" : "650 g, 1.4 kg"}.`;
+  const massHint = massEntryHint(u.mass);
   const volHint = `Type ${u.volume === "mL" ? "mL" : "fl oz"} or add a unit: ${u.volume === "mL" ? "45 mL" : "1.5 fl oz"}.`;
   const vacuumUnit = u.vacuum ?? (u.gauge === "kPa" ? "kPa" : "inHg");
   const vacuumExamples =

@@ -17,6 +17,15 @@ export type Entry = { empty: true } | { value: number } | { error: string };
 
 const EMPTY: Entry = { empty: true };
 
+/**
+ * What a mass field says under it: the unit a number alone is read in (readMassG's default), and
+ * examples in the reader's own system of any other unit that may be typed after the number.
+ */
+export function massEntryHint(unit: MassUnit): string {
+  const imperial = unit === "oz" || unit === "lb";
+  return `Type ${unit === "g" ? "grams" : unit} or add a unit: ${imperial ? "23 oz, 1 lb 7 oz" : "650 g, 1.4 kg"}.`;
+}
+
 /** "650", "1.4 kg", "1 lb 7 oz" → grams (whole grams, as the ledger stores them). */
 export function readMassG(text: string, defaultUnit: MassUnit = "g", locale?: string): Entry {
   if (text.trim() === "") return EMPTY;

@@ -153,3 +153,17 @@ test("a ledger line's time reads in the shop's own locale and clock, with its ye
   const firstLine = movements.getByText(/^#\d+ · /).first();
   await expect(firstLine).toHaveText(/^#\d+ · [A-Z][a-z]{2} \d{1,2}, \d{4}, \d{1,2}:\d{2}\s[ap]\.m\. · /);
 });
+
+test("every mass field of the ledger says what unit a number alone is read in", async ({ page }) => {
+  await new SignInPage(page).signInAs("senior");
+  await page.goto("/ledger");
+  for (const label of [
+    "Tare (stamped on the collar)",
+    "Refrigerant capacity",
+    "Refrigerant in it now",
+    "Mass",
+  ])
+    await expect(page.getByLabel(label, { exact: true })).toHaveAccessibleDescription(
+      /Type grams or add a unit/,
+    );
+});
