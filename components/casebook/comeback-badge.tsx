@@ -15,15 +15,14 @@ export function ComebackBadge({
   const text = comebackOfCaseId
     ? `Comeback after case ${comebackOfCaseId}`
     : `Came back as case ${cameBackCaseId}`;
-  return (
-    <span className="inline-block rounded-full border-2 border-ember-500 bg-ember-50 px-2 py-0.5 text-sm font-bold text-ember-700">
-      {linked && other ? (
-        <Link href={`/cases/${other}`} className="underline">
-          {text}
-        </Link>
-      ) : (
-        text
-      )}
-    </span>
+  const look =
+    "rounded-full border-2 border-ember-500 bg-ember-50 px-2 py-0.5 text-sm font-bold text-ember-700";
+  // Linked, the whole badge is the link and a full tap high; inside a card that is itself a link, a plain badge.
+  return linked && other ? (
+    <Link href={`/cases/${other}`} className={`${look} inline-flex min-h-touch items-center underline`}>
+      {text}
+    </Link>
+  ) : (
+    <span className={`${look} inline-block`}>{text}</span>
   );
 }

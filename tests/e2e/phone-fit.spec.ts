@@ -78,6 +78,28 @@ test("the ledger's link to a service record and the profile's unit buttons are b
     await atLeastATap(mass.getByRole("button", { name: unit, exact: true }));
 });
 
+test("a case's comeback link and a service record's way back to its case are big enough to tap", async ({
+  page,
+}) => {
+  await new SignInPage(page).signInAs("senior");
+  await page.goto("/casebook?comeback=1");
+  await page
+    .getByRole("list", { name: "Cases found" })
+    .getByRole("link")
+    .filter({ hasText: "Comeback after case" })
+    .first()
+    .click();
+  await expect(page).toHaveURL(/\/cases\/\d+$/);
+  await atLeastATap(page.getByRole("link", { name: /^Comeback after case \d+$/ }));
+  await page.goto("/ledger");
+  await page
+    .getByRole("link", { name: /From the service record of case/ })
+    .first()
+    .click();
+  await expect(page).toHaveURL(/\/cases\/\d+\/service$/);
+  await atLeastATap(page.getByRole("link", { name: /^← Case \d+$/ }));
+});
+
 test.describe("on a desktop", () => {
   test.use({ viewport: { width: 1280, height: 900 } });
 
