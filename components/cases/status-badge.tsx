@@ -12,7 +12,10 @@ const STYLES: Record<CaseStatus, string> = {
 export function StatusBadge({ status }: { status: CaseStatus }) {
   return (
     <span
-      className={clsx("inline-block rounded-full border-2 px-2 py-0.5 text-sm font-bold", STYLES[status])}
+      className={clsx(
+        "inline-block whitespace-nowrap rounded-full border-2 px-2 py-0.5 text-sm font-bold",
+        STYLES[status],
+      )}
     >
       {CASE_STATUS_LABELS[status]}
     </span>

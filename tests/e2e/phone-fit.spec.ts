@@ -122,6 +122,13 @@ test.describe("on a desktop", () => {
     });
     expect(height, "the date wraps").toBeLessThan(1.5 * lineHeight);
 
+    // A status says its words on one line inside its badge ("In progress", "Waiting for sign-off").
+    for (const badge of await table.getByText(/^(In progress|Waiting for sign-off)$/).all()) {
+      const lineHeight = await badge.evaluate((el) => parseFloat(getComputedStyle(el).lineHeight));
+      const box = await badge.boundingBox();
+      expect(box!.height, `"${await badge.innerText()}" wraps in its badge`).toBeLessThan(2 * lineHeight);
+    }
+
     const previous = page
       .getByRole("navigation", { name: "Pages" })
       .getByRole("button", { name: "Previous page" });
