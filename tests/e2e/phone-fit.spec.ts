@@ -40,7 +40,7 @@ test("an owner's spec table, with its CSV import, stays inside the phone's width
   await noSidewaysScroll(page);
 });
 
-test("a senior with a long name reads 'Sign out' on one line", async ({ page }) => {
+test("a senior with a long name reads the sign-out button's label on one line", async ({ page }) => {
   await new SignInPage(page).signInAs("senior");
   const signOut = page.getByRole("banner").getByRole("button", { name: "Sign out" });
   const box = await signOut.boundingBox();
