@@ -1,9 +1,10 @@
 import { describe, expect, it } from "vitest";
-import { degC, grams, kelvin, kpaGauge, pct } from "./format";
+import { degC, grams, kelvin, pct, plain } from "./format";
 
 describe("evidence number formatting", () => {
-  it("groups thousands and rounds pressures to whole kPa", () => {
-    expect(kpaGauge(1849.6)).toBe("1,850 kPa gauge");
+  it("groups thousands unless told not to (pressures are said with plain digits)", () => {
+    expect(plain(1849.6, 0)).toBe("1,850");
+    expect(plain(1849.6, 0, false)).toBe("1850");
   });
   it("writes negative values with a minus sign, not a hyphen", () => {
     expect(degC(-3.25)).toBe("−3.3 °C");

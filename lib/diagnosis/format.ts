@@ -24,8 +24,6 @@ function fixed(value: number, decimals: 0 | 1 | 2 | 3, grouped = true): string {
   return value < 0 && scaled !== 0 ? `−${text}` : text;
 }
 
-export const kpa = (value: number) => `${fixed(value, 0)} kPa`;
-export const kpaGauge = (value: number) => `${fixed(value, 0)} kPa gauge`;
 export const degC = (value: number) => `${fixed(value, 1)} °C`;
 export const kelvin = (value: number) => `${fixed(value, 1)} K`;
 export const grams = (value: number) => `${fixed(value, 0)} g`;
