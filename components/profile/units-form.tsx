@@ -75,7 +75,7 @@ function Choices({
             aria-pressed={value === o.value}
             onClick={() => onChange(o.value)}
             className={clsx(
-              "min-h-glove rounded-card border-2 px-3 py-2 font-bold",
+              "min-h-glove min-w-touch rounded-card border-2 px-3 py-2 font-bold",
               value === o.value
                 ? "border-glacier-700 bg-glacier-700 text-white"
                 : "border-ink-muted bg-paper text-ink",
