@@ -53,7 +53,10 @@ export default async function ServiceRecordPage({ params }: { params: Promise<{ 
     <article className="space-y-4">
       <header>
         <p>
-          <Link href={`/cases/${caseId}`} className="font-bold text-glacier-600 underline">
+          <Link
+            href={`/cases/${caseId}`}
+            className="inline-flex min-h-touch items-center font-bold text-glacier-600 underline"
+          >
             ← Case {caseId}
           </Link>
         </p>
