@@ -18,7 +18,7 @@ export function ComebackBadge({
   return (
     <span className="inline-block rounded-full border-2 border-ember-500 bg-ember-50 px-2 py-0.5 text-sm font-bold text-ember-700">
       {linked && other ? (
-        <Link href={`/cases/${other}`} className="underline">
+        <Link href={`/cases/${other}`} className="inline-flex min-h-touch items-center underline">
           {text}
         </Link>
       ) : (
