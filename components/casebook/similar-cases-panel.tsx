@@ -48,7 +48,10 @@ export function SimilarCasesPanel({ caseId, initial }: { caseId: number; initial
               <ol className="mt-2 space-y-2" aria-label="Nearest closed cases, nearest first">
                 {data.neighbours.map((n) => (
                   <li key={n.caseId} className="rounded-card border border-paper-line p-2">
-                    <Link href={`/cases/${n.caseId}`} className="font-bold underline">
+                    <Link
+                      href={`/cases/${n.caseId}`}
+                      className="inline-flex min-h-touch items-center font-bold underline"
+                    >
                       Case {n.caseId}
                     </Link>{" "}
                     · {n.vehicle ?? "vehicle not recorded"} · closed {shortDate(n.closedAt)}

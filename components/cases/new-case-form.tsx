@@ -39,6 +39,7 @@ export function NewCaseForm() {
     if (picked === null) return setErrors({ vehicleId: ["Pick a vehicle or add one."] });
     if (picked === "new") {
       if (!draft) return setErrors({ vehicleId: ["Fill in the new vehicle."] });
+      if (Object.keys(draft.problems).length) return setErrors(draft.problems);
       create.mutate({ newCustomer: draft.customer, newVehicle: draft.vehicle as NewVehicleInput, complaint });
     } else {
       create.mutate({ vehicleId: picked, complaint } as CreateCaseInput);

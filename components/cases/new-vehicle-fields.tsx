@@ -11,6 +11,10 @@ import {
 import { SpecLookup } from "./spec-lookup";
 import { SelectField } from "@/components/ui/select-field";
 import { normaliseVin, vinCheckDigitMatches, vinFormatError } from "@/lib/vehicles/vin";
+import { readMassG } from "@/lib/service/entry";
+import { massFromG } from "@/lib/units/convert";
+import { UNIT_LABELS } from "@/lib/units/reader";
+import { useReaderUnits } from "@/components/shell/reader-units";
 
 export interface NewVehicleDraft {
   customer: { name: string; phone?: string; email?: string };
@@ -28,6 +32,8 @@ export interface NewVehicleDraft {
     electricCompressor: boolean;
     labelChargeG?: number;
   };
+  /** What cannot be sent as typed, by the server's field key: the form keeps the text and says why. */
+  problems: Record<string, string[]>;
 }
 
 const EMPTY = {
@@ -57,7 +63,10 @@ export function NewVehicleFields({
   initialPhone?: string;
 }) {
   const [f, setF] = useState({ ...EMPTY, phone: initialPhone });
+  // The label charge is typed in the reader's mass unit ("20.1" oz), or with its own ("1 lb 4 oz").
+  const { units, locale } = useReaderUnits();
   useEffect(() => {
+    const labelCharge = readMassG(f.labelChargeG, units.mass, locale ?? undefined);
     onChange({
       customer: { name: f.name, phone: f.phone || undefined },
       vehicle: {
@@ -71,10 +80,11 @@ export function NewVehicleFields({
         expansionDevice: f.expansionDevice,
         compressorType: f.compressorType === "" ? undefined : (f.compressorType as CompressorType),
         electricCompressor: f.compressorType === "electric",
-        labelChargeG: f.labelChargeG ? Number(f.labelChargeG) : undefined,
+        labelChargeG: "value" in labelCharge ? labelCharge.value : undefined,
       },
+      problems: "error" in labelCharge ? { "newVehicle.labelChargeG": [labelCharge.error] } : {},
     });
-  }, [f, onChange]);
+  }, [f, onChange, units.mass, locale]);
 
   const vin = normaliseVin(f.vin);
   const vinProblem = vin ? vinFormatError(vin) : null;
@@ -119,7 +129,8 @@ export function NewVehicleFields({
             make: pick.make,
             model: pick.model,
             refrigerant: pick.refrigerant,
-            labelChargeG: String(pick.labelChargeG),
+            // Said in the field's unit with enough decimals to come back to the same whole gram.
+            labelChargeG: String(Number(massFromG(pick.labelChargeG, units.mass).toFixed(3))),
           })
         }
       />
@@ -127,9 +138,14 @@ export function NewVehicleFields({
       {field("make", "Make", "newVehicle.make")}
       {field("model", "Model", "newVehicle.model")}
       {field("engine", "Engine (optional)", "newVehicle.engine")}
-      {field("labelChargeG", "Label charge, g (optional)", "newVehicle.labelChargeG", {
-        inputMode: "numeric",
-      })}
+      {field(
+        "labelChargeG",
+        `Label charge, ${UNIT_LABELS[units.mass]} (optional)`,
+        "newVehicle.labelChargeG",
+        {
+          inputMode: "decimal",
+        },
+      )}
       <div className="sm:col-span-2">
         {field("vin", "VIN (optional)", "newVehicle.vin", {
           autoCapitalize: "characters",

@@ -71,7 +71,8 @@ export function CasePhotos({
               type="file"
               accept="image/*"
               capture="environment"
-              className="block w-full text-base"
+              // The picker's own button is the tap target: as tall as the other buttons, for gloved hands.
+              className="block w-full text-base file:mr-3 file:min-h-glove file:rounded-card file:border-2 file:border-paper-line file:bg-paper file:px-4 file:font-bold file:text-ink"
             />
           </div>
           <div>

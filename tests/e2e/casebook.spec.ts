@@ -110,6 +110,12 @@ test("the case page flags a comeback on both cases and lists the nearest seeded 
   await expect(nearest.first()).toContainText("2018 Ford Transit");
   await expect(nearest.first()).toContainText("Repair condenser fan, relay or circuit");
   await expect(nearest.first()).toContainText("Distance 0.00");
+  // The links that open the other case are tap targets of at least 44 px (WCAG 2.5.5).
+  for (const link of [
+    page.getByRole("link", { name: `Comeback after case ${before}` }),
+    nearest.first().getByRole("link", { name: `Case ${before}` }),
+  ])
+    expect((await link.boundingBox())?.height).toBeGreaterThanOrEqual(44);
   await expect(panel).not.toContainText("Tacoma");
   await panel.scrollIntoViewIfNeeded();
   await page.screenshot({ path: "test-results/casebook-similar-panel.png", fullPage: true });

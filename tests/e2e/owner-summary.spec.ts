@@ -35,6 +35,8 @@ test("a technician e-mails the owner page; the owner reads it, sees the photo, a
   const picker = photos.getByLabel("Photo", { exact: true });
   await expect(picker).toHaveAttribute("capture", "environment");
   await expect(picker).toHaveAttribute("accept", "image/*");
+  // Tapped with gloves: at least 44 px tall (WCAG 2.5.5 target size).
+  expect((await picker.boundingBox())?.height).toBeGreaterThanOrEqual(44);
   await picker.setInputFiles({ name: "IMG_2041.JPG", mimeType: "image/jpeg", buffer: await phonePhoto() });
   await photos.getByLabel("What it shows").selectOption("gauges");
   await photos.getByLabel(/^Caption/).pressSequentially("Gauges at idle, 30 degrees outside");

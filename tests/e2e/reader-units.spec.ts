@@ -4,6 +4,7 @@ import { DEMO_PASSWORD, SignInPage } from "./pages/sign-in-page";
 import { InterviewPage, openCase } from "./pages/interview-page";
 import { ServiceRecordPage } from "./pages/service-record-page";
 import { createTechnician } from "./pages/people-fixtures";
+import { readCase } from "./pages/db";
 import { STEP_LABELS } from "@/lib/interview/steps";
 
 // An imperial technician reads every number in their own units: the findings, the case page, the
@@ -199,4 +200,49 @@ test("an imperial technician reads the findings, the case, the service record an
   expect(csv.replace(/^\uFEFF/, "").split("\r\n")[0]).toBe(
     "month,technician,refrigerant,recovered_lb,recycled_lb,charged_lb,sent_out_lb,adjustment_lb,corrections",
   );
+});
+
+test("an imperial technician types a new vehicle's label charge in ounces; words that are not a mass get a plain message and stay", async ({
+  page,
+}) => {
+  const person = await createTechnician(DEMO_PASSWORD);
+  const signIn = new SignInPage(page);
+  await signIn.goto();
+  await signIn.signIn(person.email);
+  await expect(page).toHaveURL(/\/cases$/);
+  await page.goto("/profile");
+  // Every unit button is a tap target of at least 44 × 44 px (WCAG 2.5.5), "g" and "lb" included.
+  for (const button of await page.locator("main fieldset").getByRole("button").all()) {
+    const box = await button.boundingBox();
+    expect(Math.min(box?.width ?? 0, box?.height ?? 0), await button.innerText()).toBeGreaterThanOrEqual(44);
+  }
+  await page.getByRole("group", { name: "Unit system" }).getByRole("button", { name: "Imperial" }).click();
+  await page.getByRole("button", { name: "Save my units" }).click();
+  await expect(page.getByText(/Saved\. Every field/)).toBeVisible();
+
+  await page.goto("/cases/new");
+  await page.getByRole("button", { name: "A vehicle not listed here" }).click();
+  await page.getByLabel("Customer name").fill("Marisol Quennell");
+  await page.getByLabel("Model year").fill("2015");
+  await page.getByLabel("Make", { exact: true }).fill("Subaru");
+  await page.getByLabel("Model", { exact: true }).fill("Outback");
+  await page.getByRole("button", { name: "Blows warm air" }).click();
+  const label = page.getByLabel("Label charge, oz (optional)");
+
+  await label.fill("about a pound");
+  await page.getByRole("button", { name: "Start the interview" }).click();
+  await expect(page.getByText(/Could not read “about a pound” as a mass/)).toBeVisible();
+  await expect(label).toHaveValue("about a pound");
+  await expect(page).toHaveURL(/\/cases\/new$/);
+
+  // Typed one key at a time, as read off the under-hood label: 20 oz = 566.99 g (NIST SP 811).
+  await label.fill("");
+  await label.pressSequentially("20");
+  await page.getByRole("button", { name: "Start the interview" }).click();
+  await expect(page).toHaveURL(/\/cases\/\d+\/interview$/);
+  const interview = new InterviewPage(page);
+  await interview.expectStep(STEP_LABELS.system);
+  const saved = await readCase(interview.caseIdFromUrl());
+  expect(saved.vehicle_label_charge_g).toBe(567);
+  await expect(interview.field("Label charge")).toHaveValue("20");
 });

@@ -103,5 +103,8 @@ test("an apprentice can read the service record but not enter it", async ({ page
   await new SignInPage(page).signInAs("apprentice");
   await new ServiceRecordPage(page).goto(caseId);
   await expect(page.getByText("Your role can read this record")).toBeVisible();
+  // The way back to the case is a tap target of at least 44 px (WCAG 2.5.5), as every other.
+  const back = await page.getByRole("link", { name: `← Case ${caseId}` }).boundingBox();
+  expect(back?.height).toBeGreaterThanOrEqual(44);
   await expect(page.getByRole("button", { name: /^Save/ })).toHaveCount(0);
 });
