@@ -1,9 +1,8 @@
 import { expect, test, type Page } from "@playwright/test";
 import AxeBuilder from "@axe-core/playwright";
-import { DEMO_PASSWORD, SignInPage } from "./pages/sign-in-page";
 import { InterviewPage, openCase } from "./pages/interview-page";
 import { ServiceRecordPage } from "./pages/service-record-page";
-import { createTechnician } from "./pages/people-fixtures";
+import { signInImperialTechnician } from "./pages/imperial-reader";
 import { readCase } from "./pages/db";
 import { STEP_LABELS } from "@/lib/interview/steps";
 
@@ -51,18 +50,7 @@ async function expectNoSeriousA11yIssues(page: Page, where: string) {
 test("an imperial technician reads the findings, the case, the service record and the ledger in psi, °F, oz and microns", async ({
   page,
 }) => {
-  // A technician of their own, so their units never change what another spec's people see.
-  const person = await createTechnician(DEMO_PASSWORD);
-  const signIn = new SignInPage(page);
-  await signIn.goto();
-  await signIn.signIn(person.email);
-  await expect(page).toHaveURL(/\/cases$/);
-
-  await page.goto("/profile");
-  await page.getByRole("group", { name: "Unit system" }).getByRole("button", { name: "Imperial" }).click();
-  await page.getByRole("group", { name: "Vacuum" }).getByRole("button", { name: "microns" }).click();
-  await page.getByRole("button", { name: "Save my units" }).click();
-  await expect(page.getByText(/Saved\. Every field/)).toBeVisible();
+  await signInImperialTechnician(page, { vacuum: "microns" });
 
   // 1. The interview, typed in the profile's units.
   const interview = new InterviewPage(page);
@@ -205,20 +193,17 @@ test("an imperial technician reads the findings, the case, the service record an
 test("an imperial technician types a new vehicle's label charge in ounces; words that are not a mass get a plain message and stay", async ({
   page,
 }) => {
-  const person = await createTechnician(DEMO_PASSWORD);
-  const signIn = new SignInPage(page);
-  await signIn.goto();
-  await signIn.signIn(person.email);
-  await expect(page).toHaveURL(/\/cases$/);
-  await page.goto("/profile");
-  // Every unit button is a tap target of at least 44 × 44 px (WCAG 2.5.5), "g" and "lb" included.
-  for (const button of await page.locator("main fieldset").getByRole("button").all()) {
-    const box = await button.boundingBox();
-    expect(Math.min(box?.width ?? 0, box?.height ?? 0), await button.innerText()).toBeGreaterThanOrEqual(44);
-  }
-  await page.getByRole("group", { name: "Unit system" }).getByRole("button", { name: "Imperial" }).click();
-  await page.getByRole("button", { name: "Save my units" }).click();
-  await expect(page.getByText(/Saved\. Every field/)).toBeVisible();
+  await signInImperialTechnician(page, {
+    // Every unit button is a tap target of at least 44 × 44 px (WCAG 2.5.5), "g" and "lb" included.
+    onProfile: async () => {
+      for (const button of await page.locator("main fieldset").getByRole("button").all()) {
+        const box = await button.boundingBox();
+        expect(Math.min(box?.width ?? 0, box?.height ?? 0), await button.innerText()).toBeGreaterThanOrEqual(
+          44,
+        );
+      }
+    },
+  });
 
   await page.goto("/cases/new");
   await page.getByRole("button", { name: "A vehicle not listed here" }).click();

@@ -1,6 +1,6 @@
 import { expect, test } from "@playwright/test";
-import { DEMO_PASSWORD, SignInPage } from "./pages/sign-in-page";
-import { createTechnician } from "./pages/people-fixtures";
+import { SignInPage } from "./pages/sign-in-page";
+import { signInImperialTechnician } from "./pages/imperial-reader";
 
 // Invented rows for this test; the charges are nobody's specification.
 const CSV = [
@@ -41,16 +41,7 @@ test("a technician reads the spec table but has no edit controls", async ({ page
 test("a technician who reads in imperial units reads the metric shop's spec table in ounces and fluid ounces", async ({
   page,
 }) => {
-  // A technician of their own, so their units never change what another spec's people see.
-  const person = await createTechnician(DEMO_PASSWORD);
-  const signIn = new SignInPage(page);
-  await signIn.goto();
-  await signIn.signIn(person.email);
-  await expect(page).toHaveURL(/\/cases$/);
-  await page.goto("/profile");
-  await page.getByRole("group", { name: "Unit system" }).getByRole("button", { name: "Imperial" }).click();
-  await page.getByRole("button", { name: "Save my units" }).click();
-  await expect(page.getByText(/Saved\. Every field/)).toBeVisible();
+  await signInImperialTechnician(page);
 
   await page.goto("/specs");
   await page.getByLabel("Search by make, model, variant or year").fill("Focus");
