@@ -18,10 +18,18 @@
 //    framework's link: the framework's share of any page's JavaScript, beside the interview route's
 //    figure printed by bench:interview.
 import { spawn, type ChildProcess } from "node:child_process";
-import { existsSync, readFileSync, readdirSync } from "node:fs";
+import { existsSync, readFileSync } from "node:fs";
 import { chromium } from "@playwright/test";
 import { APP_BASE as BASE, recordScripts, startBenchApp, totalKb } from "./browser-app";
-import { loadNow, printLoad, recordFigure, runLoad, treeCpuMs, type LoadFigures } from "./harness";
+import {
+  loadNow,
+  printLoad,
+  processTable,
+  recordFigure,
+  runLoad,
+  treeCpuMs,
+  type LoadFigures,
+} from "./harness";
 
 const CONNECTIONS = Number(process.env.BENCH_CONNECTIONS ?? 50);
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 15);
@@ -51,23 +59,19 @@ function bareServer(): Promise<{ child: ChildProcess; port: number }> {
  */
 function nextServerPid(rootPid: number | undefined): number | undefined {
   if (!rootPid) return undefined;
-  const parents = new Map<number, number>();
-  const commands = new Map<number, string>();
-  for (const entry of readdirSync("/proc")) {
-    if (!/^\d+$/.test(entry)) continue;
+  const processes = processTable();
+  const command = (pid: number) => {
     try {
-      const stat = readFileSync(`/proc/${entry}/stat`, "utf8");
-      parents.set(Number(entry), Number(stat.slice(stat.lastIndexOf(")") + 2).split(" ")[1]));
-      commands.set(Number(entry), readFileSync(`/proc/${entry}/cmdline`, "utf8").replaceAll("\0", " "));
+      return readFileSync(`/proc/${pid}/cmdline`, "utf8").replaceAll("\0", " ");
     } catch {
-      // gone meanwhile
+      return ""; // gone meanwhile
     }
-  }
+  };
   const queue = [rootPid];
   while (queue.length > 0) {
     const pid = queue.shift()!;
-    if (pid !== rootPid && /\bnext\b|next-server/.test(commands.get(pid) ?? "")) return pid;
-    for (const [child, parent] of parents) if (parent === pid) queue.push(child);
+    if (pid !== rootPid && /\bnext\b|next-server/.test(command(pid))) return pid;
+    for (const [child, { ppid }] of processes) if (ppid === pid) queue.push(child);
   }
   return undefined;
 }

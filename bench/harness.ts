@@ -49,21 +49,27 @@ export function recordFigure(figure: {
   if (file) appendFileSync(file, `${JSON.stringify(figure)}\n`);
 }
 
-/** CPU time (user + system, ms) a process and all its descendants have used, from /proc (Linux). */
-export function treeCpuMs(rootPid: number | undefined): number {
-  if (!rootPid) return 0;
-  const tick = 10; // USER_HZ is 100 on Linux: one tick is 10 ms
-  const stats = new Map<number, { ppid: number; ticks: number }>();
+/** Every process now running (Linux /proc): its parent and the CPU ticks (user + system) it has used. */
+export function processTable(): Map<number, { ppid: number; ticks: number }> {
+  const table = new Map<number, { ppid: number; ticks: number }>();
   for (const entry of readdirSync("/proc")) {
     if (!/^\d+$/.test(entry)) continue;
     try {
       const text = readFileSync(`/proc/${entry}/stat`, "utf8");
       const fields = text.slice(text.lastIndexOf(")") + 2).split(" ");
-      stats.set(Number(entry), { ppid: Number(fields[1]), ticks: Number(fields[11]) + Number(fields[12]) });
+      table.set(Number(entry), { ppid: Number(fields[1]), ticks: Number(fields[11]) + Number(fields[12]) });
     } catch {
       // gone meanwhile
     }
   }
+  return table;
+}
+
+/** CPU time (user + system, ms) a process and all its descendants have used, from /proc (Linux). */
+export function treeCpuMs(rootPid: number | undefined): number {
+  if (!rootPid) return 0;
+  const tick = 10; // USER_HZ is 100 on Linux: one tick is 10 ms
+  const stats = processTable();
   let total = 0;
   const visit = (pid: number) => {
     total += stats.get(pid)?.ticks ?? 0;
